@@ -1,0 +1,22 @@
+using System.CommandLine;
+using SwitchTag.Cli;
+
+// Exit codes (DESIGN.md): 0 success, 1 some inputs rejected, 2 usage error.
+var root = new RootCommand("SwitchTag: index people, places and organisations in multilingual interview transcripts, offline.");
+root.Subcommands.Add(IndexCommand.Create());
+root.Subcommands.Add(LangIdCommand.Create());
+root.Subcommands.Add(new Command("eval", "Score the shipped models against gold data.")
+{
+    EvalNerCommand.Create(),
+    EvalLangIdCommand.Create(),
+});
+
+var parsed = root.Parse(args);
+if (parsed.Errors.Count > 0 && !args.Any(a => a is "-h" or "--help" or "-?"))
+{
+    foreach (var error in parsed.Errors)
+        Console.Error.WriteLine($"switchtag: {error.Message}");
+    Console.Error.WriteLine("Run 'switchtag --help' for usage.");
+    return ExitCodes.Usage;
+}
+return parsed.Invoke();

@@ -1,0 +1,52 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Time;
+
+namespace SwitchTag.Core.Documents;
+
+/// <summary>A gazetteer place a heading is linked to.</summary>
+public sealed record PlaceLink(long GeonameId, string Name, double Latitude, double Longitude, string Country, long Population);
+
+/// <summary>One index entry: every mention of one person, place or organisation.</summary>
+/// <param name="Mentions">Indices into <see cref="InterviewIndex.Mentions"/>, in time order.</param>
+/// <param name="Alternatives">Other gazetteer places the name could mean, kept for the reviewer.</param>
+public sealed record Heading(
+    string Id,
+    NameLabel Label,
+    string Name,
+    ImmutableArray<string> Variants,
+    PlaceLink? Place,
+    ImmutableArray<PlaceLink> Alternatives,
+    ImmutableArray<int> Mentions,
+    ImmutableArray<string> Speakers,
+    double Confidence,
+    MentionSource Source);
+
+/// <summary>A mention placed in time and filed under a heading (null while under review).</summary>
+public sealed record IndexedMention(Mention Mention, TimeRange Time, string? HeadingId);
+
+/// <summary>A stretch outside the interview's main language, for the translators.</summary>
+public sealed record WorklistItem(
+    TimeRange Time,
+    string? Speaker,
+    string Language,
+    double Confidence,
+    string Text,
+    int Turn,
+    int CharStart,
+    int CharEnd);
+
+/// <summary>A mention held back from the index for a person to decide.</summary>
+public sealed record ReviewItem(int Mention, string Reason);
+
+/// <summary>Everything known about one interview after the whole pipeline has run.</summary>
+public sealed record InterviewIndex(
+    Transcript Transcript,
+    string MainLanguage,
+    Timecode Duration,
+    ImmutableArray<Turn> Turns,
+    ImmutableArray<ImmutableArray<Timed<LanguageSpan>>> Spans,
+    ImmutableArray<IndexedMention> Mentions,
+    ImmutableArray<Heading> Headings,
+    ImmutableArray<WorklistItem> Worklist,
+    ImmutableArray<ReviewItem> Review,
+    ImmutableArray<Diagnostic> Diagnostics);

@@ -1,0 +1,17 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Time;
+
+namespace SwitchTag.Core.Documents;
+
+/// <summary>Where one cue's plain text sits inside its turn's text: <c>[CharStart, CharEnd)</c>.</summary>
+public sealed record TurnCue(int CueIndex, int CharStart, int CharEnd);
+
+/// <summary>Consecutive cues of one speaker. <see cref="Text"/> is the cues' plain texts joined by
+/// one space; every char offset of later stages is into this text.</summary>
+public sealed record Turn(
+    int Index,
+    string? Speaker,
+    string? SpeakerLabel,
+    TimeRange Time,
+    string Text,
+    ImmutableArray<TurnCue> Cues);

@@ -1,0 +1,38 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Stages;
+
+namespace SwitchTag.Core.Pipeline;
+
+/// <summary>Chains the stages in one direction: turns, language spans, names, index.</summary>
+public sealed class InterviewPipeline(ILanguageSegmenter languages, INameTagger names, IIndexBuilder index)
+{
+    public InterviewIndex Run(Transcript transcript, string? mainLanguage = null)
+    {
+        var turns = TurnBuilder.Build(transcript);
+        string main = mainLanguage ?? MainLanguage.Detect(languages, turns);
+        var spans = turns.Select(t => languages.Segment(t.Text, main)).ToImmutableArray();
+        var mentions = ImmutableArray.CreateBuilder<Mention>();
+        for (int t = 0; t < turns.Length; t++)
+            mentions.AddRange(names.Tag(t, turns[t].Text, spans[t]));
+        return index.Build(transcript, turns, main, spans, mentions.ToImmutable());
+    }
+}
+
+/// <summary>The interview's main language: the language holding most characters of confident talk.</summary>
+public static class MainLanguage
+{
+    public const string Undetermined = "und";
+
+    public static string Detect(ILanguageSegmenter languages, ImmutableArray<Turn> turns)
+    {
+        var weight = new Dictionary<string, double>(StringComparer.Ordinal);
+        foreach (var turn in turns)
+        {
+            var guess = languages.Identify(turn.Text);
+            if (guess.Language == Undetermined) continue;
+            weight[guess.Language] = weight.GetValueOrDefault(guess.Language) + turn.Text.Length * guess.Confidence;
+        }
+        return weight.Count == 0 ? Undetermined : weight.MaxBy(kv => kv.Value).Key;
+    }
+}

@@ -1,0 +1,43 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+
+namespace SwitchTag.Core.Stages;
+
+/// <summary>A guess of one language for a whole stretch.</summary>
+public sealed record LanguageGuess(string Language, double Confidence);
+
+/// <summary>The langid stage: whole-stretch identification and switch segmentation inside a turn.</summary>
+public interface ILanguageSegmenter
+{
+    IReadOnlyList<string> Languages { get; }
+
+    LanguageGuess Identify(ReadOnlySpan<char> text);
+
+    /// <summary>Spans covering the words of <paramref name="text"/>, offsets into it; the main
+    /// language is the prior the segmentation leans towards.</summary>
+    ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage);
+}
+
+/// <summary>Words that are names in every language (gazetteer places, authority-list names), so a
+/// language segmenter does not switch on them.</summary>
+public interface INameLexicon
+{
+    bool IsKnownName(ReadOnlySpan<char> word);
+}
+
+/// <summary>The tag stage: names in one turn, each span routed with its language.</summary>
+public interface INameTagger
+{
+    ImmutableArray<Mention> Tag(int turnIndex, string turnText, ImmutableArray<LanguageSpan> spans);
+}
+
+/// <summary>The time and index stages: from annotated turns to the finished interview index.</summary>
+public interface IIndexBuilder
+{
+    InterviewIndex Build(
+        Transcript transcript,
+        ImmutableArray<Turn> turns,
+        string mainLanguage,
+        ImmutableArray<ImmutableArray<LanguageSpan>> spans,
+        ImmutableArray<Mention> mentions);
+}

@@ -1,0 +1,43 @@
+using System.Globalization;
+
+namespace SwitchTag.Core.Time;
+
+/// <summary>A point in a recording, held as whole milliseconds so arithmetic is exact (captions are
+/// millisecond-precise; a double of seconds would drift when summed).</summary>
+public readonly record struct Timecode(long Milliseconds) : IComparable<Timecode>
+{
+    public static readonly Timecode Zero = new(0);
+
+    public static Timecode FromSeconds(double seconds) => new((long)Math.Round(seconds * 1000.0, MidpointRounding.AwayFromZero));
+
+    public static Timecode FromParts(int hours, int minutes, int seconds, int milliseconds) =>
+        new(((hours * 60L + minutes) * 60L + seconds) * 1000L + milliseconds);
+
+    /// <summary>Seconds as a number, the unit of every time in the JSON outputs.</summary>
+    public double TotalSeconds => Milliseconds / 1000.0;
+
+    public int CompareTo(Timecode other) => Milliseconds.CompareTo(other.Milliseconds);
+
+    public static bool operator <(Timecode a, Timecode b) => a.Milliseconds < b.Milliseconds;
+    public static bool operator >(Timecode a, Timecode b) => a.Milliseconds > b.Milliseconds;
+    public static bool operator <=(Timecode a, Timecode b) => a.Milliseconds <= b.Milliseconds;
+    public static bool operator >=(Timecode a, Timecode b) => a.Milliseconds >= b.Milliseconds;
+    public static Timecode operator +(Timecode a, long milliseconds) => new(a.Milliseconds + milliseconds);
+    public static long operator -(Timecode a, Timecode b) => a.Milliseconds - b.Milliseconds;
+
+    public static Timecode Max(Timecode a, Timecode b) => a >= b ? a : b;
+    public static Timecode Min(Timecode a, Timecode b) => a <= b ? a : b;
+
+    /// <summary>Human-facing form <c>HH:MM:SS.mmm</c> (hours grow past 99 if they must).</summary>
+    public override string ToString()
+    {
+        long ms = Milliseconds;
+        string sign = ms < 0 ? "-" : "";
+        ms = Math.Abs(ms);
+        return string.Create(CultureInfo.InvariantCulture,
+            $"{sign}{ms / 3_600_000:00}:{ms / 60_000 % 60:00}:{ms / 1000 % 60:00}.{ms % 1000:000}");
+    }
+
+    /// <summary>Seconds with millisecond precision in invariant culture, for JSON and CSV.</summary>
+    public string ToSecondsString() => TotalSeconds.ToString("0.###", CultureInfo.InvariantCulture);
+}
