@@ -1,0 +1,245 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Time;
+
+namespace SwitchTag.Indexing;
+
+/// <summary>Headings found for one interview: the headings, the heading id of every mention (null
+/// when held for review) and the review items.</summary>
+public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableArray<string?> HeadingOf, ImmutableArray<ReviewItem> Review);
+
+/// <summary>Groups mentions under headings.
+/// Places: each LOC mention's gazetteer candidates (alternate names in all languages) are resolved by
+/// evidence: the candidate whose country is shared by most of the interview's unambiguous places wins,
+/// then the larger population; the others are kept as alternatives. Mentions resolved to one gazetteer
+/// id form one heading; a LOC mention the gazetteer does not know joins a linked heading whose variant
+/// has its folded key, else forms a heading without coordinates.
+/// Persons are grouped conservatively: equal folded keys group; a one-word name joins a multi-word
+/// name only when it is the folded last word of exactly one multi-word person heading.
+/// Organisations group by folded key.
+/// Held for review instead: mentions below the confidence floor, PER mentions the gazetteer knows as
+/// places, and surfaces tagged both PER and LOC in the interview.</summary>
+public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow = HeadingBuilder.DefaultReviewBelow)
+{
+    public const double DefaultReviewBelow = 0.5;
+
+    public HeadingResult Build(
+        ImmutableArray<Mention> mentions,
+        ImmutableArray<TimeRange> times,
+        ImmutableArray<Turn> turns,
+        IReadOnlySet<int>? accepted = null)
+    {
+        int n = mentions.Length;
+        var keys = new string[n];
+        var places = new ImmutableArray<PlaceLink>[n];
+        var placeCache = new Dictionary<(string, string), ImmutableArray<PlaceLink>>();
+        for (int i = 0; i < n; i++)
+        {
+            var m = mentions[i];
+            keys[i] = lexicon.Key(m.Text, m.Language);
+            places[i] = m.Label == NameLabel.ORG ? [] : CachedPlaces(placeCache, m.Text, m.Language);
+        }
+
+        var review = ImmutableArray.CreateBuilder<ReviewItem>();
+        var held = new bool[n];
+        var labelsOfKey = new Dictionary<string, HashSet<NameLabel>>(StringComparer.Ordinal);
+        for (int i = 0; i < n; i++)
+        {
+            if (!labelsOfKey.TryGetValue(keys[i], out var set)) labelsOfKey[keys[i]] = set = [];
+            set.Add(mentions[i].Label);
+        }
+        for (int i = 0; i < n; i++)
+        {
+            if (accepted?.Contains(i) == true) continue;
+            var reason = ReviewReason(mentions[i], places[i], labelsOfKey[keys[i]]);
+            if (reason is null) continue;
+            held[i] = true;
+            review.Add(new ReviewItem(i, reason));
+        }
+
+        var groups = new List<Group>();
+        GroupPlaces(mentions, keys, places, held, groups);
+        GroupPersons(mentions, keys, held, groups);
+        GroupByKey(mentions, keys, held, groups, NameLabel.ORG);
+
+        var headingOf = new string?[n];
+        var headings = new List<Heading>();
+        var usedIds = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var g in groups)
+        {
+            var heading = ToHeading(g, mentions, times, turns, places, usedIds);
+            foreach (int i in heading.Mentions) headingOf[i] = heading.Id;
+            headings.Add(heading);
+        }
+        var ordered = headings
+            .OrderBy(h => h.Label)
+            .ThenBy(h => h.Name, StringComparer.InvariantCultureIgnoreCase)
+            .ThenBy(h => h.Id, StringComparer.Ordinal)
+            .ToImmutableArray();
+        return new HeadingResult(ordered, [.. headingOf], review.ToImmutable());
+    }
+
+    private ImmutableArray<PlaceLink> CachedPlaces(Dictionary<(string, string), ImmutableArray<PlaceLink>> cache, string text, string language)
+    {
+        if (!cache.TryGetValue((text, language), out var found))
+            cache[(text, language)] = found = lexicon.Places(text, language);
+        return found.IsDefault ? [] : found;
+    }
+
+    private string? ReviewReason(Mention m, ImmutableArray<PlaceLink> places, HashSet<NameLabel> labelsOfKey)
+    {
+        if (labelsOfKey.Contains(NameLabel.PER) && labelsOfKey.Contains(NameLabel.LOC) && m.Label != NameLabel.ORG)
+            return "the same name is tagged both PER and LOC in this interview";
+        if (m.Label == NameLabel.PER && !places.IsEmpty)
+            return $"tagged PER, but the gazetteer knows \"{m.Text}\" as a place ({places[0].Name}, {places[0].Country})";
+        if (m.Confidence < reviewBelow)
+            return FormattableString.Invariant($"low confidence ({m.Confidence:0.00})");
+        return null;
+    }
+
+    private sealed class Group(NameLabel label, string key)
+    {
+        public NameLabel Label { get; } = label;
+        public string Key { get; } = key;
+        public PlaceLink? Place { get; set; }
+        public List<int> Members { get; } = [];
+    }
+
+    private static void GroupPlaces(ImmutableArray<Mention> mentions, string[] keys, ImmutableArray<PlaceLink>[] places, bool[] held, List<Group> groups)
+    {
+        var evidence = new Dictionary<string, int>(StringComparer.Ordinal);
+        for (int i = 0; i < mentions.Length; i++)
+            if (!held[i] && mentions[i].Label == NameLabel.LOC && places[i].Length == 1)
+                evidence[places[i][0].Country] = evidence.GetValueOrDefault(places[i][0].Country) + 1;
+
+        var byPlace = new Dictionary<long, Group>();
+        var unlinked = new List<int>();
+        for (int i = 0; i < mentions.Length; i++)
+        {
+            if (held[i] || mentions[i].Label != NameLabel.LOC) continue;
+            if (places[i].IsEmpty) { unlinked.Add(i); continue; }
+            var chosen = places[i]
+                .OrderByDescending(p => evidence.GetValueOrDefault(p.Country))
+                .ThenByDescending(p => p.Population)
+                .ThenBy(p => p.GeonameId)
+                .First();
+            if (!byPlace.TryGetValue(chosen.GeonameId, out var group))
+            {
+                byPlace[chosen.GeonameId] = group = new Group(NameLabel.LOC, "g" + chosen.GeonameId) { Place = chosen };
+                groups.Add(group);
+            }
+            group.Members.Add(i);
+        }
+
+        var linkedKeys = new Dictionary<string, Group>(StringComparer.Ordinal);
+        foreach (var g in byPlace.Values)
+            foreach (int i in g.Members)
+                linkedKeys.TryAdd(keys[i], g);
+        var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
+        foreach (int i in unlinked)
+        {
+            if (linkedKeys.TryGetValue(keys[i], out var linked)) { linked.Members.Add(i); continue; }
+            if (!byKey.TryGetValue(keys[i], out var group))
+            {
+                byKey[keys[i]] = group = new Group(NameLabel.LOC, keys[i]);
+                groups.Add(group);
+            }
+            group.Members.Add(i);
+        }
+    }
+
+    private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups)
+    {
+        var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
+        var single = new List<int>();
+        for (int i = 0; i < mentions.Length; i++)
+        {
+            if (held[i] || mentions[i].Label != NameLabel.PER) continue;
+            if (Words(mentions[i].Text).Length < 2) { single.Add(i); continue; }
+            Add(byKey, groups, NameLabel.PER, keys[i], i);
+        }
+        // Surname evidence: the folded last word of each multi-word heading.
+        var surnameOwners = new Dictionary<string, HashSet<Group>>(StringComparer.Ordinal);
+        foreach (var g in byKey.Values)
+            foreach (int i in g.Members)
+            {
+                var words = Words(mentions[i].Text);
+                string surname = lexicon.Key(words[^1], mentions[i].Language);
+                if (!surnameOwners.TryGetValue(surname, out var owners)) surnameOwners[surname] = owners = [];
+                owners.Add(g);
+            }
+        foreach (int i in single)
+        {
+            if (byKey.TryGetValue(keys[i], out var same)) { same.Members.Add(i); continue; }
+            if (surnameOwners.TryGetValue(keys[i], out var owners) && owners.Count == 1)
+            {
+                owners.First().Members.Add(i);
+                continue;
+            }
+            Add(byKey, groups, NameLabel.PER, keys[i], i);
+        }
+    }
+
+    private static void GroupByKey(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, NameLabel label)
+    {
+        var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
+        for (int i = 0; i < mentions.Length; i++)
+            if (!held[i] && mentions[i].Label == label)
+                Add(byKey, groups, label, keys[i], i);
+    }
+
+    private static void Add(Dictionary<string, Group> byKey, List<Group> groups, NameLabel label, string key, int mention)
+    {
+        if (!byKey.TryGetValue(key, out var group))
+        {
+            byKey[key] = group = new Group(label, key);
+            groups.Add(group);
+        }
+        group.Members.Add(mention);
+    }
+
+    private static string[] Words(string text) => text.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
+
+    private static Heading ToHeading(Group g, ImmutableArray<Mention> mentions, ImmutableArray<TimeRange> times,
+        ImmutableArray<Turn> turns, ImmutableArray<PlaceLink>[] places, HashSet<string> usedIds)
+    {
+        var members = g.Members.OrderBy(i => times[i].Start).ThenBy(i => i).ToImmutableArray();
+        var variants = members.Select(i => mentions[i].Text).Distinct(StringComparer.Ordinal).ToImmutableArray();
+        string name = g.Place?.Name ?? DisplayName(g.Label, members, mentions);
+        var alternatives = g.Place is null
+            ? ImmutableArray<PlaceLink>.Empty
+            : members.SelectMany(i => places[i]).Where(p => p.GeonameId != g.Place.GeonameId)
+                .DistinctBy(p => p.GeonameId).OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId).ToImmutableArray();
+        var speakers = members.Select(i => turns[mentions[i].Turn].Speaker).OfType<string>().Distinct(StringComparer.Ordinal).ToImmutableArray();
+        double confidence = Math.Round(members.Average(i => mentions[i].Confidence), 4);
+        var source = members.Any(i => mentions[i].Source == MentionSource.Authority) ? MentionSource.Authority
+            : g.Place is not null ? MentionSource.Gazetteer
+            : mentions[members[0]].Source;
+        return new Heading(UniqueId(g, usedIds), g.Label, name, variants, g.Place, alternatives, members, speakers, confidence, source);
+    }
+
+    /// <summary>The most frequent surface (a multi-word one for persons when there is one), ties to
+    /// the longer, then the earlier.</summary>
+    private static string DisplayName(NameLabel label, ImmutableArray<int> members, ImmutableArray<Mention> mentions)
+    {
+        var candidates = members.Select(i => mentions[i].Text).ToList();
+        if (label == NameLabel.PER && candidates.Any(t => Words(t).Length > 1))
+            candidates = candidates.Where(t => Words(t).Length > 1).ToList();
+        return candidates
+            .Select((text, order) => (text, order))
+            .GroupBy(x => x.text, StringComparer.Ordinal)
+            .OrderByDescending(x => x.Count()).ThenByDescending(x => x.Key.Length).ThenBy(x => x.Min(y => y.order))
+            .First().Key;
+    }
+
+    public static string IdPrefix(NameLabel label) => label.ToString().ToLowerInvariant();
+
+    private static string UniqueId(Group g, HashSet<string> used)
+    {
+        string slug = string.Join('-', g.Key.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries));
+        string id = $"{IdPrefix(g.Label)}-{(slug.Length == 0 ? "x" : slug)}";
+        string unique = id;
+        for (int k = 2; !used.Add(unique); k++) unique = $"{id}-{k}";
+        return unique;
+    }
+}

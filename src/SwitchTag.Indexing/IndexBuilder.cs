@@ -1,0 +1,61 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Stages;
+using SwitchTag.Core.Time;
+
+namespace SwitchTag.Indexing;
+
+/// <summary>The time and index stages: places mentions and language spans in time, applies the
+/// reviewers' decisions, groups headings, and builds the translators' worklist.</summary>
+public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decision> decisions = default,
+    double reviewBelow = HeadingBuilder.DefaultReviewBelow) : IIndexBuilder
+{
+    public InterviewIndex Build(Transcript transcript, ImmutableArray<Turn> turns, string mainLanguage,
+        ImmutableArray<ImmutableArray<LanguageSpan>> spans, ImmutableArray<Mention> mentions) =>
+        BuildWithOutcomes(transcript, turns, mainLanguage, spans, mentions).Index;
+
+    public (InterviewIndex Index, ImmutableArray<DecisionOutcome> Outcomes) BuildWithOutcomes(
+        Transcript transcript, ImmutableArray<Turn> turns, string mainLanguage,
+        ImmutableArray<ImmutableArray<LanguageSpan>> spans, ImmutableArray<Mention> mentions)
+    {
+        var diagnostics = ImmutableArray.CreateBuilder<Diagnostic>();
+        diagnostics.AddRange(transcript.Diagnostics);
+        var aligner = new TimeAligner(transcript);
+
+        var valid = ImmutableArray.CreateBuilder<Mention>();
+        foreach (var m in mentions.IsDefault ? [] : mentions)
+        {
+            if (m.Turn >= 0 && m.Turn < turns.Length && m.CharStart >= 0 && m.CharEnd > m.CharStart && m.CharEnd <= turns[m.Turn].Text.Length)
+                valid.Add(m);
+            else
+                diagnostics.Add(new Diagnostic(At(transcript, turns, m.Turn), Severity.Warning,
+                    $"a name \"{m.Text}\" points outside its turn (turn {m.Turn}, chars {m.CharStart}-{m.CharEnd}) and was left out"));
+        }
+        var ordered = valid.OrderBy(m => m.Turn).ThenBy(m => m.CharStart).ThenBy(m => m.CharEnd).ToImmutableArray();
+
+        var applier = new DecisionApplier(decisions, transcript.Name);
+        var (decided, accepted) = applier.ApplyToMentions(ordered);
+        var times = decided.Select(m => aligner.Align(turns[m.Turn], m.CharStart, m.CharEnd)).ToImmutableArray();
+        var grouped = new HeadingBuilder(lexicon, reviewBelow).Build(decided, times, turns, accepted);
+        var (finalMentions, finalTimes, headings) = applier.ApplyToHeadings(decided, times, grouped);
+
+        var indexed = finalMentions.Select((m, i) => new IndexedMention(m, finalTimes[i], headings.HeadingOf[i])).ToImmutableArray();
+        var safeSpans = Enumerable.Range(0, turns.Length)
+            .Select(t => t < spans.Length && !spans[t].IsDefault ? spans[t] : ImmutableArray<LanguageSpan>.Empty)
+            .ToImmutableArray();
+        var timedSpans = safeSpans
+            .Select((list, t) => list.Select(s => new Timed<LanguageSpan>(s, aligner.Align(turns[t], s.CharStart, s.CharEnd))).ToImmutableArray())
+            .ToImmutableArray();
+        var worklist = WorklistBuilder.Build(turns, safeSpans, mainLanguage, aligner);
+        var duration = transcript.Cues.IsEmpty ? Timecode.Zero : transcript.Cues.Max(c => c.Time.End);
+
+        var index = new InterviewIndex(transcript, mainLanguage, duration, turns, timedSpans, indexed,
+            headings.Headings, worklist, headings.Review, diagnostics.ToImmutable());
+        return (index, applier.Outcomes);
+    }
+
+    private static SourceLine At(Transcript transcript, ImmutableArray<Turn> turns, int turn) =>
+        turn >= 0 && turn < turns.Length && !turns[turn].Cues.IsEmpty
+            ? transcript.Cues[turns[turn].Cues[0].CueIndex].At
+            : new SourceLine(transcript.Source.Path, 1);
+}
