@@ -1,0 +1,104 @@
+using SwitchTag.Core.Documents;
+using SwitchTag.Formats.Reading;
+using SwitchTag.Formats.Timestamped;
+
+namespace SwitchTag.Formats;
+
+/// <summary>Decides a transcript's format from its content (FORMATS.md, "Detection"); the file
+/// extension only breaks a tie between timestamped text and Markdown.</summary>
+public static class FormatDetector
+{
+    /// <summary>Lines looked at: enough for any real header, bounded so a huge file costs little.</summary>
+    private const int ScanLines = 400;
+
+    public static TranscriptFormat? Detect(string text, string? extensionHint)
+    {
+        var s = text.AsSpan();
+        if (s.Length > 0 && s[0] == '\uFEFF') s = s[1..];
+        var lines = new LineScanner(s);
+        ReadOnlySpan<char> first = default;
+        while (lines.Next(out var line))
+        {
+            if (line.IsWhiteSpace()) continue;
+            first = line;
+            break;
+        }
+        if (first.IsEmpty) return null;
+        if (first.StartsWith("WEBVTT", StringComparison.Ordinal) && (first.Length == 6 || first[6] is ' ' or '\t'))
+            return TranscriptFormat.WebVtt;
+
+        lines = new LineScanner(s);
+        bool timing = false, entries = false, markdown = false;
+        for (int n = 0; n < ScanLines && lines.Next(out var line); n++)
+        {
+            if (!timing && line.Contains("-->", StringComparison.Ordinal) && IsTimingLine(line)) timing = true;
+            var body = line.TrimStart();
+            markdown |= IsMarkdownSignal(body, out var unwrapped);
+            entries |= EntryStamp.TryMatch(markdown ? WithoutEmphasis(unwrapped) : unwrapped, out _);
+        }
+        if (timing) return TranscriptFormat.Srt;
+        if (!entries) return null;
+        string hint = (extensionHint ?? "").TrimStart('.').ToLowerInvariant();
+        return markdown || hint is "md" or "markdown" ? TranscriptFormat.Markdown : TranscriptFormat.Text;
+    }
+
+    private static bool IsTimingLine(ReadOnlySpan<char> line)
+    {
+        int p = 0;
+        while (p < line.Length && char.IsWhiteSpace(line[p])) p++;
+        return Timestamps.TrySrt(line, ref p, out _);
+    }
+
+    /// <summary>ATX headings, bulleted or numbered list items, and bold or underscored runs mark Markdown;
+    /// <paramref name="unwrapped"/> is the line with a list marker and leading emphasis removed, so a
+    /// timestamp behind them is still seen.</summary>
+    private static bool IsMarkdownSignal(ReadOnlySpan<char> body, out ReadOnlySpan<char> unwrapped)
+    {
+        unwrapped = body;
+        if (body.Length > 1 && body[0] == '#')
+        {
+            int h = 0;
+            while (h < body.Length && body[h] == '#') h++;
+            if (h <= 6 && (h == body.Length || body[h] == ' ')) return true;
+        }
+        bool signal = false;
+        if (body.Length > 1 && body[0] is '-' or '*' or '+' && body[1] == ' ') { unwrapped = body[2..].TrimStart(); signal = true; }
+        else
+        {
+            int d = 0;
+            while (d < body.Length && d < 9 && char.IsAsciiDigit(body[d])) d++;
+            if (d > 0 && d + 1 < body.Length && body[d] is '.' or ')' && body[d + 1] == ' ') { unwrapped = body[(d + 2)..].TrimStart(); signal = true; }
+        }
+        if (unwrapped.StartsWith("**") || unwrapped.StartsWith("__")) signal = true;
+        return signal;
+    }
+
+    /// <summary>The head of a line with emphasis and code marks removed (a timestamp and speaker prefix
+    /// fit well inside it), as Markdig's plain text of it would read.</summary>
+    private static string WithoutEmphasis(ReadOnlySpan<char> line)
+    {
+        var head = line[..Math.Min(line.Length, 120)];
+        var sb = new System.Text.StringBuilder(head.Length);
+        foreach (char c in head) if (c is not ('*' or '_' or '`')) sb.Append(c);
+        return sb.ToString();
+    }
+
+    /// <summary>Line splitting (CRLF, CR, LF) over a span, without allocating.</summary>
+    private ref struct LineScanner(ReadOnlySpan<char> text)
+    {
+        private ReadOnlySpan<char> rest = text;
+        private bool done = text.IsEmpty;
+
+        public bool Next(out ReadOnlySpan<char> line)
+        {
+            if (done) { line = default; return false; }
+            int end = rest.IndexOfAny('\r', '\n');
+            if (end < 0) { line = rest; done = true; return true; }
+            line = rest[..end];
+            int skip = rest[end] == '\r' && end + 1 < rest.Length && rest[end + 1] == '\n' ? 2 : 1;
+            rest = rest[(end + skip)..];
+            done = rest.IsEmpty;
+            return true;
+        }
+    }
+}

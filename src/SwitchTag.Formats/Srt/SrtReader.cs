@@ -1,0 +1,98 @@
+using System.Collections.Immutable;
+using System.Text;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Time;
+using SwitchTag.Formats.Reading;
+using SwitchTag.Formats.Text;
+
+namespace SwitchTag.Formats.Srt;
+
+/// <summary>Reads SubRip: blocks of a counter line, a <c>HH:MM:SS,mmm --> HH:MM:SS,mmm</c> timing line and
+/// text lines, separated by blank lines. A missing counter is accepted; a counter followed by a timing
+/// line starts a new cue even without the blank line before it. Formatting tags are stripped.</summary>
+internal static class SrtReader
+{
+    public static ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
+    {
+        var cues = new List<Cue>();
+        string? label = null;
+        int i = 0, n = src.LineCount;
+        while (i < n)
+        {
+            while (i < n && SourceText.IsBlank(src.Span(src[i]))) i++;
+            if (i >= n) break;
+            int blockStart = i;
+            int timing = IsCounter(src, i) && i + 1 < n && HasArrow(src, i + 1) ? i + 1 : HasArrow(src, i) ? i : -1;
+            i = timing < 0 ? i + 1 : timing + 1;
+            while (i < n && !SourceText.IsBlank(src.Span(src[i])) && !StartsCue(src, i)) i++;
+            if (timing < 0)
+            {
+                diagnostics.Warn(src[blockStart].Number, $"text outside any cue (no timing line); not read: {Quote(src, blockStart, i)}");
+                continue;
+            }
+            var line = src[timing];
+            if (!TryTiming(src.Span(line), out var start, out var end, out var settings))
+            {
+                diagnostics.Warn(line.Number, $"malformed cue timing {Diagnostics.Quote(src.Span(line))} (SubRip wants HH:MM:SS,mmm --> HH:MM:SS,mmm); cue not read: {Quote(src, timing + 1, i)}");
+                continue;
+            }
+            var range = CueChecks.Range(start, end, line.Number, diagnostics);
+            var text = new StringBuilder();
+            for (int k = timing + 1; k < i; k++)
+            {
+                if (k > timing + 1) text.Append('\n');
+                text.Append(Markup.StripSrtTags(src.Span(src[k])));
+            }
+            string plain = text.ToString();
+            if (SpeakerPrefix.TryMatch(plain, out int ls, out int le, out int ts))
+            {
+                label = plain[ls..le];
+                plain = plain[ts..];
+            }
+            cues.Add(new Cue(range, SpeakerLabels.Normalise(label), label, plain, [], [],
+                src.At(src[blockStart].Number), src[blockStart].Start, src[i - 1].End,
+                Identifier: timing > blockStart ? src.Str(src[blockStart]).Trim() : null, Settings: settings));
+        }
+        return CueChecks.Finish(cues, overlapAllowed: false, diagnostics);
+    }
+
+    private static bool IsCounter(SourceText src, int i)
+    {
+        var s = src.Span(src[i]).Trim();
+        if (s.IsEmpty || s.Length > 9) return false;
+        foreach (char c in s) if (!char.IsAsciiDigit(c)) return false;
+        return true;
+    }
+
+    private static bool HasArrow(SourceText src, int i) => src.Span(src[i]).Contains("-->", StringComparison.Ordinal);
+
+    private static bool StartsCue(SourceText src, int i) =>
+        (IsCounter(src, i) && i + 1 < src.LineCount && HasArrow(src, i + 1) && TryTiming(src.Span(src[i + 1]), out _, out _, out _))
+        || (HasArrow(src, i) && TryTiming(src.Span(src[i]), out _, out _, out _));
+
+    /// <summary>"start --> end [X1:.. Y2:..]"; anything after the end time is kept as the cue's settings.</summary>
+    private static bool TryTiming(ReadOnlySpan<char> line, out Timecode start, out Timecode end, out string? settings)
+    {
+        start = end = default;
+        settings = null;
+        int p = Skip(line, 0);
+        if (!Timestamps.TrySrt(line, ref p, out start)) return false;
+        p = Skip(line, p);
+        if (!line[p..].StartsWith("-->")) return false;
+        p = Skip(line, p + 3);
+        if (!Timestamps.TrySrt(line, ref p, out end)) return false;
+        if (p < line.Length && !char.IsWhiteSpace(line[p])) return false;
+        var rest = line[p..].Trim();
+        settings = rest.IsEmpty ? null : rest.ToString();
+        return true;
+    }
+
+    private static int Skip(ReadOnlySpan<char> s, int p)
+    {
+        while (p < s.Length && (s[p] == ' ' || s[p] == '\t')) p++;
+        return p;
+    }
+
+    private static string Quote(SourceText src, int start, int end) =>
+        Diagnostics.Quote(start >= end ? "" : src.Text.AsSpan(src[start].Start, src[end - 1].End - src[start].Start));
+}

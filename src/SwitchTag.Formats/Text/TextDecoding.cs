@@ -1,0 +1,70 @@
+using System.Buffers;
+using System.Text;
+using System.Text.Unicode;
+
+namespace SwitchTag.Formats.Text;
+
+/// <summary>Bytes to text. UTF-8 (with or without BOM) is decoded strictly: an invalid sequence rejects
+/// the file, naming its byte offset. UTF-16 is accepted only with a BOM (LE or BE); text containing NUL
+/// is treated as binary.</summary>
+internal static class TextDecoding
+{
+    public readonly record struct Decoded(string? Text, int ErrorLine, string? Error);
+
+    public static Decoded Decode(ReadOnlySpan<byte> bytes)
+    {
+        if (bytes.Length >= 2 && bytes[0] == 0xFF && bytes[1] == 0xFE)
+            return Utf16(bytes[2..], new UnicodeEncoding(bigEndian: false, byteOrderMark: false, throwOnInvalidBytes: true), "UTF-16 LE");
+        if (bytes.Length >= 2 && bytes[0] == 0xFE && bytes[1] == 0xFF)
+            return Utf16(bytes[2..], new UnicodeEncoding(bigEndian: true, byteOrderMark: false, throwOnInvalidBytes: true), "UTF-16 BE");
+        int bom = bytes.Length >= 3 && bytes[0] == 0xEF && bytes[1] == 0xBB && bytes[2] == 0xBF ? 3 : 0;
+        var body = bytes[bom..];
+
+        int nul = body.IndexOf((byte)0);
+        if (nul >= 0)
+            return new Decoded(null, LineOfByte(body, nul), LooksLikeUtf16(body)
+                ? $"binary or UTF-16 text without a byte-order mark (NUL byte at byte offset {nul + bom}); save it as UTF-8 or UTF-16 with a BOM"
+                : $"binary file (NUL byte at byte offset {nul + bom})");
+
+        var chars = new char[body.Length];
+        var status = Utf8.ToUtf16(body, chars, out int read, out int written, replaceInvalidSequences: false);
+        if (status != OperationStatus.Done)
+            return new Decoded(null, LineOfByte(body, read), $"invalid UTF-8 at byte offset {read + bom} (byte 0x{body[read]:X2}); the file must be UTF-8 or UTF-16 with a BOM");
+        return new Decoded(new string(chars, 0, written), 0, null);
+    }
+
+    private static Decoded Utf16(ReadOnlySpan<byte> body, UnicodeEncoding encoding, string name)
+    {
+        if (body.Length % 2 != 0)
+            return new Decoded(null, 1, $"{name} text with an odd number of bytes ({body.Length + 2}); the file is cut short or not {name}");
+        string text;
+        try
+        {
+            text = encoding.GetString(body);
+        }
+        catch (DecoderFallbackException e)
+        {
+            return new Decoded(null, 1, $"invalid {name} at byte offset {e.Index + 2}: {e.Message}");
+        }
+        int nul = text.IndexOf('\0');
+        if (nul >= 0)
+            return new Decoded(null, LineOfChar(text, nul), $"binary content in {name} text (NUL character at byte offset {nul * 2 + 2})");
+        return new Decoded(text, 0, null);
+    }
+
+    /// <summary>Most odd or most even bytes NUL: ASCII-range text stored as UTF-16 with no BOM.</summary>
+    private static bool LooksLikeUtf16(ReadOnlySpan<byte> body)
+    {
+        int n = Math.Min(body.Length, 4096) & ~1, half = n / 2, even = 0, odd = 0;
+        for (int i = 0; i < n; i += 2)
+        {
+            if (body[i] == 0) even++;
+            if (body[i + 1] == 0) odd++;
+        }
+        return half >= 2 && Math.Max(even, odd) * 10 >= half * 9 && Math.Min(even, odd) * 10 < half;
+    }
+
+    private static int LineOfByte(ReadOnlySpan<byte> body, int offset) => 1 + body[..offset].Count((byte)'\n');
+
+    private static int LineOfChar(string text, int offset) => 1 + text.AsSpan(0, offset).Count('\n');
+}

@@ -1,0 +1,159 @@
+using System.Collections.Immutable;
+using System.Security.Cryptography;
+using System.Text;
+using SwitchTag.Core.Documents;
+using SwitchTag.Formats.Markdown;
+using SwitchTag.Formats.Reading;
+using SwitchTag.Formats.Srt;
+using SwitchTag.Formats.Text;
+using SwitchTag.Formats.Timestamped;
+using SwitchTag.Formats.WebVtt;
+
+namespace SwitchTag.Formats;
+
+/// <summary>Reads transcript files of every supported format into <see cref="Transcript"/>s. Nothing
+/// here throws on bad input: problems come back as diagnostics with file:line (FORMATS.md).</summary>
+public static class TranscriptFile
+{
+    /// <summary>File line used for problems with a path as a whole (missing, unreadable).</summary>
+    public const int WholeFile = 0;
+
+    public static IReadOnlyList<string> KnownExtensions { get; } = [".vtt", ".srt", ".txt", ".md", ".markdown"];
+
+    /// <summary>Reads bytes, decodes them (UTF-8, or UTF-16 with a BOM), detects the format from the
+    /// content (unless <paramref name="forced"/>) and parses.</summary>
+    public static ReadResult Read(string path, TranscriptFormat? forced = null)
+    {
+        byte[] bytes;
+        try
+        {
+            bytes = File.ReadAllBytes(path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
+        {
+            return Rejected(path, WholeFile, $"cannot read the file: {e.Message}");
+        }
+        if (bytes.Length == 0) return Rejected(path, 1, "file is empty");
+        var decoded = TextDecoding.Decode(bytes);
+        if (decoded.Text is null) return Rejected(path, decoded.ErrorLine, decoded.Error!);
+        return ParseCore(path, decoded.Text, forced, Convert.ToHexStringLower(SHA256.HashData(bytes)));
+    }
+
+    /// <summary>Parses text already in memory; the recorded SHA-256 is of its UTF-8 encoding.</summary>
+    public static ReadResult Parse(string path, string text, TranscriptFormat? forced = null)
+    {
+        if (text.Length > 0 && text[0] == '\uFEFF') text = text[1..];
+        return ParseCore(path, text, forced, Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text))));
+    }
+
+    /// <summary>Files to read: folders are walked recursively for <see cref="KnownExtensions"/> (hidden
+    /// entries skipped), each folder's files in ordinal path order; a named file is taken whatever its
+    /// extension; a missing path is reported in <paramref name="problems"/>. Each file comes once.</summary>
+    public static IEnumerable<string> Expand(IEnumerable<string> paths, ICollection<Diagnostic> problems)
+    {
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var path in paths)
+        {
+            if (Directory.Exists(path))
+            {
+                List<string> found;
+                try
+                {
+                    found = [.. Walk(path)];
+                }
+                catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+                {
+                    problems.Add(new Diagnostic(new SourceLine(path, WholeFile), Severity.Error, $"cannot list the folder: {e.Message}"));
+                    continue;
+                }
+                found.Sort(StringComparer.Ordinal);
+                foreach (var file in found)
+                    if (seen.Add(Path.GetFullPath(file))) yield return file;
+            }
+            else if (File.Exists(path))
+            {
+                if (seen.Add(Path.GetFullPath(path))) yield return path;
+            }
+            else
+                problems.Add(new Diagnostic(new SourceLine(path, WholeFile), Severity.Error, "no such file or folder"));
+        }
+    }
+
+    private static IEnumerable<string> Walk(string folder)
+    {
+        var options = new EnumerationOptions { RecurseSubdirectories = true, AttributesToSkip = FileAttributes.Hidden | FileAttributes.System, IgnoreInaccessible = true };
+        return Directory.EnumerateFiles(folder, "*", options)
+            .Where(f => !Path.GetRelativePath(folder, f).Split(Path.DirectorySeparatorChar).Any(part => part.StartsWith('.')))
+            .Where(f => KnownExtensions.Contains(Path.GetExtension(f).ToLowerInvariant()));
+    }
+
+    private static ReadResult ParseCore(string path, string text, TranscriptFormat? forced, string sha256)
+    {
+        var diagnostics = new Diagnostics(path);
+        try
+        {
+            return ParseChecked(path, text, forced, sha256, diagnostics);
+        }
+        catch (Exception e) when (e is not OutOfMemoryException)
+        {
+            // The readers are written not to throw; should one still, the file is rejected, not the run.
+            diagnostics.Error(WholeFile, $"reader failed: {e.GetType().Name}: {e.Message}");
+            return new ReadResult(null, diagnostics.ToImmutable());
+        }
+    }
+
+    private static ReadResult ParseChecked(string path, string text, TranscriptFormat? forced, string sha256, Diagnostics diagnostics)
+    {
+        if (text.AsSpan().IsWhiteSpace())
+        {
+            diagnostics.Error(1, text.Length == 0 ? "file is empty" : "file holds only whitespace");
+            return new ReadResult(null, diagnostics.ToImmutable());
+        }
+        int nul = text.IndexOf('\0');
+        if (nul >= 0)
+        {
+            diagnostics.Error(1 + text.AsSpan(0, nul).Count('\n'), $"binary content (NUL character at char offset {nul})");
+            return new ReadResult(null, diagnostics.ToImmutable());
+        }
+
+        string extension = Path.GetExtension(path);
+        var format = forced ?? FormatDetector.Detect(text, extension);
+        if (format is null)
+        {
+            diagnostics.Error(1, "unknown format: no WEBVTT header, no SubRip timing line (\"00:00:01,000 --> 00:00:02,000\") and no line opening with a timestamp in the first lines");
+            return new ReadResult(null, diagnostics.ToImmutable());
+        }
+        if (forced is null && ExtensionFormat(extension) is { } expected && expected != format)
+            diagnostics.Warn(1, $"content reads as {format.Value.ToName()} although the extension {extension} suggests {expected.ToName()}; read as {format.Value.ToName()}"
+                + (expected == TranscriptFormat.WebVtt ? " (no WEBVTT header line)" : ""));
+
+        var src = new SourceText(path, text);
+        var cues = format.Value switch
+        {
+            TranscriptFormat.WebVtt => WebVttReader.Read(src, diagnostics),
+            TranscriptFormat.Srt => SrtReader.Read(src, diagnostics),
+            TranscriptFormat.Text => TimestampedTextReader.Read(src, diagnostics),
+            _ => MarkdownReader.Read(src, diagnostics),
+        };
+        if (cues is { IsEmpty: true })
+        {
+            diagnostics.Error(1, $"no cues found (read as {format.Value.ToName()})");
+            cues = null;
+        }
+        if (cues is null) return new ReadResult(null, diagnostics.ToImmutable());
+        var all = diagnostics.ToImmutable();
+        var transcript = new Transcript(new SourceInfo(path, format.Value, sha256), text, cues.Value, all);
+        return new ReadResult(transcript, all);
+    }
+
+    private static TranscriptFormat? ExtensionFormat(string extension) => extension.ToLowerInvariant() switch
+    {
+        ".vtt" => TranscriptFormat.WebVtt,
+        ".srt" => TranscriptFormat.Srt,
+        ".md" or ".markdown" => TranscriptFormat.Markdown,
+        _ => null,
+    };
+
+    private static ReadResult Rejected(string path, int line, string message) =>
+        new(null, [new Diagnostic(new SourceLine(path, line), Severity.Error, message)]);
+}

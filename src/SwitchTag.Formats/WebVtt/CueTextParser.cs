@@ -1,0 +1,141 @@
+using System.Collections.Immutable;
+using System.Text;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Time;
+using SwitchTag.Formats.Reading;
+using SwitchTag.Formats.Text;
+
+namespace SwitchTag.Formats.WebVtt;
+
+/// <summary>The cue text of one WebVTT cue, reduced to plain text with what its markup said.</summary>
+internal sealed record CueText(
+    string Plain,
+    string? Voice,
+    ImmutableArray<WordTime> WordTimes,
+    ImmutableArray<LanguageHint> LanguageHints);
+
+/// <summary>Parses WebVTT cue text (W3C WebVTT, "cue text parsing rules"): <c>&lt;c&gt; &lt;i&gt; &lt;b&gt;
+/// &lt;u&gt; &lt;ruby&gt; &lt;rt&gt; &lt;v&gt; &lt;lang&gt;</c> spans with classes, inline timestamps and
+/// character references. Tags are dropped from the plain text; ruby text is kept in parentheses after
+/// its base; an unclosed '&lt;' is kept as text with a warning.</summary>
+internal static class CueTextParser
+{
+    /// <param name="raw">The cue's text lines joined by '\n'.</param>
+    /// <param name="firstLine">The file line of the first text line, for diagnostics.</param>
+    public static CueText Parse(string raw, TimeRange cueTime, int firstLine, Diagnostics diagnostics)
+    {
+        var plain = new StringBuilder(raw.Length);
+        var words = ImmutableArray.CreateBuilder<WordTime>();
+        var hints = ImmutableArray.CreateBuilder<LanguageHint>();
+        var langs = new Stack<(string Language, int Start)>();
+        string? voice = null;
+        int voices = 0;
+        bool noCloseAhead = false;
+        var s = raw.AsSpan();
+        int countedTo = 0, line = firstLine;
+
+        int i = 0;
+        while (i < s.Length)
+        {
+            char c = s[i];
+            if (c == '&')
+            {
+                int used = CharacterReferences.TryDecode(s, i, plain);
+                if (used == 0) plain.Append('&');
+                i += Math.Max(used, 1);
+                continue;
+            }
+            if (c != '<')
+            {
+                plain.Append(c);
+                i++;
+                continue;
+            }
+            int close = noCloseAhead ? -1 : s[(i + 1)..].IndexOf('>');
+            if (close < 0)
+            {
+                noCloseAhead = true;
+                line += s[countedTo..i].Count('\n');
+                countedTo = i;
+                diagnostics.Warn(line, "'<' with no closing '>' in cue text; kept as text");
+                plain.Append('<');
+                i++;
+                continue;
+            }
+            var tag = s.Slice(i + 1, close);
+            line += s[countedTo..i].Count('\n');
+            countedTo = i;
+            int tagLine = line;
+            i += close + 2;
+
+            if (tag.Length > 0 && tag[0] == '/')
+            {
+                var name = tag[1..].Trim();
+                if (name.SequenceEqual("lang") && langs.Count > 0)
+                {
+                    var (language, start) = langs.Pop();
+                    hints.Add(new LanguageHint(start, plain.Length, language));
+                }
+                else if (name.SequenceEqual("rt"))
+                    plain.Append(')');
+                continue;
+            }
+            if (tag.Length > 0 && char.IsAsciiDigit(tag[0]))
+            {
+                int p = 0;
+                if (Timestamps.TryWebVtt(tag, ref p, out Timecode at) && p == tag.Length)
+                {
+                    if (!cueTime.Contains(at))
+                        diagnostics.Warn(tagLine, $"inline timestamp <{tag}> lies outside the cue ({cueTime}); kept");
+                    words.Add(new WordTime(plain.Length, at));
+                }
+                else
+                    diagnostics.Warn(tagLine, $"malformed inline timestamp <{tag}>; ignored");
+                continue;
+            }
+
+            int nameEnd = 0;
+            while (nameEnd < tag.Length && tag[nameEnd] != '.' && !char.IsWhiteSpace(tag[nameEnd])) nameEnd++;
+            var tagName = tag[..nameEnd];
+            int ws = nameEnd;
+            while (ws < tag.Length && !char.IsWhiteSpace(tag[ws])) ws++;
+            var annotation = ws < tag.Length ? Decode(tag[ws..]).Trim() : "";
+
+            switch (tagName)
+            {
+                case "v":
+                    if (annotation.Length == 0) break;
+                    voices++;
+                    if (voice is null) voice = annotation;
+                    else if (voices == 2 && annotation != voice)
+                        diagnostics.Warn(tagLine, $"cue has more than one voice (\"{voice}\", \"{annotation}\"); its speaker is the first");
+                    break;
+                case "lang":
+                    langs.Push((annotation, plain.Length));
+                    break;
+                case "rt":
+                    plain.Append('(');
+                    break;
+            }
+        }
+        while (langs.Count > 0)
+        {
+            var (language, start) = langs.Pop();
+            hints.Add(new LanguageHint(start, plain.Length, language));
+        }
+        hints.Sort((a, b) => a.CharStart != b.CharStart ? a.CharStart.CompareTo(b.CharStart) : b.CharEnd.CompareTo(a.CharEnd));
+        return new CueText(plain.ToString(), voice, words.ToImmutable(), [.. hints.Where(h => h.Language.Length > 0 && h.CharEnd > h.CharStart)]);
+    }
+
+    private static string Decode(ReadOnlySpan<char> s)
+    {
+        var sb = new StringBuilder(s.Length);
+        for (int i = 0; i < s.Length;)
+        {
+            int used = s[i] == '&' ? CharacterReferences.TryDecode(s, i, sb) : 0;
+            if (used == 0) sb.Append(s[i++]);
+            else i += used;
+        }
+        return sb.ToString();
+    }
+}

@@ -1,0 +1,146 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Time;
+using SwitchTag.Formats.Reading;
+
+namespace SwitchTag.Formats.WebVtt;
+
+/// <summary>Reads WebVTT as the W3C WebVTT spec's parsing algorithm does: the WEBVTT signature line,
+/// header lines up to the first blank line, then blocks separated by blank lines. A block whose first
+/// or second line holds "-->" is a cue (the line before the timing line is its identifier); NOTE,
+/// STYLE and REGION blocks are skipped; any other block is reported, its text quoted.</summary>
+internal static class WebVttReader
+{
+    public static ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
+    {
+        if (src.LineCount == 0 || !IsSignature(src.Span(src[0])))
+        {
+            diagnostics.Error(1, "not WebVTT: the first line must be \"WEBVTT\" (optionally followed by a space or tab and header text)");
+            return null;
+        }
+        var cues = new List<Cue>();
+        int i = 1;
+        while (i < src.LineCount && !SourceText.IsBlank(src.Span(src[i])) && !src.Span(src[i]).Contains("-->", StringComparison.Ordinal))
+            i++;
+
+        while (i < src.LineCount)
+        {
+            while (i < src.LineCount && SourceText.IsBlank(src.Span(src[i]))) i++;
+            if (i >= src.LineCount) break;
+            int blockStart = i, timing = -1;
+            while (i < src.LineCount && !SourceText.IsBlank(src.Span(src[i])))
+            {
+                if (src.Span(src[i]).Contains("-->", StringComparison.Ordinal))
+                {
+                    if (timing < 0 && i - blockStart <= 1) timing = i;
+                    else break;
+                }
+                i++;
+            }
+            if (timing >= 0)
+                ReadCue(src, blockStart, timing, i, cues, diagnostics);
+            else
+                OtherBlock(src, blockStart, i, cues.Count > 0, diagnostics);
+        }
+        return CueChecks.Finish(Speakers(cues), overlapAllowed: true, diagnostics);
+    }
+
+    private static bool IsSignature(ReadOnlySpan<char> line) =>
+        line.StartsWith("WEBVTT", StringComparison.Ordinal) && (line.Length == 6 || line[6] is ' ' or '\t');
+
+    private static void ReadCue(SourceText src, int blockStart, int timing, int blockEnd, List<Cue> cues, Diagnostics diagnostics)
+    {
+        var timingLine = src[timing];
+        if (!TryTiming(src.Span(timingLine), out var start, out var end, out var settings))
+        {
+            diagnostics.Warn(timingLine.Number, $"malformed cue timing {Diagnostics.Quote(src.Span(timingLine))} (WebVTT wants HH:MM:SS.mmm --> HH:MM:SS.mmm); cue not read: {BlockText(src, timing + 1, blockEnd)}");
+            return;
+        }
+        var range = CueChecks.Range(start, end, timingLine.Number, diagnostics);
+        string raw = string.Join('\n', Enumerable.Range(timing + 1, blockEnd - timing - 1).Select(k => src.Str(src[k])));
+        int firstText = timing + 1 < blockEnd ? src[timing + 1].Number : timingLine.Number;
+        var text = CueTextParser.Parse(raw, range, firstText, diagnostics);
+        string? identifier = timing > blockStart ? src.Str(src[blockStart]) : null;
+        int rawEnd = src[blockEnd - 1].End;
+        cues.Add(new Cue(range, text.Voice, text.Voice, text.Plain, text.WordTimes, text.LanguageHints,
+            src.At(src[blockStart].Number), src[blockStart].Start, rawEnd, Identifier: identifier, Settings: settings));
+    }
+
+    /// <summary>"start --> end [settings]"; the settings are kept as written (not interpreted).</summary>
+    private static bool TryTiming(ReadOnlySpan<char> line, out Timecode start, out Timecode end, out string? settings)
+    {
+        start = end = default;
+        settings = null;
+        int p = SkipSpace(line, 0);
+        if (!Timestamps.TryWebVtt(line, ref p, out start)) return false;
+        p = SkipSpace(line, p);
+        if (!line[p..].StartsWith("-->")) return false;
+        p = SkipSpace(line, p + 3);
+        if (!Timestamps.TryWebVtt(line, ref p, out end)) return false;
+        if (p < line.Length && !char.IsWhiteSpace(line[p])) return false;
+        var rest = line[p..].Trim();
+        settings = rest.IsEmpty ? null : rest.ToString();
+        return true;
+    }
+
+    private static int SkipSpace(ReadOnlySpan<char> s, int p)
+    {
+        while (p < s.Length && (s[p] == ' ' || s[p] == '\t')) p++;
+        return p;
+    }
+
+    private static void OtherBlock(SourceText src, int start, int end, bool afterCues, Diagnostics diagnostics)
+    {
+        var first = src.Span(src[start]);
+        if (IsKeyword(first, "NOTE")) return;
+        if (IsKeyword(first, "STYLE") || IsKeyword(first, "REGION"))
+        {
+            if (afterCues)
+                diagnostics.Warn(src[start].Number, $"{first.Trim().ToString()} block after the first cue (WebVTT allows it only before); ignored");
+            return;
+        }
+        diagnostics.Warn(src[start].Number, $"text outside any cue (no timing line); not read: {BlockText(src, start, end)}");
+    }
+
+    private static bool IsKeyword(ReadOnlySpan<char> line, string keyword) =>
+        line.StartsWith(keyword, StringComparison.Ordinal) && (line.Length == keyword.Length || line[keyword.Length] is ' ' or '\t');
+
+    private static string BlockText(SourceText src, int start, int end) =>
+        Diagnostics.Quote(start >= end ? "" : src.Text.AsSpan(src[start].Start, src[end - 1].End - src[start].Start));
+
+    /// <summary>Speakers (FORMATS.md, "Speakers"): a file that uses voice spans names the speaker of
+    /// every cue that has one and of no other (the spec ties a voice to its cue). A file with no voice
+    /// span at all is read like SubRip: a "NAME:" prefix names the speaker, and a cue without one
+    /// continues the speaker before it.</summary>
+    private static IEnumerable<Cue> Speakers(List<Cue> cues)
+    {
+        bool voices = cues.Exists(c => c.SpeakerLabel is not null);
+        string? label = null;
+        foreach (var cue in cues)
+        {
+            if (voices)
+            {
+                yield return cue with { Speaker = SpeakerLabels.Normalise(cue.SpeakerLabel) };
+                continue;
+            }
+            var (prefixed, text, shift) = CutPrefix(cue.Text);
+            if (prefixed is not null) label = prefixed;
+            yield return cue with
+            {
+                Speaker = SpeakerLabels.Normalise(label),
+                SpeakerLabel = label,
+                Text = text,
+                WordTimes = [.. cue.WordTimes.Select(w => w with { CharOffset = Math.Max(0, w.CharOffset - shift) })],
+                LanguageHints = [.. cue.LanguageHints
+                    .Select(h => h with { CharStart = Math.Max(0, h.CharStart - shift), CharEnd = Math.Max(0, h.CharEnd - shift) })
+                    .Where(h => h.CharEnd > h.CharStart)],
+            };
+        }
+    }
+
+    private static (string? Label, string Text, int Shift) CutPrefix(string text)
+    {
+        if (!SpeakerPrefix.TryMatch(text, out int labelStart, out int labelEnd, out int textStart)) return (null, text, 0);
+        return (text[labelStart..labelEnd], text[textStart..], textStart);
+    }
+}
