@@ -1,0 +1,80 @@
+using System.Text;
+using SwitchTag.Core.Documents;
+using SwitchTag.Formats;
+using SwitchTag.Indexing;
+
+namespace SwitchTag.Output;
+
+/// <summary><c>annotated.vtt</c>: every cue with its original times, identifier, settings, speaker
+/// (as a <c>&lt;v&gt;</c> voice) and word timestamps, and each stretch outside the main language wrapped
+/// in <c>&lt;lang xx&gt;…&lt;/lang&gt;</c> (W3C WebVTT cue language span). Text is escaped as cue text.</summary>
+public static class AnnotatedVttWriter
+{
+    public static string Render(InterviewIndex index)
+    {
+        var cueTurn = new Dictionary<int, (Turn Turn, TurnCue Part, int TurnIndex)>();
+        for (int t = 0; t < index.Turns.Length; t++)
+            foreach (var part in index.Turns[t].Cues)
+                cueTurn[part.CueIndex] = (index.Turns[t], part, t);
+
+        var sb = new StringBuilder("WEBVTT\n\nNOTE\nMachine annotation of ");
+        sb.Append(Escape(Path.GetFileName(index.Transcript.Source.Path)))
+          .Append(": <lang> marks stretches outside the main language (")
+          .Append(index.MainLanguage).Append(").\n\n");
+        var cues = index.Transcript.Cues;
+        for (int c = 0; c < cues.Length; c++)
+        {
+            var cue = cues[c];
+            if (cue.Identifier is { Length: > 0 } id) sb.Append(id.Replace('\n', ' ')).Append('\n');
+            sb.Append(cue.Time.Start).Append(" --> ").Append(cue.Time.End);
+            if (cue.Settings is { Length: > 0 } settings) sb.Append(' ').Append(settings);
+            sb.Append('\n');
+            if (cue.SpeakerLabel is { Length: > 0 } label)
+                sb.Append("<v ").Append(Escape(label.TrimEnd(':').Trim())).Append('>');
+            var spans = cueTurn.TryGetValue(c, out var place) ? ForeignSpans(index, place.TurnIndex, place.Part) : [];
+            AppendText(sb, cue, spans);
+            sb.Append("\n\n");
+        }
+        return sb.ToString();
+    }
+
+    private static List<(int Start, int End, string Language)> ForeignSpans(InterviewIndex index, int turn, TurnCue part)
+    {
+        var result = new List<(int, int, string)>();
+        foreach (var timed in index.Spans[turn])
+        {
+            var s = timed.Value;
+            if (!WorklistBuilder.IsForeign(s.Language, index.MainLanguage)) continue;
+            int start = Math.Max(s.CharStart, part.CharStart) - part.CharStart;
+            int end = Math.Min(s.CharEnd, part.CharEnd) - part.CharStart;
+            if (end > start) result.Add((start, end, s.Language));
+        }
+        return result;
+    }
+
+    // Tags go in at char positions of the cue text: at one position, closing tags, then the word
+    // timestamp, then opening tags, so tags nest properly. Blank lines would end the cue, so runs of
+    // newlines collapse to one.
+    private static void AppendText(StringBuilder sb, Cue cue, List<(int Start, int End, string Language)> spans)
+    {
+        string text = cue.Text;
+        var times = cue.WordTimes.IsDefault ? [] : cue.WordTimes.Where(w => w.CharOffset >= 0 && w.CharOffset < text.Length).ToList();
+        var cuts = spans.SelectMany(s => new[] { s.Start, s.End }).Concat(times.Select(w => w.CharOffset)).Append(0).Append(text.Length)
+            .Distinct().Order().ToList();
+        for (int k = 0; k < cuts.Count; k++)
+        {
+            int at = cuts[k];
+            if (spans.Any(s => s.End == at)) sb.Append("</lang>");
+            foreach (var w in times.Where(w => w.CharOffset == at).Take(1)) sb.Append('<').Append(w.Time).Append('>');
+            foreach (var s in spans.Where(s => s.Start == at)) sb.Append("<lang ").Append(s.Language).Append('>');
+            if (k + 1 < cuts.Count) sb.Append(Escape(text[at..cuts[k + 1]]));
+        }
+    }
+
+    private static string Escape(string text)
+    {
+        string single = text.Replace("\r", "");
+        while (single.Contains("\n\n", StringComparison.Ordinal)) single = single.Replace("\n\n", "\n");
+        return WebVttText.Escape(single);
+    }
+}

@@ -1,0 +1,34 @@
+using System.Text;
+
+namespace SwitchTag.Output;
+
+/// <summary>Writes a file so that readers see either the old or the new content, never half of it:
+/// the bytes go to a temporary file beside the target, which is then renamed over it.</summary>
+public static class AtomicFile
+{
+    private static readonly UTF8Encoding Utf8NoBom = new(encoderShouldEmitUTF8Identifier: false);
+
+    public static void Write(string path, Action<Stream> write)
+    {
+        string full = Path.GetFullPath(path);
+        string dir = Path.GetDirectoryName(full)!;
+        Directory.CreateDirectory(dir);
+        string temp = Path.Combine(dir, $".{Path.GetFileName(full)}.{Environment.ProcessId}.{Guid.NewGuid():N}.tmp");
+        try
+        {
+            using (var stream = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None))
+            {
+                write(stream);
+                stream.Flush(flushToDisk: true);
+            }
+            File.Move(temp, full, overwrite: true);
+        }
+        finally
+        {
+            if (File.Exists(temp)) File.Delete(temp);
+        }
+    }
+
+    public static void WriteText(string path, string text) =>
+        Write(path, stream => stream.Write(Utf8NoBom.GetBytes(text)));
+}

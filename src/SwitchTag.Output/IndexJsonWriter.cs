@@ -1,0 +1,208 @@
+using System.Text.Encodings.Web;
+using System.Text.Json;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Time;
+using SwitchTag.Indexing;
+
+namespace SwitchTag.Output;
+
+/// <summary>Writes <c>index.json</c>, schema <c>switchtag.index/1</c> (fields in SCHEMA.md).
+/// Times are seconds as JSON numbers; numbers are written in invariant form by Utf8JsonWriter.</summary>
+public static class IndexJsonWriter
+{
+    public const string Schema = "switchtag.index/1";
+
+    internal static readonly JsonWriterOptions Options = new()
+    {
+        Indented = true,
+        // Names and transcript text stay readable; the file is never embedded in HTML.
+        Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
+    };
+
+    public static void Write(InterviewIndex index, Stream stream)
+    {
+        using var w = new Utf8JsonWriter(stream, Options);
+        w.WriteStartObject();
+        w.WriteString("schema", Schema);
+        w.WriteString("interview", index.Transcript.Name);
+        w.WriteStartObject("source");
+        w.WriteString("path", index.Transcript.Source.Path);
+        w.WriteString("format", index.Transcript.Source.Format.ToName());
+        w.WriteString("sha256", index.Transcript.Source.Sha256);
+        w.WriteEndObject();
+        w.WriteString("mainLanguage", index.MainLanguage);
+        Seconds(w, "duration", index.Duration);
+
+        w.WriteStartArray("languages");
+        foreach (var share in LanguageStatistics.Compute(index.Turns, index.Spans))
+        {
+            w.WriteStartObject();
+            w.WriteString("language", share.Language);
+            w.WriteNumber("seconds", share.Seconds);
+            w.WriteNumber("words", share.Words);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+
+        WriteTurns(w, index);
+        WriteMentions(w, index);
+        WriteHeadings(w, index);
+        WriteWorklist(w, index);
+
+        w.WriteStartArray("review");
+        foreach (var r in index.Review)
+        {
+            w.WriteStartObject();
+            w.WriteNumber("mention", r.Mention);
+            w.WriteString("reason", r.Reason);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+
+        w.WriteStartArray("diagnostics");
+        foreach (var d in index.Diagnostics)
+        {
+            w.WriteStartObject();
+            w.WriteString("file", d.At.Path);
+            w.WriteNumber("line", d.At.Line);
+            w.WriteString("severity", d.Severity == Severity.Error ? "error" : "warning");
+            w.WriteString("message", d.Message);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        w.WriteEndObject();
+    }
+
+    private static void WriteTurns(Utf8JsonWriter w, InterviewIndex index)
+    {
+        w.WriteStartArray("turns");
+        for (int t = 0; t < index.Turns.Length; t++)
+        {
+            var turn = index.Turns[t];
+            w.WriteStartObject();
+            w.WriteString("speaker", turn.Speaker);
+            w.WriteString("speakerLabel", turn.SpeakerLabel);
+            Seconds(w, "start", turn.Time.Start);
+            Seconds(w, "end", turn.Time.End);
+            w.WriteString("text", turn.Text);
+            w.WriteStartArray("spans");
+            foreach (var timed in index.Spans[t])
+            {
+                w.WriteStartObject();
+                w.WriteNumber("charStart", timed.Value.CharStart);
+                w.WriteNumber("charEnd", timed.Value.CharEnd);
+                Seconds(w, "start", timed.Time.Start);
+                Seconds(w, "end", timed.Time.End);
+                w.WriteString("language", timed.Value.Language);
+                w.WriteNumber("confidence", Math.Round(timed.Value.Confidence, 4));
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+    }
+
+    private static void WriteMentions(Utf8JsonWriter w, InterviewIndex index)
+    {
+        var reasons = index.Review.ToDictionary(r => r.Mention, r => r.Reason);
+        w.WriteStartArray("mentions");
+        for (int i = 0; i < index.Mentions.Length; i++)
+        {
+            var (m, time, heading) = index.Mentions[i];
+            w.WriteStartObject();
+            w.WriteString("text", m.Text);
+            w.WriteString("label", m.Label.ToString());
+            w.WriteNumber("turn", m.Turn);
+            w.WriteNumber("charStart", m.CharStart);
+            w.WriteNumber("charEnd", m.CharEnd);
+            Seconds(w, "start", time.Start);
+            Seconds(w, "end", time.End);
+            w.WriteString("language", m.Language);
+            w.WriteNumber("confidence", Math.Round(m.Confidence, 4));
+            w.WriteString("source", m.Source.ToName());
+            w.WriteString("heading", heading);
+            w.WriteString("speaker", index.Turns[m.Turn].Speaker);
+            w.WriteString("review", reasons.GetValueOrDefault(i));
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+    }
+
+    private static void WriteHeadings(Utf8JsonWriter w, InterviewIndex index)
+    {
+        w.WriteStartArray("headings");
+        foreach (var h in index.Headings)
+        {
+            w.WriteStartObject();
+            w.WriteString("id", h.Id);
+            w.WriteString("label", h.Label.ToString());
+            w.WriteString("name", h.Name);
+            w.WriteStartArray("variants");
+            foreach (var v in h.Variants) w.WriteStringValue(v);
+            w.WriteEndArray();
+            if (h.Place is null) w.WriteNull("place");
+            else { w.WritePropertyName("place"); WritePlace(w, h.Place); }
+            w.WriteStartArray("alternatives");
+            foreach (var a in h.Alternatives) WritePlace(w, a);
+            w.WriteEndArray();
+            w.WriteNumber("count", h.Mentions.Length);
+            if (h.Mentions.IsEmpty) w.WriteNull("firstMention");
+            else Seconds(w, "firstMention", index.Mentions[h.Mentions[0]].Time.Start);
+            w.WriteStartArray("mentions");
+            foreach (int i in h.Mentions) w.WriteNumberValue(i);
+            w.WriteEndArray();
+            w.WriteStartArray("times");
+            foreach (int i in h.Mentions)
+            {
+                w.WriteStartObject();
+                Seconds(w, "start", index.Mentions[i].Time.Start);
+                Seconds(w, "end", index.Mentions[i].Time.End);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteStartArray("speakers");
+            foreach (var s in h.Speakers) w.WriteStringValue(s);
+            w.WriteEndArray();
+            w.WriteNumber("confidence", h.Confidence);
+            w.WriteString("source", h.Source.ToName());
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+    }
+
+    private static void WritePlace(Utf8JsonWriter w, PlaceLink p)
+    {
+        w.WriteStartObject();
+        w.WriteNumber("geonameId", p.GeonameId);
+        w.WriteNumber("lat", p.Latitude);
+        w.WriteNumber("lon", p.Longitude);
+        w.WriteString("country", p.Country);
+        w.WriteString("name", p.Name);
+        w.WriteNumber("population", p.Population);
+        w.WriteEndObject();
+    }
+
+    private static void WriteWorklist(Utf8JsonWriter w, InterviewIndex index)
+    {
+        w.WriteStartArray("worklist");
+        foreach (var item in index.Worklist)
+        {
+            w.WriteStartObject();
+            Seconds(w, "start", item.Time.Start);
+            Seconds(w, "end", item.Time.End);
+            w.WriteString("speaker", item.Speaker);
+            w.WriteString("language", item.Language);
+            w.WriteNumber("confidence", item.Confidence);
+            w.WriteString("text", item.Text);
+            w.WriteNumber("turn", item.Turn);
+            w.WriteNumber("charStart", item.CharStart);
+            w.WriteNumber("charEnd", item.CharEnd);
+            w.WriteNumber("words", LanguageStatistics.CountWords(item.Text, 0, item.Text.Length));
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+    }
+
+    internal static void Seconds(Utf8JsonWriter w, string name, Timecode t) => w.WriteNumber(name, t.Milliseconds / 1000m);
+}

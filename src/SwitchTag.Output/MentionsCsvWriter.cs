@@ -1,0 +1,29 @@
+using SwitchTag.Core.Documents;
+
+namespace SwitchTag.Output;
+
+/// <summary><c>mentions.csv</c>: one row per mention in time order of the transcript. <c>turn</c> and
+/// <c>char</c> are what a decisions file row names a mention by.</summary>
+public static class MentionsCsvWriter
+{
+    public static readonly string[] Header =
+        ["start", "end", "start_seconds", "end_seconds", "speaker", "text", "label", "heading", "heading_name",
+         "language", "confidence", "source", "review", "turn", "char", "char_end"];
+
+    public static string Render(InterviewIndex index)
+    {
+        var names = index.Headings.ToDictionary(h => h.Id, h => h.Name);
+        var reasons = index.Review.ToDictionary(r => r.Mention, r => r.Reason);
+        var csv = new Csv().Row(Header);
+        for (int i = 0; i < index.Mentions.Length; i++)
+        {
+            var (m, time, heading) = index.Mentions[i];
+            csv.Row(time.Start.ToString(), time.End.ToString(), time.Start.ToSecondsString(), time.End.ToSecondsString(),
+                index.Turns[m.Turn].Speaker, m.Text, m.Label.ToString(), heading,
+                heading is null ? null : names.GetValueOrDefault(heading), m.Language, Numbers.Confidence(m.Confidence),
+                m.Source.ToName(), reasons.GetValueOrDefault(i), Numbers.Integer(m.Turn), Numbers.Integer(m.CharStart),
+                Numbers.Integer(m.CharEnd));
+        }
+        return csv.ToString();
+    }
+}

@@ -1,0 +1,12 @@
+using System.Globalization;
+
+namespace SwitchTag.Output;
+
+internal static class Numbers
+{
+    public static string Confidence(double value) => value.ToString("0.####", CultureInfo.InvariantCulture);
+
+    public static string Integer(long value) => value.ToString(CultureInfo.InvariantCulture);
+
+    public static string Coordinate(double value) => value.ToString("0.#####", CultureInfo.InvariantCulture);
+}

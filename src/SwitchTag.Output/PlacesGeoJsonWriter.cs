@@ -1,0 +1,48 @@
+using System.Text.Json;
+using SwitchTag.Core.Documents;
+
+namespace SwitchTag.Output;
+
+/// <summary><c>places.geojson</c>: an RFC 7946 FeatureCollection with one Point per linked place
+/// heading. RFC 7946 section 3.1.1: positions are [longitude, latitude] in WGS 84.</summary>
+public static class PlacesGeoJsonWriter
+{
+    public static void Write(InterviewIndex index, Stream stream)
+    {
+        using var w = new Utf8JsonWriter(stream, IndexJsonWriter.Options);
+        w.WriteStartObject();
+        w.WriteString("type", "FeatureCollection");
+        w.WriteStartArray("features");
+        foreach (var h in index.Headings)
+        {
+            if (h.Place is null) continue;
+            w.WriteStartObject();
+            w.WriteString("type", "Feature");
+            w.WriteString("id", h.Id);
+            w.WriteStartObject("geometry");
+            w.WriteString("type", "Point");
+            w.WriteStartArray("coordinates");
+            w.WriteNumberValue(h.Place.Longitude);
+            w.WriteNumberValue(h.Place.Latitude);
+            w.WriteEndArray();
+            w.WriteEndObject();
+            w.WriteStartObject("properties");
+            w.WriteString("interview", index.Transcript.Name);
+            w.WriteString("heading", h.Id);
+            w.WriteString("name", h.Name);
+            w.WriteNumber("geonameId", h.Place.GeonameId);
+            w.WriteString("country", h.Place.Country);
+            w.WriteStartArray("variants");
+            foreach (var v in h.Variants) w.WriteStringValue(v);
+            w.WriteEndArray();
+            w.WriteNumber("count", h.Mentions.Length);
+            w.WriteStartArray("times");
+            foreach (int i in h.Mentions) w.WriteStringValue(index.Mentions[i].Time.Start.ToString());
+            w.WriteEndArray();
+            w.WriteEndObject();
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        w.WriteEndObject();
+    }
+}

@@ -1,0 +1,115 @@
+using System.Text;
+using SwitchTag.Core.Documents;
+using SwitchTag.Indexing;
+
+namespace SwitchTag.Output;
+
+/// <summary><c>index.md</c>: the readable report of one interview. It opens with the caution that it
+/// is a machine draft. All transcript-derived text passes through <see cref="MarkdownText.Escape"/>.</summary>
+public static class ReportMarkdownWriter
+{
+    public const string Caution =
+        "**Machine draft — review before publication.** This index, its place links and the translators' worklist " +
+        "were produced automatically by SwitchTag. Names may be missed, mislabelled or linked to the wrong place. " +
+        "A person must review this report against the recording before any of it is published.";
+
+    public static string Render(InterviewIndex index)
+    {
+        var md = new StringBuilder();
+        var name = MarkdownText.Escape(index.Transcript.Name);
+        md.Append("# Interview index: ").Append(name).Append("\n\n");
+        md.Append("> ").Append(Caution).Append("\n\n");
+        md.Append("- Source: ").Append(MarkdownText.Escape(index.Transcript.Source.Path))
+          .Append(" (").Append(index.Transcript.Source.Format.ToName()).Append(")\n");
+        md.Append("- SHA-256: ").Append(index.Transcript.Source.Sha256).Append('\n');
+        md.Append("- Main language: ").Append(MarkdownText.Escape(index.MainLanguage)).Append('\n');
+        md.Append("- Duration: ").Append(index.Duration).Append('\n');
+        md.Append("- Turns: ").Append(index.Turns.Length).Append(", mentions indexed: ")
+          .Append(index.Mentions.Count(m => m.HeadingId is not null)).Append(", held for review: ").Append(index.Review.Length).Append("\n\n");
+
+        Languages(md, index);
+        foreach (var (label, title) in new[] { (NameLabel.PER, "People"), (NameLabel.LOC, "Places"), (NameLabel.ORG, "Organisations") })
+            Headings(md, index, label, title);
+        Review(md, index);
+        Worklist(md, index);
+        Diagnostics(md, index);
+        return md.ToString();
+    }
+
+    private static void Languages(StringBuilder md, InterviewIndex index)
+    {
+        md.Append("## Languages\n\n| Language | Time (s) | Words |\n| --- | ---: | ---: |\n");
+        foreach (var s in LanguageStatistics.Compute(index.Turns, index.Spans))
+            md.Append("| ").Append(MarkdownText.Escape(s.Language)).Append(" | ")
+              .Append(s.Seconds.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)).Append(" | ").Append(s.Words).Append(" |\n");
+        md.Append('\n');
+    }
+
+    private static void Headings(StringBuilder md, InterviewIndex index, NameLabel label, string title)
+    {
+        var headings = index.Headings.Where(h => h.Label == label).ToList();
+        md.Append("## ").Append(title).Append("\n\n");
+        if (headings.Count == 0) { md.Append("None found.\n\n"); return; }
+        md.Append("| Heading | Variants | Mentions | First | Times | Speakers | Place | Confidence |\n")
+          .Append("| --- | --- | ---: | --- | --- | --- | --- | ---: |\n");
+        foreach (var h in headings)
+        {
+            var times = h.Mentions.Select(i => index.Mentions[i].Time.Start.ToString());
+            md.Append("| **").Append(MarkdownText.Escape(h.Name)).Append("** | ")
+              .Append(string.Join(", ", h.Variants.Select(MarkdownText.Escape))).Append(" | ")
+              .Append(h.Mentions.Length).Append(" | ")
+              .Append(h.Mentions.IsEmpty ? "" : index.Mentions[h.Mentions[0]].Time.Start.ToString()).Append(" | ")
+              .Append(string.Join(", ", times)).Append(" | ")
+              .Append(string.Join(", ", h.Speakers.Select(MarkdownText.Escape))).Append(" | ")
+              .Append(Place(h)).Append(" | ")
+              .Append(Numbers.Confidence(h.Confidence)).Append(" |\n");
+        }
+        md.Append('\n');
+    }
+
+    private static string Place(Heading h)
+    {
+        if (h.Place is null) return h.Label == NameLabel.LOC ? "not in the gazetteer" : "";
+        var p = h.Place;
+        var text = $"{MarkdownText.Escape(p.Name)}, {MarkdownText.Escape(p.Country)} ({Numbers.Coordinate(p.Latitude)}, {Numbers.Coordinate(p.Longitude)}; GeoNames {p.GeonameId})";
+        if (!h.Alternatives.IsEmpty)
+            text += "; or: " + string.Join(", ", h.Alternatives.Take(5).Select(a => $"{MarkdownText.Escape(a.Name)}, {MarkdownText.Escape(a.Country)}"));
+        return text;
+    }
+
+    private static void Review(StringBuilder md, InterviewIndex index)
+    {
+        md.Append("## For review\n\nThese mentions are held back from the index until a person decides (see the decisions file in SCHEMA.md).\n\n");
+        if (index.Review.IsEmpty) { md.Append("Nothing held back.\n\n"); return; }
+        md.Append("| Time | Speaker | Text | Label | Turn | Char | Reason |\n| --- | --- | --- | --- | ---: | ---: | --- |\n");
+        foreach (var r in index.Review)
+        {
+            var (m, time, _) = index.Mentions[r.Mention];
+            md.Append("| ").Append(time.Start).Append(" | ").Append(MarkdownText.Escape(index.Turns[m.Turn].Speaker)).Append(" | ")
+              .Append(MarkdownText.Escape(m.Text)).Append(" | ").Append(m.Label).Append(" | ").Append(m.Turn).Append(" | ")
+              .Append(m.CharStart).Append(" | ").Append(MarkdownText.Escape(r.Reason)).Append(" |\n");
+        }
+        md.Append('\n');
+    }
+
+    private static void Worklist(StringBuilder md, InterviewIndex index)
+    {
+        md.Append("## Translators' worklist\n\n");
+        if (index.Worklist.IsEmpty) { md.Append("No stretch outside the main language was found.\n\n"); return; }
+        md.Append("| Start | End | Speaker | Language | Confidence | Text |\n| --- | --- | --- | --- | ---: | --- |\n");
+        foreach (var item in index.Worklist)
+            md.Append("| ").Append(item.Time.Start).Append(" | ").Append(item.Time.End).Append(" | ")
+              .Append(MarkdownText.Escape(item.Speaker)).Append(" | ").Append(MarkdownText.Escape(item.Language)).Append(" | ")
+              .Append(Numbers.Confidence(item.Confidence)).Append(" | ").Append(MarkdownText.Escape(item.Text)).Append(" |\n");
+        md.Append('\n');
+    }
+
+    private static void Diagnostics(StringBuilder md, InterviewIndex index)
+    {
+        if (index.Diagnostics.IsEmpty) return;
+        md.Append("## Reading notes\n\n");
+        foreach (var d in index.Diagnostics)
+            md.Append("- ").Append(MarkdownText.Escape(d.ToString())).Append('\n');
+        md.Append('\n');
+    }
+}
