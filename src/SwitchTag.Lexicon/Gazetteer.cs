@@ -1,0 +1,170 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Stages;
+
+namespace SwitchTag.Lexicon;
+
+/// <summary>Populated places with their names in Latin, Cyrillic, Greek and Hebrew script, found by
+/// folded and inflected spellings. Built from GeoNames (CC BY); see models/gazetteer.md.</summary>
+public sealed class Gazetteer : INameLexicon
+{
+    /// <summary>The shipped file's name inside models/.</summary>
+    public const string FileName = "gazetteer.bin.gz";
+
+    /// <summary>One-word names shorter than this are never found in running text.</summary>
+    public const int MinWordLength = 3;
+
+    private readonly GazetteerPlace[] _places;
+    private readonly NameIndex _index;
+    private readonly IReadOnlyDictionary<string, int> _commonWords;
+
+    private Gazetteer(GazetteerPlace[] places, NameIndex index, IReadOnlyDictionary<string, int> commonWords, ImmutableArray<Diagnostic> problems)
+    {
+        _places = places;
+        _index = index;
+        _commonWords = commonWords;
+        Problems = problems;
+    }
+
+    public static Gazetteer Empty { get; } = new([], NameIndex.Build([]), new Dictionary<string, int>(), []);
+
+    /// <summary>Why the gazetteer is empty or incomplete (file missing, corrupt, rows skipped).</summary>
+    public ImmutableArray<Diagnostic> Problems { get; }
+
+    public IReadOnlyList<GazetteerPlace> Places => _places;
+
+    /// <summary>Distinct folded names indexed.</summary>
+    public int NameCount => _index.Count;
+
+    /// <summary>Lower-case counts of the names that are also common words.</summary>
+    public IReadOnlyDictionary<string, int> CommonWords => _commonWords;
+
+    /// <summary>Reads the compact file written by <see cref="Save"/>. A missing or damaged file gives
+    /// an empty gazetteer whose <see cref="Problems"/> says why.</summary>
+    public static Gazetteer Load(string path)
+    {
+        try
+        {
+            var (places, index, common) = GazetteerFile.Read(path);
+            return new Gazetteer(places, index, common, []);
+        }
+        catch (Exception e) when (e is IOException or InvalidDataException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
+        {
+            return new Gazetteer([], NameIndex.Build([]), new Dictionary<string, int>(), [new Diagnostic(new SourceLine(path, 1), Severity.Error, $"cannot load gazetteer: {e.Message}")]);
+        }
+    }
+
+    /// <summary>Builds the gazetteer straight from a GeoNames dump (cities1000.txt, cities15000.txt),
+    /// keeping the same names the shipped file keeps. <paramref name="commonWordCorpora"/> are
+    /// one-sentence-per-line texts whose lower-case words mark common words (none: no such marks).</summary>
+    public static Gazetteer FromGeoNamesText(string path, IEnumerable<string>? commonWordCorpora = null)
+    {
+        var (rows, problems) = GeoNamesText.Read(path);
+        return FromRows(rows, commonWordCorpora, problems);
+    }
+
+    public static Gazetteer FromRows(IEnumerable<GeoNamesRow> rows, IEnumerable<string>? commonWordCorpora = null, ImmutableArray<Diagnostic> problems = default)
+    {
+        var list = rows.ToList();
+        var places = list.Select(r => r.Place).ToArray();
+        var index = NameIndex.Build(list.SelectMany((row, id) =>
+            row.Names.Select(NameFolding.FoldedWords).Distinct(StringComparer.Ordinal).Select(key => (key, id))));
+        var common = commonWordCorpora is null
+            ? new Dictionary<string, int>()
+            : Lexicon.CommonWords.Count(commonWordCorpora, w => index.IndexOf(w) >= 0);
+        return new Gazetteer(places, index, common, problems.IsDefault ? [] : problems);
+    }
+
+    public void Save(string path) => GazetteerFile.Write(path, _places, _index, _commonWords);
+
+    /// <summary>Every place one of whose names is <paramref name="name"/> exactly, folded, or as an
+    /// inflected form under the rules of <paramref name="language"/> (for a language without rules,
+    /// every rule is tried when folded spelling finds nothing). Most populous first.</summary>
+    public IReadOnlyList<GazetteerPlace> Lookup(string name, string language) =>
+        Candidates(name, language).Select(c => c.Place).ToList();
+
+    /// <summary>As <see cref="Lookup"/>, with how each place was met: folded matches before
+    /// inflected ones would be the reviewer's ranking; this list keeps population order.</summary>
+    public IReadOnlyList<GazetteerCandidate> Candidates(string name, string language)
+    {
+        if (string.IsNullOrWhiteSpace(name) || _places.Length == 0) return [];
+        var words = NameWords.Split(name);
+        if (words.Count == 0) return [];
+        var rule = StemRules.For(language);
+        var hits = WholeNameHits(name, words, rule);
+        if (hits.Count == 0 && rule is null)
+            hits = StemRules.All.SelectMany(r => WholeNameHits(name, words, r)).ToList();
+
+        var best = new Dictionary<int, GazetteerCandidate>();
+        foreach (var hit in hits)
+            foreach (int id in _index.IdsAt(hit.KeyIndex))
+                if (!best.TryGetValue(id, out var seen) || hit.Kind < seen.Kind)
+                    best[id] = new GazetteerCandidate(_places[id], hit.Kind, _index.KeyAt(hit.KeyIndex));
+        return best.Values.OrderByDescending(c => c.Place.Population).ThenBy(c => c.Place.GeonameId).ToList();
+    }
+
+    /// <summary>Capitalised spans of <paramref name="text"/> that are gazetteer names, longest first,
+    /// non-overlapping, for a tagger working without a model. Conservative: the first and last word
+    /// of a span must be capitalised; a one-word span needs <see cref="MinWordLength"/> letters, must
+    /// not be a stop word (function words, titles, month names), and if the word is common in lower
+    /// case it is skipped at the start of a sentence. Inflection follows <paramref name="language"/>
+    /// only; there is no fallback across rules here.</summary>
+    public ImmutableArray<NameMatch> Find(string text, string language)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        if (_places.Length == 0 || text.Length == 0) return [];
+        var words = NameWords.Split(text);
+        var rule = StemRules.For(language);
+        var candidates = new List<NameMatch>();
+        for (int i = 0; i < words.Count; i++)
+        {
+            if (!char.IsLetter(text[words[i].Start]) || !NameWords.StartsUpper(text.AsSpan(words[i].Start))) continue;
+            var hits = InflectedMatcher.MatchAt(_index, text, words, i, rule)
+                .Where(h => NameWords.StartsUpper(text.AsSpan(words[i + h.WordCount - 1].Start)))
+                .Where(h => h.WordCount > 1 || AcceptsSingleWord(text, words, i))
+                .ToList();
+            if (hits.Count == 0) continue;
+            int longest = hits.Max(h => h.WordCount);
+            var place = hits.Where(h => h.WordCount == longest)
+                .SelectMany(h => _index.IdsAt(h.KeyIndex).ToArray())
+                .Select(id => _places[id])
+                .OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId)
+                .First();
+            candidates.Add(new NameMatch(words[i].Start, words[i + longest - 1].End, NameLabel.LOC, place.Name, MentionSource.Gazetteer, place));
+        }
+        return NameMatchSelection.LongestFirst(candidates);
+    }
+
+    /// <summary>A capitalised word of 3+ letters that is a place name spelled as it stands (folded),
+    /// not a stop word, and not a common lower-case word: safe for a language segmenter to treat
+    /// as belonging to no language.</summary>
+    public bool IsKnownName(ReadOnlySpan<char> word)
+    {
+        word = word.Trim();
+        if (word.Length < MinWordLength || !NameWords.StartsUpper(word) || !char.IsLetter(word[0])) return false;
+        var folded = NameFolding.Fold(word.ToString());
+        return !folded.Contains(' ') && _index.IndexOf(folded) >= 0
+            && !GazetteerStopWords.Words.Contains(folded) && !_commonWords.ContainsKey(folded);
+    }
+
+    private List<IndexHit> WholeNameHits(string name, List<NameWord> words, StemRule? rule) =>
+        InflectedMatcher.MatchAt(_index, name, words, 0, rule).Where(h => h.WordCount == words.Count).ToList();
+
+    private bool AcceptsSingleWord(string text, List<NameWord> words, int i)
+    {
+        var folded = words[i].Folded;
+        if (folded.Length < MinWordLength || GazetteerStopWords.Words.Contains(folded)) return false;
+        return !_commonWords.ContainsKey(folded) || !IsSentenceStart(text, words[i].Start);
+    }
+
+    private static bool IsSentenceStart(string text, int start)
+    {
+        for (int j = start - 1; j >= 0; j--)
+        {
+            char c = text[j];
+            if (char.IsWhiteSpace(c) || c is '"' or '\'' or '“' or '”' or '„' or '«' or '»' or '(' or '[' or '‘' or '’') continue;
+            return c is '.' or '!' or '?' or '…' or ':' or ';' or '-' or '–' or '—';
+        }
+        return true;
+    }
+}

@@ -1,0 +1,89 @@
+using System.Globalization;
+using System.Text;
+
+namespace SwitchTag.Lexicon;
+
+/// <summary>Spelling-insensitive forms of names: folding (case and diacritics), per-language
+/// stripping of case endings, and the grouping key built from both.</summary>
+public static class NameFolding
+{
+    /// <summary>NFKD, combining marks removed, invariant lower case, and the letters that carry their
+    /// "diacritic" inside the code point (ß, ł, ø, đ, æ...) spelled out. Cyrillic й is kept: it is a
+    /// letter of its own, not и with a mark; ё folds to е as Russian writing itself does.</summary>
+    public static string Fold(string text)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        if (IsFoldedAscii(text)) return text;
+        var decomposed = text.Normalize(NormalizationForm.FormKD);
+        var sb = new StringBuilder(decomposed.Length);
+        for (int i = 0; i < decomposed.Length; i++)
+        {
+            char c = decomposed[i];
+            if (CharUnicodeInfo.GetUnicodeCategory(c) is UnicodeCategory.NonSpacingMark or UnicodeCategory.EnclosingMark)
+            {
+                // и + combining breve is й: keep it whole.
+                if (c == '\u0306' && sb.Length > 0 && sb[^1] == 'и') sb[^1] = 'й';
+                continue;
+            }
+            AppendFolded(sb, char.ToLowerInvariant(c));
+        }
+        return sb.ToString();
+    }
+
+    /// <summary>Strips one case ending of <paramref name="language"/> (ISO 639-1 or 639-3) from the folded word,
+    /// keeping a stem of at least <see cref="StemRules.MinStem"/> letters. Languages without a rule
+    /// return the word unchanged.</summary>
+    public static string Stem(string word, string language)
+    {
+        ArgumentNullException.ThrowIfNull(word);
+        var folded = Fold(word);
+        return StemRules.For(language) is { } rule ? rule.Stem(folded) : folded;
+    }
+
+    /// <summary>Grouping key for a whole name: folded, split into words, every word stemmed,
+    /// joined by one space. "Krakowie" and "Kraków" share the key "krakow" in Polish.</summary>
+    public static string Key(string name, string language)
+    {
+        ArgumentNullException.ThrowIfNull(name);
+        var words = NameWords.Split(Fold(name));
+        return string.Join(' ', words.Select(w => Stem(w.Folded, language)));
+    }
+
+    /// <summary>Folded words of a name joined by one space: the form the gazetteer and authority
+    /// lists are indexed by ("Saint-Étienne" → "saint etienne").</summary>
+    public static string FoldedWords(string name)
+    {
+        ArgumentNullException.ThrowIfNull(name);
+        return string.Join(' ', NameWords.Split(Fold(name)).Select(w => w.Folded));
+    }
+
+    private static bool IsFoldedAscii(string text)
+    {
+        foreach (char c in text)
+            if (c > 0x7F || char.IsAsciiLetterUpper(c)) return false;
+        return true;
+    }
+
+    private static void AppendFolded(StringBuilder sb, char c)
+    {
+        switch (c)
+        {
+            case 'ß': sb.Append("ss"); break;
+            case 'ł': sb.Append('l'); break;
+            case 'ø': sb.Append('o'); break;
+            case 'đ' or 'ð': sb.Append('d'); break;
+            case 'æ': sb.Append("ae"); break;
+            case 'œ': sb.Append("oe"); break;
+            case 'þ': sb.Append("th"); break;
+            case 'ı': sb.Append('i'); break;
+            case 'ħ': sb.Append('h'); break;
+            case 'ŧ': sb.Append('t'); break;
+            case 'ŀ': sb.Append('l'); break;
+            case 'ƒ': sb.Append('f'); break;
+            case 'ё': sb.Append('е'); break;
+            case 'ς': sb.Append('σ'); break;
+            case '\u2019' or '\u02BC' or '\u2018' or '`' or '\u00B4': sb.Append('\''); break;
+            default: sb.Append(c); break;
+        }
+    }
+}
