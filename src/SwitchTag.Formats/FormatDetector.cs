@@ -46,7 +46,8 @@ public static class FormatDetector
     {
         int p = 0;
         while (p < line.Length && char.IsWhiteSpace(line[p])) p++;
-        return Timestamps.TrySrt(line, ref p, out _);
+        int q = p;
+        return Timestamps.TrySrt(line, ref p, out _) || Timestamps.TryWebVtt(line, ref q, out _);
     }
 
     /// <summary>ATX headings, bulleted or numbered list items, and bold or underscored runs mark Markdown;

@@ -46,9 +46,11 @@ public static class TranscriptFile
         return ParseCore(path, text, forced, Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text))));
     }
 
-    /// <summary>Files to read: folders are walked recursively for <see cref="KnownExtensions"/> (hidden
-    /// entries skipped), each folder's files in ordinal path order; a named file is taken whatever its
-    /// extension; a missing path is reported in <paramref name="problems"/>. Each file comes once.</summary>
+    /// <summary>Files to read: folders are walked recursively for <see cref="KnownExtensions"/>, in
+    /// ordinal path order, skipping hidden entries and the notes a folder of transcripts carries
+    /// (README, LICENSE, CHANGELOG, CONTRIBUTING, SOURCES: <see cref="IsFolderNote"/>); a named file is
+    /// taken whatever its name; a missing path is reported in <paramref name="problems"/>. Each file
+    /// comes once.</summary>
     public static IEnumerable<string> Expand(IEnumerable<string> paths, ICollection<Diagnostic> problems)
     {
         var seen = new HashSet<string>(StringComparer.Ordinal);
@@ -84,8 +86,12 @@ public static class TranscriptFile
         var options = new EnumerationOptions { RecurseSubdirectories = true, AttributesToSkip = FileAttributes.Hidden | FileAttributes.System, IgnoreInaccessible = true };
         return Directory.EnumerateFiles(folder, "*", options)
             .Where(f => !Path.GetRelativePath(folder, f).Split(Path.DirectorySeparatorChar).Any(part => part.StartsWith('.')))
-            .Where(f => KnownExtensions.Contains(Path.GetExtension(f).ToLowerInvariant()));
+            .Where(f => KnownExtensions.Contains(Path.GetExtension(f).ToLowerInvariant()) && !IsFolderNote(f));
     }
+
+    /// <summary>A folder's own documentation rather than a transcript, by file name.</summary>
+    public static bool IsFolderNote(string path) =>
+        Path.GetFileNameWithoutExtension(path).ToUpperInvariant() is "README" or "LICENSE" or "LICENCE" or "CHANGELOG" or "CONTRIBUTING" or "SOURCES" or "NOTICE";
 
     private static ReadResult ParseCore(string path, string text, TranscriptFormat? forced, string sha256)
     {

@@ -26,11 +26,11 @@ internal static class MarkdownReader
         {
             switch (block)
             {
-                case HeadingBlock heading when !(heading.IsSetext && StartsEntry(heading)):
-                    collector.Heading(Lines(heading).Select(l => l.Text).DefaultIfEmpty("").Aggregate((a, b) => a + " " + b).Trim());
+                case HeadingBlock heading when !(heading.IsSetext && StartsEntry(src, heading)):
+                    collector.Heading(Lines(src, heading).Select(l => l.Text).DefaultIfEmpty("").Aggregate((a, b) => a + " " + b).Trim());
                     break;
                 case HeadingBlock or ParagraphBlock:
-                    foreach (var (line, text) in Lines(block)) collector.Add(line, text);
+                    foreach (var (line, text) in Lines(src, block)) collector.Add(line, text);
                     break;
                 case HtmlBlock html:
                     diagnostics.Warn(html.Line + 1, $"HTML block in a Markdown transcript; not read: {Diagnostics.Quote(html.Lines.ToString())}");
@@ -44,30 +44,31 @@ internal static class MarkdownReader
         return CueChecks.Finish(collector.Build(), overlapAllowed: false, diagnostics);
     }
 
-    private static bool StartsEntry(HeadingBlock heading) =>
-        Lines(heading).FirstOrDefault() is { Text: var t } && EntryStamp.TryMatch(t, out _);
+    private static bool StartsEntry(SourceText src, HeadingBlock heading) =>
+        Lines(src, heading).FirstOrDefault() is { Text: var t } && EntryStamp.TryMatch(t, out _);
 
-    /// <summary>The plain text of a leaf block, one entry per source line (1-based), in order.</summary>
-    private static List<(int Line, string Text)> Lines(LeafBlock block)
+    /// <summary>The plain text of a leaf block, one entry per source line (1-based), in order. Lines
+    /// come from each inline's source position (the parse keeps precise locations).</summary>
+    private static List<(int Line, string Text)> Lines(SourceText src, LeafBlock block)
     {
         var lines = new SortedDictionary<int, StringBuilder>();
-        if (block.Inline is not null) Walk(block.Inline, lines);
-        return [.. lines.Select(kv => (kv.Key + 1, kv.Value.ToString()))];
+        int line = src.LineOf(Math.Max(0, block.Span.Start));
+        if (block.Inline is not null) Walk(src, block.Inline, lines, ref line);
+        return [.. lines.Select(kv => (kv.Key, kv.Value.ToString()))];
     }
 
-    private static void Walk(ContainerInline container, SortedDictionary<int, StringBuilder> lines)
+    private static void Walk(SourceText src, ContainerInline container, SortedDictionary<int, StringBuilder> lines, ref int line)
     {
         foreach (var inline in container)
         {
+            if (inline.Span.Start >= 0 && inline.Span.Length > 0) line = src.LineOf(inline.Span.Start);
             switch (inline)
             {
-                case LiteralInline literal: At(lines, literal.Line).Append(literal.Content.AsSpan()); break;
-                case CodeInline code: At(lines, code.Line).Append(code.Content); break;
-                case HtmlEntityInline entity: At(lines, entity.Line).Append(entity.Transcoded.AsSpan()); break;
-                case AutolinkInline link: At(lines, link.Line).Append(link.Url); break;
-                case LineBreakInline: break;
-                case HtmlInline: break;
-                case ContainerInline inner: Walk(inner, lines); break;
+                case LiteralInline literal: At(lines, line).Append(literal.Content.AsSpan()); break;
+                case CodeInline code: At(lines, line).Append(code.Content); break;
+                case HtmlEntityInline entity: At(lines, line).Append(entity.Transcoded.AsSpan()); break;
+                case AutolinkInline link: At(lines, line).Append(link.Url); break;
+                case ContainerInline inner: Walk(src, inner, lines, ref line); break;
             }
         }
     }

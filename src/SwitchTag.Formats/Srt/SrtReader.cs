@@ -76,16 +76,20 @@ internal static class SrtReader
         start = end = default;
         settings = null;
         int p = Skip(line, 0);
-        if (!Timestamps.TrySrt(line, ref p, out start)) return false;
+        if (!Stamp(line, ref p, out start)) return false;
         p = Skip(line, p);
         if (!line[p..].StartsWith("-->")) return false;
         p = Skip(line, p + 3);
-        if (!Timestamps.TrySrt(line, ref p, out end)) return false;
+        if (!Stamp(line, ref p, out end)) return false;
         if (p < line.Length && !char.IsWhiteSpace(line[p])) return false;
         var rest = line[p..].Trim();
         settings = rest.IsEmpty ? null : rest.ToString();
         return true;
     }
+
+    /// <summary>A SubRip timestamp, or a WebVTT one (a WebVTT file that lost its header reads here).</summary>
+    private static bool Stamp(ReadOnlySpan<char> line, ref int p, out Timecode time) =>
+        Timestamps.TrySrt(line, ref p, out time) || Timestamps.TryWebVtt(line, ref p, out time);
 
     private static int Skip(ReadOnlySpan<char> s, int p)
     {

@@ -66,7 +66,7 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
             var entry = entries[k];
             if (entry.Lines.Count == 0) continue;
             var next = k + 1 < entries.Count ? entries[k + 1] : null;
-            int chars = entry.Lines.Sum(l => l.Text.Length);
+            int chars = entry.Lines.Sum(SpokenLength);
             Timecode end = entry.End
                 ?? (next is not null && next.Start >= entry.Start ? next.Start : SpeakingRate.EstimateEnd(entry.Start, chars));
             var range = CueChecks.Range(entry.Start, end, entry.Line, diagnostics);
@@ -112,6 +112,10 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
         }
         return label;
     }
+
+    /// <summary>A line's length without its speaker prefix: the label is not spoken.</summary>
+    private static int SpokenLength(EntryLine line) =>
+        SpeakerPrefix.TryMatch(line.Text, out _, out _, out int textStart) ? line.Text.Length - textStart : line.Text.Length;
 
     private void FlushUnplaced()
     {

@@ -1,0 +1,69 @@
+using SwitchTag.Core.Documents;
+using Xunit;
+
+namespace SwitchTag.Formats.Tests;
+
+public class SpeakerAndDetectionTests
+{
+    [Theory]
+    [InlineData("INTERVIEWER")]
+    [InlineData("Interviewer:")]
+    [InlineData(" interviewer ")]
+    [InlineData("interviewer  :")]
+    public void Case_spacing_and_trailing_colon_fold_to_one_label(string raw) =>
+        Assert.Equal("Interviewer", SpeakerLabels.Normalise(raw));
+
+    [Theory]
+    [InlineData("MARIA  DE LA\tCRUZ", "Maria De La Cruz")]
+    [InlineData("jean-paul", "Jean-Paul")]
+    [InlineData("ŁUKASZ", "Łukasz")]
+    [InlineData("  ", null)]
+    [InlineData(null, null)]
+    public void Words_are_capitalised_and_blank_labels_are_null(string? raw, string? expected) =>
+        Assert.Equal(expected, SpeakerLabels.Normalise(raw));
+
+    [Theory]
+    [InlineData("WEBVTT\n\n00:01.000 --> 00:02.000\nx", ".txt", TranscriptFormat.WebVtt)]
+    [InlineData("\n\nWEBVTT\tcaptions", null, TranscriptFormat.WebVtt)]
+    [InlineData("1\n00:00:01,000 --> 00:00:02,000\nx", ".vtt", TranscriptFormat.Srt)]
+    [InlineData("[00:00:01] A: x", ".md", TranscriptFormat.Markdown)]
+    [InlineData("[00:00:01] A: x", ".txt", TranscriptFormat.Text)]
+    [InlineData("[00:00:01] A: x", null, TranscriptFormat.Text)]
+    [InlineData("# Title\n\n[00:00:01] A: x", ".txt", TranscriptFormat.Markdown)]
+    [InlineData("- **00:00:01** A: x", null, TranscriptFormat.Markdown)]
+    [InlineData("WEBVTTX\n00:01.000 --> 00:02.000", null, TranscriptFormat.Srt)]
+    [InlineData("hello", ".vtt", null)]
+    [InlineData("", ".vtt", null)]
+    public void Format_comes_from_content_with_the_extension_as_a_hint(string text, string? extension, TranscriptFormat? expected) =>
+        Assert.Equal(expected, FormatDetector.Detect(text, extension));
+
+    [Fact]
+    public void Forced_format_overrides_detection()
+    {
+        var t = Reads.Accepted("x.txt", "[00:00:01] A: **bold**", TranscriptFormat.Markdown);
+        Assert.Equal(TranscriptFormat.Markdown, t.Source.Format);
+        Assert.Equal("bold", t.Cues[0].Text);
+        Assert.Equal("**bold**", Reads.Accepted("x.txt", "[00:00:01] A: **bold**", TranscriptFormat.Text).Cues[0].Text);
+    }
+
+    [Fact]
+    public void Known_extensions_are_the_documented_five() =>
+        Assert.Equal([".vtt", ".srt", ".txt", ".md", ".markdown"], TranscriptFile.KnownExtensions);
+
+    [Fact]
+    public void Expand_walks_folders_sorted_skips_notes_and_reports_missing_paths()
+    {
+        var root = Path.Combine(Path.GetTempPath(), "switchtag-expand-" + Guid.NewGuid().ToString("N"));
+        Directory.CreateDirectory(Path.Combine(root, "b"));
+        Directory.CreateDirectory(Path.Combine(root, ".hidden"));
+        foreach (var f in new[] { "b/z.srt", "a.VTT", "c.md", "README.md", "notes.json", ".hidden/h.txt" })
+            File.WriteAllText(Path.Combine(root, f), "x");
+        var problems = new List<Diagnostic>();
+        var missing = Path.Combine(root, "missing.vtt");
+        var files = TranscriptFile.Expand([root, Path.Combine(root, "c.md"), missing, Path.Combine(root, "notes.json")], problems).ToList();
+        Assert.Equal([Path.Combine(root, "a.VTT"), Path.Combine(root, "b", "z.srt"), Path.Combine(root, "c.md"), Path.Combine(root, "notes.json")], files);
+        var p = Assert.Single(problems);
+        Assert.Equal(new SourceLine(missing, TranscriptFile.WholeFile), p.At);
+        Assert.Equal(Severity.Error, p.Severity);
+    }
+}
