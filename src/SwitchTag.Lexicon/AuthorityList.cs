@@ -70,7 +70,7 @@ public sealed class AuthorityList
             }
             entries.Add(entry);
         }
-        return (new AuthorityList(entries.ToImmutable()), problems.ToImmutable());
+        return (new AuthorityList(entries.ToImmutable()), [.. problems.OrderBy(p => p.At.Line)]);
     }
 
     /// <summary>Names of the list in <paramref name="text"/>, longest first and non-overlapping,

@@ -49,6 +49,22 @@ public static class NameFolding
         return string.Join(' ', words.Select(w => Stem(w.Folded, language)));
     }
 
+    /// <summary>Whether <paramref name="form"/>, written in <paramref name="language"/>, can be a case
+    /// form of <paramref name="name"/> (a dictionary form): word by word, one of the form's stems is
+    /// the name word or its nominative stem. A language without rules of its own (en, fr, und...)
+    /// tries folded equality, then each rule in turn.</summary>
+    public static bool IsInflectionOf(string form, string name, string language)
+    {
+        ArgumentNullException.ThrowIfNull(form);
+        ArgumentNullException.ThrowIfNull(name);
+        var formWords = NameWords.Split(form);
+        var nameWords = NameWords.Split(name);
+        if (formWords.Count == 0 || formWords.Count != nameWords.Count) return false;
+        var rule = StemRules.For(language);
+        IEnumerable<StemRule?> rules = rule is null ? StemRules.All.Prepend(null) : [rule];
+        return rules.Any(r => formWords.Zip(nameWords).All(p => InflectedMatcher.WordMeets(p.First.Folded, p.Second.Folded, r)));
+    }
+
     /// <summary>Folded words of a name joined by one space: the form the gazetteer and authority
     /// lists are indexed by ("Saint-Étienne" → "saint etienne").</summary>
     public static string FoldedWords(string name)

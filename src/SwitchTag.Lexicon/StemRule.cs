@@ -13,19 +13,22 @@ public sealed class StemRule
     private readonly string[] _nominative;
     private readonly Func<string, IEnumerable<string>> _alternations;
     private readonly Func<string, string> _normalise;
+    private readonly Func<string, string, bool> _allows;
 
     public StemRule(
         string language,
         IEnumerable<string> endings,
         IEnumerable<string> nominativeEndings,
         Func<string, IEnumerable<string>>? alternations = null,
-        Func<string, string>? normaliseStem = null)
+        Func<string, string>? normaliseStem = null,
+        Func<string, string, bool>? allows = null)
     {
         Language = language;
         _endings = endings.OrderByDescending(e => e.Length).ThenBy(e => e, StringComparer.Ordinal).ToArray();
         _nominative = nominativeEndings.OrderByDescending(e => e.Length).ThenBy(e => e, StringComparer.Ordinal).ToArray();
         _alternations = alternations ?? (_ => []);
         _normalise = normaliseStem ?? (s => s);
+        _allows = allows ?? ((_, _) => true);
     }
 
     public string Language { get; }
@@ -68,6 +71,7 @@ public sealed class StemRule
         return word;
     }
 
-    private static bool Fits(string word, string ending) =>
-        word.Length - ending.Length >= MinStem && word.EndsWith(ending, StringComparison.Ordinal);
+    private bool Fits(string word, string ending) =>
+        word.Length - ending.Length >= MinStem && word.EndsWith(ending, StringComparison.Ordinal)
+        && _allows(word[..^ending.Length], ending);
 }

@@ -63,7 +63,10 @@ public static class StemRules
         ["bol", "rol", "tol", "hoz", "hez", "nak", "nek", "ban", "ben", "nal", "nel", "val", "vel", "ert", "kent", "ott", "ett",
          "ig", "ba", "be", "ra", "re", "on", "en", "an", "ot", "et", "at", "ul", "al", "el", "n", "t"],
         [],
-        UndoubleFinal);
+        UndoubleFinal,
+        // Accusative -t and superessive -n follow a vowel (Budát, Budán); after a consonant the
+        // letter belongs to the name (Budapest, Debrecen).
+        allows: (stem, ending) => ending is not ("t" or "n") || IsVowel(stem[^1]));
 
     private static readonly StemRule German = new("de", ["s"], []);
 

@@ -1,0 +1,96 @@
+using System.Diagnostics;
+using SwitchTag.Lexicon;
+
+// Converts a GeoNames cities dump into the compact gazetteer file and prints what went in, the
+// file's size and how long loading it takes (best of five loads after one warm-up).
+//   GazetteerBuilder --geonames cities1000.txt --corpora DIR --out models/gazetteer.bin.gz
+//   GazetteerBuilder --measure models/gazetteer.bin.gz
+
+var options = ParseOptions(args);
+if (options is null)
+{
+    Console.Error.WriteLine("usage: GazetteerBuilder --geonames FILE [--corpora DIR] --out FILE | --measure FILE");
+    return 2;
+}
+
+if (options.TryGetValue("measure", out var measured))
+    return Measure(measured) ? 0 : 1;
+
+var geonames = options["geonames"];
+var output = options["out"];
+var corpora = options.TryGetValue("corpora", out var dir) && Directory.Exists(dir)
+    ? Directory.GetFiles(dir, "*.txt").Where(f => Path.GetFileName(f) != "SOURCES.md").Order(StringComparer.Ordinal).ToArray()
+    : [];
+
+var clock = Stopwatch.StartNew();
+var (rows, problems) = GeoNamesText.Read(geonames);
+foreach (var p in problems.Take(20)) Console.Error.WriteLine(p);
+if (rows.IsEmpty)
+{
+    Console.Error.WriteLine($"no GeoNames rows read from {geonames}");
+    return 1;
+}
+var (altTotal, altKept) = CountAlternates(geonames);
+var gazetteer = Gazetteer.FromRows(rows, corpora, problems);
+gazetteer.Save(output);
+Console.WriteLine($"source rows:            {rows.Length}");
+Console.WriteLine($"rows skipped:           {problems.Length}");
+Console.WriteLine($"alternate names:        {altTotal} in source, {altKept} kept by script/length/code filter");
+Console.WriteLine($"names per place (kept): {rows.Sum(r => r.Names.Length)} written forms");
+Console.WriteLine($"distinct folded names:  {gazetteer.NameCount}");
+Console.WriteLine($"common-word names:      {gazetteer.CommonWords.Count} (from {corpora.Length} corpus files)");
+Console.WriteLine($"build time:             {clock.Elapsed.TotalSeconds:F1} s");
+return Measure(output) ? 0 : 1;
+
+static bool Measure(string path)
+{
+    var first = Gazetteer.Load(path);
+    if (!first.Problems.IsEmpty)
+    {
+        foreach (var p in first.Problems) Console.Error.WriteLine(p);
+        return false;
+    }
+    var times = new List<double>();
+    for (int i = 0; i < 5; i++)
+    {
+        var clock = Stopwatch.StartNew();
+        var g = Gazetteer.Load(path);
+        times.Add(clock.Elapsed.TotalMilliseconds);
+        GC.KeepAlive(g);
+    }
+    Console.WriteLine($"file:                   {path}");
+    Console.WriteLine($"file size:              {new FileInfo(path).Length / 1024.0 / 1024.0:F2} MiB ({new FileInfo(path).Length} bytes)");
+    Console.WriteLine($"places:                 {first.Places.Count}");
+    Console.WriteLine($"distinct folded names:  {first.NameCount}");
+    Console.WriteLine($"load time:              best {times.Min():F0} ms, median {times.Order().ElementAt(2):F0} ms of 5 (after 1 warm-up)");
+    return true;
+}
+
+static (long Total, long Kept) CountAlternates(string path)
+{
+    long total = 0, kept = 0;
+    foreach (var line in File.ReadLines(path))
+    {
+        var columns = line.Split('\t');
+        if (columns.Length < 4) continue;
+        foreach (var alt in columns[3].Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries))
+        {
+            total++;
+            if (ScriptFilter.Keep(alt)) kept++;
+        }
+    }
+    return (total, kept);
+}
+
+static Dictionary<string, string>? ParseOptions(string[] args)
+{
+    var options = new Dictionary<string, string>();
+    for (int i = 0; i + 1 < args.Length; i += 2)
+    {
+        if (!args[i].StartsWith("--", StringComparison.Ordinal)) return null;
+        options[args[i][2..]] = args[i + 1];
+    }
+    if (args.Length % 2 != 0) return null;
+    bool build = options.ContainsKey("geonames") && options.ContainsKey("out");
+    return build || options.ContainsKey("measure") ? options : null;
+}
