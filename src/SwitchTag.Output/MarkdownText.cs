@@ -2,11 +2,15 @@ using System.Text;
 
 namespace SwitchTag.Output;
 
-/// <summary>Transcript text made inert in Markdown: every ASCII punctuation char is backslash-escaped
-/// (CommonMark 0.31 section 2.4: any ASCII punctuation may be), so no text can open emphasis, a link,
-/// a table cell or raw HTML; line breaks become spaces so a value stays in its table cell.</summary>
+/// <summary>Transcript text made inert in Markdown: the ASCII punctuation that can start inline syntax
+/// (emphasis, code, links, images, raw HTML, entities, table cells, escapes) is backslash-escaped
+/// (CommonMark 0.31 section 2.4 allows it for any ASCII punctuation). Values never start a line, so
+/// block markers (#, -, digits) are harmless and stay readable. Line breaks become spaces so a value
+/// stays in its table cell.</summary>
 public static class MarkdownText
 {
+    private const string Active = "\\`*_[]<>&|!~";
+
     public static string Escape(string? text)
     {
         if (string.IsNullOrEmpty(text)) return "";
@@ -14,8 +18,8 @@ public static class MarkdownText
         foreach (char c in text)
         {
             if (c is '\r' or '\n' or '\t') { sb.Append(' '); continue; }
-            if (char.IsAsciiLetterOrDigit(c) || c == ' ' || c > 0x7E || c < 0x21) { sb.Append(c); continue; }
-            sb.Append('\\').Append(c);
+            if (Active.Contains(c)) sb.Append('\\');
+            sb.Append(c);
         }
         return sb.ToString();
     }

@@ -1,0 +1,76 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Indexing;
+using SwitchTag.Indexing.Tests.Fakes;
+using SwitchTag.Output;
+using Xunit;
+
+namespace SwitchTag.Indexing.Tests;
+
+public class DecisionsTests
+{
+    // Offsets from the fixture: turn 2 is the interviewer's "The Germans said Warschau, ...", turn 3 "Wir waren in Paris, ...".
+    private const string File = "action,interview,label,name,turn,char,value\r\n" +
+        "merge-headings,,PER,Nowak,,,Anna Nowak\r\n" +
+        "rename-heading,,LOC,Warsaw,,,Warszawa\r\n" +
+        "relabel-mention,anna-nowak,,Florence,3,48,LOC\r\n" +
+        "reject-heading,,ORG,Atlantic Line,,,\r\n" +
+        "accept-mention,anna-nowak,,Kowalski,2,52,\r\n" +
+        "reject-mention,anna-nowak,,Paris,2,66,\r\n" +
+        "rename-heading,other-interview,LOC,Kraków,,,Cracow\r\n";
+
+    private static string Json(InterviewIndex index)
+    {
+        using var stream = new MemoryStream();
+        IndexJsonWriter.Write(index, stream);
+        return System.Text.Encoding.UTF8.GetString(stream.ToArray());
+    }
+
+    [Fact]
+    public void Decisions_are_applied_and_reported()
+    {
+        var (decisions, problems) = DecisionsFile.Parse("decisions.csv", File);
+        Assert.Empty(problems);
+        var index = Fixture.Run(decisions);
+        Assert.Equal("Warszawa", index.Headings.Single(h => h.Place?.GeonameId == Fixture.Warsaw.GeonameId).Name);
+        Assert.DoesNotContain(index.Headings, h => h.Label == NameLabel.ORG);
+        Assert.Contains(index.Headings, h => h.Label == NameLabel.PER && h.Variants.Contains("Kowalski"));
+        Assert.Contains(index.Headings, h => h.Label == NameLabel.LOC && h.Variants.Contains("Florence"));
+        Assert.DoesNotContain(index.Mentions, m => m.Mention.Turn == 2 && m.Mention.Text == "Paris");
+        Assert.DoesNotContain(index.Headings, h => h.Name == "Cracow");
+    }
+
+    [Fact]
+    public void Applying_the_decisions_file_twice_gives_the_same_index()
+    {
+        var (decisions, _) = DecisionsFile.Parse("decisions.csv", File);
+        string once = Json(Fixture.Run(decisions));
+        Assert.Equal(once, Json(Fixture.Run(decisions)));
+        // The same rows twice in one file: the second copy finds nothing left to do and changes nothing.
+        var (doubled, _) = DecisionsFile.Parse("decisions.csv", File + string.Join("\r\n", File.Split("\r\n").Skip(1)));
+        Assert.Equal(once, Json(Fixture.Run(doubled)));
+    }
+
+    [Fact]
+    public void Outcomes_say_what_no_longer_matched()
+    {
+        var (decisions, _) = DecisionsFile.Parse("decisions.csv",
+            "action,interview,label,name,turn,char,value\r\nreject-mention,anna-nowak,,Lisbon,0,3,\r\nrename-heading,,LOC,Paris,,,Paryż\r\n");
+        var t = Fixture.Transcript();
+        var turns = SwitchTag.Core.Pipeline.TurnBuilder.Build(t);
+        var spans = turns.Select(x => Fixture.Segmenter().Segment(x.Text, "en")).ToImmutableArray();
+        var mentions = turns.SelectMany((x, i) => Fixture.Tagger().Tag(i, x.Text, spans[i])).ToImmutableArray();
+        var (_, outcomes) = new IndexBuilder(Fixture.Lexicon(), decisions).BuildWithOutcomes(t, turns, "en", spans, mentions);
+        Assert.Equal(0, outcomes[0].Applied);
+        Assert.Equal(1, outcomes[1].Applied);
+    }
+
+    [Fact]
+    public void Bad_rows_become_diagnostics_with_their_line()
+    {
+        var (decisions, problems) = DecisionsFile.Parse("d.csv",
+            "action,interview,label,name,turn,char,value\nexplode,,,X,,,\nrelabel-heading,,PER,X,,,PLANET\nreject-mention,,,X,1,2,\nrename-heading,,LOC,Paris,,,Paryż\n");
+        Assert.Single(decisions);
+        Assert.Equal([2, 3, 4], problems.Select(p => p.At.Line));
+    }
+}

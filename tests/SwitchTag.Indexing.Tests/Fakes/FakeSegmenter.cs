@@ -1,0 +1,35 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Stages;
+
+namespace SwitchTag.Indexing.Tests.Fakes;
+
+/// <summary>Language by word list: a word in <paramref name="words"/> takes that language, any other
+/// word the main language; consecutive words of one language form one span, punctuation and spaces
+/// between words of one language belong to the span.</summary>
+public sealed class FakeSegmenter(IReadOnlyDictionary<string, string> words, string main = "en") : ILanguageSegmenter
+{
+    public IReadOnlyList<string> Languages => ["en", "pl", "de"];
+
+    public LanguageGuess Identify(ReadOnlySpan<char> text) => new(main, 0.9);
+
+    public ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage)
+    {
+        var spans = ImmutableArray.CreateBuilder<LanguageSpan>();
+        int i = 0;
+        while (i < text.Length)
+        {
+            while (i < text.Length && char.IsWhiteSpace(text[i])) i++;
+            if (i >= text.Length) break;
+            int start = i;
+            while (i < text.Length && !char.IsWhiteSpace(text[i])) i++;
+            string word = text[start..i].Trim(',', '.', '!', '?', ':', ';');
+            string language = words.GetValueOrDefault(word.ToLowerInvariant(), mainLanguage);
+            if (spans.Count > 0 && spans[^1].Language == language)
+                spans[^1] = spans[^1] with { CharEnd = i };
+            else
+                spans.Add(new LanguageSpan(start, i, language, language == mainLanguage ? 0.95 : 0.8));
+        }
+        return spans.ToImmutable();
+    }
+}

@@ -1,0 +1,147 @@
+using System.Text;
+using System.Text.Json;
+using Microsoft.VisualBasic.FileIO;
+using SwitchTag.Core.Documents;
+using SwitchTag.Formats;
+using SwitchTag.Indexing.Tests.Fakes;
+using SwitchTag.Output;
+using Xunit;
+
+namespace SwitchTag.Indexing.Tests;
+
+public class OutputTests
+{
+    private static string Bytes(Action<Stream> write)
+    {
+        using var stream = new MemoryStream();
+        write(stream);
+        return Encoding.UTF8.GetString(stream.ToArray());
+    }
+
+    [Fact]
+    public void Report_html_shows_transcript_markup_as_text()
+    {
+        var index = Fixture.Run();
+        string html = HtmlReport.Render("t", ReportMarkdownWriter.Render(index));
+        // The fixture's worklist holds "<script>alert(1)</script>" (HTML Living Standard: text shown
+        // literally must have '<' written as &lt;).
+        Assert.DoesNotContain("<script", html, StringComparison.OrdinalIgnoreCase);
+        Assert.Contains("&lt;script&gt;alert(1)&lt;/script&gt;", html);
+        Assert.DoesNotContain("src=", html);
+        Assert.DoesNotContain("href=\"http", html);
+        Assert.StartsWith("<!DOCTYPE html>", html);
+    }
+
+    [Fact]
+    public void Report_opens_with_the_machine_draft_caution()
+    {
+        string md = ReportMarkdownWriter.Render(Fixture.Run());
+        var lines = md.Split('\n');
+        Assert.StartsWith("# ", lines[0]);
+        Assert.StartsWith("> **Machine draft", lines[2]);
+    }
+
+    [Fact]
+    public void Markdown_escaping_leaves_no_active_syntax()
+    {
+        // CommonMark 0.31 examples of active syntax: emphasis, links, raw HTML, code spans, table pipes.
+        const string nasty = "*a* _b_ [x](http://e) <i>i</i> `c` | d & e";
+        string html = Markdig.Markdown.ToHtml(MarkdownText.Escape(nasty));
+        Assert.Equal("<p>*a* _b_ [x](http://e) &lt;i&gt;i&lt;/i&gt; `c` | d &amp; e</p>\n", html);
+    }
+
+    [Fact]
+    public void Mentions_csv_parses_back_with_an_independent_rfc4180_reader()
+    {
+        var index = Fixture.Run();
+        var rows = ParseCsv(MentionsCsvWriter.Render(index));
+        Assert.Equal(MentionsCsvWriter.Header, rows[0]);
+        Assert.Equal(index.Mentions.Length, rows.Count - 1);
+        for (int i = 0; i < index.Mentions.Length; i++)
+        {
+            var m = index.Mentions[i];
+            Assert.Equal(m.Mention.Text, rows[i + 1][5]);
+            Assert.Equal(m.Time.Start.ToString(), rows[i + 1][0]);
+            Assert.Equal(m.Mention.CharStart.ToString(), rows[i + 1][14]);
+        }
+    }
+
+    [Fact]
+    public void Worklist_csv_keeps_commas_quotes_and_newlines()
+    {
+        var index = Fixture.Run();
+        index = index with
+        {
+            Worklist = [index.Worklist[0] with { Text = "a, \"quoted\"\r\nline" }, .. index.Worklist.Skip(1)],
+        };
+        string csv = WorklistCsvWriter.Render(index);
+        Assert.EndsWith("\r\n", csv); // RFC 4180 section 2.1: each record ends with CRLF
+        var rows = ParseCsv(csv);
+        Assert.Equal(index.Worklist.Length + 1, rows.Count);
+        Assert.Equal("a, \"quoted\"\r\nline", rows[1][8]);
+        Assert.All(rows, r => Assert.Equal(WorklistCsvWriter.Header.Length, r.Length));
+    }
+
+    // Microsoft.VisualBasic.FileIO.TextFieldParser, the .NET runtime's CSV reader, as the outside check.
+    private static List<string[]> ParseCsv(string text)
+    {
+        using var parser = new TextFieldParser(new StringReader(text)) { HasFieldsEnclosedInQuotes = true, TrimWhiteSpace = false };
+        parser.SetDelimiters(",");
+        var rows = new List<string[]>();
+        while (!parser.EndOfData) rows.Add(parser.ReadFields()!);
+        return rows;
+    }
+
+    [Fact]
+    public void Places_geojson_is_an_rfc7946_feature_collection_with_longitude_first()
+    {
+        var index = Fixture.Run();
+        using var doc = JsonDocument.Parse(Bytes(s => PlacesGeoJsonWriter.Write(index, s)));
+        var root = doc.RootElement;
+        // RFC 7946 section 3.3: a FeatureCollection has "features", an array of Feature objects.
+        Assert.Equal("FeatureCollection", root.GetProperty("type").GetString());
+        var features = root.GetProperty("features").EnumerateArray().ToList();
+        Assert.Equal(index.Headings.Count(h => h.Place is not null), features.Count);
+        foreach (var f in features)
+        {
+            Assert.Equal("Feature", f.GetProperty("type").GetString());
+            Assert.Equal(JsonValueKind.Object, f.GetProperty("properties").ValueKind); // section 3.2: properties member
+            var geometry = f.GetProperty("geometry");
+            Assert.Equal("Point", geometry.GetProperty("type").GetString());
+            var position = geometry.GetProperty("coordinates").EnumerateArray().Select(e => e.GetDouble()).ToArray();
+            Assert.Equal(2, position.Length);
+            var heading = index.Headings.Single(h => h.Id == f.GetProperty("id").GetString());
+            // Section 3.1.1: longitude first, then latitude.
+            Assert.Equal(heading.Place!.Longitude, position[0]);
+            Assert.Equal(heading.Place.Latitude, position[1]);
+            Assert.InRange(position[0], -180, 180);
+            Assert.InRange(position[1], -90, 90);
+        }
+        // Warsaw from GeoNames row 756135: lon 21.01178, lat 52.22977.
+        var warsaw = features.Single(f => f.GetProperty("properties").GetProperty("geonameId").GetInt64() == 756135);
+        Assert.Equal(21.01178, warsaw.GetProperty("geometry").GetProperty("coordinates")[0].GetDouble());
+    }
+
+    [Fact]
+    public void Annotated_vtt_rereads_with_every_word_and_the_original_cue_times()
+    {
+        var index = Fixture.Run();
+        string vtt = AnnotatedVttWriter.Render(index);
+        Assert.Contains("<lang pl>Urodziłam się w Warszawie. Mama mówiła: dziecko.</lang>", vtt);
+        Assert.Contains("<lang pl>&lt;script&gt;alert(1)&lt;/script&gt;</lang>", vtt);
+        var reread = TranscriptFile.Parse("annotated.vtt", vtt, TranscriptFormat.WebVtt);
+        Assert.True(reread.Accepted, string.Join("\n", reread.Diagnostics));
+        var cues = reread.Transcript!.Cues;
+        Assert.Equal(index.Transcript.Cues.Length, cues.Length);
+        for (int i = 0; i < cues.Length; i++)
+        {
+            Assert.Equal(index.Transcript.Cues[i].Time, cues[i].Time);
+            Assert.Equal(index.Transcript.Cues[i].Text, cues[i].Text);
+            Assert.Equal(index.Transcript.Cues[i].Speaker, cues[i].Speaker);
+        }
+        // The word timings survive too.
+        Assert.Equal(index.Transcript.Cues[1].WordTimes.Select(w => w.Time), cues[1].WordTimes.Select(w => w.Time));
+        // The stretches marked <lang> come back as language hints.
+        Assert.Contains(cues[2].LanguageHints, h => h.Language == "pl");
+    }
+}
