@@ -1,0 +1,52 @@
+using System.Diagnostics;
+using System.Text;
+using SwitchTag.LanguageId.Model;
+using SwitchTag.LanguageId.Segmentation;
+using SwitchTag.LanguageId.Training;
+
+namespace LangIdTools;
+
+/// <summary>Prints load time, single-thread throughput of Identify and Segment on the held-out
+/// lines (repeated to a few MB), and the time for one 1 MB line.</summary>
+public static class BenchCommand
+{
+    public static int Run(string dataRoot, string modelPath)
+    {
+        var loads = new List<double>();
+        NgramLanguageModel? model = null;
+        for (int i = 0; i < 5; i++)
+        {
+            var clock = Stopwatch.StartNew();
+            model = NgramLanguageModel.Load(modelPath);
+            loads.Add(clock.Elapsed.TotalMilliseconds);
+        }
+        Console.WriteLine($"model size {new FileInfo(modelPath).Length / 1048576.0:F2} MB; load ms (5 runs): {string.Join(", ", loads.Select(l => l.ToString("F0")))}");
+        var segmenter = new CodeSwitchSegmenter(model!);
+        var lines = LidCorpus.Load(dataRoot).Where(l => l.Split == Split.Evaluation).Select(l => l.Text).ToList();
+        long bytes = lines.Sum(t => (long)Encoding.UTF8.GetByteCount(t));
+        Console.WriteLine($"held-out lines: {lines.Count:N0}, {bytes / 1048576.0:F2} MB UTF-8");
+        Report("Identify", bytes, 3, () => { foreach (var t in lines) segmenter.Identify(t); });
+        Report("Segment (main en)", bytes, 3, () => { foreach (var t in lines) segmenter.Segment(t, "en"); });
+        var big = BigLine(lines, 1 << 20);
+        long bigBytes = Encoding.UTF8.GetByteCount(big);
+        Report("Identify, one 1 MB line", bigBytes, 3, () => segmenter.Identify(big));
+        Report("Segment, one 1 MB line", bigBytes, 3, () => segmenter.Segment(big, "en"));
+        return 0;
+    }
+
+    private static string BigLine(List<string> lines, int chars)
+    {
+        var sb = new StringBuilder(chars + 1000);
+        for (int i = 0; sb.Length < chars; i++) sb.Append(lines[i % lines.Count]).Append(' ');
+        return sb.ToString(0, chars);
+    }
+
+    private static void Report(string name, long bytes, int passes, Action pass)
+    {
+        pass();
+        var clock = Stopwatch.StartNew();
+        for (int i = 0; i < passes; i++) pass();
+        double seconds = clock.Elapsed.TotalSeconds / passes;
+        Console.WriteLine($"{name,-26} {bytes / 1048576.0 / seconds,8:F2} MB/s  ({seconds * 1000:F0} ms per pass)");
+    }
+}

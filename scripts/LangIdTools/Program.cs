@@ -1,0 +1,15 @@
+using LangIdTools;
+
+// Usage: LangIdTools train DATA OUT | eval DATA MODEL | bench DATA MODEL
+if (args.Length != 3)
+{
+    Console.Error.WriteLine("usage: LangIdTools (train DATA OUT | eval DATA MODEL | bench DATA MODEL)");
+    return 2;
+}
+return args[0] switch
+{
+    "train" => TrainCommand.Run(args[1], args[2]),
+    "eval" => EvalCommand.Run(args[1], args[2]),
+    "bench" => BenchCommand.Run(args[1], args[2]),
+    _ => 2,
+};

@@ -1,0 +1,237 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Stages;
+using SwitchTag.LanguageId.Model;
+using SwitchTag.LanguageId.Text;
+
+namespace SwitchTag.LanguageId.Segmentation;
+
+/// <summary>The langid stage. Identify scores a whole stretch; Segment labels every word jointly
+/// with a Viterbi pass over languages (each change of language between words pays a fixed cost),
+/// so a switch needs several words of evidence while one odd word stays in its sentence's language.
+/// Neutral tokens (numbers, hesitations, transcriber tags, false starts) and names (capitalised
+/// mid-sentence, all capitals, or known to the name lexicon) carry no evidence and take the
+/// language of their neighbours.</summary>
+public sealed class CodeSwitchSegmenter : ILanguageSegmenter
+{
+    public const string Undetermined = "und";
+
+    /// <summary>Below this probability a stretch is reported as und.</summary>
+    public const float MinConfidence = 0.2f;
+
+    private const int EarlyStopCheckEvery = 64;
+    private const float DecidedMargin = 30f;
+
+    private readonly NgramLanguageModel _model;
+    private readonly INameLexicon? _names;
+    private readonly string[] _codes;
+    private readonly int[] _codeOfClass;
+
+    public CodeSwitchSegmenter(NgramLanguageModel model, INameLexicon? names = null)
+    {
+        _model = model;
+        _names = names;
+        _codes = model.ClassCodes.Distinct().Order(StringComparer.Ordinal).ToArray();
+        _codeOfClass = model.ClassCodes.Select(c => Array.IndexOf(_codes, c)).ToArray();
+        Languages = _codes;
+    }
+
+    public static CodeSwitchSegmenter Load(string modelPath, INameLexicon? names = null) =>
+        new(NgramLanguageModel.Load(modelPath), names);
+
+    public NgramLanguageModel Model => _model;
+
+    public IReadOnlyList<string> Languages { get; }
+
+    public LanguageGuess Identify(ReadOnlySpan<char> text)
+    {
+        var tokens = Tokenizer.Tokenize(text);
+        var acc = new ScoreAccumulator(_model.ClassCount);
+        Span<char> buffer = stackalloc char[NgramHasher.MaxWordChars];
+        int words = 0, lastWord = -1;
+        for (int t = 0; t < tokens.Count; t++)
+        {
+            var token = tokens[t];
+            if (token.IsNeutral) continue;
+            int len = WordNormalizer.Normalize(text[token.Start..token.End], buffer);
+            _model.AddWord(buffer[..len], acc);
+            words++;
+            lastWord = t;
+            if (words % EarlyStopCheckEvery == 0 && IsDecided(acc)) break;
+        }
+        if (acc.FeatureHits == 0) return new LanguageGuess(Undetermined, 0);
+        if (words == 1 && _names is not null)
+        {
+            var only = text[tokens[lastWord].Start..tokens[lastWord].End];
+            if (_names.IsKnownName(only)) return new LanguageGuess(Undetermined, 0);
+        }
+        var (code, p) = Best(acc);
+        return p < MinConfidence ? new LanguageGuess(Undetermined, 0) : new LanguageGuess(_codes[code], p);
+    }
+
+    public ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage) =>
+        Segment(text, mainLanguage, _model.Parameters);
+
+    /// <summary>Segment with explicit decoder parameters (the trainer uses this to fit them).</summary>
+    public ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage, ModelParameters parameters)
+    {
+        if (string.IsNullOrEmpty(text)) return [];
+        var tokens = Tokenizer.Tokenize(text);
+        int classes = _model.ClassCount;
+        var evidence = new List<int>(); // token indices of words that carry evidence
+        var scores = new List<float[]>();
+        var acc = new ScoreAccumulator(classes);
+        Span<char> buffer = stackalloc char[NgramHasher.MaxWordChars];
+        for (int t = 0; t < tokens.Count; t++)
+        {
+            var token = tokens[t];
+            if (token.IsNeutral || IsNameLike(text, token)) continue;
+            acc.Clear();
+            int len = WordNormalizer.Normalize(text.AsSpan(token.Start, token.Length), buffer);
+            _model.AddWord(buffer[..len], acc);
+            if (acc.FeatureHits == 0) continue;
+            var s = new float[classes];
+            _model.LogLikelihoods(acc, s);
+            evidence.Add(t);
+            scores.Add(s);
+        }
+        if (evidence.Count == 0) return [new LanguageSpan(0, text.Length, Undetermined, 0)];
+
+        var labels = Decode(scores, mainLanguage, parameters);
+        return BuildSpans(text, tokens, evidence, labels, scores);
+    }
+
+    /// <summary>Viterbi over classes: stay for free, switch for <c>SwitchCost</c>; emissions are
+    /// tempered log-likelihoods relative to the word's best class, floored at <c>-EmissionCap</c>.</summary>
+    private int[] Decode(List<float[]> scores, string mainLanguage, ModelParameters p)
+    {
+        int classes = _model.ClassCount, n = scores.Count;
+        var current = new float[classes];
+        var next = new float[classes];
+        var switched = new bool[n * classes];
+        var switchedFrom = new int[n];
+        for (int c = 0; c < classes; c++)
+            current[c] = _model.ClassCodes[c] == mainLanguage ? p.MainLanguageBonus : 0;
+        for (int w = 0; w < n; w++)
+        {
+            var s = scores[w];
+            float wordBest = s.Max();
+            int bestPrev = ArgMax(current);
+            switchedFrom[w] = bestPrev;
+            float switchFrom = w == 0 ? float.NegativeInfinity : current[bestPrev] - p.SwitchCost;
+            for (int c = 0; c < classes; c++)
+            {
+                float emission = Math.Max((s[c] - wordBest) * p.Temperature, -p.EmissionCap);
+                bool sw = switchFrom > current[c];
+                switched[w * classes + c] = sw;
+                next[c] = (sw ? switchFrom : current[c]) + emission;
+            }
+            (current, next) = (next, current);
+        }
+        var labels = new int[n];
+        int state = ArgMax(current);
+        for (int w = n - 1; w >= 0; w--)
+        {
+            labels[w] = state;
+            if (switched[w * classes + state]) state = switchedFrom[w];
+        }
+        return labels;
+    }
+
+    private ImmutableArray<LanguageSpan> BuildSpans(string text, List<Token> tokens, List<int> evidence, int[] labels,
+        List<float[]> scores)
+    {
+        var spans = ImmutableArray.CreateBuilder<LanguageSpan>();
+        int runStart = 0, runFirst = 0;
+        for (int w = 1; w <= evidence.Count; w++)
+        {
+            if (w < evidence.Count && _codeOfClass[labels[w]] == _codeOfClass[labels[runFirst]]) continue;
+            // A run ends where the next run's first word starts, so neutral tokens between two
+            // runs stay with the earlier language and the spans cover the text without gaps.
+            int end = w < evidence.Count ? tokens[evidence[w]].Start : text.Length;
+            // Log-likelihoods add over words, so the run's score is the sum of its words' scores.
+            var sum = new float[_model.ClassCount];
+            for (int i = runFirst; i < w; i++)
+                for (int c = 0; c < sum.Length; c++) sum[c] += scores[i][c];
+            int code = _codeOfClass[labels[runFirst]];
+            spans.Add(new LanguageSpan(runStart, end, _codes[code], Math.Round(CodePosterior(sum)[code], 4)));
+            runStart = end;
+            runFirst = w;
+        }
+        return spans.ToImmutable();
+    }
+
+    private bool IsNameLike(string text, Token token)
+    {
+        var word = text.AsSpan(token.Start, token.Length);
+        if (_names is not null && _names.IsKnownName(word)) return true;
+        if (word.Length < 2 || !char.IsUpper(word[0])) return false;
+        if (IsAllUpper(word)) return true;
+        return !IsSentenceStart(text, token.Start);
+    }
+
+    private static bool IsAllUpper(ReadOnlySpan<char> word)
+    {
+        foreach (char c in word) if (char.IsLower(c)) return false;
+        return true;
+    }
+
+    /// <summary>True at the text start or after sentence-final punctuation (skipping spaces, quotes,
+    /// brackets and transcriber tags), where capitals say nothing about names.</summary>
+    private static bool IsSentenceStart(string text, int start)
+    {
+        for (int i = start - 1; i >= 0; i--)
+        {
+            char c = text[i];
+            if (char.IsWhiteSpace(c) || c is '"' or '\'' or '\u201C' or '\u201D' or '\u2018' or '\u2019' or '(' or '\u00AB' or '\u201E' or '-' or '\u2014') continue;
+            if (c == ']')
+            {
+                int open = text.LastIndexOf('[', i);
+                if (open < 0) return false;
+                i = open;
+                continue;
+            }
+            return c is '.' or '!' or '?' or '\u2026' or ':' or ';';
+        }
+        return true;
+    }
+
+    /// <summary>Long stretches: stop reading once the leader is ahead by <see cref="DecidedMargin"/>
+    /// tempered nats (a posterior ratio beyond e^30, which more words will not overturn in practice).</summary>
+    private bool IsDecided(ScoreAccumulator acc)
+    {
+        Span<float> scores = stackalloc float[_model.ClassCount];
+        _model.LogLikelihoods(acc, scores);
+        int best = ArgMax(scores);
+        float second = float.NegativeInfinity;
+        for (int c = 0; c < scores.Length; c++)
+            if (c != best && _codeOfClass[c] != _codeOfClass[best]) second = Math.Max(second, scores[c]);
+        return (scores[best] - second) * _model.Parameters.Temperature > DecidedMargin;
+    }
+
+    private (int Code, float Probability) Best(ScoreAccumulator acc)
+    {
+        var scores = new float[_model.ClassCount];
+        _model.LogLikelihoods(acc, scores);
+        var byCode = CodePosterior(scores);
+        int best = ArgMax(byCode);
+        return (best, byCode[best]);
+    }
+
+    private float[] CodePosterior(ReadOnlySpan<float> scores)
+    {
+        int classes = _model.ClassCount;
+        Span<float> probabilities = stackalloc float[classes];
+        _model.Posterior(scores, probabilities);
+        var byCode = new float[_codes.Length];
+        for (int c = 0; c < classes; c++) byCode[_codeOfClass[c]] += probabilities[c];
+        return byCode;
+    }
+
+    private static int ArgMax(ReadOnlySpan<float> values)
+    {
+        int best = 0;
+        for (int i = 1; i < values.Length; i++) if (values[i] > values[best]) best = i;
+        return best;
+    }
+}

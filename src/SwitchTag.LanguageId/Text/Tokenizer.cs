@@ -1,0 +1,100 @@
+using System.Globalization;
+
+namespace SwitchTag.LanguageId.Text;
+
+/// <summary>Splits text into words, numbers, hesitations, transcriber tags and false starts, keeping
+/// char offsets into the original. Punctuation and whitespace are not tokens. Never throws: lone
+/// surrogates, controls and symbols simply separate tokens.</summary>
+public static class Tokenizer
+{
+    /// <summary>Filled pauses common in English transcripts (and shared by many languages); they are
+    /// neutral so they never start a switch.</summary>
+    private static readonly HashSet<string>.AlternateLookup<ReadOnlySpan<char>> Hesitations =
+        new HashSet<string>(StringComparer.OrdinalIgnoreCase)
+        {
+            "uh", "uhh", "uhm", "um", "umm", "er", "erm", "err", "ah", "ahh", "eh", "hm", "hmm", "hmmm",
+            "mhm", "mm", "mmm", "mm-hmm", "uh-huh", "uh-uh", "huh",
+        }.GetAlternateLookup<ReadOnlySpan<char>>();
+
+    private const int MaxTagLength = 40;
+
+    public static List<Token> Tokenize(ReadOnlySpan<char> text)
+    {
+        var tokens = new List<Token>();
+        Tokenize(text, tokens);
+        return tokens;
+    }
+
+    /// <summary>Appends the tokens of <paramref name="text"/> to <paramref name="tokens"/>.</summary>
+    public static void Tokenize(ReadOnlySpan<char> text, List<Token> tokens)
+    {
+        int i = 0, n = text.Length;
+        while (i < n)
+        {
+            char c = text[i];
+            if (c == '[')
+            {
+                int close = text.Slice(i + 1, Math.Min(MaxTagLength, n - i - 1)).IndexOf(']');
+                if (close >= 0)
+                {
+                    close += i + 1;
+                    tokens.Add(new Token(i, close + 1, TokenKind.Tag));
+                    i = close + 1;
+                    continue;
+                }
+                i++;
+                continue;
+            }
+            if (IsWordChar(c))
+            {
+                int start = i;
+                i = ScanWord(text, i);
+                tokens.Add(new Token(start, i, Classify(text, start, i)));
+                continue;
+            }
+            if (char.IsDigit(c))
+            {
+                int start = i;
+                while (i < n && (char.IsDigit(text[i]) || (i + 1 < n && text[i] is '.' or ',' or ':' && char.IsDigit(text[i + 1]))))
+                    i++;
+                tokens.Add(new Token(start, i, TokenKind.Number));
+                continue;
+            }
+            i++;
+        }
+    }
+
+    /// <summary>Letters and the marks that attach to them (NFD accents, Indic vowel signs). Surrogates
+    /// (lone or paired) are never word chars, so every word is safe to normalise.</summary>
+    public static bool IsWordChar(char c)
+    {
+        if (c < 0x80) return (uint)((c | 0x20) - 'a') <= 'z' - 'a';
+        if (char.IsSurrogate(c)) return false;
+        var cat = char.GetUnicodeCategory(c);
+        return cat <= UnicodeCategory.OtherLetter
+            || cat is UnicodeCategory.NonSpacingMark or UnicodeCategory.SpacingCombiningMark or UnicodeCategory.EnclosingMark;
+    }
+
+    private static int ScanWord(ReadOnlySpan<char> text, int i)
+    {
+        int n = text.Length;
+        while (i < n)
+        {
+            if (IsWordChar(text[i])) { i++; continue; }
+            // An apostrophe or hyphen between letters stays inside the word (don't, Jean-Luc, l'eau).
+            if (i + 1 < n && text[i] is '\'' or '\u2019' or '-' && IsWordChar(text[i + 1])) { i += 2; continue; }
+            break;
+        }
+        return i;
+    }
+
+    private static TokenKind Classify(ReadOnlySpan<char> text, int start, int end)
+    {
+        int len = end - start;
+        if (len <= 6 && Hesitations.Contains(text[start..end])) return TokenKind.Hesitation;
+        // "w-" followed by space or end: a cut-off word (a hyphen inside a word was consumed by ScanWord).
+        if (len <= 4 && end < text.Length && text[end] == '-' && (end + 1 == text.Length || !IsWordChar(text[end + 1])))
+            return TokenKind.FalseStart;
+        return TokenKind.Word;
+    }
+}

@@ -1,0 +1,178 @@
+using System.Diagnostics;
+using System.Runtime.InteropServices;
+using SwitchTag.LanguageId.Model;
+using SwitchTag.LanguageId.Segmentation;
+using SwitchTag.LanguageId.Text;
+
+namespace SwitchTag.LanguageId.Training;
+
+/// <summary>Training settings. Alpha is the additive-smoothing pseudo-count; a feature is kept for
+/// a language when seen at least MinCount times there (1 for thin languages, whose every n-gram is
+/// precious).</summary>
+public sealed record TrainingOptions(
+    double Alpha = 0.5,
+    int MinCount = 2,
+    int ThinLanguageChars = 150_000,
+    float QuantStep = 0.05f,
+    int CalibrationTurns = 600,
+    int Seed = 7);
+
+/// <summary>Counts features on the training split, builds the smoothed, pruned, quantised tables,
+/// then fits the softmax temperature (log-loss on calibration lines, their first two words and
+/// single words) and the segmenter's switch cost and emission cap (switch-point F1 on synthetic
+/// turns made from calibration lines). Single-threaded and deterministic.</summary>
+public static class ModelTrainer
+{
+    public static byte[] Train(IReadOnlyList<CorpusLine> corpus, TrainingOptions options, TextWriter log)
+    {
+        var clock = Stopwatch.StartNew();
+        var classes = corpus.Select(l => l.Class).Distinct().Order(StringComparer.Ordinal).ToArray();
+        var codes = classes.Select(c => corpus.First(l => l.Class == c).Code).ToArray();
+        var classIndex = classes.Select((c, i) => (c, i)).ToDictionary(x => x.c, x => x.i);
+        var counts = classes.Select(_ => new Dictionary<uint, int>()).ToArray();
+        var kindOf = new Dictionary<uint, byte>();
+        var totals = new long[classes.Length, NgramHasher.FeatureKinds];
+        var chars = new long[classes.Length];
+        var tokens = new List<Token>();
+        var buffer = new char[NgramHasher.MaxWordChars];
+        foreach (var line in corpus)
+        {
+            if (line.Split != Split.Training) continue;
+            int c = classIndex[line.Class];
+            chars[c] += line.Text.Length;
+            tokens.Clear();
+            Tokenizer.Tokenize(line.Text, tokens);
+            var sink = new CountSink(counts[c], kindOf, totals, c);
+            foreach (var token in tokens)
+            {
+                if (token.IsNeutral) continue;
+                int len = WordNormalizer.Normalize(line.Text.AsSpan(token.Start, token.Length), buffer);
+                NgramHasher.ForEachFeature(buffer.AsSpan(0, len), ref sink);
+            }
+        }
+        log.WriteLine($"counted {kindOf.Count:N0} distinct features over {classes.Length} classes in {clock.Elapsed.TotalSeconds:F1}s");
+
+        // Keep a feature for a language if seen often enough there; vocabulary sizes per kind follow.
+        var kept = new Dictionary<uint, List<(byte Class, int Count)>>();
+        for (int c = 0; c < classes.Length; c++)
+        {
+            int min = chars[c] < options.ThinLanguageChars ? 1 : options.MinCount;
+            foreach (var (key, n) in counts[c])
+            {
+                if (n < min) continue;
+                if (!kept.TryGetValue(key, out var list)) kept[key] = list = [];
+                list.Add(((byte)c, n));
+            }
+        }
+        var vocabulary = new long[NgramHasher.FeatureKinds];
+        foreach (var key in kept.Keys) vocabulary[kindOf[key]]++;
+
+        var floor = new float[classes.Length * NgramHasher.FeatureKinds];
+        for (int c = 0; c < classes.Length; c++)
+            for (int k = 1; k < NgramHasher.FeatureKinds; k++)
+                floor[c * NgramHasher.FeatureKinds + k] =
+                    (float)Math.Log(options.Alpha / (totals[c, k] + options.Alpha * Math.Max(1, vocabulary[k])));
+        var features = kept.OrderBy(kv => kv.Key)
+            .Select(kv => (kv.Key, kv.Value.OrderBy(p => p.Class)
+                .Select(p => (p.Class, Quantise(Math.Log((p.Count + options.Alpha) / options.Alpha), options.QuantStep)))
+                .ToArray()))
+            .ToList();
+        log.WriteLine($"kept {features.Count:N0} features, {features.Sum(f => f.Item2.Length):N0} postings");
+
+        var parameters = new ModelParameters(options.QuantStep, 1f, 4f, 8f, 1f);
+        var model = Build(classes, codes, floor, parameters, features);
+        var temperature = FitTemperature(model, corpus);
+        log.WriteLine($"temperature {temperature:F3}");
+        parameters = parameters with { Temperature = temperature };
+        model = Build(classes, codes, floor, parameters, features);
+        parameters = FitSwitching(model, corpus, options, log);
+        using var output = new MemoryStream();
+        NgramLanguageModel.Write(output, classes, codes, floor, parameters, features);
+        log.WriteLine($"model {output.Length / 1048576.0:F2} MB, trained in {clock.Elapsed.TotalSeconds:F1}s");
+        return output.ToArray();
+    }
+
+    private static byte Quantise(double gain, float step) => (byte)Math.Clamp((int)Math.Round(gain / step), 1, 255);
+
+    private static NgramLanguageModel Build(string[] classes, string[] codes, float[] floor, ModelParameters parameters,
+        List<(uint, (byte, byte)[])> features)
+    {
+        var keys = features.Select(f => f.Item1).ToArray();
+        var lengths = features.Select(f => (byte)f.Item2.Length).ToArray();
+        var postings = features.SelectMany(f => f.Item2).Select(p => (ushort)((p.Item1 << 8) | p.Item2)).ToArray();
+        return new NgramLanguageModel(classes, codes, floor, parameters, keys, lengths, postings);
+    }
+
+    /// <summary>Grid search of the temperature minimising log-loss of the true class on calibration
+    /// lines, their first two words and their single words.</summary>
+    private static float FitTemperature(NgramLanguageModel model, IReadOnlyList<CorpusLine> corpus)
+    {
+        var items = new List<(float[] Scores, int Class)>();
+        var classIndex = model.Classes.Select((c, i) => (c, i)).ToDictionary(x => x.c, x => x.i);
+        var acc = new ScoreAccumulator(model.ClassCount);
+        var buffer = new char[NgramHasher.MaxWordChars];
+        foreach (var line in corpus)
+        {
+            if (line.Split != Split.Calibration) continue;
+            var words = Tokenizer.Tokenize(line.Text).Where(t => !t.IsNeutral).ToList();
+            foreach (var prefix in new[] { words.Count, Math.Min(2, words.Count), Math.Min(1, words.Count) })
+            {
+                if (prefix == 0) continue;
+                acc.Clear();
+                foreach (var w in words.Take(prefix))
+                {
+                    int len = WordNormalizer.Normalize(line.Text.AsSpan(w.Start, w.Length), buffer);
+                    model.AddWord(buffer.AsSpan(0, len), acc);
+                }
+                if (acc.FeatureHits == 0) continue;
+                var s = new float[model.ClassCount];
+                model.LogLikelihoods(acc, s);
+                items.Add((s, classIndex[line.Class]));
+            }
+        }
+        float best = 1, bestLoss = float.MaxValue;
+        for (float t = 0.02f; t <= 1.0f; t *= 1.15f)
+        {
+            double loss = 0;
+            foreach (var (s, c) in items)
+            {
+                float max = s.Max();
+                double sum = 0;
+                foreach (var v in s) sum += Math.Exp((v - max) * t);
+                loss -= (s[c] - max) * t - Math.Log(sum);
+            }
+            if (loss < bestLoss) { bestLoss = (float)loss; best = t; }
+        }
+        return best;
+    }
+
+    private static ModelParameters FitSwitching(NgramLanguageModel model, IReadOnlyList<CorpusLine> corpus,
+        TrainingOptions options, TextWriter log)
+    {
+        var turns = SwitchSynthesizer.Build(corpus, Split.Calibration, options.CalibrationTurns, options.Seed);
+        var segmenter = new CodeSwitchSegmenter(model);
+        var best = model.Parameters;
+        double bestF1 = -1;
+        foreach (var cost in new[] { 2f, 3f, 4f, 5f, 6f })
+            foreach (var cap in new[] { 4f, 6f, 9f, 12f, 16f })
+            {
+                var p = model.Parameters with { SwitchCost = cost, EmissionCap = cap };
+                var score = new SwitchScore();
+                foreach (var turn in turns) score.Add(turn, segmenter.Segment(turn.Text, "en", p));
+                if (score.F1 > bestF1) { bestF1 = score.F1; best = p; }
+            }
+        log.WriteLine($"switch cost {best.SwitchCost}, emission cap {best.EmissionCap}: calibration switch F1 {bestF1:F3}");
+        return best;
+    }
+
+    private readonly struct CountSink(Dictionary<uint, int> counts, Dictionary<uint, byte> kindOf, long[,] totals, int cls) : IFeatureSink
+    {
+        public void Add(uint key, int kind)
+        {
+            ref int n = ref CollectionsMarshal.GetValueRefOrAddDefault(counts, key, out bool exists);
+            n++;
+            if (!exists) kindOf.TryAdd(key, (byte)kind);
+            totals[cls, kind]++;
+        }
+    }
+}

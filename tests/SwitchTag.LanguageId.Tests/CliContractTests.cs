@@ -1,0 +1,70 @@
+using System.Text.Json;
+using SwitchTag.Cli;
+using SwitchTag.LanguageId.Training;
+
+namespace SwitchTag.LanguageId.Tests;
+
+/// <summary>The JSON contracts of /work/shared/DESIGN.md ("Contracts other tools rely on"):
+/// <c>switchtag langid --lines FILE --json</c> and <c>switchtag eval langid --dir DIR --json</c>.</summary>
+[Collection(nameof(ModelCollection))]
+public sealed class CliContractTests(ModelFixture fixture)
+{
+    [Fact]
+    public void LinesJsonHasOneObjectPerInputLineInOrder()
+    {
+        string[] lines = ["We lived in a small house by the river.", "", "Mieszkaliśmy w małym domu nad rzeką.", "1945"];
+        var output = new StringWriter();
+        LangIdCommand.WriteLines(fixture.Segmenter, lines, output, json: true);
+        var objects = output.ToString().Split('\n', StringSplitOptions.RemoveEmptyEntries);
+        Assert.Equal(lines.Length, objects.Length);
+        var languages = new List<string>();
+        for (int i = 0; i < lines.Length; i++)
+        {
+            using var doc = JsonDocument.Parse(objects[i]);
+            var root = doc.RootElement;
+            languages.Add(root.GetProperty("language").GetString()!);
+            Assert.InRange(root.GetProperty("confidence").GetDouble(), 0, 1);
+            foreach (var span in root.GetProperty("spans").EnumerateArray())
+            {
+                Assert.InRange(span.GetProperty("start").GetInt32(), 0, lines[i].Length);
+                Assert.InRange(span.GetProperty("end").GetInt32(), 0, lines[i].Length);
+                Assert.False(string.IsNullOrEmpty(span.GetProperty("language").GetString()));
+            }
+        }
+        Assert.Equal(["en", "und", "pl", "und"], languages);
+    }
+
+    [Fact]
+    public void LanguagesAreIso639Codes()
+    {
+        // ISO 639-1 two-letter codes where one exists, else ISO 639-3 (hsb); from memory.
+        Assert.All(fixture.Segmenter.Languages, c => Assert.Matches("^[a-z]{2,3}$", c));
+        Assert.Contains("hsb", fixture.Segmenter.Languages);
+        Assert.Contains("hu", fixture.Segmenter.Languages);
+        Assert.Equal(fixture.Segmenter.Languages.Order(StringComparer.Ordinal), fixture.Segmenter.Languages);
+    }
+
+    [Fact]
+    public void EvalDirScoresSupportedCodesAndSkipsOthers()
+    {
+        var dir = Directory.CreateTempSubdirectory("switchtag-evallangid-");
+        try
+        {
+            // Held-out lines of lid/en.txt and lid/fr.txt (Universal Dependencies); xx is no ISO code.
+            File.WriteAllLines(Path.Combine(dir.FullName, "en.txt"),
+                fixture.Corpus.Where(l => l.Split == Split.Evaluation && l.Code == "en").Take(40).Select(l => l.Text));
+            File.WriteAllLines(Path.Combine(dir.FullName, "fr.txt"),
+                fixture.Corpus.Where(l => l.Split == Split.Evaluation && l.Code == "fr").Take(40).Select(l => l.Text));
+            File.WriteAllLines(Path.Combine(dir.FullName, "xx.txt"), ["some text"]);
+            var result = EvalLangIdCommand.Evaluate(fixture.Segmenter, dir.FullName);
+            Assert.Equal(["en", "fr"], result.Languages.Keys);
+            Assert.Equal(40, result.Languages["en"].N);
+            Assert.Equal(["xx"], result.Skipped);
+            Assert.InRange(result.Mean, 0.9, 1);
+        }
+        finally
+        {
+            dir.Delete(recursive: true);
+        }
+    }
+}
