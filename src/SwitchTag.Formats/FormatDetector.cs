@@ -33,8 +33,10 @@ public static class FormatDetector
         {
             if (!timing && line.Contains("-->", StringComparison.Ordinal) && IsTimingLine(line)) timing = true;
             var body = line.TrimStart();
-            markdown |= IsMarkdownSignal(body, out var unwrapped);
-            entries |= EntryStamp.TryMatch(markdown ? WithoutEmphasis(unwrapped) : unwrapped, out _);
+            if (IsAtxHeading(body)) { markdown = true; continue; }
+            var unwrapped = Unwrap(body, out bool marked);
+            if (EntryStamp.TryMatch(body, out _)) entries = true;
+            else if (marked && EntryStamp.TryMatch(unwrapped, out _)) entries = markdown = true;
         }
         if (timing) return TranscriptFormat.Srt;
         if (!entries) return null;
@@ -50,37 +52,34 @@ public static class FormatDetector
         return Timestamps.TrySrt(line, ref p, out _) || Timestamps.TryWebVtt(line, ref q, out _);
     }
 
-    /// <summary>ATX headings, bulleted or numbered list items, and bold or underscored runs mark Markdown;
-    /// <paramref name="unwrapped"/> is the line with a list marker and leading emphasis removed, so a
-    /// timestamp behind them is still seen.</summary>
-    private static bool IsMarkdownSignal(ReadOnlySpan<char> body, out ReadOnlySpan<char> unwrapped)
+    private static bool IsAtxHeading(ReadOnlySpan<char> body)
     {
-        unwrapped = body;
-        if (body.Length > 1 && body[0] == '#')
-        {
-            int h = 0;
-            while (h < body.Length && body[h] == '#') h++;
-            if (h <= 6 && (h == body.Length || body[h] == ' ')) return true;
-        }
-        bool signal = false;
-        if (body.Length > 1 && body[0] is '-' or '*' or '+' && body[1] == ' ') { unwrapped = body[2..].TrimStart(); signal = true; }
+        int h = 0;
+        while (h < body.Length && body[h] == '#') h++;
+        return h is >= 1 and <= 6 && h < body.Length && body[h] == ' ';
+    }
+
+    /// <summary>The line without a list marker (<c>- * +</c> or <c>1.</c>) and emphasis or code marks
+    /// in its head; <paramref name="marked"/> says whether there was any such Markdown. Only a timestamp
+    /// behind such marks counts as a Markdown signal: a line "1987. We left" in a typed transcript is
+    /// not a numbered list.</summary>
+    private static string Unwrap(ReadOnlySpan<char> body, out bool marked)
+    {
+        marked = false;
+        if (body.Length > 1 && body[0] is '-' or '*' or '+' && body[1] == ' ') { body = body[2..].TrimStart(); marked = true; }
         else
         {
             int d = 0;
             while (d < body.Length && d < 9 && char.IsAsciiDigit(body[d])) d++;
-            if (d > 0 && d + 1 < body.Length && body[d] is '.' or ')' && body[d + 1] == ' ') { unwrapped = body[(d + 2)..].TrimStart(); signal = true; }
+            if (d > 0 && d + 1 < body.Length && body[d] is '.' or ')' && body[d + 1] == ' ') { body = body[(d + 2)..].TrimStart(); marked = true; }
         }
-        if (unwrapped.StartsWith("**") || unwrapped.StartsWith("__")) signal = true;
-        return signal;
-    }
-
-    /// <summary>The head of a line with emphasis and code marks removed (a timestamp and speaker prefix
-    /// fit well inside it), as Markdig's plain text of it would read.</summary>
-    private static string WithoutEmphasis(ReadOnlySpan<char> line)
-    {
-        var head = line[..Math.Min(line.Length, 120)];
+        var head = body[..Math.Min(body.Length, 120)];
         var sb = new System.Text.StringBuilder(head.Length);
-        foreach (char c in head) if (c is not ('*' or '_' or '`')) sb.Append(c);
+        foreach (char c in head)
+        {
+            if (c is '*' or '_' or '`') marked = true;
+            else sb.Append(c);
+        }
         return sb.ToString();
     }
 

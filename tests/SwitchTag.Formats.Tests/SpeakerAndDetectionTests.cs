@@ -32,6 +32,8 @@ public class SpeakerAndDetectionTests
     [InlineData("# Title\n\n[00:00:01] A: x", ".txt", TranscriptFormat.Markdown)]
     [InlineData("- **00:00:01** A: x", null, TranscriptFormat.Markdown)]
     [InlineData("WEBVTTX\n00:01.000 --> 00:02.000", null, TranscriptFormat.Srt)]
+    [InlineData("[00:00:04] MIRIAM: on the second of October,\n1987. Mister Lindner, thank you.", ".txt", TranscriptFormat.Text)]
+    [InlineData("[00:00:04] MIRIAM: we left\n- and then we came back", ".txt", TranscriptFormat.Text)]
     [InlineData("hello", ".vtt", null)]
     [InlineData("", ".vtt", null)]
     public void Format_comes_from_content_with_the_extension_as_a_hint(string text, string? extension, TranscriptFormat? expected) =>
