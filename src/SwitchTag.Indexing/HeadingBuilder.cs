@@ -10,8 +10,8 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 
 /// <summary>Groups mentions under headings.
 /// Places: each LOC mention's gazetteer candidates (alternate names in all languages) are resolved by
-/// evidence: the candidate whose country is shared by most of the interview's unambiguous places wins,
-/// then the larger population; the others are kept as alternatives. Mentions resolved to one gazetteer
+/// evidence (see <see cref="PlaceScore"/>): population, whether the name said is the place's own name,
+/// and the countries of the interview's unambiguous places; the others are kept as alternatives. Mentions resolved to one gazetteer
 /// id form one heading; a LOC mention the gazetteer does not know joins a linked heading whose variant
 /// has its folded key, else forms a heading without coordinates.
 /// Persons are grouped conservatively: equal folded keys group; a one-word name joins a multi-word
@@ -105,22 +105,33 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         public List<int> Members { get; } = [];
     }
 
-    private static void GroupPlaces(ImmutableArray<Mention> mentions, string[] keys, ImmutableArray<PlaceLink>[] places, bool[] held, List<Group> groups)
+    /// <summary>A candidate's score: log10 of its population (size is the prior), plus 1 when the name
+    /// said is the place's own name rather than an alternate, plus 3 times the share of the interview's
+    /// unambiguous places lying in its country. So "Paris" beside Dallas and Houston is the Texan one, but
+    /// one American town elsewhere in the interview does not turn "Vienna" into Vienna, Virginia.</summary>
+    private static double PlaceScore(PlaceLink p, bool ownName, Dictionary<string, int> evidence, int evidenceTotal) =>
+        Math.Log10(Math.Max(1, p.Population)) + (ownName ? 1 : 0) +
+        (evidenceTotal == 0 ? 0 : 3.0 * evidence.GetValueOrDefault(p.Country) / evidenceTotal);
+
+    private string Key(string name, string language) => lexicon.Key(name, language);
+
+    private void GroupPlaces(ImmutableArray<Mention> mentions, string[] keys, ImmutableArray<PlaceLink>[] places, bool[] held, List<Group> groups)
     {
         var evidence = new Dictionary<string, int>(StringComparer.Ordinal);
         for (int i = 0; i < mentions.Length; i++)
             if (!held[i] && mentions[i].Label == NameLabel.LOC && places[i].Length == 1)
                 evidence[places[i][0].Country] = evidence.GetValueOrDefault(places[i][0].Country) + 1;
 
+        int evidenceTotal = evidence.Values.Sum();
         var byPlace = new Dictionary<long, Group>();
         var unlinked = new List<int>();
         for (int i = 0; i < mentions.Length; i++)
         {
             if (held[i] || mentions[i].Label != NameLabel.LOC) continue;
             if (places[i].IsEmpty) { unlinked.Add(i); continue; }
+            var m = mentions[i];
             var chosen = places[i]
-                .OrderByDescending(p => evidence.GetValueOrDefault(p.Country))
-                .ThenByDescending(p => p.Population)
+                .OrderByDescending(p => PlaceScore(p, Key(m.Text, m.Language) == Key(p.Name, m.Language), evidence, evidenceTotal))
                 .ThenBy(p => p.GeonameId)
                 .First();
             if (!byPlace.TryGetValue(chosen.GeonameId, out var group))
