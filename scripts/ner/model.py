@@ -1,0 +1,37 @@
+"""Word-level tagger: summed hashed-feature and subword-piece embeddings, a residual dilated CNN,
+per-word BIO logits. Padding words (feature slot 0 = 0) are masked after every layer so a word's
+logits never depend on how much padding its batch carries."""
+import torch
+import torch.nn as nn
+import torch.nn.functional as F
+
+LABELS = ["O", "B-PER", "I-PER", "B-LOC", "I-LOC", "B-ORG", "I-ORG"]
+
+
+class Tagger(nn.Module):
+    def __init__(self, hash_rows, piece_rows, dim=96, dilations=(1, 2, 4, 1), dropout=0.25):
+        super().__init__()
+        self.hash = nn.Embedding(hash_rows, dim, padding_idx=0)
+        self.piece = nn.Embedding(piece_rows, dim, padding_idx=0)
+        nn.init.normal_(self.hash.weight, std=0.1); nn.init.normal_(self.piece.weight, std=0.1)
+        with torch.no_grad():
+            self.hash.weight[0].zero_(); self.piece.weight[0].zero_()
+        self.norm = nn.LayerNorm(dim)
+        self.convs = nn.ModuleList(nn.Conv1d(dim, dim, 3, padding=d, dilation=d) for d in dilations)
+        self.norms = nn.ModuleList(nn.LayerNorm(dim) for _ in dilations)
+        self.drop = nn.Dropout(dropout)
+        self.out = nn.Linear(dim, len(LABELS))
+        self.half_tables = False
+
+    def embed(self, table, ids):
+        w = table.weight.half() if self.half_tables else table.weight
+        return F.embedding(ids, w).float().sum(2)
+
+    def forward(self, features, pieces):
+        mask = (features[:, :, 0] > 0).unsqueeze(-1).float()
+        x = self.embed(self.hash, features) + self.embed(self.piece, pieces)
+        x = self.drop(self.norm(x)) * mask
+        for conv, norm in zip(self.convs, self.norms):
+            y = F.relu(conv(x.transpose(1, 2))).transpose(1, 2)
+            x = norm(x + self.drop(y)) * mask
+        return self.out(x)

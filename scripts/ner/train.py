@@ -1,0 +1,296 @@
+"""Trains the multilingual PER/LOC/ORG tagger and writes models/ner.* (see models/ner.md).
+Deterministic: fixed seeds, one thread, data order from a seeded generator."""
+import argparse
+import json
+import os
+import random
+import time
+
+import numpy as np
+import sentencepiece as spm
+import torch
+
+import corpora
+import features as fx
+from model import LABELS, Tagger
+
+SEED = 20261201
+LABEL_ID = {l: i for i, l in enumerate(LABELS)}
+
+
+def allowed_transitions():
+    """allowed[i, j]: tag j may follow tag i (IOB2: I-X only after B-X or I-X)."""
+    n = len(LABELS)
+    a = np.ones((n, n), dtype=bool)
+    for j, l in enumerate(LABELS):
+        if l.startswith("I-"):
+            for i, p in enumerate(LABELS):
+                a[i, j] = p[2:] == l[2:] and p != "O"
+    start = np.array([not l.startswith("I-") for l in LABELS])
+    return a, start
+
+
+ALLOWED, START = allowed_transitions()
+
+
+def viterbi(logits):
+    """Best tag path under the IOB2 constraints, scored by log-softmax (same rule as the C# decoder)."""
+    lp = logits - np.log(np.exp(logits - logits.max(1, keepdims=True)).sum(1, keepdims=True)) - logits.max(1, keepdims=True)
+    trans = np.where(ALLOWED, 0.0, -1e9)
+    score = lp[0] + np.where(START, 0.0, -1e9)
+    back = []
+    for t in range(1, len(lp)):
+        cand = score[:, None] + trans
+        back.append(cand.argmax(0))
+        score = cand.max(0) + lp[t]
+    best = [int(score.argmax())]
+    for b in reversed(back):
+        best.append(int(b[best[-1]]))
+    return [LABELS[i] for i in reversed(best)]
+
+
+def spans(tags):
+    out, start, typ = set(), None, None
+    for i, t in enumerate(tags + ["O"]):
+        if t == "O" or t.startswith("B-") or (t.startswith("I-") and t[2:] != typ):
+            if start is not None: out.add((start, i, typ))
+            start, typ = (i, t[2:]) if t != "O" else (None, None)
+    return out
+
+
+def prf(gold_pred):
+    tp = fp = fn = 0
+    for g, p in gold_pred:
+        gs, ps = spans(g), spans(p)
+        tp += len(gs & ps); fp += len(ps - gs); fn += len(gs - ps)
+    p = tp / (tp + fp) if tp + fp else 0.0
+    r = tp / (tp + fn) if tp + fn else 0.0
+    return 2 * p * r / (p + r) if p + r else 0.0
+
+
+class Featurizer:
+    def __init__(self, sp, drop_groups=()):
+        self.sp, self.cache = sp, {}
+        self.zero = [s for g in drop_groups if g != "pieces" for s in fx.GROUPS[g]]
+        self.no_pieces = "pieces" in drop_groups
+
+    def word(self, w, first):
+        key = (w, first)
+        v = self.cache.get(key)
+        if v is None:
+            f = fx.feature_ids(w, first)
+            for s in self.zero: f[s] = 0
+            p = [0] * fx.PIECE_SLOTS if self.no_pieces else fx.piece_ids(self.sp, w)
+            v = self.cache[key] = (f, p)
+        return v
+
+    def sentence(self, words):
+        fs, ps = zip(*(self.word(w, fx.is_first(words, i)) for i, w in enumerate(words)))
+        return list(fs), list(ps)
+
+
+UNKNOWN_WORD = fx.fid("w:")  # the "w:" feature of an empty word, which no real word has
+
+
+def drop_words(rng, f, p=0.25):
+    """Word dropout: a word's identity features (slots 0 and 1) are replaced by an unknown-word id
+    so the tagger learns from affixes, pieces, shape and context rather than memorising names."""
+    if p <= 0: return f
+    drop = torch.from_numpy(rng.random(f.shape[:2]) < p) & (f[:, :, 0] > 0)
+    f = f.clone()
+    f[:, :, 0][drop] = UNKNOWN_WORD
+    f[:, :, 1][drop] = 0
+    return f
+
+
+def batch_tensors(featurizer, sents):
+    T = max(len(w) for w, _ in sents)
+    F_ = np.zeros((len(sents), T, fx.FEATURE_SLOTS), dtype=np.int64)
+    P_ = np.zeros((len(sents), T, fx.PIECE_SLOTS), dtype=np.int64)
+    Y = np.full((len(sents), T), -100, dtype=np.int64)
+    for b, (words, tags) in enumerate(sents):
+        f, p = featurizer.sentence(words)
+        F_[b, :len(words)] = f; P_[b, :len(words)] = p
+        if tags is not None:
+            Y[b, :len(words)] = [LABEL_ID[t] for t in tags]
+    return torch.from_numpy(F_), torch.from_numpy(P_), torch.from_numpy(Y)
+
+
+def predict(model, featurizer, sents, bs=64):
+    model.eval()
+    out = []
+    order = sorted(range(len(sents)), key=lambda i: len(sents[i][0]))
+    res = [None] * len(sents)
+    with torch.no_grad():
+        for k in range(0, len(order), bs):
+            idx = order[k:k + bs]
+            f, p, _ = batch_tensors(featurizer, [(sents[i][0], None) for i in idx])
+            logits = model(f, p).numpy()
+            for j, i in enumerate(idx):
+                res[i] = viterbi(logits[j, :len(sents[i][0])])
+    return res
+
+
+def augment(rng, words):
+    r = rng.random()
+    if r < 0.08: return [fx.lower(w) for w in words]
+    if r < 0.14: return [w.upper() for w in words]
+    return words
+
+
+def train_sp(data, path_prefix):
+    lines = []
+    for name, sents in sorted(data["train"].items()):
+        lines += [" ".join(fx.lower(w) for w in ws) for ws, _ in sents]
+    tmp = path_prefix + ".sp-input.txt"
+    with open(tmp, "w", encoding="utf-8") as f:
+        f.write("\n".join(lines))
+    spm.SentencePieceTrainer.train(
+        input=tmp, model_prefix=path_prefix, model_type="unigram", vocab_size=12000,
+        character_coverage=0.9995, normalization_rule_name="identity", num_threads=1,
+        shuffle_input_sentence=False, input_sentence_size=0, split_digits=True, seed_sentencepiece_size=200000,
+        bos_id=-1, eos_id=-1, unk_id=0, pad_id=-1, minloglevel=2)
+    os.remove(tmp)
+
+
+def add_control_pieces(path):
+    """Microsoft.ML.Tokenizers' unigram loader needs bos/eos pieces: append them as control pieces
+    after the trained vocabulary, so every trained piece keeps its id."""
+    from sentencepiece import sentencepiece_model_pb2 as pb
+    m = pb.ModelProto()
+    with open(path, "rb") as f:
+        m.ParseFromString(f.read())
+    if m.trainer_spec.bos_id >= 0:
+        return
+    n = len(m.pieces)
+    for name in ("<s>", "</s>"):
+        piece = m.pieces.add()
+        piece.piece, piece.score, piece.type = name, 0.0, pb.ModelProto.SentencePiece.CONTROL
+    m.trainer_spec.bos_id, m.trainer_spec.eos_id = n, n + 1
+    with open(path, "wb") as f:
+        f.write(m.SerializeToString())
+
+
+def run(args, data, sp, drop_groups, dim, dilations, epochs, log):
+    torch.manual_seed(SEED); random.seed(SEED); np.random.seed(SEED)
+    rng = random.Random(SEED)
+    nrng = np.random.default_rng(SEED)
+    feat = Featurizer(sp, drop_groups)
+    model = Tagger(fx.HASH_ROWS, sp.get_piece_size() + 1, dim, dilations)
+    opt = torch.optim.Adam(model.parameters(), lr=2e-3)
+    nerkor = data["train"]["NerKor"]
+    others = [s for n, ss in sorted(data["train"].items()) if n != "NerKor" for s in ss]
+    if args.ablations:
+        others = random.Random(SEED).sample(others, int(len(others) * args.ablation_share))
+    dev = data["dev"]
+    total_steps = epochs * ((len(others) + int(len(nerkor) * args.nerkor_share)) // 32 + 1)
+    sched = torch.optim.lr_scheduler.OneCycleLR(opt, max_lr=2e-3, total_steps=total_steps + 10, pct_start=0.1)
+    best, best_state, t0 = -1.0, None, time.time()
+    for ep in range(epochs):
+        model.train()
+        sample = others + rng.sample(nerkor, int(len(nerkor) * args.nerkor_share))
+        sample = [(augment(rng, w), t) for w, t in sample]
+        sample.sort(key=lambda s: len(s[0]))
+        batches = [sample[i:i + 32] for i in range(0, len(sample), 32)]
+        rng.shuffle(batches)
+        loss_sum = 0.0
+        for b in batches:
+            f, p, y = batch_tensors(feat, b)
+            logits = model(drop_words(nrng, f, args.word_dropout), p)
+            loss = torch.nn.functional.cross_entropy(logits.reshape(-1, len(LABELS)), y.reshape(-1), ignore_index=-100)
+            opt.zero_grad(); loss.backward(); opt.step(); sched.step()
+            loss_sum += loss.item()
+        scores = {n: prf(zip([t for _, t in s], predict(model, feat, s))) for n, s in sorted(dev.items())}
+        mean = sum(scores.values()) / len(scores)
+        log(f"epoch {ep + 1} loss {loss_sum / len(batches):.4f} dev mean F1 {mean:.4f} "
+            + " ".join(f"{n}={v:.3f}" for n, v in scores.items()) + f" [{time.time() - t0:.0f}s]")
+        if mean > best:
+            best, best_state = mean, {k: v.clone() for k, v in model.state_dict().items()}
+    model.load_state_dict(best_state)
+    return model, feat, best, time.time() - t0
+
+
+def export(model, feat, sp, out_dir, log):
+    model.eval(); model.half_tables = True
+    with torch.no_grad():
+        model.hash.weight.copy_(model.hash.weight.half().float())
+        model.piece.weight.copy_(model.piece.weight.half().float())
+    sents = [
+        "Maria Kowalska moved from Kraków to Chicago in 1968 .".split(),
+        "Then I worked for General Motors , you know , in Detroit".split(),
+        "JA SAM ROĐEN U SARAJEVU , A MOJA MAJKA U MOSTARU".split(),
+        "Budapestről jöttünk , Nagy Imre idején".split(),
+        "我 的 祖母 住 在 北京".split(),
+        "émigré O'Connor's co-op ... Москва !".split(),
+        ["x"],
+    ]
+    f, p, _ = batch_tensors(feat, [(s, None) for s in sents])
+    with torch.no_grad():
+        logits = model(f, p).numpy()
+    onnx_path = os.path.join(out_dir, "ner.onnx")
+    torch.onnx.export(model, (f, p), onnx_path, input_names=["features", "pieces"], output_names=["logits"],
+                      dynamic_axes={"features": {0: "batch", 1: "words"}, "pieces": {0: "batch", 1: "words"},
+                                    "logits": {0: "batch", 1: "words"}}, opset_version=13)
+    fixture = {"source": "scripts/ner/train.py export(): PyTorch logits of the exported weights",
+               "sentences": [{"words": s, "features": f[i, :len(s)].tolist(), "pieces": p[i, :len(s)].tolist(),
+                              "logits": logits[i, :len(s)].tolist()} for i, s in enumerate(sents)]}
+    with open(os.path.join(out_dir, "ner.parity.json"), "w", encoding="utf-8") as fh:
+        json.dump(fixture, fh, ensure_ascii=False)
+    with open(os.path.join(out_dir, "ner.labels.json"), "w", encoding="utf-8") as fh:
+        json.dump({"labels": LABELS, "hashRows": fx.HASH_ROWS, "featureSlots": fx.FEATURE_SLOTS,
+                   "pieceSlots": fx.PIECE_SLOTS, "pieceModel": "ner.spm"}, fh, indent=1)
+    log(f"exported {onnx_path} ({os.path.getsize(onnx_path) / 1e6:.1f} MB)")
+
+
+def main():
+    ap = argparse.ArgumentParser()
+    ap.add_argument("--data", default="../shared/data")
+    ap.add_argument("--out", default="models")
+    ap.add_argument("--epochs", type=int, default=5)
+    ap.add_argument("--nerkor-share", type=float, default=0.2)
+    ap.add_argument("--word-dropout", type=float, default=0.25)
+    ap.add_argument("--ablations", action="store_true")
+    ap.add_argument("--ablation-epochs", type=int, default=2)
+    ap.add_argument("--ablation-share", type=float, default=0.4, help="share of the non-NerKor training sentences")
+    args = ap.parse_args()
+    torch.set_num_threads(1)
+    logf = open(os.path.join(args.out, "ner.train.log"), "a", encoding="utf-8")
+
+    def log(msg):
+        print(msg, flush=True); logf.write(msg + "\n"); logf.flush()
+
+    data, gum_stats = corpora.load_all(args.data)
+    log(f"GUM person/place/organization mentions {gum_stats['mentions']}, kept as names {gum_stats['kept']}")
+    for split in data:
+        for n, s in sorted(data[split].items()):
+            log(f"{split} {n}: {len(s)} sentences, {sum(len(w) for w, _ in s)} tokens")
+    sp_prefix = os.path.join(args.out, "ner")
+    train_sp(data, sp_prefix)
+    os.replace(sp_prefix + ".model", sp_prefix + ".spm")
+    os.remove(sp_prefix + ".vocab")
+    add_control_pieces(sp_prefix + ".spm")
+    sp = spm.SentencePieceProcessor(model_file=sp_prefix + ".spm")
+    if args.ablations:
+        variants = [("full", (), 96, (1, 2, 4, 1)), ("no subword pieces", ("pieces",), 96, (1, 2, 4, 1)),
+                    ("no char n-grams/affixes", ("char",), 96, (1, 2, 4, 1)),
+                    ("no shape/case features", ("shape",), 96, (1, 2, 4, 1)),
+                    ("smaller CNN (2 x 64)", (), 64, (1, 2))]
+        rows = []
+        for name, drop, dim, dil in variants:
+            log(f"ablation: {name}")
+            model, feat, best, secs = run(args, data, sp, drop, dim, dil, args.ablation_epochs, log)
+            rows.append((name, best, secs))
+        with open(os.path.join(args.out, "ner.ablations.tsv"), "w", encoding="utf-8") as fh:
+            fh.write("variant\tdev_mean_f1\ttrain_seconds\n")
+            for name, best, secs in rows:
+                fh.write(f"{name}\t{best:.4f}\t{secs:.0f}\n")
+        return
+    model, feat, best, secs = run(args, data, sp, (), 96, (1, 2, 4, 1), args.epochs, log)
+    log(f"best dev mean F1 {best:.4f}, training {secs:.0f}s")
+    export(model, feat, sp, args.out, log)
+    for n, s in sorted(data["test"].items()):
+        log(f"test {n}: F1 {prf(zip([t for _, t in s], predict(model, feat, s))):.4f} (PyTorch, Viterbi)")
+
+
+if __name__ == "__main__":
+    main()

@@ -1,0 +1,72 @@
+using System.Collections.Concurrent;
+using System.Text.Json;
+using Microsoft.ML.OnnxRuntime;
+using Microsoft.ML.OnnxRuntime.Tensors;
+
+namespace SwitchTag.Tagging;
+
+/// <summary>The shipped word-level name classifier: <c>ner.onnx</c> (inputs <c>features</c>
+/// [batch, words, 20] and <c>pieces</c> [batch, words, 4], int64; output <c>logits</c> [batch, words,
+/// labels]), <c>ner.spm</c> (SentencePiece) and <c>ner.labels.json</c> (labels and feature sizes).
+/// Thread-safe; <see cref="Shared"/> keeps one ONNX Runtime session per models folder per process.</summary>
+public sealed class NerModel : IDisposable
+{
+    private static readonly ConcurrentDictionary<string, Lazy<NerModel>> Loaded = new();
+    private readonly InferenceSession _session;
+    private readonly WordFeatures _features;
+    private readonly PieceEncoder _pieces;
+
+    public IReadOnlyList<string> Labels { get; }
+
+    private NerModel(string directory)
+    {
+        using var json = JsonDocument.Parse(File.ReadAllText(Path.Combine(directory, "ner.labels.json")));
+        var root = json.RootElement;
+        Labels = [.. root.GetProperty("labels").EnumerateArray().Select(e => e.GetString()!)];
+        if (root.GetProperty("featureSlots").GetInt32() != WordFeatures.Slots || root.GetProperty("pieceSlots").GetInt32() != PieceEncoder.Slots)
+            throw new InvalidDataException("ner.labels.json: feature layout does not match this build");
+        _features = new WordFeatures(root.GetProperty("hashRows").GetInt32());
+        using (var sp = File.OpenRead(Path.Combine(directory, root.GetProperty("pieceModel").GetString()!)))
+            _pieces = new PieceEncoder(sp);
+        var options = new SessionOptions
+        {
+            IntraOpNumThreads = 1,
+            InterOpNumThreads = 1,
+            ExecutionMode = ExecutionMode.ORT_SEQUENTIAL,
+            GraphOptimizationLevel = GraphOptimizationLevel.ORT_ENABLE_ALL,
+        };
+        _session = new InferenceSession(Path.Combine(directory, "ner.onnx"), options);
+    }
+
+    /// <summary>Loads a model folder (ner.onnx, ner.spm, ner.labels.json); throws when files are missing or malformed.</summary>
+    public static NerModel Load(string directory) => new(directory);
+
+    /// <summary>The process-wide instance for <paramref name="directory"/>, loaded on first use.</summary>
+    public static NerModel Shared(string directory) =>
+        Loaded.GetOrAdd(Path.GetFullPath(directory), d => new Lazy<NerModel>(() => new NerModel(d))).Value;
+
+    /// <summary>Feature and piece ids of <paramref name="words"/> (the sentence they stand in, for
+    /// the sentence-initial flag), written row by row into the given buffers.</summary>
+    public void Featurize(IReadOnlyList<string> words, int from, int count, Span<long> features, Span<long> pieces)
+    {
+        for (int i = 0; i < count; i++)
+        {
+            _features.Compute(words[from + i], WordFeatures.IsSentenceInitial(words, from + i), features.Slice(i * WordFeatures.Slots, WordFeatures.Slots));
+            _pieces.Encode(words[from + i]).CopyTo(pieces.Slice(i * PieceEncoder.Slots, PieceEncoder.Slots));
+        }
+    }
+
+    /// <summary>Runs the network on a padded batch (rows of all-zero features are padding).</summary>
+    public float[] Run(long[] features, long[] pieces, int batch, int words)
+    {
+        var inputs = new[]
+        {
+            NamedOnnxValue.CreateFromTensor("features", new DenseTensor<long>(features, [batch, words, WordFeatures.Slots])),
+            NamedOnnxValue.CreateFromTensor("pieces", new DenseTensor<long>(pieces, [batch, words, PieceEncoder.Slots])),
+        };
+        using var results = _session.Run(inputs);
+        return results[0].AsTensor<float>().ToArray();
+    }
+
+    public void Dispose() => _session.Dispose();
+}
