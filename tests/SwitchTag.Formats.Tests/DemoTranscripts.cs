@@ -29,6 +29,15 @@ public class DemoTranscriptTests
             Assert.True(result.Transcript is not null, $"{file}: " + string.Join("; ", result.Diagnostics));
             Assert.DoesNotContain(result.Diagnostics, d => d.Severity == Severity.Error);
             Assert.NotEmpty(result.Transcript!.Cues);
+            // transcripts-demo/README.md names each file's format; the extension agrees with it.
+            var expected = Path.GetExtension(file) switch
+            {
+                ".vtt" => TranscriptFormat.WebVtt,
+                ".srt" => TranscriptFormat.Srt,
+                ".md" => TranscriptFormat.Markdown,
+                _ => TranscriptFormat.Text,
+            };
+            Assert.Equal(expected, result.Transcript.Source.Format);
         }
     }
 }

@@ -27,10 +27,10 @@ internal static class MarkdownReader
             switch (block)
             {
                 case HeadingBlock heading when !(heading.IsSetext && StartsEntry(src, heading)):
-                    collector.Heading(Lines(src, heading).Select(l => l.Text).DefaultIfEmpty("").Aggregate((a, b) => a + " " + b).Trim());
+                    collector.Heading(string.Join(' ', Lines(src, heading).Select(l => l.Text.ToString())).Trim());
                     break;
                 case HeadingBlock or ParagraphBlock:
-                    foreach (var (line, text) in Lines(src, block)) collector.Add(line, text);
+                    foreach (var (line, text) in Lines(src, block)) collector.Add(line, text.ToString());
                     break;
                 case HtmlBlock html:
                     diagnostics.Warn(html.Line + 1, $"HTML block in a Markdown transcript; not read: {Diagnostics.Quote(html.Lines.ToString())}");
@@ -45,19 +45,20 @@ internal static class MarkdownReader
     }
 
     private static bool StartsEntry(SourceText src, HeadingBlock heading) =>
-        Lines(src, heading).FirstOrDefault() is { Text: var t } && EntryStamp.TryMatch(t, out _);
+        Lines(src, heading) is [var first, ..] && EntryStamp.TryMatch(first.Text.ToString(), out _);
 
     /// <summary>The plain text of a leaf block, one entry per source line (1-based), in order. Lines
-    /// come from each inline's source position (the parse keeps precise locations).</summary>
-    private static List<(int Line, string Text)> Lines(SourceText src, LeafBlock block)
+    /// come from each inline's source position (the parse keeps precise locations); inlines arrive in
+    /// document order, so a line's text is appended to the last entry or starts a new one.</summary>
+    private static List<(int Line, StringBuilder Text)> Lines(SourceText src, LeafBlock block)
     {
-        var lines = new SortedDictionary<int, StringBuilder>();
+        var lines = new List<(int Line, StringBuilder Text)>();
         int line = src.LineOf(Math.Max(0, block.Span.Start));
         if (block.Inline is not null) Walk(src, block.Inline, lines, ref line);
-        return [.. lines.Select(kv => (kv.Key, kv.Value.ToString()))];
+        return lines;
     }
 
-    private static void Walk(SourceText src, ContainerInline container, SortedDictionary<int, StringBuilder> lines, ref int line)
+    private static void Walk(SourceText src, ContainerInline container, List<(int Line, StringBuilder Text)> lines, ref int line)
     {
         foreach (var inline in container)
         {
@@ -73,9 +74,11 @@ internal static class MarkdownReader
         }
     }
 
-    private static StringBuilder At(SortedDictionary<int, StringBuilder> lines, int line)
+    private static StringBuilder At(List<(int Line, StringBuilder Text)> lines, int line)
     {
-        if (!lines.TryGetValue(line, out var sb)) lines[line] = sb = new StringBuilder();
-        return sb;
+        // A later inline never starts on an earlier line; should one, its text stays with the line before.
+        if (lines.Count > 0 && lines[^1].Line >= line) return lines[^1].Text;
+        lines.Add((line, new StringBuilder()));
+        return lines[^1].Text;
     }
 }

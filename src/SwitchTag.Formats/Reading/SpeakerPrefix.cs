@@ -11,11 +11,11 @@ internal static class SpeakerPrefix
     private const int MaxWords = 4;
     private const int MaxLength = 40;
 
-    private static readonly HashSet<string> Particles = new(StringComparer.Ordinal)
+    private static readonly HashSet<string>.AlternateLookup<ReadOnlySpan<char>> Particles = new HashSet<string>(StringComparer.Ordinal)
     {
         "de", "del", "della", "der", "den", "di", "da", "do", "dos", "das", "du", "la", "le",
         "van", "von", "ter", "ten", "bin", "ibn", "al", "el", "y", "e", "i", "zu",
-    };
+    }.GetAlternateLookup<ReadOnlySpan<char>>();
 
     /// <param name="line">The line, leading whitespace allowed.</param>
     /// <param name="labelStart">Where the label starts in <paramref name="line"/>.</param>
@@ -42,7 +42,7 @@ internal static class SpeakerPrefix
             var word = label[range];
             if (word.IsEmpty || ++words > MaxWords) return false;
             bool capital = StartsUpper(word) && IsNameWord(word);
-            bool middleOk = char.IsAsciiDigit(word[0]) ? IsDigits(word) : Particles.Contains(word.ToString());
+            bool middleOk = char.IsAsciiDigit(word[0]) ? IsDigits(word) : Particles.Contains(word);
             if (!capital && (words == 1 || !middleOk)) return false;
             lastCapital = capital || (char.IsAsciiDigit(word[0]) && IsDigits(word));
         }

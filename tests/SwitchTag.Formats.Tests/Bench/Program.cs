@@ -27,7 +27,7 @@ var cases = new (string Name, string Path, string Text)[]
     ("text 10 MB single line", "huge.txt", "[00:00:01] ANNA: " + words),
     ("markdown 10 MB single line", "huge.md", "# T\n\n**[00:00:01] ANNA:** " + words),
     ("unknown 10 MB single line", "huge-prose.txt", new string('a', 10_000_000)),
-    ("webvtt 100k cues", "many.vtt", Many(100_000, i => $"{T(i)} --> {T(i + 1)}\n<v Speaker {i % 3}>Cue number {i} with <i>some</i> &amp; <00:00:00.500>words", "WEBVTT\n\n")),
+    ("webvtt 100k cues", "many.vtt", Many(100_000, i => $"{T(i)} --> {T(i + 1)}\n<v Speaker {i % 3}>Cue number {i} with <i>some</i> &amp; <{new Timecode(i * 2000L + 500)}>words", "WEBVTT\n\n")),
     ("srt 100k cues", "many.srt", Many(100_000, i => $"{i + 1}\n{T(i).Replace('.', ',')} --> {T(i + 1).Replace('.', ',')}\n{(i % 4 == 0 ? "ANNA: " : "")}Cue number {i} with some words", "")),
     ("text 100k entries", "many.txt", Many(100_000, i => $"[{T(i)}] {(i % 4 == 0 ? "ANNA: " : "")}Entry number {i} with some words", "", "\n")),
     ("markdown 100k entries", "many.md", "# Interview\n\n" + Many(100_000, i => $"**[{T(i)}] ANNA:** Entry number {i} with *some* words", "")),
