@@ -154,6 +154,16 @@ public class BadInputTests
     }
 
     [Fact]
+    public void Unescaped_comparison_is_dropped_as_a_tag_but_quoted()
+    {
+        // (W3C WebVTT cue text tokenizer, from memory: "<" always opens a tag; "< 3 and 5 >" is a tag
+        // with an empty name, which the spec ignores)
+        var result = TranscriptFile.Parse("cmp.vtt", "WEBVTT\n\n00:01.000 --> 00:02.000\n2 < 3 and 5 > 4");
+        Assert.Equal("2  4", result.Transcript!.Cues[0].Text);
+        Assert.Contains("< 3 and 5 >", Assert.Single(result.Diagnostics).Message);
+    }
+
+    [Fact]
     public void Cue_with_no_text_is_skipped_with_a_warning()
     {
         var result = TranscriptFile.Parse("empty-cue.vtt", "WEBVTT\n\n00:01.000 --> 00:02.000\n<i></i>\n\n00:02.000 --> 00:03.000\nsaid\n");

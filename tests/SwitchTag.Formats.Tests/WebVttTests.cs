@@ -156,6 +156,15 @@ public class WebVttTests
     }
 
     [Fact]
+    public void Blank_lines_before_the_signature_are_tolerated_with_a_warning()
+    {
+        // (W3C WebVTT, from memory: the signature must be the first line; this reader is lenient and says so)
+        var result = TranscriptFile.Parse("late.vtt", "\n\nWEBVTT\n\n00:01.000 --> 00:02.000\nhi");
+        Assert.Equal("hi", Assert.Single(result.Transcript!.Cues).Text);
+        Assert.Equal(1, Assert.Single(result.Diagnostics).At.Line);
+    }
+
+    [Fact]
     public void Utf8_byte_order_mark_is_dropped()
     {
         var bytes = new byte[] { 0xEF, 0xBB, 0xBF }.Concat(System.Text.Encoding.UTF8.GetBytes(Samples.SpecKaraoke)).ToArray();

@@ -116,6 +116,12 @@ internal static class CueTextParser
                 case "rt":
                     plain.Append('(');
                     break;
+                case "c" or "i" or "b" or "u" or "ruby":
+                    break;
+                default:
+                    // The spec drops unknown tags; what they held is quoted so that it is not lost silently.
+                    diagnostics.Warn(tagLine, $"unknown tag <{tag}> in cue text; dropped");
+                    break;
             }
         }
         while (langs.Count > 0)

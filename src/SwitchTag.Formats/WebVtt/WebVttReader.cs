@@ -13,13 +13,17 @@ internal static class WebVttReader
 {
     public static ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
     {
-        if (src.LineCount == 0 || !IsSignature(src.Span(src[0])))
+        int signature = 0;
+        while (signature < src.LineCount && SourceText.IsBlank(src.Span(src[signature]))) signature++;
+        if (signature >= src.LineCount || !IsSignature(src.Span(src[signature])))
         {
             diagnostics.Error(1, "not WebVTT: the first line must be \"WEBVTT\" (optionally followed by a space or tab and header text)");
             return null;
         }
+        if (signature > 0)
+            diagnostics.Warn(1, "blank lines before the WEBVTT signature (WebVTT wants it on the first line); read anyway");
         var cues = new List<Cue>();
-        int i = 1;
+        int i = signature + 1;
         while (i < src.LineCount && !SourceText.IsBlank(src.Span(src[i])) && !src.Span(src[i]).Contains("-->", StringComparison.Ordinal))
             i++;
 
