@@ -3,13 +3,15 @@ using SwitchTag.Lexicon;
 
 // Converts a GeoNames cities dump into the compact gazetteer file and prints what went in, the
 // file's size and how long loading it takes (best of five loads after one warm-up).
-//   GazetteerBuilder --geonames cities1000.txt --corpora DIR --out models/gazetteer.bin.gz
+//   GazetteerBuilder --geonames cities1000.txt --corpora DIR --ner DIR[:DIR...] --out models/gazetteer.bin.gz
+// --corpora: lid/<code>.txt sentences (common words); --ner: folders whose *train* IOB2/CoNLL files
+// give person names. Only training splits are read, so evaluation sets stay unseen.
 //   GazetteerBuilder --measure models/gazetteer.bin.gz
 
 var options = ParseOptions(args);
 if (options is null)
 {
-    Console.Error.WriteLine("usage: GazetteerBuilder --geonames FILE [--corpora DIR] --out FILE | --measure FILE");
+    Console.Error.WriteLine("usage: GazetteerBuilder --geonames FILE [--corpora DIR] [--ner DIR[:DIR...]] --out FILE | --measure FILE");
     return 2;
 }
 
@@ -21,6 +23,12 @@ var output = options["out"];
 var corpora = options.TryGetValue("corpora", out var dir) && Directory.Exists(dir)
     ? Directory.GetFiles(dir, "*.txt").Where(f => Path.GetFileName(f) != "SOURCES.md").Order(StringComparer.Ordinal).ToArray()
     : [];
+var nerFiles = options.TryGetValue("ner", out var nerDirs)
+    ? nerDirs.Split(':').Where(Directory.Exists)
+        .SelectMany(d => Directory.EnumerateFiles(d, "*", SearchOption.AllDirectories))
+        .Where(f => Path.GetFileName(f).Contains("train", StringComparison.Ordinal) && Path.GetExtension(f) is ".iob2" or ".train")
+        .Order(StringComparer.Ordinal).ToArray()
+    : [];
 
 var clock = Stopwatch.StartNew();
 var (rows, problems) = GeoNamesText.Read(geonames);
@@ -31,14 +39,16 @@ if (rows.IsEmpty)
     return 1;
 }
 var (altTotal, altKept) = CountAlternates(geonames);
-var gazetteer = Gazetteer.FromRows(rows, corpora, problems);
+var gazetteer = Gazetteer.FromRows(rows, corpora, nerFiles, problems);
 gazetteer.Save(output);
 Console.WriteLine($"source rows:            {rows.Length}");
 Console.WriteLine($"rows skipped:           {problems.Length}");
 Console.WriteLine($"alternate names:        {altTotal} in source, {altKept} kept by script/length/code filter");
 Console.WriteLine($"names per place (kept): {rows.Sum(r => r.Names.Length)} written forms");
 Console.WriteLine($"distinct folded names:  {gazetteer.NameCount}");
-Console.WriteLine($"common-word names:      {gazetteer.CommonWords.Count} (from {corpora.Length} corpus files)");
+foreach (var caution in new[] { NameCaution.CommonWord, NameCaution.CapitalisedNoun, NameCaution.PersonName })
+    Console.WriteLine($"caution {caution,-15} {gazetteer.Cautions.Count(p => p.Value.HasFlag(caution))} words");
+Console.WriteLine($"caution sources:        {corpora.Length} language corpora, {nerFiles.Length} NER training files");
 Console.WriteLine($"build time:             {clock.Elapsed.TotalSeconds:F1} s");
 return Measure(output) ? 0 : 1;
 

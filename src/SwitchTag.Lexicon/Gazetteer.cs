@@ -16,17 +16,17 @@ public sealed class Gazetteer : INameLexicon
 
     private readonly GazetteerPlace[] _places;
     private readonly NameIndex _index;
-    private readonly IReadOnlyDictionary<string, int> _commonWords;
+    private readonly IReadOnlyDictionary<string, NameCaution> _cautions;
 
-    private Gazetteer(GazetteerPlace[] places, NameIndex index, IReadOnlyDictionary<string, int> commonWords, ImmutableArray<Diagnostic> problems)
+    private Gazetteer(GazetteerPlace[] places, NameIndex index, IReadOnlyDictionary<string, NameCaution> cautions, ImmutableArray<Diagnostic> problems)
     {
         _places = places;
         _index = index;
-        _commonWords = commonWords;
+        _cautions = cautions;
         Problems = problems;
     }
 
-    public static Gazetteer Empty { get; } = new([], NameIndex.Build([]), new Dictionary<string, int>(), []);
+    public static Gazetteer Empty { get; } = new([], NameIndex.Build([]), new Dictionary<string, NameCaution>(), []);
 
     /// <summary>Why the gazetteer is empty or incomplete (file missing, corrupt, rows skipped).</summary>
     public ImmutableArray<Diagnostic> Problems { get; }
@@ -36,8 +36,8 @@ public sealed class Gazetteer : INameLexicon
     /// <summary>Distinct folded names indexed.</summary>
     public int NameCount => _index.Count;
 
-    /// <summary>Lower-case counts of the names that are also common words.</summary>
-    public IReadOnlyDictionary<string, int> CommonWords => _commonWords;
+    /// <summary>Folded words (names, or inflected forms of names) that are risky to tag alone.</summary>
+    public IReadOnlyDictionary<string, NameCaution> Cautions => _cautions;
 
     /// <summary>Reads the compact file written by <see cref="Save"/>. A missing or damaged file gives
     /// an empty gazetteer whose <see cref="Problems"/> says why.</summary>
@@ -45,37 +45,40 @@ public sealed class Gazetteer : INameLexicon
     {
         try
         {
-            var (places, index, common) = GazetteerFile.Read(path);
-            return new Gazetteer(places, index, common, []);
+            var (places, index, cautions) = GazetteerFile.Read(path);
+            return new Gazetteer(places, index, cautions, []);
         }
         catch (Exception e) when (e is IOException or InvalidDataException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
         {
-            return new Gazetteer([], NameIndex.Build([]), new Dictionary<string, int>(), [new Diagnostic(new SourceLine(path, 1), Severity.Error, $"cannot load gazetteer: {e.Message}")]);
+            return new Gazetteer([], NameIndex.Build([]), new Dictionary<string, NameCaution>(), [new Diagnostic(new SourceLine(path, 1), Severity.Error, $"cannot load gazetteer: {e.Message}")]);
         }
     }
 
     /// <summary>Builds the gazetteer straight from a GeoNames dump (cities1000.txt, cities15000.txt),
-    /// keeping the same names the shipped file keeps. <paramref name="commonWordCorpora"/> are
-    /// one-sentence-per-line texts whose lower-case words mark common words (none: no such marks).</summary>
-    public static Gazetteer FromGeoNamesText(string path, IEnumerable<string>? commonWordCorpora = null)
+    /// keeping the same names the shipped file keeps. <paramref name="languageCorpora"/> are
+    /// one-sentence-per-line files named by language code (lid/pl.txt) and <paramref name="nerFiles"/>
+    /// IOB2/CoNLL files; both only mark <see cref="Cautions"/>.</summary>
+    public static Gazetteer FromGeoNamesText(string path, IEnumerable<string>? languageCorpora = null, IEnumerable<string>? nerFiles = null)
     {
         var (rows, problems) = GeoNamesText.Read(path);
-        return FromRows(rows, commonWordCorpora, problems);
+        return FromRows(rows, languageCorpora, nerFiles, problems);
     }
 
-    public static Gazetteer FromRows(IEnumerable<GeoNamesRow> rows, IEnumerable<string>? commonWordCorpora = null, ImmutableArray<Diagnostic> problems = default)
+    public static Gazetteer FromRows(
+        IEnumerable<GeoNamesRow> rows,
+        IEnumerable<string>? languageCorpora = null,
+        IEnumerable<string>? nerFiles = null,
+        ImmutableArray<Diagnostic> problems = default)
     {
         var list = rows.ToList();
         var places = list.Select(r => r.Place).ToArray();
         var index = NameIndex.Build(list.SelectMany((row, id) =>
             row.Names.Select(NameFolding.FoldedWords).Distinct(StringComparer.Ordinal).Select(key => (key, id))));
-        var common = commonWordCorpora is null
-            ? new Dictionary<string, int>()
-            : Lexicon.CommonWords.Count(commonWordCorpora, w => index.IndexOf(w) >= 0);
-        return new Gazetteer(places, index, common, problems.IsDefault ? [] : problems);
+        var cautions = GazetteerCautions.Collect(index, places, languageCorpora ?? [], nerFiles ?? []);
+        return new Gazetteer(places, index, cautions, problems.IsDefault ? [] : problems);
     }
 
-    public void Save(string path) => GazetteerFile.Write(path, _places, _index, _commonWords);
+    public void Save(string path) => GazetteerFile.Write(path, _places, _index, _cautions);
 
     /// <summary>Every place one of whose names is <paramref name="name"/> exactly, folded, or as an
     /// inflected form under the rules of <paramref name="language"/> (for a language without rules,
@@ -106,9 +109,9 @@ public sealed class Gazetteer : INameLexicon
     /// <summary>Capitalised spans of <paramref name="text"/> that are gazetteer names, longest first,
     /// non-overlapping, for a tagger working without a model. Conservative: the first and last word
     /// of a span must be capitalised; a one-word span needs <see cref="MinWordLength"/> letters, must
-    /// not be a stop word (function words, titles, month names), and if the word is common in lower
-    /// case it is skipped at the start of a sentence. Inflection follows <paramref name="language"/>
-    /// only; there is no fallback across rules here.</summary>
+    /// not be a stop word (function words, titles, month names), a person's name or a capitalised
+    /// noun (<see cref="NameCaution"/>), and a common lower-case word is skipped at the start of a
+    /// sentence. Inflection follows <paramref name="language"/> only; no fallback across rules here.</summary>
     public ImmutableArray<NameMatch> Find(string text, string language)
     {
         ArgumentNullException.ThrowIfNull(text);
@@ -121,7 +124,7 @@ public sealed class Gazetteer : INameLexicon
             if (!char.IsLetter(text[words[i].Start]) || !NameWords.StartsUpper(text.AsSpan(words[i].Start))) continue;
             var hits = InflectedMatcher.MatchAt(_index, text, words, i, rule)
                 .Where(h => NameWords.StartsUpper(text.AsSpan(words[i + h.WordCount - 1].Start)))
-                .Where(h => h.WordCount > 1 || AcceptsSingleWord(text, words, i))
+                .Where(h => h.WordCount > 1 || AcceptsSingleWord(text, words, i, _index.KeyAt(h.KeyIndex)))
                 .ToList();
             if (hits.Count == 0) continue;
             int longest = hits.Max(h => h.WordCount);
@@ -136,35 +139,32 @@ public sealed class Gazetteer : INameLexicon
     }
 
     /// <summary>A capitalised word of 3+ letters that is a place name spelled as it stands (folded),
-    /// not a stop word, and not a common lower-case word: safe for a language segmenter to treat
-    /// as belonging to no language.</summary>
+    /// not a stop word, common word or capitalised noun: safe for a language segmenter to treat as
+    /// belonging to no language. Person names that are also places ("David") count as known, even
+    /// where German text capitalises them like nouns.</summary>
     public bool IsKnownName(ReadOnlySpan<char> word)
     {
         word = word.Trim();
         if (word.Length < MinWordLength || !NameWords.StartsUpper(word) || !char.IsLetter(word[0])) return false;
         var folded = NameFolding.Fold(word.ToString());
         return !folded.Contains(' ') && _index.IndexOf(folded) >= 0
-            && !GazetteerStopWords.Words.Contains(folded) && !_commonWords.ContainsKey(folded);
+            && !GazetteerStopWords.Words.Contains(folded)
+            && CautionOf(folded) is var caution
+            && !caution.HasFlag(NameCaution.CommonWord)
+            && (!caution.HasFlag(NameCaution.CapitalisedNoun) || caution.HasFlag(NameCaution.PersonName));
     }
 
     private List<IndexHit> WholeNameHits(string name, List<NameWord> words, StemRule? rule) =>
         InflectedMatcher.MatchAt(_index, name, words, 0, rule).Where(h => h.WordCount == words.Count).ToList();
 
-    private bool AcceptsSingleWord(string text, List<NameWord> words, int i)
+    private bool AcceptsSingleWord(string text, List<NameWord> words, int i, string key)
     {
         var folded = words[i].Folded;
-        if (folded.Length < MinWordLength || GazetteerStopWords.Words.Contains(folded)) return false;
-        return !_commonWords.ContainsKey(folded) || !IsSentenceStart(text, words[i].Start);
+        if (folded.Length < MinWordLength || GazetteerStopWords.Words.Contains(folded) || GazetteerStopWords.Words.Contains(key)) return false;
+        var caution = CautionOf(folded) | CautionOf(key);
+        if ((caution & (NameCaution.PersonName | NameCaution.CapitalisedNoun)) != 0) return false;
+        return (caution & NameCaution.CommonWord) == 0 || !TextPosition.IsSentenceStart(text, words[i].Start);
     }
 
-    private static bool IsSentenceStart(string text, int start)
-    {
-        for (int j = start - 1; j >= 0; j--)
-        {
-            char c = text[j];
-            if (char.IsWhiteSpace(c) || c is '"' or '\'' or '“' or '”' or '„' or '«' or '»' or '(' or '[' or '‘' or '’') continue;
-            return c is '.' or '!' or '?' or '…' or ':' or ';' or '-' or '–' or '—';
-        }
-        return true;
-    }
+    private NameCaution CautionOf(string folded) => _cautions.GetValueOrDefault(folded);
 }

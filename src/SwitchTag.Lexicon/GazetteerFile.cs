@@ -5,13 +5,13 @@ namespace SwitchTag.Lexicon;
 
 /// <summary>The compact gazetteer file: a gzip stream holding the places, the sorted folded names
 /// (front-coded: each key stores only what differs from the one before) with the places each names,
-/// and the common words that are also place names. Integers are 7-bit encoded.</summary>
+/// and the words with a <see cref="NameCaution"/>. Integers are 7-bit encoded.</summary>
 internal static class GazetteerFile
 {
     private const string Magic = "SWITCHTAG-GAZETTEER";
     private const int Version = 1;
 
-    public static void Write(string path, IReadOnlyList<GazetteerPlace> places, NameIndex index, IReadOnlyDictionary<string, int> commonWords)
+    public static void Write(string path, IReadOnlyList<GazetteerPlace> places, NameIndex index, IReadOnlyDictionary<string, NameCaution> cautions)
     {
         Directory.CreateDirectory(Path.GetDirectoryName(Path.GetFullPath(path))!);
         using var file = File.Create(path);
@@ -52,16 +52,16 @@ internal static class GazetteerFile
             previous = key;
         }
 
-        w.Write7BitEncodedInt(commonWords.Count);
-        foreach (var (word, count) in commonWords.OrderBy(p => p.Key, StringComparer.Ordinal))
+        w.Write7BitEncodedInt(cautions.Count);
+        foreach (var (word, caution) in cautions.OrderBy(p => p.Key, StringComparer.Ordinal))
         {
             w.Write(word);
-            w.Write7BitEncodedInt(count);
+            w.Write((byte)caution);
         }
     }
 
     /// <exception cref="InvalidDataException">The file is not a gazetteer file of this version or is cut short.</exception>
-    public static (GazetteerPlace[] Places, NameIndex Index, Dictionary<string, int> CommonWords) Read(string path)
+    public static (GazetteerPlace[] Places, NameIndex Index, Dictionary<string, NameCaution> Cautions) Read(string path)
     {
         using var file = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1 << 16);
         using var gzip = new GZipStream(file, CompressionMode.Decompress);
@@ -104,11 +104,11 @@ internal static class GazetteerFile
             }
             starts[keyCount] = ids.Count;
 
-            int commonCount = r.Read7BitEncodedInt();
-            var common = new Dictionary<string, int>(commonCount, StringComparer.Ordinal);
-            for (int i = 0; i < commonCount; i++) common[r.ReadString()] = r.Read7BitEncodedInt();
+            int cautionCount = r.Read7BitEncodedInt();
+            var cautions = new Dictionary<string, NameCaution>(cautionCount, StringComparer.Ordinal);
+            for (int i = 0; i < cautionCount; i++) cautions[r.ReadString()] = (NameCaution)r.ReadByte();
 
-            return (places, NameIndex.FromSorted(keys, starts, [.. ids]), common);
+            return (places, NameIndex.FromSorted(keys, starts, [.. ids]), cautions);
         }
         catch (EndOfStreamException e)
         {

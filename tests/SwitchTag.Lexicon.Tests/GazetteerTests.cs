@@ -16,7 +16,7 @@ public class GazetteerTests(GeoNamesFixture data) : IClassFixture<GeoNamesFixtur
         Assert.Empty(data.Loaded.Problems);
         Assert.Equal(data.Built.Places, data.Loaded.Places);
         Assert.Equal(data.Built.NameCount, data.Loaded.NameCount);
-        Assert.Equal(data.Built.CommonWords, data.Loaded.CommonWords);
+        Assert.Equal(data.Built.Cautions, data.Loaded.Cautions);
     }
 
     [Theory]
@@ -112,11 +112,22 @@ public class GazetteerTests(GeoNamesFixture data) : IClassFixture<GeoNamesFixtur
         // "Of" (Turkey) and "Nice" (France) are GeoNames places; "nice" is a common English word.
         Assert.Contains(_g.Lookup("Of", "en"), p => p.Country == "TR");
         Assert.Contains(_g.Lookup("Nice", "en"), p => p.Country == "FR");
-        Assert.True(_g.CommonWords.ContainsKey("nice"));
+        Assert.True(_g.Cautions["nice"].HasFlag(NameCaution.CommonWord));
         Assert.Empty(_g.Find("Nice to meet you. Of course.", "en"));
         Assert.Empty(_g.Find("we went to paris", "en"));
         const string text = "We spent a week in Nice.";
         Assert.Equal("Nice", Assert.Single(_g.Find(text, "en")).Canonical);
+    }
+
+    [Fact]
+    public void Person_names_that_are_also_places_are_not_tagged_alone()
+    {
+        // David (Panama) is a GeoNames city; "David" is tagged PER in the NER training splits.
+        Assert.Contains(_g.Lookup("David", "en"), p => p.Country == "PA");
+        Assert.True(_g.Cautions["david"].HasFlag(NameCaution.PersonName));
+        const string text = "Ruth and David went to Tel Aviv.";
+        Assert.Equal(["Tel Aviv"], _g.Find(text, "en").Select(m => text[m.CharStart..m.CharEnd]));
+        Assert.True(_g.IsKnownName("David")); // still a name, whatever the language around it
     }
 
     [Fact]

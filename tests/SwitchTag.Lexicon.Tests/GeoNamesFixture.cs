@@ -6,8 +6,9 @@ namespace SwitchTag.Lexicon.Tests;
 
 /// <summary>A gazetteer built from the shared GeoNames extract (../shared/data/gazetteer/
 /// geonames-cities15000.txt, CC BY), written to the compact file format and read back through
-/// <see cref="Gazetteer.Load"/>: the same path the shipped file takes. Common words come from the
-/// shared Universal Dependencies sentences (../shared/data/lid).</summary>
+/// <see cref="Gazetteer.Load"/>: the same path the shipped file takes. Cautions come from the shared
+/// Universal Dependencies sentences (../shared/data/lid) and the training splits of Universal NER
+/// and the Broad Twitter Corpus (../shared/data/ner/uner, ../shared/data/ner-extra/btc).</summary>
 public sealed class GeoNamesFixture : IDisposable
 {
     public const string GeoNamesFile = "gazetteer/geonames-cities15000.txt";
@@ -18,7 +19,9 @@ public sealed class GeoNamesFixture : IDisposable
     {
         var source = TestPaths.RequireData(GeoNamesFile);
         var corpora = Directory.GetFiles(TestPaths.RequireData("lid"), "*.txt");
-        Built = Gazetteer.FromGeoNamesText(source, corpora);
+        var ner = Directory.GetFiles(TestPaths.RequireData("ner/uner"), "*-train.iob2", SearchOption.AllDirectories)
+            .Append(TestPaths.RequireData("ner-extra/btc/btc.train"));
+        Built = Gazetteer.FromGeoNamesText(source, corpora, ner);
         Built.Save(_file);
         Loaded = Gazetteer.Load(_file);
     }

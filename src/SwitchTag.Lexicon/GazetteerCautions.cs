@@ -1,0 +1,97 @@
+namespace SwitchTag.Lexicon;
+
+/// <summary>Collects <see cref="NameCaution"/>s for gazetteer names from text corpora: one-sentence-
+/// per-line files named by language code (lid/&lt;code&gt;.txt) and NER files in IOB2/CoNLL columns.</summary>
+public static class GazetteerCautions
+{
+    private const int MinLowerCase = 3;
+    private const int MinCapitalisedNoun = 2;
+    private const int MinPerson = 2;
+
+    /// <summary>Places this populous keep their name even if it is also a capitalised noun (Essen).</summary>
+    private const long NounPopulationLimit = 100_000;
+
+    private static readonly HashSet<string> NounCapitalising = ["de", "lb"];
+
+    public static Dictionary<string, NameCaution> Collect(
+        NameIndex index,
+        IReadOnlyList<GazetteerPlace> places,
+        IEnumerable<string> languageCorpora,
+        IEnumerable<string> nerFiles)
+    {
+        var cautions = new Dictionary<string, NameCaution>(StringComparer.Ordinal);
+        foreach (var file in languageCorpora)
+            FromCorpus(file, index, places, cautions);
+        FromNer(nerFiles, index, cautions);
+        return cautions;
+    }
+
+    private static void FromCorpus(string file, NameIndex index, IReadOnlyList<GazetteerPlace> places, Dictionary<string, NameCaution> cautions)
+    {
+        var language = Path.GetFileNameWithoutExtension(file);
+        var rule = StemRules.For(language);
+        var lower = new Dictionary<string, int>(StringComparer.Ordinal);
+        var capitalisedMid = new Dictionary<string, int>(StringComparer.Ordinal);
+        bool nouns = NounCapitalising.Contains(language);
+        foreach (var line in File.ReadLines(file))
+        {
+            var words = NameWords.Split(line);
+            for (int k = 0; k < words.Count; k++)
+            {
+                char first = line[words[k].Start];
+                if (char.IsLower(first)) Increment(lower, words[k].Folded);
+                else if (nouns && k > 0 && char.IsUpper(first) && !TextPosition.IsSentenceStart(line, words[k].Start))
+                    Increment(capitalisedMid, words[k].Folded);
+            }
+        }
+        foreach (var (word, count) in lower)
+            if (count >= MinLowerCase && PlacesNamed(word, index, rule).Any())
+                Add(cautions, word, NameCaution.CommonWord);
+        foreach (var (word, count) in capitalisedMid)
+        {
+            if (count < MinCapitalisedNoun) continue;
+            var named = PlacesNamed(word, index, rule).ToList();
+            if (named.Count > 0 && named.All(id => places[id].Population < NounPopulationLimit))
+                Add(cautions, word, NameCaution.CapitalisedNoun);
+        }
+    }
+
+    private static void FromNer(IEnumerable<string> files, NameIndex index, Dictionary<string, NameCaution> cautions)
+    {
+        var person = new Dictionary<string, int>(StringComparer.Ordinal);
+        var place = new Dictionary<string, int>(StringComparer.Ordinal);
+        foreach (var file in files)
+            foreach (var line in File.ReadLines(file))
+            {
+                if (line.Length == 0 || line[0] == '#') continue;
+                var columns = line.Split('\t');
+                if (columns.Length < 2) columns = line.Split(' ');
+                if (columns.Length < 2) continue;
+                bool indexed = columns[0].All(char.IsAsciiDigit) && columns.Length >= 3;
+                var token = indexed ? columns[1] : columns[0];
+                var tag = indexed ? columns[2] : columns[^1];
+                var folded = NameFolding.Fold(token);
+                if (tag.EndsWith("-PER", StringComparison.Ordinal)) Increment(person, folded);
+                else if (tag.EndsWith("-LOC", StringComparison.Ordinal)) Increment(place, folded);
+            }
+        foreach (var (word, count) in person)
+            if (count >= MinPerson && count > place.GetValueOrDefault(word) && index.IndexOf(word) >= 0)
+                Add(cautions, word, NameCaution.PersonName);
+    }
+
+    /// <summary>Places a one-word name can be, under the corpus language's rule.</summary>
+    private static IEnumerable<int> PlacesNamed(string word, NameIndex index, StemRule? rule)
+    {
+        var words = new List<NameWord> { new(0, word.Length, word) };
+        foreach (var hit in InflectedMatcher.MatchAt(index, word, words, 0, rule))
+            if (hit.WordCount == 1)
+                foreach (int id in index.IdsAt(hit.KeyIndex).ToArray())
+                    yield return id;
+    }
+
+    private static void Increment(Dictionary<string, int> counts, string word) =>
+        counts[word] = counts.GetValueOrDefault(word) + 1;
+
+    private static void Add(Dictionary<string, NameCaution> cautions, string word, NameCaution caution) =>
+        cautions[word] = cautions.GetValueOrDefault(word) | caution;
+}

