@@ -53,4 +53,38 @@ public class MarkdownTests
         var t = Reads.Accepted("setext.md", "[00:00:01] A: one\n---\n\n[00:00:05] A: two\n", TranscriptFormat.Markdown);
         Assert.Equal(["one", "two"], t.Cues.Select(c => c.Text));
     }
+
+    [Theory]
+    [InlineData("\n")]
+    [InlineData("\r\n")]
+    [InlineData("\r")]
+    public void Quotes_nested_lists_code_and_html_blocks_keep_their_lines(string newline)
+    {
+        string text = string.Join(newline,
+            "# Tape 1",
+            "",
+            "> [00:00:01] ANNA: quoted <span>entry</span>",
+            "",
+            "1. [00:00:05] BEN: numbered",
+            "   - [00:00:09] ANNA: nested",
+            "",
+            "        indented code line",
+            "",
+            "<div>",
+            "an html block",
+            "</div>",
+            "",
+            "[00:00:20] BEN: last",
+            "",
+            "[00:00:25]");
+        var result = TranscriptFile.Parse("blocks.md", text);
+        var t = result.Transcript!;
+        Assert.Equal(["quoted entry", "numbered", "nested\nindented code line", "last"], t.Cues.Select(c => c.Text));
+        Assert.Equal([3, 5, 6, 14], t.Cues.Select(c => c.At.Line));
+        Assert.Equal(Timecode.FromSeconds(25), t.Cues[^1].Time.End);
+        var w = Assert.Single(result.Diagnostics);
+        Assert.Equal(10, w.At.Line);
+        Assert.Contains("an html block", w.Message);
+        InvariantTests.CheckCues(t);
+    }
 }
