@@ -1,22 +1,27 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Stages;
 
 namespace SwitchTag.Lexicon;
 
 /// <summary>A curated list of people, places and organisations (CSV: <c>label,name,variants</c>),
 /// matched in text with inflection-aware rules. An entry's label is final: a name listed as a
 /// person is only ever found as a person.</summary>
-public sealed class AuthorityList
+public sealed class AuthorityList : INameLexicon
 {
     private static readonly string[] Header = ["label", "name", "variants"];
 
     private readonly NameIndex _index;
+    private readonly HashSet<string> _words;
 
     private AuthorityList(ImmutableArray<AuthorityEntry> entries)
     {
         Entries = entries;
         _index = NameIndex.Build(entries.SelectMany((e, id) =>
             e.Variants.Prepend(e.Name).Select(form => (NameFolding.FoldedWords(form), id))));
+        _words = new HashSet<string>(
+            Enumerable.Range(0, _index.Count).SelectMany(k => _index.KeyAt(k).Split(' ')).Where(w => w.Length >= 2),
+            StringComparer.Ordinal);
     }
 
     public static AuthorityList Empty { get; } = new([]);
@@ -92,6 +97,14 @@ public sealed class AuthorityList
             candidates.Add(new NameMatch(words[i].Start, words[i + hit.WordCount - 1].End, entry.Label, entry.Name, MentionSource.Authority, entry));
         }
         return NameMatchSelection.LongestFirst(candidates);
+    }
+
+    /// <summary>A capitalised word that is one word of a listed name as written (folded): "Kowalczyk"
+    /// of "Anna Kowalczyk". Inflected forms are not known names: their ending is evidence of a language.</summary>
+    public bool IsKnownName(ReadOnlySpan<char> word)
+    {
+        word = word.Trim();
+        return word.Length >= 2 && NameWords.StartsUpper(word) && _words.Contains(NameFolding.Fold(word.ToString()));
     }
 
     private IndexHit? BestHit(string text, List<NameWord> words, int i, StemRule? rule)

@@ -65,6 +65,13 @@ public static class NameFolding
         return rules.Any(r => formWords.Zip(nameWords).All(p => InflectedMatcher.WordMeets(p.First.Folded, p.Second.Folded, r)));
     }
 
+    /// <summary>Whether two mentions, each in its own language, can be the same name: equal keys, or
+    /// either an inflected form of the other ("Anny" in Polish and "Anna" in English).</summary>
+    public static bool SameName(string a, string languageA, string b, string languageB) =>
+        Key(a, languageA) == Key(b, languageB)
+        || IsInflectionOf(a, b, languageA)
+        || IsInflectionOf(b, a, languageB);
+
     /// <summary>Folded words of a name joined by one space: the form the gazetteer and authority
     /// lists are indexed by ("Saint-Étienne" → "saint etienne").</summary>
     public static string FoldedWords(string name)

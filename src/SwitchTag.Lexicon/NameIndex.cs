@@ -45,12 +45,6 @@ public sealed class NameIndex
 
     public ReadOnlySpan<int> IdsAt(int index) => _ids.AsSpan(_starts[index], _starts[index + 1] - _starts[index]);
 
-    internal ReadOnlySpan<string> Keys => _keys;
-
-    internal ReadOnlySpan<int> Starts => _starts;
-
-    internal ReadOnlySpan<int> AllIds => _ids;
-
     /// <summary>Index of the key, or -1.</summary>
     public int IndexOf(string key)
     {

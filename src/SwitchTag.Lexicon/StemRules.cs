@@ -99,10 +99,6 @@ public static class StemRules
         return ByCode.GetValueOrDefault(code.ToLowerInvariant());
     }
 
-    /// <summary>Whether a language has no rule of its own (en, und, unknown): matching against a
-    /// list then falls back to trying every rule.</summary>
-    public static bool IsUninflected(string? language) => For(language) is null;
-
     private static IEnumerable<string> Replacements(string stem, params (string From, string To)[] changes)
     {
         foreach (var (from, to) in changes)

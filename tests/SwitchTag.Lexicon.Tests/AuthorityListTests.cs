@@ -114,4 +114,26 @@ public class AuthorityListTests
         Assert.Equal("list.csv:3", Assert.Single(problems).At.ToString());
         Assert.Equal(NameLabel.PER, Assert.Single(list.Find("Jordan", "en")).Label);
     }
+
+    [Fact]
+    public void IsKnownName_knows_words_of_listed_names_as_written()
+    {
+        var list = Parse("label,name,variants\nPER,Anna Kowalczyk,\nLOC,Jedwabne,\n");
+        Assert.True(list.IsKnownName("Kowalczyk"));
+        Assert.True(list.IsKnownName("Jedwabne"));
+        Assert.False(list.IsKnownName("kowalczyk"));   // not capitalised
+        Assert.False(list.IsKnownName("Kowalczyka"));  // an inflected form carries its language
+        Assert.False(list.IsKnownName("Warszawa"));
+    }
+
+    [Fact]
+    public void Union_of_lexicons_knows_what_either_knows()
+    {
+        var people = Parse("label,name,variants\nPER,Anna Kowalczyk,\n");
+        var places = Parse("label,name,variants\nLOC,Jedwabne,\n");
+        var union = new NameLexiconUnion(people, places);
+        Assert.True(union.IsKnownName("Kowalczyk"));
+        Assert.True(union.IsKnownName("Jedwabne"));
+        Assert.False(union.IsKnownName("Jedwabnem"));
+    }
 }

@@ -128,4 +128,14 @@ public class StemmingTests
         Assert.Equal(NameFolding.Stem("Warszawie", "pl"), NameFolding.Stem("Warszawie", "pl-PL"));
         Assert.Equal(NameFolding.Stem("Budapesten", "hu"), NameFolding.Stem("Budapesten", "hun"));
     }
+
+    [Fact]
+    public void SameName_links_mentions_across_languages()
+    {
+        // (from memory) Polish genitive of Anna is Anny; of Kowalczyk, Kowalczyka.
+        Assert.True(NameFolding.SameName("Anny", "pl", "Anna", "en"));
+        Assert.True(NameFolding.SameName("Anna", "en", "Anny", "pl"));
+        Assert.True(NameFolding.SameName("Kowalczyka", "pl", "Kowalczyk", "en"));
+        Assert.False(NameFolding.SameName("Anna", "en", "Hanna", "pl"));
+    }
 }
