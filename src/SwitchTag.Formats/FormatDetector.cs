@@ -13,7 +13,7 @@ public static class FormatDetector
 
     public static TranscriptFormat? Detect(string text, string? extensionHint)
     {
-        var s = text.AsSpan();
+        var s = (text ?? "").AsSpan();
         if (s.Length > 0 && s[0] == '\uFEFF') s = s[1..];
         var lines = new LineScanner(s);
         ReadOnlySpan<char> first = default;

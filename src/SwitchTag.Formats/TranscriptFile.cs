@@ -42,6 +42,7 @@ public static class TranscriptFile
     /// <summary>Parses text already in memory; the recorded SHA-256 is of its UTF-8 encoding.</summary>
     public static ReadResult Parse(string path, string text, TranscriptFormat? forced = null)
     {
+        text ??= "";
         if (text.Length > 0 && text[0] == '\uFEFF') text = text[1..];
         return ParseCore(path, text, forced, Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text))));
     }

@@ -8,6 +8,7 @@ public static class WebVttText
 {
     public static string Escape(string plain)
     {
+        if (plain is null) return "";
         if (plain.AsSpan().IndexOfAny('&', '<', '>') < 0) return plain;
         var sb = new StringBuilder(plain.Length + 16);
         foreach (char c in plain)
