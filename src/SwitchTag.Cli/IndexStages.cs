@@ -41,11 +41,26 @@ public sealed class IndexStages
             authority = list;
         }
 
+        CodeSwitchSegmenter segmenter;
+        try { segmenter = CodeSwitchSegmenter.Load(langid, gazetteer); }
+        catch (Exception e) when (e is IOException or InvalidDataException or UnauthorizedAccessException or EndOfStreamException)
+        {
+            error = $"cannot load the language model {langid}: {e.Message}";
+            return null;
+        }
+
         NerModel? model = null;
         if (mode == TaggingMode.RulesThenModel)
         {
             if (File.Exists(ModelLocator.PathOf("ner.onnx")))
-                model = NerModel.Shared(ModelLocator.ModelsDirectory);
+            {
+                try { model = NerModel.Shared(ModelLocator.ModelsDirectory); }
+                catch (Exception e) when (e is IOException or InvalidDataException or UnauthorizedAccessException or Microsoft.ML.OnnxRuntime.OnnxRuntimeException or KeyNotFoundException or System.Text.Json.JsonException)
+                {
+                    error = $"cannot load the name model in {ModelLocator.ModelsDirectory}: {e.Message}";
+                    return null;
+                }
+            }
             else
             {
                 notes.Add(new Diagnostic(new SourceLine(ModelLocator.PathOf("ner.onnx"), 0), Severity.Warning,
@@ -56,7 +71,7 @@ public sealed class IndexStages
 
         return new IndexStages
         {
-            Languages = CodeSwitchSegmenter.Load(langid, gazetteer),
+            Languages = segmenter,
             Names = new NameTagger(model, authority, gazetteer, mode),
             Lexicon = new IndexLexicon(gazetteer),
             Notes = notes.ToImmutable(),

@@ -3,7 +3,9 @@ using System.Text;
 namespace SwitchTag.Output;
 
 /// <summary>Writes a file so that readers see either the old or the new content, never half of it:
-/// the bytes go to a temporary file beside the target, which is then renamed over it.</summary>
+/// the bytes go to a temporary file beside the target, which is then renamed over it (rename within one
+/// folder is atomic on POSIX file systems). No fsync per file: it cost more than all the rest of
+/// writing, and a crash loses at most a run that can be repeated.</summary>
 public static class AtomicFile
 {
     private static readonly UTF8Encoding Utf8NoBom = new(encoderShouldEmitUTF8Identifier: false);
@@ -19,7 +21,6 @@ public static class AtomicFile
             using (var stream = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None))
             {
                 write(stream);
-                stream.Flush(flushToDisk: true);
             }
             File.Move(temp, full, overwrite: true);
         }
