@@ -6,7 +6,8 @@ using SwitchTag.Lexicon;
 //   GazetteerBuilder --geonames cities1000.txt --corpora DIR --ner DIR[:DIR...] --out models/gazetteer.bin.gz
 // --corpora: lid/<code>.txt sentences (common words); --ner: folders whose *train* IOB2/CoNLL files
 // give person names. Only training splits are read, so evaluation sets stay unseen.
-//   GazetteerBuilder --measure models/gazetteer.bin.gz
+//   GazetteerBuilder --measure models/gazetteer.bin.gz [--text lid/pl.txt:lid/en.txt]
+// --text: also times Find and Lookup over every line of each file (language = file name).
 
 var options = ParseOptions(args);
 if (options is null)
@@ -16,7 +17,7 @@ if (options is null)
 }
 
 if (options.TryGetValue("measure", out var measured))
-    return Measure(measured) ? 0 : 1;
+    return Measure(measured) && MeasureFind(measured, options.GetValueOrDefault("text")) ? 0 : 1;
 
 var geonames = options["geonames"];
 var output = options["out"];
@@ -73,6 +74,35 @@ static bool Measure(string path)
     Console.WriteLine($"places:                 {first.Places.Count}");
     Console.WriteLine($"distinct folded names:  {first.NameCount}");
     Console.WriteLine($"load time:              best {times.Min():F0} ms, median {times.Order().ElementAt(2):F0} ms of 5 (after 1 warm-up)");
+    return true;
+}
+
+static bool MeasureFind(string path, string? textFiles)
+{
+    if (textFiles is null) return true;
+    var g = Gazetteer.Load(path);
+    foreach (var file in textFiles.Split(':'))
+    {
+        var language = Path.GetFileNameWithoutExtension(file);
+        var lines = File.ReadAllLines(file);
+        int matches = 0;
+        var clock = Stopwatch.StartNew();
+        var spans = new List<string>();
+        foreach (var line in lines)
+            foreach (var m in g.Find(line, language))
+            {
+                matches++;
+                spans.Add(line[m.CharStart..m.CharEnd]);
+            }
+        double findSeconds = clock.Elapsed.TotalSeconds;
+        long chars = lines.Sum(l => (long)l.Length);
+        clock.Restart();
+        int found = spans.Count(s => g.Lookup(s, language).Count > 0);
+        double lookupSeconds = clock.Elapsed.TotalSeconds;
+        Console.WriteLine($"find {language}: {lines.Length} lines, {chars} chars in {findSeconds:F2} s " +
+                          $"({chars / findSeconds / 1000:F0} k chars/s), {matches} spans; " +
+                          $"{spans.Count} lookups in {lookupSeconds * 1000:F0} ms ({found} with candidates)");
+    }
     return true;
 }
 

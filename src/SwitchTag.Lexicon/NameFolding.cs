@@ -14,7 +14,7 @@ public static class NameFolding
     {
         ArgumentNullException.ThrowIfNull(text);
         if (IsFoldedAscii(text)) return text;
-        var decomposed = text.Normalize(NormalizationForm.FormKD);
+        var decomposed = WithoutLoneSurrogates(text).Normalize(NormalizationForm.FormKD);
         var sb = new StringBuilder(decomposed.Length);
         for (int i = 0; i < decomposed.Length; i++)
         {
@@ -78,6 +78,21 @@ public static class NameFolding
     {
         ArgumentNullException.ThrowIfNull(name);
         return string.Join(' ', NameWords.Split(Fold(name)).Select(w => w.Folded));
+    }
+
+    /// <summary>Normalisation rejects broken UTF-16; a lone surrogate becomes U+FFFD (same length,
+    /// so word offsets stay valid).</summary>
+    private static string WithoutLoneSurrogates(string text)
+    {
+        char[]? fixedText = null;
+        for (int i = 0; i < text.Length; i++)
+        {
+            if (char.IsSurrogatePair(text, i)) { i++; continue; }
+            if (!char.IsSurrogate(text[i])) continue;
+            fixedText ??= text.ToCharArray();
+            fixedText[i] = '\uFFFD';
+        }
+        return fixedText is null ? text : new string(fixedText);
     }
 
     private static bool IsFoldedAscii(string text)

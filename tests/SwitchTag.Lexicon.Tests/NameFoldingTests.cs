@@ -36,4 +36,13 @@ public class NameFoldingTests
         Assert.Equal("l viv", NameFolding.FoldedWords("L’viv"));
         Assert.Equal("st petersburg", NameFolding.FoldedWords("St. Petersburg"));
     }
+
+    [Fact]
+    public void Broken_utf16_does_not_throw()
+    {
+        // A lone high surrogate (U+D800) is not valid UTF-16 (Unicode §3.9); it is replaced by U+FFFD.
+        Assert.Equal("a\uFFFDb", NameFolding.Fold("a\uD800b"));
+        var (list, _) = AuthorityList.Parse("label,name,variants\nLOC,Kraków,\n", "list.csv");
+        Assert.Single(list.Find("\uDC00Kraków \uD800", "pl"));
+    }
 }
