@@ -5,14 +5,15 @@ using SwitchTag.Lexicon;
 // file's size and how long loading it takes (best of five loads after one warm-up).
 //   GazetteerBuilder --geonames cities1000.txt --corpora DIR --ner DIR[:DIR...] --out models/gazetteer.bin.gz
 // --corpora: lid/<code>.txt sentences (common words); --ner: folders whose *train* IOB2/CoNLL files
-// give person names. Only training splits are read, so evaluation sets stay unseen.
+// give person names (only training splits are read, so evaluation sets stay unseen); --countries:
+// the folder of the npm package i18n-iso-countries (country names in many locales).
 //   GazetteerBuilder --measure models/gazetteer.bin.gz [--text lid/pl.txt:lid/en.txt]
 // --text: also times Find and Lookup over every line of each file (language = file name).
 
 var options = ParseOptions(args);
 if (options is null)
 {
-    Console.Error.WriteLine("usage: GazetteerBuilder --geonames FILE [--corpora DIR] [--ner DIR[:DIR...]] --out FILE | --measure FILE");
+    Console.Error.WriteLine("usage: GazetteerBuilder --geonames FILE [--corpora DIR] [--ner DIR[:DIR...]] [--countries DIR] --out FILE | --measure FILE");
     return 2;
 }
 
@@ -40,12 +41,16 @@ if (rows.IsEmpty)
     return 1;
 }
 var (altTotal, altKept) = CountAlternates(geonames);
-var gazetteer = Gazetteer.FromRows(rows, corpora, nerFiles, problems);
+var countries = options.TryGetValue("countries", out var countriesDir) && Directory.Exists(countriesDir)
+    ? CountryRows.Build(countriesDir, rows)
+    : [];
+var gazetteer = Gazetteer.FromRows(rows.Concat(countries), corpora, nerFiles, problems);
 gazetteer.Save(output);
 Console.WriteLine($"source rows:            {rows.Length}");
+Console.WriteLine($"countries added:        {countries.Count} ({countries.Sum(c => c.Names.Length)} names)");
 Console.WriteLine($"rows skipped:           {problems.Length}");
 Console.WriteLine($"alternate names:        {altTotal} in source, {altKept} kept by script/length/code filter");
-Console.WriteLine($"names per place (kept): {rows.Sum(r => r.Names.Length)} written forms");
+Console.WriteLine($"city names kept:        {rows.Sum(r => r.Names.Length)} written forms (main, ASCII and alternate)");
 Console.WriteLine($"distinct folded names:  {gazetteer.NameCount}");
 foreach (var caution in new[] { NameCaution.CommonWord, NameCaution.CapitalisedNoun, NameCaution.PersonName })
     Console.WriteLine($"caution {caution,-15} {gazetteer.Cautions.Count(p => p.Value.HasFlag(caution))} words");

@@ -7,7 +7,10 @@ public static class ScriptFilter
 {
     public const int MaxNameLength = 40;
 
-    public static bool Keep(string name)
+    public static bool Keep(string name) => InKeptScripts(name) && !IsCode(name);
+
+    /// <summary>Has letters, all of them Latin, Cyrillic, Greek or Hebrew, and is not too long.</summary>
+    public static bool InKeptScripts(string name)
     {
         if (name.Length is 0 or > MaxNameLength) return false;
         bool anyLetter = false;
@@ -17,7 +20,7 @@ public static class ScriptFilter
             anyLetter = true;
             if (!IsKeptScript(c)) return false;
         }
-        return anyLetter && !IsCode(name);
+        return anyLetter;
     }
 
     /// <summary>"WAW", "LWO": two to four capital ASCII letters are codes, not names.</summary>

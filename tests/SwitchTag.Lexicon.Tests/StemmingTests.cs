@@ -81,6 +81,9 @@ public class StemmingTests
     // loc. Києві; Hungarian Debrecen inessive Debrecenben, Budapest instrumental Budapesttel.
     [Theory]
     [InlineData("Pradze", "Praga", "pl")]
+    [InlineData("Polsce", "Polska", "pl")]      // (from memory) loc. of Polska
+    [InlineData("Niemczech", "Niemcy", "pl")]   // (from memory) loc. of the plural name Niemcy
+    [InlineData("Węgrzech", "Węgry", "pl")]     // (from memory) loc. of Węgry
     [InlineData("Wiednia", "Wiedeń", "pl")]
     [InlineData("Praze", "Praha", "cs")]
     [InlineData("Plzně", "Plzeň", "cs")]
