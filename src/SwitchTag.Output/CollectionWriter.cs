@@ -94,10 +94,10 @@ public static class CollectionWriter
     {
         var md = new StringBuilder("# Collection index\n\n> ").Append(ReportMarkdownWriter.Caution).Append("\n\n");
         md.Append("Interviews: ").Append(string.Join(", ", entries.Select(e => MarkdownText.Escape(e.Interview)))).Append("\n\n");
-        md.Append("| Heading | Label | Place | Interview | Times |\n| --- | --- | --- | --- | --- |\n");
+        var table = new MarkdownTable(md, "| Heading | Label | Place | Interview | Times |", "| --- | --- | --- | --- | --- |");
         foreach (var row in Rows(entries))
             foreach (var (entry, heading) in row.Uses)
-                md.Append("| **").Append(MarkdownText.Escape(row.Name)).Append("** | ").Append(row.Label).Append(" | ")
+                table.Row().Append("| **").Append(MarkdownText.Escape(row.Name)).Append("** | ").Append(row.Label).Append(" | ")
                   .Append(row.Place is null ? "" : MarkdownText.Escape(row.Place.Country)).Append(" | ")
                   .Append(MarkdownText.Escape(entry.Interview)).Append(" | ")
                   .Append(string.Join(", ", heading.Times.Select(t => t.ToString()))).Append(" |\n");

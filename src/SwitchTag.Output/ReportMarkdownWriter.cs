@@ -38,9 +38,10 @@ public static class ReportMarkdownWriter
 
     private static void Languages(StringBuilder md, InterviewIndex index)
     {
-        md.Append("## Languages\n\n| Language | Time (s) | Words |\n| --- | ---: | ---: |\n");
+        md.Append("## Languages\n\n");
+        var table = new MarkdownTable(md, "| Language | Time (s) | Words |", "| --- | ---: | ---: |");
         foreach (var s in LanguageStatistics.Compute(index.Turns, index.Spans))
-            md.Append("| ").Append(MarkdownText.Escape(s.Language)).Append(" | ")
+            table.Row().Append("| ").Append(MarkdownText.Escape(s.Language)).Append(" | ")
               .Append(s.Seconds.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)).Append(" | ").Append(s.Words).Append(" |\n");
         md.Append('\n');
     }
@@ -50,12 +51,12 @@ public static class ReportMarkdownWriter
         var headings = index.Headings.Where(h => h.Label == label).ToList();
         md.Append("## ").Append(title).Append("\n\n");
         if (headings.Count == 0) { md.Append("None found.\n\n"); return; }
-        md.Append("| Heading | Variants | Mentions | First | Times | Speakers | Place | Confidence |\n")
-          .Append("| --- | --- | ---: | --- | --- | --- | --- | ---: |\n");
+        var table = new MarkdownTable(md, "| Heading | Variants | Mentions | First | Times | Speakers | Place | Confidence |",
+            "| --- | --- | ---: | --- | --- | --- | --- | ---: |");
         foreach (var h in headings)
         {
             var times = h.Mentions.Select(i => index.Mentions[i].Time.Start.ToString());
-            md.Append("| **").Append(MarkdownText.Escape(h.Name)).Append("** | ")
+            table.Row().Append("| **").Append(MarkdownText.Escape(h.Name)).Append("** | ")
               .Append(string.Join(", ", h.Variants.Select(MarkdownText.Escape))).Append(" | ")
               .Append(h.Mentions.Length).Append(" | ")
               .Append(h.Mentions.IsEmpty ? "" : index.Mentions[h.Mentions[0]].Time.Start.ToString()).Append(" | ")
@@ -81,11 +82,11 @@ public static class ReportMarkdownWriter
     {
         md.Append("## For review\n\nThese mentions are held back from the index until a person decides (see the decisions file in SCHEMA.md).\n\n");
         if (index.Review.IsEmpty) { md.Append("Nothing held back.\n\n"); return; }
-        md.Append("| Time | Speaker | Text | Label | Turn | Char | Reason |\n| --- | --- | --- | --- | ---: | ---: | --- |\n");
+        var table = new MarkdownTable(md, "| Time | Speaker | Text | Label | Turn | Char | Reason |", "| --- | --- | --- | --- | ---: | ---: | --- |");
         foreach (var r in index.Review)
         {
             var (m, time, _) = index.Mentions[r.Mention];
-            md.Append("| ").Append(time.Start).Append(" | ").Append(MarkdownText.Escape(index.Turns[m.Turn].Speaker)).Append(" | ")
+            table.Row().Append("| ").Append(time.Start).Append(" | ").Append(MarkdownText.Escape(index.Turns[m.Turn].Speaker)).Append(" | ")
               .Append(MarkdownText.Escape(m.Text)).Append(" | ").Append(m.Label).Append(" | ").Append(m.Turn).Append(" | ")
               .Append(m.CharStart).Append(" | ").Append(MarkdownText.Escape(r.Reason)).Append(" |\n");
         }
@@ -96,9 +97,9 @@ public static class ReportMarkdownWriter
     {
         md.Append("## Translators' worklist\n\n");
         if (index.Worklist.IsEmpty) { md.Append("No stretch outside the main language was found.\n\n"); return; }
-        md.Append("| Start | End | Speaker | Language | Confidence | Text |\n| --- | --- | --- | --- | ---: | --- |\n");
+        var table = new MarkdownTable(md, "| Start | End | Speaker | Language | Confidence | Text |", "| --- | --- | --- | --- | ---: | --- |");
         foreach (var item in index.Worklist)
-            md.Append("| ").Append(item.Time.Start).Append(" | ").Append(item.Time.End).Append(" | ")
+            table.Row().Append("| ").Append(item.Time.Start).Append(" | ").Append(item.Time.End).Append(" | ")
               .Append(MarkdownText.Escape(item.Speaker)).Append(" | ").Append(MarkdownText.Escape(item.Language)).Append(" | ")
               .Append(Numbers.Confidence(item.Confidence)).Append(" | ").Append(MarkdownText.Escape(item.Text)).Append(" |\n");
         md.Append('\n');

@@ -144,4 +144,14 @@ public class OutputTests
         // The stretches marked <lang> come back as language hints.
         Assert.Contains(cues[2].LanguageHints, h => h.Language == "pl");
     }
+
+    [Fact]
+    public void A_collection_of_many_interviews_still_renders()
+    {
+        // Markdig rejects one pipe table of many thousand rows; the writers split tables into chunks.
+        var entry = CollectionEntry.From(Fixture.Run(), "anna-nowak");
+        var entries = Enumerable.Range(0, 2500).Select(i => entry with { Interview = $"copy-{i}", Folder = $"copy-{i}" }).ToList();
+        string html = HtmlReport.Render("c", CollectionWriter.RenderMarkdown(entries));
+        Assert.Contains("copy-2499", html);
+    }
 }
