@@ -111,7 +111,7 @@ public sealed class AuthorityList : INameLexicon
     {
         var hits = Usable(InflectedMatcher.MatchAt(_index, text, words, i, rule), text, words, i);
         if (hits.Count == 0 && rule is null)
-            hits = Usable(StemRules.All.SelectMany(r => InflectedMatcher.MatchAt(_index, text, words, i, r)).ToList(), text, words, i);
+            hits = Usable(StemRules.All.SelectMany(r => InflectedMatcher.MatchAt(_index, text, words, i, r, fallback: true)).ToList(), text, words, i);
         if (hits.Count == 0) return null;
         return hits
             .OrderByDescending(h => h.WordCount)

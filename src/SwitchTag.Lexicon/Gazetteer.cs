@@ -94,9 +94,9 @@ public sealed class Gazetteer : INameLexicon
         var words = NameWords.Split(name);
         if (words.Count == 0) return [];
         var rule = StemRules.For(language);
-        var hits = WholeNameHits(name, words, rule);
+        var hits = WholeNameHits(name, words, rule, fallback: false);
         if (hits.Count == 0 && rule is null)
-            hits = StemRules.All.SelectMany(r => WholeNameHits(name, words, r)).ToList();
+            hits = StemRules.All.SelectMany(r => WholeNameHits(name, words, r, fallback: true)).ToList();
 
         var best = new Dictionary<int, GazetteerCandidate>();
         foreach (var hit in hits)
@@ -154,8 +154,8 @@ public sealed class Gazetteer : INameLexicon
             && (!caution.HasFlag(NameCaution.CapitalisedNoun) || caution.HasFlag(NameCaution.PersonName));
     }
 
-    private List<IndexHit> WholeNameHits(string name, List<NameWord> words, StemRule? rule) =>
-        InflectedMatcher.MatchAt(_index, name, words, 0, rule).Where(h => h.WordCount == words.Count).ToList();
+    private List<IndexHit> WholeNameHits(string name, List<NameWord> words, StemRule? rule, bool fallback) =>
+        InflectedMatcher.MatchAt(_index, name, words, 0, rule, fallback).Where(h => h.WordCount == words.Count).ToList();
 
     private bool AcceptsSingleWord(string text, List<NameWord> words, int i, string key)
     {

@@ -21,13 +21,14 @@ public static class InflectedMatcher
     private const int MaxNameWords = 6;
 
     /// <summary>All names that the words from <paramref name="first"/> on spell, under one rule
-    /// (null: folded equality only).</summary>
-    public static List<IndexHit> MatchAt(NameIndex index, string text, IReadOnlyList<NameWord> words, int first, StemRule? rule)
+    /// (null: folded equality only); <paramref name="fallback"/> when the rule is not the text's own
+    /// language's (see <see cref="StemRule.Stems"/>).</summary>
+    public static List<IndexHit> MatchAt(NameIndex index, string text, IReadOnlyList<NameWord> words, int first, StemRule? rule, bool fallback = false)
     {
         var hits = new List<IndexHit>();
         int available = CountJoinedWords(text, words, first);
         var stems = new HashSet<string>?[available];
-        var firstStems = StemsOf(words[first].Folded, rule);
+        var firstStems = StemsOf(words[first].Folded, rule, fallback);
         stems[0] = firstStems;
         int maxExtra = rule is null ? 0 : rule.NominativeEndings.Select(e => e.Length).DefaultIfEmpty(0).Max();
         int longestStem = firstStems.Max(s => s.Length);
@@ -42,7 +43,7 @@ public static class InflectedMatcher
                 int space = key.IndexOf(' ');
                 int firstLength = space < 0 ? key.Length : space;
                 if (firstLength > longestStem + maxExtra) continue;
-                if (TryMatchKey(key, rule, words, first, available, stems, out int count, out var kind))
+                if (TryMatchKey(key, rule, fallback, words, first, available, stems, out int count, out var kind))
                     hits.Add(new IndexHit(k, count, kind));
             }
         }
@@ -50,11 +51,11 @@ public static class InflectedMatcher
     }
 
     /// <summary>Whether a folded text word can be an inflected form of a folded name word.</summary>
-    public static bool WordMeets(string textWord, string nameWord, StemRule? rule) =>
-        textWord == nameWord || (rule is not null && Meets(StemsOf(textWord, rule), nameWord, rule));
+    public static bool WordMeets(string textWord, string nameWord, StemRule? rule, bool fallback = false) =>
+        textWord == nameWord || (rule is not null && Meets(StemsOf(textWord, rule, fallback), nameWord, rule));
 
     private static bool TryMatchKey(
-        string key, StemRule? rule, IReadOnlyList<NameWord> words, int first, int available,
+        string key, StemRule? rule, bool fallback, IReadOnlyList<NameWord> words, int first, int available,
         HashSet<string>?[] stems, out int count, out MatchKind kind)
     {
         var keyWords = key.Split(' ');
@@ -65,7 +66,7 @@ public static class InflectedMatcher
         {
             var textWord = words[first + j].Folded;
             if (textWord == keyWords[j]) continue;
-            stems[j] ??= StemsOf(textWord, rule);
+            stems[j] ??= StemsOf(textWord, rule, fallback);
             if (!Meets(stems[j]!, keyWords[j], rule)) return false;
             kind = MatchKind.Inflected;
         }
@@ -75,8 +76,8 @@ public static class InflectedMatcher
     private static bool Meets(HashSet<string> textStems, string nameWord, StemRule? rule) =>
         textStems.Contains(nameWord) || (rule is not null && textStems.Contains(rule.NominativeStem(nameWord)));
 
-    private static HashSet<string> StemsOf(string folded, StemRule? rule) =>
-        rule is null ? [folded] : new HashSet<string>(rule.Stems(folded), StringComparer.Ordinal);
+    private static HashSet<string> StemsOf(string folded, StemRule? rule, bool fallback) =>
+        rule is null ? [folded] : new HashSet<string>(rule.Stems(folded, fallback), StringComparer.Ordinal);
 
     /// <summary>Words from <paramref name="first"/> on that are joined by name gaps (at most <see cref="MaxNameWords"/>).</summary>
     private static int CountJoinedWords(string text, IReadOnlyList<NameWord> words, int first)

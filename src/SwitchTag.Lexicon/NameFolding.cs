@@ -52,7 +52,7 @@ public static class NameFolding
     /// <summary>Whether <paramref name="form"/>, written in <paramref name="language"/>, can be a case
     /// form of <paramref name="name"/> (a dictionary form): word by word, one of the form's stems is
     /// the name word or its nominative stem. A language without rules of its own (en, fr, und...)
-    /// tries folded equality, then each rule in turn.</summary>
+    /// tries folded equality, then each rule in turn as a fallback (longer stems, no sound changes).</summary>
     public static bool IsInflectionOf(string form, string name, string language)
     {
         ArgumentNullException.ThrowIfNull(form);
@@ -61,8 +61,9 @@ public static class NameFolding
         var nameWords = NameWords.Split(name);
         if (formWords.Count == 0 || formWords.Count != nameWords.Count) return false;
         var rule = StemRules.For(language);
-        IEnumerable<StemRule?> rules = rule is null ? StemRules.All.Prepend(null) : [rule];
-        return rules.Any(r => formWords.Zip(nameWords).All(p => InflectedMatcher.WordMeets(p.First.Folded, p.Second.Folded, r)));
+        bool fallback = rule is null;
+        IEnumerable<StemRule?> rules = fallback ? StemRules.All.Prepend(null) : [rule];
+        return rules.Any(r => formWords.Zip(nameWords).All(p => InflectedMatcher.WordMeets(p.First.Folded, p.Second.Folded, r, fallback)));
     }
 
     /// <summary>Whether two mentions, each in its own language, can be the same name: equal keys, or

@@ -9,6 +9,10 @@ public sealed class StemRule
     /// "Ufa" stays "ufa".</summary>
     public const int MinStem = 3;
 
+    /// <summary>Shortest stem when a rule is tried only as a fallback for a text of another or unknown
+    /// language: "Texas" must not become Lithuanian "tex-as".</summary>
+    public const int FallbackMinStem = 4;
+
     private readonly string[] _endings;
     private readonly string[] _nominative;
     private readonly Func<string, IEnumerable<string>> _alternations;
@@ -45,16 +49,20 @@ public sealed class StemRule
     public string NominativeStem(string word) => StripLongest(word, _nominative);
 
     /// <summary>Every stem the word may have: the word itself, the word minus each ending that fits,
-    /// and those stems with the language's sound changes undone ("pradz" → "prag").</summary>
-    public IEnumerable<string> Stems(string word)
+    /// and those stems with the language's sound changes undone ("pradz" → "prag"). As a fallback
+    /// (<paramref name="fallback"/>) stems keep <see cref="FallbackMinStem"/> letters and sound
+    /// changes are not undone: weaker evidence needs a closer match.</summary>
+    public IEnumerable<string> Stems(string word, bool fallback = false)
     {
+        int minStem = fallback ? FallbackMinStem : MinStem;
         yield return word;
         foreach (var ending in _endings)
         {
             if (!Fits(word, ending)) continue;
             var stem = _normalise(word[..^ending.Length]);
-            if (stem.Length < MinStem) continue;
+            if (stem.Length < minStem) continue;
             yield return stem;
+            if (fallback) continue;
             foreach (var alt in _alternations(stem))
                 if (alt.Length >= MinStem) yield return alt;
         }
