@@ -24,7 +24,7 @@ public static class BenchCommand
         var segmenter = new CodeSwitchSegmenter(model!);
         var lines = LidCorpus.Load(dataRoot).Where(l => l.Split == Split.Evaluation).Select(l => l.Text).ToList();
         long bytes = lines.Sum(t => (long)Encoding.UTF8.GetByteCount(t));
-        Console.WriteLine($"held-out lines: {lines.Count:N0}, {bytes / 1048576.0:F2} MB UTF-8");
+        Console.WriteLine($"held-out lines: {lines.Count:N0}, {bytes / 1048576.0:F2} MB UTF-8; machine load average {File.ReadAllText("/proc/loadavg").Split(' ')[0]} on {Environment.ProcessorCount} cores");
         Report("Identify", bytes, 3, () => { foreach (var t in lines) segmenter.Identify(t); });
         Report("Segment (main en)", bytes, 3, () => { foreach (var t in lines) segmenter.Segment(t, "en"); });
         var big = BigLine(lines, 1 << 20);
@@ -43,10 +43,7 @@ public static class BenchCommand
 
     private static void Report(string name, long bytes, int passes, Action pass)
     {
-        pass();
-        var clock = Stopwatch.StartNew();
-        for (int i = 0; i < passes; i++) pass();
-        double seconds = clock.Elapsed.TotalSeconds / passes;
-        Console.WriteLine($"{name,-26} {bytes / 1048576.0 / seconds,8:F2} MB/s  ({seconds * 1000:F0} ms per pass)");
+        var r = Throughput.Measure(bytes, passes, pass);
+        Console.WriteLine($"{name,-26} {r.CpuMBps,8:F2} MB/s per CPU-second  {r.WallMBps,8:F2} MB/s wall  ({r.WallMs:F0} ms per pass)");
     }
 }

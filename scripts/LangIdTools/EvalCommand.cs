@@ -43,6 +43,33 @@ public static class EvalCommand
         return 0;
     }
 
+    /// <summary>Lists the held-out lines of one language that the model gets wrong.</summary>
+    public static int Errors(string dataRoot, string modelPath, string code)
+    {
+        var ours = CodeSwitchSegmenter.Load(modelPath);
+        foreach (var line in LidCorpus.Load(dataRoot).Where(l => l.Split == Split.Evaluation && l.Code == code))
+        {
+            var guess = ours.Identify(line.Text);
+            if (guess.Language != code) Console.WriteLine($"{guess.Language}\t{guess.Confidence:F2}\t{line.Text}");
+        }
+        return 0;
+    }
+
+    /// <summary>Prints the synthetic calibration turns whose switch points the segmenter misses.</summary>
+    public static int SwitchErrors(string dataRoot, string modelPath)
+    {
+        var ours = CodeSwitchSegmenter.Load(modelPath);
+        foreach (var turn in SwitchSynthesizer.Build(LidCorpus.Load(dataRoot), Split.Calibration, 300, 3))
+        {
+            var spans = ours.Segment(turn.Text, "en");
+            var score = new SwitchScore();
+            score.Add(turn, spans);
+            if (score.F1 < 1)
+                Console.WriteLine($"{turn.InsertedCode}: {string.Join(" | ", spans.Select(s => s.Language + ": " + turn.Text[s.CharStart..s.CharEnd]))}");
+        }
+        return 0;
+    }
+
     private sealed class Row(string cls, string code, bool common)
     {
         public string Class { get; } = cls;
@@ -172,25 +199,18 @@ public static class EvalCommand
     {
         var common = sets.Where(s => lingua.Codes.Contains(s.Code)).SelectMany(s => s.Lines).ToList();
         long bytes = common.Sum(t => (long)Encoding.UTF8.GetByteCount(t));
-        double oursIdentify = Rate(bytes, () => { foreach (var t in common) ours.Identify(t); });
-        double oursSegment = Rate(bytes, () => { foreach (var t in common) ours.Segment(t, "en"); });
-        double linguaDetect = Rate(bytes, () => { foreach (var t in common) lingua.Detect(t); });
+        var oursIdentify = Throughput.Measure(bytes, 1, () => { foreach (var t in common) ours.Identify(t); });
+        var oursSegment = Throughput.Measure(bytes, 1, () => { foreach (var t in common) ours.Segment(t, "en"); });
+        var linguaDetect = Throughput.Measure(bytes, 1, () => { foreach (var t in common) lingua.Detect(t); });
         Console.WriteLine($"## Throughput on the same {common.Count} held-out lines ({bytes / 1048576.0:F2} MB UTF-8), one thread");
         Console.WriteLine();
-        Console.WriteLine("| system | MB/s |");
-        Console.WriteLine("|---|---:|");
-        Console.WriteLine($"| SwitchTag Identify | {oursIdentify:F2} |");
-        Console.WriteLine($"| SwitchTag Segment | {oursSegment:F2} |");
-        Console.WriteLine($"| Lingua DetectLanguageOf | {linguaDetect:F2} |");
+        Console.WriteLine($"Machine load average {File.ReadAllText("/proc/loadavg").Split(' ')[0]} on {Environment.ProcessorCount} shared cores: CPU-time rates are the fairer figure.");
         Console.WriteLine();
-    }
-
-    /// <summary>MB/s of one timed pass after one warm-up pass.</summary>
-    private static double Rate(long bytes, Action pass)
-    {
-        pass();
-        var clock = Stopwatch.StartNew();
-        pass();
-        return bytes / 1048576.0 / clock.Elapsed.TotalSeconds;
+        Console.WriteLine("| system | MB/s per CPU-second | MB/s wall clock |");
+        Console.WriteLine("|---|---:|---:|");
+        Console.WriteLine($"| SwitchTag Identify | {oursIdentify.CpuMBps:F2} | {oursIdentify.WallMBps:F2} |");
+        Console.WriteLine($"| SwitchTag Segment | {oursSegment.CpuMBps:F2} | {oursSegment.WallMBps:F2} |");
+        Console.WriteLine($"| Lingua DetectLanguageOf | {linguaDetect.CpuMBps:F2} | {linguaDetect.WallMBps:F2} |");
+        Console.WriteLine();
     }
 }

@@ -1,6 +1,9 @@
 using LangIdTools;
 
 // Usage: LangIdTools train DATA OUT | eval DATA MODEL | bench DATA MODEL
+if (args is ["tune", var data]) return TrainCommand.Tune(data);
+if (args is ["errors", var d, var m, var code]) return EvalCommand.Errors(d, m, code);
+if (args is ["switch-errors", var sd, var sm]) return EvalCommand.SwitchErrors(sd, sm);
 if (args.Length != 3)
 {
     Console.Error.WriteLine("usage: LangIdTools (train DATA OUT | eval DATA MODEL | bench DATA MODEL)");

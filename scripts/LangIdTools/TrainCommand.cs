@@ -9,9 +9,31 @@ public static class TrainCommand
         var corpus = LidCorpus.Load(dataRoot);
         foreach (var g in corpus.GroupBy(l => l.Class).OrderBy(g => g.Key, StringComparer.Ordinal))
             Console.WriteLine($"{g.Key,-8} train {g.Count(l => l.Split == Split.Training),6}  calibration {g.Count(l => l.Split == Split.Calibration),5}  evaluation {g.Count(l => l.Split == Split.Evaluation),5}");
-        var bytes = ModelTrainer.Train(corpus, new TrainingOptions(), Console.Out);
-        File.WriteAllBytes(outPath, bytes);
-        Console.WriteLine($"wrote {outPath} ({bytes.Length:N0} bytes)");
+        var trained = ModelTrainer.Train(corpus, new TrainingOptions(), Console.Out);
+        using (var file = File.Create(outPath)) trained.Write(file);
+        Console.WriteLine($"wrote {outPath} ({new FileInfo(outPath).Length:N0} bytes)");
+        return 0;
+    }
+
+    /// <summary>Compares training settings on the calibration split (never on the evaluation split).</summary>
+    public static int Tune(string dataRoot)
+    {
+        var corpus = LidCorpus.Load(dataRoot);
+        var calibration = HeldOutSets.Build(corpus.Select(l => l with { Split = l.Split == Split.Calibration ? Split.Evaluation : Split.Training }).ToList());
+        foreach (var options in new TrainingOptions[]
+        {
+            new(Smoothing.WittenBell, FitSwitching: false),
+            new(Smoothing.WittenBell, MinCount: 3, FitSwitching: false),
+            new(Smoothing.Additive, Alpha: 0.5, FitSwitching: false),
+            new(Smoothing.Additive, Alpha: 0.05, FitSwitching: false),
+        })
+        {
+            var model = ModelTrainer.Train(corpus, options, TextWriter.Null).Model;
+            var segmenter = new SwitchTag.LanguageId.Segmentation.CodeSwitchSegmenter(model);
+            double Acc(Func<HeldOutSets, List<string>> f) => calibration.Where(s => f(s).Count > 0)
+                .Average(s => f(s).Count(t => segmenter.Identify(t).Language == s.Code) / (double)f(s).Count);
+            Console.WriteLine($"{options.Smoothing} alpha {options.Alpha} min {options.MinCount}: features {model.FeatureCount:N0}, lines {Acc(s => s.Lines):P2}, pairs {Acc(s => s.Pairs):P2}, words {Acc(s => s.Words):P2}");
+        }
         return 0;
     }
 }

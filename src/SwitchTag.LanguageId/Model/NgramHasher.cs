@@ -19,7 +19,7 @@ public static class NgramHasher
 
     /// <summary>Calls <paramref name="sink"/> with (key, kind) for every feature of the normalised
     /// word. Kind is the n-gram order 1..5 or <see cref="WordFeature"/>.</summary>
-    public static void ForEachFeature<TSink>(ReadOnlySpan<char> word, ref TSink sink) where TSink : struct, IFeatureSink
+    public static void ForEachFeature<TSink>(ReadOnlySpan<char> word, ref TSink sink) where TSink : IFeatureSink, allows ref struct
     {
         int m = word.Length;
         if (m == 0) return;

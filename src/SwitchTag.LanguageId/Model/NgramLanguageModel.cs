@@ -10,7 +10,7 @@ namespace SwitchTag.LanguageId.Model;
 public sealed class NgramLanguageModel
 {
     private const uint Magic = 0x4449_4C53; // "SLID"
-    private const int FormatVersion = 1;
+    private const int FormatVersion = 2;
 
     private readonly ulong[] _slots;
     private readonly ushort[] _postings;
@@ -51,18 +51,84 @@ public sealed class NgramLanguageModel
         {
             int idx = (int)(keys[k] & (uint)_mask);
             while (_slots[idx] != 0) idx = (idx + 1) & _mask;
-            _slots[idx] = ((ulong)keys[k] << 32) | ((uint)offset << 8) | lengths[k];
+            // A feature kept by one language (most of them) stores its posting in the slot itself,
+            // saving a second memory access; others point into the posting array.
+            uint value = lengths[k] == 1 ? InlineFlag | postings[offset] : ((uint)offset << 8) | lengths[k];
+            _slots[idx] = ((ulong)keys[k] << 32) | value;
             offset += lengths[k];
         }
+        if (offset >= 1 << 23) throw new InvalidDataException("too many postings for the slot layout");
     }
+
+    private const uint InlineFlag = 0x8000_0000;
 
     public float Floor(int cls, int kind) => _floor[cls * NgramHasher.FeatureKinds + kind];
 
     /// <summary>Adds the features of one normalised word to <paramref name="acc"/>.</summary>
+    [System.Runtime.CompilerServices.SkipLocalsInit]
     public void AddWord(ReadOnlySpan<char> normalizedWord, ScoreAccumulator acc)
     {
-        var sink = new LookupSink(_slots, _postings, _mask, acc.Gains, acc.Counts);
-        NgramHasher.ForEachFeature(normalizedWord, ref sink);
+        // Collect the word's keys first and touch their slots, so the cache misses of one word
+        // overlap instead of queueing one after another.
+        Span<uint> keys = stackalloc uint[(NgramHasher.MaxWordChars + 2) * NgramHasher.MaxOrder + 1];
+        Span<byte> kinds = stackalloc byte[keys.Length];
+        var collect = new CollectSink(keys, kinds);
+        NgramHasher.ForEachFeature(normalizedWord, ref collect);
+        int n = collect.Count;
+        if (System.Runtime.Intrinsics.X86.Sse.IsSupported)
+            unsafe
+            {
+                fixed (ulong* slots = _slots)
+                    for (int i = 0; i < n; i++) System.Runtime.Intrinsics.X86.Sse.Prefetch0(slots + (keys[i] & (uint)_mask));
+            }
+        var gains = acc.Gains;
+        var counts = acc.Counts;
+        for (int i = 0; i < n; i++) Lookup(keys[i], kinds[i], gains, counts);
+    }
+
+    private void Lookup(uint key, int kind, int[] gains, int[] counts)
+    {
+        var slots = _slots;
+        int idx = (int)(key & (uint)_mask);
+        while (true)
+        {
+            ulong slot = slots[idx];
+            if (slot == 0) return; // no language kept this feature: it carries no evidence
+            if ((uint)(slot >> 32) == key)
+            {
+                counts[kind]++;
+                uint value = (uint)slot;
+                if ((value & InlineFlag) != 0)
+                {
+                    gains[(value >> 8) & 0xFF] += (int)(value & 0xFF);
+                    return;
+                }
+                int offset = (int)(value >> 8), end = offset + (int)(value & 0xFF);
+                var postings = _postings;
+                for (int p = offset; p < end; p++)
+                {
+                    ushort v = postings[p];
+                    gains[v >> 8] += v & 0xFF;
+                }
+                return;
+            }
+            idx = (idx + 1) & _mask;
+        }
+    }
+
+    private ref struct CollectSink(Span<uint> keys, Span<byte> kinds) : IFeatureSink
+    {
+        private readonly Span<uint> _keys = keys;
+        private readonly Span<byte> _kinds = kinds;
+
+        public int Count;
+
+        public void Add(uint key, int kind)
+        {
+            _keys[Count] = key;
+            _kinds[Count] = (byte)kind;
+            Count++;
+        }
     }
 
     /// <summary>Log-likelihood per class of the features in <paramref name="acc"/> (before temperature).</summary>
@@ -109,7 +175,7 @@ public sealed class NgramLanguageModel
         var r = new SpanReader(bytes);
         if (r.UInt32() != Magic || r.Int32() != FormatVersion)
             throw new InvalidDataException("not a SwitchTag language model (or an unsupported version)");
-        var parameters = new ModelParameters(r.Single(), r.Single(), r.Single(), r.Single(), r.Single());
+        var parameters = new ModelParameters(r.Single(), r.Single(), r.Single(), r.Single(), r.Single(), r.Single());
         int classCount = r.Int32();
         var classes = new string[classCount];
         var codes = new string[classCount];
@@ -176,6 +242,7 @@ public sealed class NgramLanguageModel
         w.Write(parameters.SwitchCost);
         w.Write(parameters.EmissionCap);
         w.Write(parameters.MainLanguageBonus);
+        w.Write(parameters.NameWeight);
         w.Write(classes.Length);
         for (int c = 0; c < classes.Length; c++) { w.Write(classes[c]); w.Write(codes[c]); }
         foreach (var f in floor) w.Write(f);
@@ -187,31 +254,6 @@ public sealed class NgramLanguageModel
         foreach (var (_, postings) in features) foreach (var p in postings) w.Write(p.Class);
         foreach (var (_, postings) in features) foreach (var p in postings) w.Write(p.Gain);
     }
-
-    private readonly struct LookupSink(ulong[] slots, ushort[] postings, int mask, int[] gains, int[] counts) : IFeatureSink
-    {
-        public void Add(uint key, int kind)
-        {
-            int idx = (int)(key & (uint)mask);
-            while (true)
-            {
-                ulong slot = slots[idx];
-                if (slot == 0) return; // no language kept this feature: it carries no evidence
-                if ((uint)(slot >> 32) == key)
-                {
-                    counts[kind]++;
-                    int offset = (int)((uint)slot >> 8), end = offset + (int)(slot & 0xFF);
-                    for (int p = offset; p < end; p++)
-                    {
-                        ushort v = postings[p];
-                        gains[v >> 8] += v & 0xFF;
-                    }
-                    return;
-                }
-                idx = (idx + 1) & mask;
-            }
-        }
-    }
 }
 
 /// <summary>Numbers fitted at training time and stored in the model file.</summary>
@@ -219,8 +261,9 @@ public sealed class NgramLanguageModel
 /// <param name="Temperature">multiplies log-likelihoods before the softmax (fitted on the calibration split)</param>
 /// <param name="SwitchCost">segmenter: nats paid for a language change between words</param>
 /// <param name="EmissionCap">segmenter: a single word can lose at most this much (tempered nats) for a language</param>
-/// <param name="MainLanguageBonus">segmenter: head start of the main language at the turn start</param>
-public sealed record ModelParameters(float QuantStep, float Temperature, float SwitchCost, float EmissionCap, float MainLanguageBonus);
+/// <param name="MainLanguageBonus">segmenter: per-word prior (tempered nats) for the turn's main language</param>
+/// <param name="NameWeight">segmenter: share of a word's evidence that a name-like word carries</param>
+public sealed record ModelParameters(float QuantStep, float Temperature, float SwitchCost, float EmissionCap, float MainLanguageBonus, float NameWeight);
 
 /// <summary>Reusable per-call scratch: summed gains per class and feature counts per kind.</summary>
 public sealed class ScoreAccumulator(int classCount)

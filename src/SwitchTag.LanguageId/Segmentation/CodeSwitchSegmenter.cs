@@ -9,9 +9,9 @@ namespace SwitchTag.LanguageId.Segmentation;
 /// <summary>The langid stage. Identify scores a whole stretch; Segment labels every word jointly
 /// with a Viterbi pass over languages (each change of language between words pays a fixed cost),
 /// so a switch needs several words of evidence while one odd word stays in its sentence's language.
-/// Neutral tokens (numbers, hesitations, transcriber tags, false starts) and names (capitalised
-/// mid-sentence, all capitals, or known to the name lexicon) carry no evidence and take the
-/// language of their neighbours.</summary>
+/// Neutral tokens (numbers, hesitations, transcriber tags, false starts) carry no evidence and take
+/// the language of their neighbours; names (capitalised mid-sentence, all capitals, or known to the
+/// name lexicon) count only NameWeight of a word, too little to pay for a switch on their own.</summary>
 public sealed class CodeSwitchSegmenter : ILanguageSegmenter
 {
     public const string Undetermined = "und";
@@ -80,12 +80,15 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
         int classes = _model.ClassCount;
         var evidence = new List<int>(); // token indices of words that carry evidence
         var scores = new List<float[]>();
+        var weights = new List<float>(); // names count for NameWeight of an ordinary word
         var acc = new ScoreAccumulator(classes);
         Span<char> buffer = stackalloc char[NgramHasher.MaxWordChars];
         for (int t = 0; t < tokens.Count; t++)
         {
             var token = tokens[t];
-            if (token.IsNeutral || IsNameLike(text, token)) continue;
+            if (token.IsNeutral) continue;
+            float weight = NameWeight(text, token, parameters);
+            if (weight == 0) continue;
             acc.Clear();
             int len = WordNormalizer.Normalize(text.AsSpan(token.Start, token.Length), buffer);
             _model.AddWord(buffer[..len], acc);
@@ -94,24 +97,29 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
             _model.LogLikelihoods(acc, s);
             evidence.Add(t);
             scores.Add(s);
+            weights.Add(weight);
         }
         if (evidence.Count == 0) return [new LanguageSpan(0, text.Length, Undetermined, 0)];
 
-        var labels = Decode(scores, mainLanguage, parameters);
+        var labels = Decode(scores, weights, mainLanguage, parameters);
         return BuildSpans(text, tokens, evidence, labels, scores);
     }
 
     /// <summary>Viterbi over classes: stay for free, switch for <c>SwitchCost</c>; emissions are
-    /// tempered log-likelihoods relative to the word's best class, floored at <c>-EmissionCap</c>.</summary>
-    private int[] Decode(List<float[]> scores, string mainLanguage, ModelParameters p)
+    /// tempered log-likelihoods relative to the word's best class, floored at <c>-EmissionCap</c>,
+    /// plus <c>MainLanguageBonus</c> per word for the main language, so that after a switch the
+    /// turn returns to the main language rather than drifting to whichever language suits the
+    /// last word.</summary>
+    private int[] Decode(List<float[]> scores, List<float> weights, string mainLanguage, ModelParameters p)
     {
         int classes = _model.ClassCount, n = scores.Count;
+        var bonus = new float[classes];
+        for (int c = 0; c < classes; c++)
+            bonus[c] = _model.ClassCodes[c] == mainLanguage ? p.MainLanguageBonus : 0;
         var current = new float[classes];
         var next = new float[classes];
         var switched = new bool[n * classes];
         var switchedFrom = new int[n];
-        for (int c = 0; c < classes; c++)
-            current[c] = _model.ClassCodes[c] == mainLanguage ? p.MainLanguageBonus : 0;
         for (int w = 0; w < n; w++)
         {
             var s = scores[w];
@@ -121,7 +129,7 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
             float switchFrom = w == 0 ? float.NegativeInfinity : current[bestPrev] - p.SwitchCost;
             for (int c = 0; c < classes; c++)
             {
-                float emission = Math.Max((s[c] - wordBest) * p.Temperature, -p.EmissionCap);
+                float emission = weights[w] * Math.Max((s[c] - wordBest) * p.Temperature, -p.EmissionCap) + bonus[c];
                 bool sw = switchFrom > current[c];
                 switched[w * classes + c] = sw;
                 next[c] = (sw ? switchFrom : current[c]) + emission;
@@ -161,13 +169,15 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
         return spans.ToImmutable();
     }
 
-    private bool IsNameLike(string text, Token token)
+    /// <summary>1 for an ordinary word; 0 for a name the lexicon knows; NameWeight for a word that
+    /// only looks like a name (capitalised mid-sentence or all capitals).</summary>
+    private float NameWeight(string text, Token token, ModelParameters p)
     {
         var word = text.AsSpan(token.Start, token.Length);
-        if (_names is not null && _names.IsKnownName(word)) return true;
-        if (word.Length < 2 || !char.IsUpper(word[0])) return false;
-        if (IsAllUpper(word)) return true;
-        return !IsSentenceStart(text, token.Start);
+        if (_names is not null && _names.IsKnownName(word)) return 0;
+        if (word.Length < 2 || !char.IsUpper(word[0])) return 1;
+        if (IsAllUpper(word)) return p.NameWeight;
+        return IsSentenceStart(text, token.Start) ? 1 : p.NameWeight;
     }
 
     private static bool IsAllUpper(ReadOnlySpan<char> word)

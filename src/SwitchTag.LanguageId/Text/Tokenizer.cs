@@ -45,7 +45,7 @@ public static class Tokenizer
                 i++;
                 continue;
             }
-            if (IsWordChar(c))
+            if (IsWordStart(c))
             {
                 int start = i;
                 i = ScanWord(text, i);
@@ -75,6 +75,10 @@ public static class Tokenizer
             || cat is UnicodeCategory.NonSpacingMark or UnicodeCategory.SpacingCombiningMark or UnicodeCategory.EnclosingMark;
     }
 
+    /// <summary>A word starts with a letter; marks only continue one (a stray mark is a separator).</summary>
+    private static bool IsWordStart(char c) =>
+        c < 0x80 ? (uint)((c | 0x20) - 'a') <= 'z' - 'a' : !char.IsSurrogate(c) && char.GetUnicodeCategory(c) <= UnicodeCategory.OtherLetter;
+
     private static int ScanWord(ReadOnlySpan<char> text, int i)
     {
         int n = text.Length;
@@ -91,7 +95,8 @@ public static class Tokenizer
     private static TokenKind Classify(ReadOnlySpan<char> text, int start, int end)
     {
         int len = end - start;
-        if (len <= 6 && Hesitations.Contains(text[start..end])) return TokenKind.Hesitation;
+        if (len <= 6 && (text[start] | 0x20) is 'u' or 'e' or 'a' or 'h' or 'm' && Hesitations.Contains(text[start..end]))
+            return TokenKind.Hesitation;
         // "w-" followed by space or end: a cut-off word (a hyphen inside a word was consumed by ScanWord).
         if (len <= 4 && end < text.Length && text[end] == '-' && (end + 1 == text.Length || !IsWordChar(text[end + 1])))
             return TokenKind.FalseStart;

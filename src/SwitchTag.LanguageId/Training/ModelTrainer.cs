@@ -10,12 +10,28 @@ namespace SwitchTag.LanguageId.Training;
 /// a language when seen at least MinCount times there (1 for thin languages, whose every n-gram is
 /// precious).</summary>
 public sealed record TrainingOptions(
+    Smoothing Smoothing = Smoothing.WittenBell,
     double Alpha = 0.5,
-    int MinCount = 2,
+    int MinCount = 3,
     int ThinLanguageChars = 150_000,
     float QuantStep = 0.05f,
     int CalibrationTurns = 600,
-    int Seed = 7);
+    int Seed = 7,
+    bool FitSwitching = true);
+
+/// <summary>How a language's probability mass is shared with features it did not keep.</summary>
+public enum Smoothing
+{
+    /// <summary>Add Alpha to every count over the global vocabulary of the feature kind.</summary>
+    Additive,
+    /// <summary>Witten-Bell: unseen mass T/(N+T) per language and kind (T distinct types, N tokens),
+    /// spread over the features it did not keep. Thin languages get more unseen mass, which keeps
+    /// them from losing on every feature their small corpus missed.</summary>
+    WittenBell,
+}
+
+/// <summary>A trained model and a writer for its file.</summary>
+public sealed record TrainedModel(NgramLanguageModel Model, Action<Stream> Write);
 
 /// <summary>Counts features on the training split, builds the smoothed, pruned, quantised tables,
 /// then fits the softmax temperature (log-loss on calibration lines, their first two words and
@@ -23,7 +39,7 @@ public sealed record TrainingOptions(
 /// turns made from calibration lines). Single-threaded and deterministic.</summary>
 public static class ModelTrainer
 {
-    public static byte[] Train(IReadOnlyList<CorpusLine> corpus, TrainingOptions options, TextWriter log)
+    public static TrainedModel Train(IReadOnlyList<CorpusLine> corpus, TrainingOptions options, TextWriter log)
     {
         var clock = Stopwatch.StartNew();
         var classes = corpus.Select(l => l.Class).Distinct().Order(StringComparer.Ordinal).ToArray();
@@ -67,30 +83,55 @@ public static class ModelTrainer
         var vocabulary = new long[NgramHasher.FeatureKinds];
         foreach (var key in kept.Keys) vocabulary[kindOf[key]]++;
 
+        var types = new long[classes.Length, NgramHasher.FeatureKinds];
+        var keptTypes = new long[classes.Length, NgramHasher.FeatureKinds];
+        for (int c = 0; c < classes.Length; c++)
+            foreach (var key in counts[c].Keys) types[c, kindOf[key]]++;
+        foreach (var (key, list) in kept)
+            foreach (var (c, _) in list) keptTypes[c, kindOf[key]]++;
         var floor = new float[classes.Length * NgramHasher.FeatureKinds];
+        var gainScale = new double[classes.Length * NgramHasher.FeatureKinds];
         for (int c = 0; c < classes.Length; c++)
             for (int k = 1; k < NgramHasher.FeatureKinds; k++)
-                floor[c * NgramHasher.FeatureKinds + k] =
-                    (float)Math.Log(options.Alpha / (totals[c, k] + options.Alpha * Math.Max(1, vocabulary[k])));
+            {
+                double n = totals[c, k], v = Math.Max(1, vocabulary[k]);
+                int i = c * NgramHasher.FeatureKinds + k;
+                if (options.Smoothing == Smoothing.Additive)
+                {
+                    floor[i] = (float)Math.Log(options.Alpha / (n + options.Alpha * v));
+                    gainScale[i] = 1 / options.Alpha; // gain = log((count + alpha) / alpha)
+                }
+                else
+                {
+                    double t = Math.Max(1, types[c, k]), unkept = Math.Max(1, v - keptTypes[c, k]);
+                    floor[i] = (float)Math.Log(t / ((n + t) * unkept));
+                    gainScale[i] = unkept / t; // gain = log(count / (n + t)) - floor = log(count * unkept / t)
+                }
+            }
         var features = kept.OrderBy(kv => kv.Key)
             .Select(kv => (kv.Key, kv.Value.OrderBy(p => p.Class)
-                .Select(p => (p.Class, Quantise(Math.Log((p.Count + options.Alpha) / options.Alpha), options.QuantStep)))
+                .Select(p => (p.Class, Quantise(Gain(options, p.Count, gainScale[p.Class * NgramHasher.FeatureKinds + kindOf[kv.Key]]), options.QuantStep)))
                 .ToArray()))
             .ToList();
         log.WriteLine($"kept {features.Count:N0} features, {features.Sum(f => f.Item2.Length):N0} postings");
 
-        var parameters = new ModelParameters(options.QuantStep, 1f, 4f, 8f, 1f);
+        var parameters = new ModelParameters(options.QuantStep, 1f, 4f, 8f, 0.5f, 0f);
         var model = Build(classes, codes, floor, parameters, features);
         var temperature = FitTemperature(model, corpus);
         log.WriteLine($"temperature {temperature:F3}");
         parameters = parameters with { Temperature = temperature };
         model = Build(classes, codes, floor, parameters, features);
-        parameters = FitSwitching(model, corpus, options, log);
-        using var output = new MemoryStream();
-        NgramLanguageModel.Write(output, classes, codes, floor, parameters, features);
-        log.WriteLine($"model {output.Length / 1048576.0:F2} MB, trained in {clock.Elapsed.TotalSeconds:F1}s");
-        return output.ToArray();
+        if (options.FitSwitching)
+        {
+            parameters = FitSwitching(model, corpus, options, log);
+            model = Build(classes, codes, floor, parameters, features);
+        }
+        log.WriteLine($"trained in {clock.Elapsed.TotalSeconds:F1}s");
+        return new TrainedModel(model, stream => NgramLanguageModel.Write(stream, classes, codes, floor, parameters, features));
     }
+
+    private static double Gain(TrainingOptions options, int count, double scale) =>
+        options.Smoothing == Smoothing.Additive ? Math.Log((count + options.Alpha) * scale) : Math.Log(count * scale);
 
     private static byte Quantise(double gain, float step) => (byte)Math.Clamp((int)Math.Round(gain / step), 1, 255);
 
@@ -146,6 +187,8 @@ public static class ModelTrainer
         return best;
     }
 
+    /// <summary>Grid search on synthetic calibration turns. Name weights stop at 0.25: a name keeps a
+    /// quarter of a word's evidence at most, so one or two foreign names do not pay for a switch.</summary>
     private static ModelParameters FitSwitching(NgramLanguageModel model, IReadOnlyList<CorpusLine> corpus,
         TrainingOptions options, TextWriter log)
     {
@@ -153,15 +196,17 @@ public static class ModelTrainer
         var segmenter = new CodeSwitchSegmenter(model);
         var best = model.Parameters;
         double bestF1 = -1;
-        foreach (var cost in new[] { 2f, 3f, 4f, 5f, 6f })
-            foreach (var cap in new[] { 4f, 6f, 9f, 12f, 16f })
+        foreach (var cost in new[] { 3f, 4f, 5f, 6f, 8f })
+            foreach (var cap in new[] { 6f, 9f, 12f, 16f })
+            foreach (var bonus in new[] { 0f, 0.25f, 0.5f, 1f })
+            foreach (var name in new[] { 0f, 0.125f, 0.25f })
             {
-                var p = model.Parameters with { SwitchCost = cost, EmissionCap = cap };
+                var p = model.Parameters with { SwitchCost = cost, EmissionCap = cap, MainLanguageBonus = bonus, NameWeight = name };
                 var score = new SwitchScore();
                 foreach (var turn in turns) score.Add(turn, segmenter.Segment(turn.Text, "en", p));
                 if (score.F1 > bestF1) { bestF1 = score.F1; best = p; }
             }
-        log.WriteLine($"switch cost {best.SwitchCost}, emission cap {best.EmissionCap}: calibration switch F1 {bestF1:F3}");
+        log.WriteLine($"switch cost {best.SwitchCost}, emission cap {best.EmissionCap}, main-language bonus {best.MainLanguageBonus}, name weight {best.NameWeight}: calibration switch F1 {bestF1:F3}");
         return best;
     }
 
