@@ -5,7 +5,7 @@ using SwitchTag.Core.Pipeline;
 namespace SwitchTag.Indexing;
 
 /// <summary>The translators' worklist: every stretch outside the main language (<c>und</c> excluded),
-/// consecutive spans of one language inside a turn merged into one item.</summary>
+/// consecutive spans of one language inside a turn merged into one item, surrounding spaces trimmed.</summary>
 public static class WorklistBuilder
 {
     public static ImmutableArray<WorklistItem> Build(
@@ -33,6 +33,10 @@ public static class WorklistBuilder
                 }
                 int start = span.CharStart, end = list[j].CharEnd;
                 double confidence = end > start ? weighted / (end - start) : span.Confidence;
+                // Spans carry the spaces after their last word; a translator's stretch does not.
+                while (start < end && char.IsWhiteSpace(turn.Text[start])) start++;
+                while (end > start && char.IsWhiteSpace(turn.Text[end - 1])) end--;
+                if (end == start) { i = j + 1; continue; }
                 items.Add(new WorklistItem(
                     aligner.Align(turn, start, end), turn.Speaker, span.Language, Math.Round(confidence, 4),
                     turn.Text[start..end], t, start, end));
