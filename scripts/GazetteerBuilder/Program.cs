@@ -52,7 +52,7 @@ Console.WriteLine($"rows skipped:           {problems.Length}");
 Console.WriteLine($"alternate names:        {altTotal} in source, {altKept} kept by script/length/code filter");
 Console.WriteLine($"city names kept:        {rows.Sum(r => r.Names.Length)} written forms (main, ASCII and alternate)");
 Console.WriteLine($"distinct folded names:  {gazetteer.NameCount}");
-foreach (var caution in new[] { NameCaution.CommonWord, NameCaution.CapitalisedNoun, NameCaution.PersonName })
+foreach (var caution in new[] { NameCaution.CommonWord, NameCaution.CapitalisedWord, NameCaution.PersonName })
     Console.WriteLine($"caution {caution,-15} {gazetteer.Cautions.Count(p => p.Value.HasFlag(caution))} words");
 Console.WriteLine($"caution sources:        {corpora.Length} language corpora, {nerFiles.Length} NER training files");
 Console.WriteLine($"build time:             {clock.Elapsed.TotalSeconds:F1} s");

@@ -14,6 +14,10 @@ public sealed class Gazetteer : INameLexicon
     /// <summary>One-word names shorter than this are never found in running text.</summary>
     public const int MinWordLength = 3;
 
+    /// <summary>A common word naming only places smaller than this is not a place even mid-sentence
+    /// ("shouting Alle raus", "Hard" in English).</summary>
+    public const long VillagePopulation = 15_000;
+
     private readonly GazetteerPlace[] _places;
     private readonly NameIndex _index;
     private readonly IReadOnlyDictionary<string, NameCaution> _cautions;
@@ -109,9 +113,10 @@ public sealed class Gazetteer : INameLexicon
     /// <summary>Capitalised spans of <paramref name="text"/> that are gazetteer names, longest first,
     /// non-overlapping, for a tagger working without a model. Conservative: the first and last word
     /// of a span must be capitalised; a one-word span needs <see cref="MinWordLength"/> letters, must
-    /// not be a stop word (function words, titles, month names), a person's name or a capitalised
-    /// noun (<see cref="NameCaution"/>), and a common lower-case word is skipped at the start of a
-    /// sentence. Inflection follows <paramref name="language"/> only; no fallback across rules here.</summary>
+    /// not be a stop word (function words, titles, month names), a person's name or a word
+    /// capitalised for another reason (<see cref="NameCaution"/>), and a common lower-case word is
+    /// skipped at the start of a sentence, or anywhere if it names only villages (&lt; 15,000 people).
+    /// Inflection follows <paramref name="language"/> only; no fallback across rules here.</summary>
     public ImmutableArray<NameMatch> Find(string text, string language)
     {
         ArgumentNullException.ThrowIfNull(text);
@@ -124,7 +129,7 @@ public sealed class Gazetteer : INameLexicon
             if (!char.IsLetter(text[words[i].Start]) || !NameWords.StartsUpper(text.AsSpan(words[i].Start))) continue;
             var hits = InflectedMatcher.MatchAt(_index, text, words, i, rule)
                 .Where(h => NameWords.StartsUpper(text.AsSpan(words[i + h.WordCount - 1].Start)))
-                .Where(h => h.WordCount > 1 || AcceptsSingleWord(text, words, i, _index.KeyAt(h.KeyIndex)))
+                .Where(h => h.WordCount > 1 || AcceptsSingleWord(text, words, i, h))
                 .ToList();
             if (hits.Count == 0) continue;
             int longest = hits.Max(h => h.WordCount);
@@ -139,9 +144,9 @@ public sealed class Gazetteer : INameLexicon
     }
 
     /// <summary>A capitalised word of 3+ letters that is a place name spelled as it stands (folded),
-    /// not a stop word, common word or capitalised noun: safe for a language segmenter to treat as
-    /// belonging to no language. Person names that are also places ("David") count as known, even
-    /// where German text capitalises them like nouns.</summary>
+    /// not a stop word, common word or word capitalised for another reason: safe for a language
+    /// segmenter to treat as belonging to no language. Person names that are also places ("David")
+    /// count as known, even though they are also capitalised words.</summary>
     public bool IsKnownName(ReadOnlySpan<char> word)
     {
         word = word.Trim();
@@ -151,19 +156,23 @@ public sealed class Gazetteer : INameLexicon
             && !GazetteerStopWords.Words.Contains(folded)
             && CautionOf(folded) is var caution
             && !caution.HasFlag(NameCaution.CommonWord)
-            && (!caution.HasFlag(NameCaution.CapitalisedNoun) || caution.HasFlag(NameCaution.PersonName));
+            && (!caution.HasFlag(NameCaution.CapitalisedWord) || caution.HasFlag(NameCaution.PersonName));
     }
 
     private List<IndexHit> WholeNameHits(string name, List<NameWord> words, StemRule? rule, bool fallback) =>
         InflectedMatcher.MatchAt(_index, name, words, 0, rule, fallback).Where(h => h.WordCount == words.Count).ToList();
 
-    private bool AcceptsSingleWord(string text, List<NameWord> words, int i, string key)
+    private bool AcceptsSingleWord(string text, List<NameWord> words, int i, IndexHit hit)
     {
         var folded = words[i].Folded;
+        var key = _index.KeyAt(hit.KeyIndex);
         if (folded.Length < MinWordLength || GazetteerStopWords.Words.Contains(folded) || GazetteerStopWords.Words.Contains(key)) return false;
         var caution = CautionOf(folded) | CautionOf(key);
-        if ((caution & (NameCaution.PersonName | NameCaution.CapitalisedNoun)) != 0) return false;
-        return (caution & NameCaution.CommonWord) == 0 || !TextPosition.IsSentenceStart(text, words[i].Start);
+        if ((caution & (NameCaution.PersonName | NameCaution.CapitalisedWord)) != 0) return false;
+        if ((caution & NameCaution.CommonWord) == 0) return true;
+        long largest = 0;
+        foreach (int id in _index.IdsAt(hit.KeyIndex)) largest = Math.Max(largest, _places[id].Population);
+        return largest >= VillagePopulation && !TextPosition.IsSentenceStart(text, words[i].Start);
     }
 
     private NameCaution CautionOf(string folded) => _cautions.GetValueOrDefault(folded);

@@ -5,13 +5,12 @@ namespace SwitchTag.Lexicon;
 public static class GazetteerCautions
 {
     private const int MinLowerCase = 3;
-    private const int MinCapitalisedNoun = 2;
+    private const int MinCapitalised = 2;
     private const int MinPerson = 2;
 
-    /// <summary>Places this populous keep their name even if it is also a capitalised noun (Essen).</summary>
-    private const long NounPopulationLimit = 100_000;
-
-    private static readonly HashSet<string> NounCapitalising = ["de", "lb"];
+    /// <summary>Places this populous keep their name even if it is also a capitalised word or a
+    /// person's name (Essen, Boston, Jordan).</summary>
+    private const long PopulationLimit = 100_000;
 
     public static Dictionary<string, NameCaution> Collect(
         NameIndex index,
@@ -22,7 +21,7 @@ public static class GazetteerCautions
         var cautions = new Dictionary<string, NameCaution>(StringComparer.Ordinal);
         foreach (var file in languageCorpora)
             FromCorpus(file, index, places, cautions);
-        FromNer(nerFiles, index, cautions);
+        FromNer(nerFiles, index, places, cautions);
         return cautions;
     }
 
@@ -32,7 +31,6 @@ public static class GazetteerCautions
         var rule = StemRules.For(language);
         var lower = new Dictionary<string, int>(StringComparer.Ordinal);
         var capitalisedMid = new Dictionary<string, int>(StringComparer.Ordinal);
-        bool nouns = NounCapitalising.Contains(language);
         foreach (var line in File.ReadLines(file))
         {
             var words = NameWords.Split(line);
@@ -40,7 +38,7 @@ public static class GazetteerCautions
             {
                 char first = line[words[k].Start];
                 if (char.IsLower(first)) Increment(lower, words[k].Folded);
-                else if (nouns && k > 0 && char.IsUpper(first) && !TextPosition.IsSentenceStart(line, words[k].Start))
+                else if (k > 0 && char.IsUpper(first) && !TextPosition.IsSentenceStart(line, words[k].Start))
                     Increment(capitalisedMid, words[k].Folded);
             }
         }
@@ -49,14 +47,12 @@ public static class GazetteerCautions
                 Add(cautions, word, NameCaution.CommonWord);
         foreach (var (word, count) in capitalisedMid)
         {
-            if (count < MinCapitalisedNoun) continue;
-            var named = PlacesNamed(word, index, rule).ToList();
-            if (named.Count > 0 && named.All(id => places[id].Population < NounPopulationLimit))
-                Add(cautions, word, NameCaution.CapitalisedNoun);
+            if (count >= MinCapitalised && OnlySmallPlaces(PlacesNamed(word, index, rule), places))
+                Add(cautions, word, NameCaution.CapitalisedWord);
         }
     }
 
-    private static void FromNer(IEnumerable<string> files, NameIndex index, Dictionary<string, NameCaution> cautions)
+    private static void FromNer(IEnumerable<string> files, NameIndex index, IReadOnlyList<GazetteerPlace> places, Dictionary<string, NameCaution> cautions)
     {
         var person = new Dictionary<string, int>(StringComparer.Ordinal);
         var place = new Dictionary<string, int>(StringComparer.Ordinal);
@@ -75,7 +71,8 @@ public static class GazetteerCautions
                 else if (tag.EndsWith("-LOC", StringComparison.Ordinal)) Increment(place, folded);
             }
         foreach (var (word, count) in person)
-            if (count >= MinPerson && count > place.GetValueOrDefault(word) && index.IndexOf(word) >= 0)
+            if (count >= MinPerson && count > place.GetValueOrDefault(word) && index.IndexOf(word) is >= 0 and var k
+                && OnlySmallPlaces(index.IdsAt(k).ToArray(), places))
                 Add(cautions, word, NameCaution.PersonName);
     }
 
@@ -87,6 +84,17 @@ public static class GazetteerCautions
             if (hit.WordCount == 1)
                 foreach (int id in index.IdsAt(hit.KeyIndex).ToArray())
                     yield return id;
+    }
+
+    private static bool OnlySmallPlaces(IEnumerable<int> ids, IReadOnlyList<GazetteerPlace> places)
+    {
+        bool any = false;
+        foreach (int id in ids)
+        {
+            if (places[id].Population >= PopulationLimit) return false;
+            any = true;
+        }
+        return any;
     }
 
     private static void Increment(Dictionary<string, int> counts, string word) =>

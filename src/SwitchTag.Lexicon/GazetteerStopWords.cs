@@ -4,7 +4,8 @@ namespace SwitchTag.Lexicon;
 
 /// <summary>Words that are places somewhere but are far more often something else when written
 /// capitalised in running text: function words (capitalised in titles and at sentence start),
-/// titles before a person's name, and English month and day names. Folded spellings.</summary>
+/// titles and kinship words before a person's name, God, and English month and day names. Folded
+/// spellings, chosen by hand.</summary>
 internal static class GazetteerStopWords
 {
     public static FrozenSet<string> Words { get; } = new[]
@@ -23,7 +24,10 @@ internal static class GazetteerStopWords
         "во", "на", "за", "по", "под", "над", "без", "при", "не", "да", "нет", "так", "как",
         // titles before a person's name
         "mr", "mrs", "ms", "dr", "sir", "lord", "lady", "pan", "pani", "herr", "frau", "madame", "monsieur",
-        "saint", "san", "santa", "st",
+        "saint", "san", "santa", "st", "don", "dona", "seu", "mister", "miss", "senhor", "senhora", "senor",
+        "senora", "signor", "signora", "uncle", "aunt", "tante", "onkel", "bobe", "zayde",
+        // God, in the narrators' exclamations ("thank God", "Gott sei Dank", "Boże")
+        "god", "gott", "dios", "deus", "dio", "dieu", "bog", "boze", "бог", "боже",
         // English months and days (capitalised mid-sentence, and towns in several countries)
         "january", "february", "march", "april", "may", "june", "july", "august", "september", "october",
         "november", "december", "monday", "tuesday", "wednesday", "thursday", "friday", "saturday", "sunday",

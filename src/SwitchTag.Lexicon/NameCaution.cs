@@ -10,10 +10,12 @@ public enum NameCaution : byte
     /// an ordinary word, so not a name at the start of a sentence.</summary>
     CommonWord = 1,
 
-    /// <summary>A capitalised common noun of a language that capitalises nouns (German "Straßen",
-    /// "Montag") that names only small places: never a place on its own.</summary>
-    CapitalisedNoun = 2,
+    /// <summary>Capitalised in mid-sentence in running text of its language for another reason (German
+    /// nouns "Straßen", "Montag"; English "English", "German", "Christmas") and naming only small
+    /// places: never a place on its own.</summary>
+    CapitalisedWord = 2,
 
-    /// <summary>Tagged as a person far more than as a place in NER training data ("David", "Sarah").</summary>
+    /// <summary>Tagged as a person far more than as a place in NER training data ("David", "Sarah"),
+    /// and naming only small places.</summary>
     PersonName = 4,
 }

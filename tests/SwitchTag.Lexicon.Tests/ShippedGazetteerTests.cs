@@ -117,4 +117,40 @@ public class ShippedGazetteerTests(ShippedGazetteerFixture shipped) : IClassFixt
         Assert.Equal(GeoNamesFixture.IdOf("Berlin"), _g.Lookup("Berlins", "de")[0].GeonameId);
         Assert.Equal(GeoNamesFixture.IdOf("Kraków"), _g.Lookup("Krakowie", "pl")[0].GeonameId);
     }
+
+    [Fact]
+    public void Words_capitalised_for_other_reasons_are_not_places()
+    {
+        // GeoNames has a small town named English (USA); "English" is capitalised mid-sentence in
+        // the UD English sentences of ../shared/data/lid/en.txt.
+        Assert.Contains(_g.Lookup("English", "en"), p => p.Country == "US");
+        Assert.True(_g.Cautions["english"].HasFlag(NameCaution.CapitalisedWord));
+        Assert.Empty(_g.Find("At home we spoke English and German.", "en"));
+    }
+
+    [Fact]
+    public void Common_words_naming_only_villages_are_skipped_even_mid_sentence()
+    {
+        // Alle is a Swiss village in GeoNames; "alle" is an everyday German word (lid/de.txt).
+        Assert.All(_g.Lookup("Alle", "de"), p => Assert.True(p.Population < Gazetteer.VillagePopulation));
+        Assert.Empty(_g.Find("they were shouting Alle raus!", "en"));
+        // Nice (France) is a city: mid-sentence it stays a place, at a sentence start it does not.
+        Assert.Equal("Nice", Assert.Single(_g.Find("We sailed to Nice.", "en")).Canonical);
+        Assert.Empty(_g.Find("Nice to meet you.", "en"));
+    }
+
+    [Fact]
+    public void A_bracketed_remark_does_not_hide_a_sentence_start()
+    {
+        // Juist is a German island town; "just" is a common English word.
+        Assert.Empty(_g.Find("[pause] Just closed it.", "en"));
+    }
+
+    [Fact]
+    public void Exclamations_and_titles_are_not_places()
+    {
+        // Göd (Hungary) folds to "god"; Don, Dona and Seu precede names in the demo interviews' languages.
+        Assert.Empty(_g.Find("The noise, my God, the noise.", "en"));
+        Assert.Empty(_g.Find("and then Don came home", "en"));
+    }
 }
