@@ -14,8 +14,10 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// and the countries of the interview's unambiguous places; the others are kept as alternatives. Mentions resolved to one gazetteer
 /// id form one heading; a LOC mention the gazetteer does not know joins a linked heading whose variant
 /// has its folded key, else forms a heading without coordinates.
-/// Persons are grouped conservatively: equal folded keys group; a one-word name joins a multi-word
-/// name only when it is the folded last word of exactly one multi-word person heading.
+/// Persons are grouped conservatively: multi-word names group by their folded first and last words
+/// (a middle name may come and go); a one-word name joins a multi-word heading only when exactly one
+/// such heading has it as its first or last word (so "Kowalczyk" stays apart when two Kowalczyks are
+/// named); other one-word names group by folded key.
 /// Organisations group by folded key.
 /// Held for review instead: mentions below the confidence floor, PER mentions the gazetteer knows as
 /// places, and surfaces tagged both PER and LOC in the interview.</summary>
@@ -163,31 +165,28 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     {
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
         var single = new List<int>();
+        // Name-part evidence: the folded first and last word of each multi-word heading.
+        var owners = new Dictionary<string, HashSet<Group>>(StringComparer.Ordinal);
         for (int i = 0; i < mentions.Length; i++)
         {
             if (held[i] || mentions[i].Label != NameLabel.PER) continue;
-            if (Words(mentions[i].Text).Length < 2) { single.Add(i); continue; }
-            Add(byKey, groups, NameLabel.PER, keys[i], i);
-        }
-        // Surname evidence: the folded last word of each multi-word heading.
-        var surnameOwners = new Dictionary<string, HashSet<Group>>(StringComparer.Ordinal);
-        foreach (var g in byKey.Values)
-            foreach (int i in g.Members)
+            var words = Words(mentions[i].Text);
+            if (words.Length < 2) { single.Add(i); continue; }
+            string first = lexicon.Key(words[0], mentions[i].Language), last = lexicon.Key(words[^1], mentions[i].Language);
+            var group = Add(byKey, groups, NameLabel.PER, first + " " + last, i);
+            foreach (var part in new[] { first, last })
             {
-                var words = Words(mentions[i].Text);
-                string surname = lexicon.Key(words[^1], mentions[i].Language);
-                if (!surnameOwners.TryGetValue(surname, out var owners)) surnameOwners[surname] = owners = [];
-                owners.Add(g);
+                if (!owners.TryGetValue(part, out var set)) owners[part] = set = [];
+                set.Add(group);
             }
+        }
+        var lone = new Dictionary<string, Group>(StringComparer.Ordinal);
         foreach (int i in single)
         {
-            if (byKey.TryGetValue(keys[i], out var same)) { same.Members.Add(i); continue; }
-            if (surnameOwners.TryGetValue(keys[i], out var owners) && owners.Count == 1)
-            {
-                owners.First().Members.Add(i);
-                continue;
-            }
-            Add(byKey, groups, NameLabel.PER, keys[i], i);
+            if (owners.TryGetValue(keys[i], out var set) && set.Count == 1)
+                set.First().Members.Add(i);
+            else
+                Add(lone, groups, NameLabel.PER, keys[i], i);
         }
     }
 
@@ -199,7 +198,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 Add(byKey, groups, label, keys[i], i);
     }
 
-    private static void Add(Dictionary<string, Group> byKey, List<Group> groups, NameLabel label, string key, int mention)
+    private static Group Add(Dictionary<string, Group> byKey, List<Group> groups, NameLabel label, string key, int mention)
     {
         if (!byKey.TryGetValue(key, out var group))
         {
@@ -207,6 +206,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             groups.Add(group);
         }
         group.Members.Add(mention);
+        return group;
     }
 
     private static string[] Words(string text) => text.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);

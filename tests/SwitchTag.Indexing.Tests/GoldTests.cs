@@ -72,9 +72,9 @@ public class GoldTests(ITestOutputHelper output)
                          $"countries right {countryRight}/{withCountry}; worklist found {workFound}/{goldWork.Count}, right {workRight}/{index.Worklist.Length}");
 
         // Floors reached by the shipped models (printed numbers above); a drop below them is a regression.
-        Assert.True(found >= headings.Count * 0.3, $"found {found} of {headings.Count} gold headings");
+        Assert.True(found >= headings.Count * 0.5, $"found {found} of {headings.Count} gold headings");
         Assert.True(workFound >= goldWork.Count * 0.8, $"found {workFound} of {goldWork.Count} worklist stretches");
-        Assert.True(countryRight >= withCountry * 0.8, $"{countryRight} of {withCountry} countries right");
+        Assert.True(countryRight >= withCountry * 0.5, $"{countryRight} of {withCountry} countries right");
     }
 
     // The gold stretch and the produced one share most of their words.

@@ -68,6 +68,20 @@ public class HeadingBuilderTests
     }
 
     [Fact]
+    public void A_given_name_or_a_middle_name_variant_joins_only_with_one_owner()
+    {
+        var lexicon = Fixture.Lexicon();
+        var result = Build(lexicon, ("Irena Kowalczyk", NameLabel.PER, "en"), ("Irena", NameLabel.PER, "en"),
+            ("Manuel Joaquim Ferreira", NameLabel.PER, "en"), ("Manuel Ferreira", NameLabel.PER, "en"));
+        Assert.Equal(2, result.Headings.Length);
+        Assert.Contains(result.Headings, h => h.Variants.SequenceEqual(["Irena Kowalczyk", "Irena"]));
+        Assert.Contains(result.Headings, h => h.Variants.SequenceEqual(["Manuel Joaquim Ferreira", "Manuel Ferreira"]));
+
+        var two = Build(lexicon, ("Irena Kowalczyk", NameLabel.PER, "en"), ("Józef Kowalczyk", NameLabel.PER, "en"), ("Kowalczyk", NameLabel.PER, "en"));
+        Assert.Equal(3, two.Headings.Length);
+    }
+
+    [Fact]
     public void Person_and_place_competing_go_to_review()
     {
         var result = Build(GeoNamesFixture.Lexicon(), ("Florence", NameLabel.PER, "en"), ("Jordan", NameLabel.LOC, "en"), ("Jordan", NameLabel.PER, "en"));
