@@ -20,7 +20,8 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// named); other one-word names group by folded key.
 /// Organisations group by folded key.
 /// Held for review instead: mentions below the confidence floor, PER mentions the gazetteer knows as
-/// places, and surfaces tagged both PER and LOC in the interview.</summary>
+/// places, surfaces tagged both PER and LOC in the interview, and model mentions whose first letter is
+/// lower case (names in cased scripts are capitalised; uncased scripts are never caught).</summary>
 public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow = HeadingBuilder.DefaultReviewBelow)
 {
     public const double DefaultReviewBelow = 0.5;
@@ -94,6 +95,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return "the same name is tagged both PER and LOC in this interview";
         if (m.Label == NameLabel.PER && !places.IsEmpty)
             return $"tagged PER, but the gazetteer knows \"{m.Text}\" as a place ({places[0].Name}, {places[0].Country})";
+        if (m.Source == MentionSource.Model && m.Text.FirstOrDefault(char.IsLetter) is var first && char.IsLower(first))
+            return "the model tagged a name that does not start with a capital letter";
         if (m.Confidence < reviewBelow)
             return FormattableString.Invariant($"low confidence ({m.Confidence:0.00})");
         return null;

@@ -89,4 +89,13 @@ public class HeadingBuilderTests
         Assert.Equal(3, result.Review.Length);
         Assert.All(result.HeadingOf, Assert.Null);
     }
+
+    [Fact]
+    public void A_model_name_in_lower_case_goes_to_review()
+    {
+        // Hebrew script has no case (Unicode: its letters are category Lo), so a Yiddish name is never held for that.
+        var result = Build(Fixture.Lexicon(), ("nicht wahr", NameLabel.PER, "de"), ("Nowak", NameLabel.PER, "pl"), ("הענקע", NameLabel.PER, "yi"));
+        Assert.Equal("the model tagged a name that does not start with a capital letter", Assert.Single(result.Review).Reason);
+        Assert.Equal(2, result.Headings.Length);
+    }
 }
