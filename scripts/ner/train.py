@@ -265,10 +265,11 @@ def main():
         for n, s in sorted(data[split].items()):
             log(f"{split} {n}: {len(s)} sentences, {sum(len(w) for w, _ in s)} tokens")
     sp_prefix = os.path.join(args.out, "ner")
-    train_sp(data, sp_prefix)
-    os.replace(sp_prefix + ".model", sp_prefix + ".spm")
-    os.remove(sp_prefix + ".vocab")
-    add_control_pieces(sp_prefix + ".spm")
+    if not (args.ablations and os.path.exists(sp_prefix + ".spm")):  # ablations reuse the shipped pieces
+        train_sp(data, sp_prefix)
+        os.replace(sp_prefix + ".model", sp_prefix + ".spm")
+        os.remove(sp_prefix + ".vocab")
+        add_control_pieces(sp_prefix + ".spm")
     sp = spm.SentencePieceProcessor(model_file=sp_prefix + ".spm")
     if args.ablations:
         variants = [("full", (), 96, (1, 2, 4, 1)), ("no subword pieces", ("pieces",), 96, (1, 2, 4, 1)),

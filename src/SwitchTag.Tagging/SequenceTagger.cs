@@ -9,7 +9,7 @@ namespace SwitchTag.Tagging;
 /// features use the full sentence, so with an overlap of at least 8 the stitched logits equal the
 /// unchunked ones and no mention is lost or doubled at a seam. Windows of many sentences are
 /// batched together, longest first.</summary>
-public sealed class SequenceTagger(NerModel model, int window = 256, int overlap = 16, int batchWords = 4096)
+public sealed class SequenceTagger(NerModel model, int window = 256, int overlap = 16, int batchWords = 2048)
 {
     private readonly BioDecoder _decoder = new(model.Labels);
 
