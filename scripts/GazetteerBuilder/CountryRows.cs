@@ -23,9 +23,10 @@ internal static class CountryRows
                 if (long.TryParse(row[2].GetString(), out long n)) numeric[row[0].GetString()!] = n;
 
         var names = new Dictionary<string, List<string>>();
-        var langs = Directory.GetFiles(Path.Combine(packageDir, "langs"), "*.json").Order(StringComparer.Ordinal).ToList();
         // English first, so the main name is the English one.
-        langs.Sort((a, b) => (Path.GetFileName(a) == "en.json" ? 0 : 1).CompareTo(Path.GetFileName(b) == "en.json" ? 0 : 1));
+        var langs = Directory.GetFiles(Path.Combine(packageDir, "langs"), "*.json")
+            .OrderBy(f => Path.GetFileName(f) == "en.json" ? 0 : 1)
+            .ThenBy(f => f, StringComparer.Ordinal);
         foreach (var file in langs)
         {
             using var doc = JsonDocument.Parse(File.ReadAllText(file));
@@ -47,7 +48,8 @@ internal static class CountryRows
             var (lat, lon) = WeightedCentre(places);
             var kept = list.Where(ScriptFilter.InKeptScripts).Distinct(StringComparer.Ordinal).ToImmutableArray();
             if (kept.IsEmpty) continue;
-            var place = new GazetteerPlace(-n, kept[0], lat, lon, code, places.Sum(p => p.Population), "PCLI");
+            // The main name is the English one even when too long to be searched for.
+            var place = new GazetteerPlace(-n, list[0], lat, lon, code, places.Sum(p => p.Population), "PCLI");
             rows.Add(new GeoNamesRow(place, kept));
         }
         return rows;
