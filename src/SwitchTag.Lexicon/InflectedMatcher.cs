@@ -30,24 +30,21 @@ public static class InflectedMatcher
         var stems = new HashSet<string>?[available];
         var firstStems = StemsOf(words[first].Folded, rule, fallback);
         stems[0] = firstStems;
-        int maxExtra = rule is null ? 0 : rule.NominativeEndings.Select(e => e.Length).DefaultIfEmpty(0).Max();
-        int longestStem = firstStems.Max(s => s.Length);
         var seen = new HashSet<int>();
-        foreach (var prefix in MinimalPrefixes(firstStems))
+        foreach (var firstWord in DictionaryForms(firstStems, rule))
         {
-            var (from, to) = index.PrefixRange(prefix);
-            for (int k = from; k < to; k++)
-            {
-                if (!seen.Add(k)) continue;
-                var key = index.KeyAt(k);
-                int space = key.IndexOf(' ');
-                int firstLength = space < 0 ? key.Length : space;
-                if (firstLength > longestStem + maxExtra) continue;
-                if (TryMatchKey(key, rule, fallback, words, first, available, stems, out int count, out var kind))
-                    hits.Add(new IndexHit(k, count, kind));
-            }
+            int exact = index.IndexOf(firstWord);
+            if (exact >= 0) TryAdd(exact);
+            var (from, to) = index.PrefixRange(firstWord + " ");
+            for (int k = from; k < to; k++) TryAdd(k);
         }
         return hits;
+
+        void TryAdd(int k)
+        {
+            if (seen.Add(k) && TryMatchKey(index.KeyAt(k), rule, fallback, words, first, available, stems, out int count, out var kind))
+                hits.Add(new IndexHit(k, count, kind));
+        }
     }
 
     /// <summary>Whether a folded text word can be an inflected form of a folded name word.</summary>
@@ -89,16 +86,19 @@ public static class InflectedMatcher
         return n;
     }
 
-    /// <summary>The stems none of which starts with another, so each prefix range is scanned once.</summary>
-    private static IEnumerable<string> MinimalPrefixes(HashSet<string> stems)
+    /// <summary>Every dictionary word whose nominative stem could be one of <paramref name="stems"/>:
+    /// the stem itself and the stem plus each nominative ending, with and without the Polish
+    /// softness "i" (Gdyn- → Gdynia). A superset: each is checked again by <see cref="Meets"/>.</summary>
+    private static IEnumerable<string> DictionaryForms(HashSet<string> stems, StemRule? rule)
     {
-        var sorted = stems.OrderBy(s => s, StringComparer.Ordinal).ToList();
-        string? last = null;
-        foreach (var s in sorted)
-        {
-            if (last is not null && s.StartsWith(last, StringComparison.Ordinal)) continue;
-            last = s;
-            yield return s;
-        }
+        var forms = new HashSet<string>(stems, StringComparer.Ordinal);
+        if (rule is not null)
+            foreach (var stem in stems)
+                foreach (var ending in rule.NominativeEndings)
+                {
+                    forms.Add(stem + ending);
+                    forms.Add(stem + "i" + ending);
+                }
+        return forms;
     }
 }
