@@ -22,17 +22,19 @@ public static class TrainCommand
         var calibration = HeldOutSets.Build(corpus.Select(l => l with { Split = l.Split == Split.Calibration ? Split.Evaluation : Split.Training }).ToList());
         foreach (var options in new TrainingOptions[]
         {
-            new(Smoothing.WittenBell, FitSwitching: false),
-            new(Smoothing.WittenBell, MinCount: 3, FitSwitching: false),
-            new(Smoothing.Additive, Alpha: 0.5, FitSwitching: false),
-            new(Smoothing.Additive, Alpha: 0.05, FitSwitching: false),
+            new(Smoothing.WittenBell, FitSwitching: false, UnseenMassPower: 1.0),
+            new(Smoothing.WittenBell, FitSwitching: false, UnseenMassPower: 0.6),
+            new(Smoothing.WittenBell, FitSwitching: false, UnseenMassPower: 0.3),
         })
         {
             var model = ModelTrainer.Train(corpus, options, TextWriter.Null).Model;
             var segmenter = new SwitchTag.LanguageId.Segmentation.CodeSwitchSegmenter(model);
             double Acc(Func<HeldOutSets, List<string>> f) => calibration.Where(s => f(s).Count > 0)
                 .Average(s => f(s).Count(t => segmenter.Identify(t).Language == s.Code) / (double)f(s).Count);
-            Console.WriteLine($"{options.Smoothing} alpha {options.Alpha} min {options.MinCount}: features {model.FeatureCount:N0}, lines {Acc(s => s.Lines):P2}, pairs {Acc(s => s.Pairs):P2}, words {Acc(s => s.Words):P2}");
+            var worst = calibration.Select(s => (s.Class, Acc: s.Pairs.Count(t => segmenter.Identify(t).Language == s.Code) / (double)Math.Max(1, s.Pairs.Count)))
+                .OrderBy(x => x.Acc).Take(6).Select(x => $"{x.Class} {x.Acc:P0}");
+            Console.WriteLine($"  worst pairs: {string.Join(", ", worst)}");
+            Console.WriteLine($"{options.Smoothing} power {options.UnseenMassPower} min {options.MinCount}: features {model.FeatureCount:N0}, lines {Acc(s => s.Lines):P2}, pairs {Acc(s => s.Pairs):P2}, words {Acc(s => s.Words):P2}");
         }
         return 0;
     }

@@ -17,7 +17,8 @@ public sealed record TrainingOptions(
     float QuantStep = 0.05f,
     int CalibrationTurns = 600,
     int Seed = 7,
-    bool FitSwitching = true);
+    bool FitSwitching = true,
+    double UnseenMassPower = 0.6);
 
 /// <summary>How a language's probability mass is shared with features it did not keep.</summary>
 public enum Smoothing
@@ -104,8 +105,12 @@ public static class ModelTrainer
                 else
                 {
                     double t = Math.Max(1, types[c, k]), unkept = Math.Max(1, v - keptTypes[c, k]);
-                    floor[i] = (float)Math.Log(t / ((n + t) * unkept));
-                    gainScale[i] = unkept / t; // gain = log(count / (n + t)) - floor = log(count * unkept / t)
+                    // Unseen mass (T/(N+T))^power: power 1 is plain Witten-Bell; below 1 it evens out
+                    // the mass between thin and large corpora, so a thin language (gl beside pt)
+                    // does not win merely because its small corpus missed more features.
+                    double unseen = Math.Pow(t / (n + t), options.UnseenMassPower);
+                    floor[i] = (float)Math.Log(unseen / unkept);
+                    gainScale[i] = unkept / (unseen * (n + t)); // gain = log(count / (n + t)) - floor
                 }
             }
         var features = kept.OrderBy(kv => kv.Key)
