@@ -254,7 +254,7 @@ def main():
     ap.add_argument("--ablation-share", type=float, default=0.4, help="share of the non-NerKor training sentences")
     args = ap.parse_args()
     torch.set_num_threads(1)
-    logf = open(os.path.join(args.out, "ner.train.log"), "a", encoding="utf-8")
+    logf = open(os.path.join(args.out, "ner.ablations.log" if args.ablations else "ner.train.log"), "w", encoding="utf-8")
 
     def log(msg):
         print(msg, flush=True); logf.write(msg + "\n"); logf.flush()

@@ -8,7 +8,7 @@ namespace SwitchTag.Tagging;
 /// decoded at once. The network sees 8 words either side (kernel 3, dilations 1, 2, 4, 1) and the
 /// features use the full sentence, so with an overlap of at least 8 the stitched logits equal the
 /// unchunked ones and no mention is lost or doubled at a seam. Windows of many sentences are
-/// batched together, longest first.</summary>
+/// batched together, longest first, each batch holding windows of similar length.</summary>
 public sealed class SequenceTagger(NerModel model, int window = 256, int overlap = 16, int batchWords = 2048)
 {
     private readonly BioDecoder _decoder = new(model.Labels);
@@ -43,7 +43,10 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
         for (int i = 0; i < chunks.Count;)
         {
             int width = chunks[i].Length;
-            int count = Math.Max(1, Math.Min(chunks.Count - i, batchWords / Math.Max(1, width)));
+            // Rows of one batch are padded to its longest: take only windows at least 3/4 as long.
+            int limit = Math.Max(1, Math.Min(chunks.Count - i, batchWords / Math.Max(1, width)));
+            int count = 1;
+            while (count < limit && chunks[i + count].Length * 4 >= width * 3) count++;
             var features = new long[count * width * WordFeatures.Slots];
             var pieces = new long[count * width * PieceEncoder.Slots];
             for (int b = 0; b < count; b++)
