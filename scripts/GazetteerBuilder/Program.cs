@@ -67,11 +67,17 @@ static bool Measure(string path)
         return false;
     }
     var times = new List<double>();
+    var cpu = new List<double>();
+    var process = Process.GetCurrentProcess();
     for (int i = 0; i < 5; i++)
     {
+        process.Refresh();
+        var cpuBefore = process.TotalProcessorTime;
         var clock = Stopwatch.StartNew();
         var g = Gazetteer.Load(path);
         times.Add(clock.Elapsed.TotalMilliseconds);
+        process.Refresh();
+        cpu.Add((process.TotalProcessorTime - cpuBefore).TotalMilliseconds);
         GC.KeepAlive(g);
     }
     Console.WriteLine($"file:                   {path}");
@@ -79,6 +85,9 @@ static bool Measure(string path)
     Console.WriteLine($"places:                 {first.Places.Count}");
     Console.WriteLine($"distinct folded names:  {first.NameCount}");
     Console.WriteLine($"load time:              best {times.Min():F0} ms, median {times.Order().ElementAt(2):F0} ms of 5 (after 1 warm-up)");
+    Console.WriteLine($"load CPU time:          best {cpu.Min():F0} ms, median {cpu.Order().ElementAt(2):F0} ms (all threads, GC included)");
+    if (File.Exists("/proc/loadavg"))
+        Console.WriteLine($"machine load average:   {File.ReadAllText("/proc/loadavg").Split(' ')[0]} on {Environment.ProcessorCount} cores");
     return true;
 }
 

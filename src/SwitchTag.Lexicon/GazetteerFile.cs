@@ -77,12 +77,15 @@ internal static class GazetteerFile
             for (int i = 0; i < codes.Length; i++) codes[i] = r.ReadString();
 
             var places = new GazetteerPlace[r.Read7BitEncodedInt()];
+            var countries = new Dictionary<string, string>(StringComparer.Ordinal);
             for (int i = 0; i < places.Length; i++)
             {
                 long id = r.Read7BitEncodedInt64();
                 string name = r.ReadString();
                 double lat = r.ReadDouble(), lon = r.ReadDouble();
-                string country = string.Intern(r.ReadString());
+                string read = r.ReadString();
+                // one string per country code, not one per place
+                string country = countries.TryGetValue(read, out var known) ? known : countries[read] = read;
                 long population = r.Read7BitEncodedInt64();
                 places[i] = new GazetteerPlace(id, name, lat, lon, country, population, codes[r.Read7BitEncodedInt()]);
             }
