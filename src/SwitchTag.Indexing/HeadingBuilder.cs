@@ -19,12 +19,16 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// such heading has it as its first or last word (so "Kowalczyk" stays apart when two Kowalczyks are
 /// named); other one-word names group by folded key.
 /// Organisations group by folded key.
-/// Held for review instead: mentions below the confidence floor, PER mentions the gazetteer knows as
-/// places, surfaces tagged both PER and LOC in the interview, and model mentions whose first letter is
+/// Held for review instead: mentions below the confidence floor, PER mentions that are the own name
+/// of a place of 100,000 people or more, surfaces tagged both PER and LOC in the interview, and model mentions whose first letter is
 /// lower case (names in cased scripts are capitalised; uncased scripts are never caught).</summary>
 public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow = HeadingBuilder.DefaultReviewBelow)
 {
     public const double DefaultReviewBelow = 0.5;
+
+    /// <summary>A person's name competes with a place only when it is the own name of a place this
+    /// large: small towns named like given names (Hanna, Alberta) would otherwise hold back every person.</summary>
+    public const long CompetingPlacePopulation = 100_000;
 
     public HeadingResult Build(
         ImmutableArray<Mention> mentions,
@@ -45,16 +49,16 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
         var review = ImmutableArray.CreateBuilder<ReviewItem>();
         var held = new bool[n];
-        var labelsOfKey = new Dictionary<string, HashSet<NameLabel>>(StringComparer.Ordinal);
+        var labelsOfSurface = new Dictionary<string, HashSet<NameLabel>>(StringComparer.Ordinal);
         for (int i = 0; i < n; i++)
         {
-            if (!labelsOfKey.TryGetValue(keys[i], out var set)) labelsOfKey[keys[i]] = set = [];
+            if (!labelsOfSurface.TryGetValue(mentions[i].Text, out var set)) labelsOfSurface[mentions[i].Text] = set = [];
             set.Add(mentions[i].Label);
         }
         for (int i = 0; i < n; i++)
         {
             if (accepted?.Contains(i) == true) continue;
-            var reason = ReviewReason(mentions[i], places[i], labelsOfKey[keys[i]]);
+            var reason = ReviewReason(mentions[i], keys[i], places[i], labelsOfSurface[mentions[i].Text]);
             if (reason is null) continue;
             held[i] = true;
             review.Add(new ReviewItem(i, reason));
@@ -89,12 +93,12 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         return found.IsDefault ? [] : found;
     }
 
-    private string? ReviewReason(Mention m, ImmutableArray<PlaceLink> places, HashSet<NameLabel> labelsOfKey)
+    private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, HashSet<NameLabel> labelsOfSurface)
     {
-        if (labelsOfKey.Contains(NameLabel.PER) && labelsOfKey.Contains(NameLabel.LOC) && m.Label != NameLabel.ORG)
+        if (labelsOfSurface.Contains(NameLabel.PER) && labelsOfSurface.Contains(NameLabel.LOC) && m.Label != NameLabel.ORG)
             return "the same name is tagged both PER and LOC in this interview";
-        if (m.Label == NameLabel.PER && !places.IsEmpty)
-            return $"tagged PER, but the gazetteer knows \"{m.Text}\" as a place ({places[0].Name}, {places[0].Country})";
+        if (m.Label == NameLabel.PER && places.FirstOrDefault(p => p.Population >= CompetingPlacePopulation && lexicon.Key(p.Name, m.Language) == key) is { } place)
+            return $"tagged PER, but \"{m.Text}\" is also the name of a place ({place.Name}, {place.Country})";
         if (m.Source == MentionSource.Model && m.Text.FirstOrDefault(char.IsLetter) is var first && char.IsLower(first))
             return "the model tagged a name that does not start with a capital letter";
         if (m.Confidence < reviewBelow)
