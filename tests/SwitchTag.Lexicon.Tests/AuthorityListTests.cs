@@ -136,4 +136,15 @@ public class AuthorityListTests
         Assert.True(union.IsKnownName("Jedwabne"));
         Assert.False(union.IsKnownName("Jedwabnem"));
     }
+
+    [Fact]
+    public void Multi_word_names_may_span_a_line_break_but_not_a_comma()
+    {
+        var list = Parse("label,name,variants\nLOC,Nowy Sącz,\nLOC,St. Louis,\n");
+        Assert.Single(list.Find("born in Nowy\nSącz", "pl"));         // a cue's lines are joined by '\n'
+        Assert.Empty(list.Find("Nowy, Sącz", "pl"));
+        const string text = "then St. Louis";
+        var m = Assert.Single(list.Find(text, "en"));
+        Assert.Equal("St. Louis", text[m.CharStart..m.CharEnd]);
+    }
 }
