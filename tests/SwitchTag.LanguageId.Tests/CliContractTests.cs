@@ -35,6 +35,37 @@ public sealed class CliContractTests(ModelFixture fixture)
     }
 
     [Fact]
+    public void EvalCommandPrintsTheDesignJsonShape()
+    {
+        var dir = Directory.CreateTempSubdirectory("switchtag-evaljson-");
+        var console = Console.Out;
+        try
+        {
+            // Held-out lines of lid/de.txt (Universal Dependencies); zz is no ISO 639 code.
+            File.WriteAllLines(Path.Combine(dir.FullName, "de.txt"),
+                fixture.Corpus.Where(l => l.Split == Split.Evaluation && l.Code == "de").Take(20).Select(l => l.Text));
+            File.WriteAllLines(Path.Combine(dir.FullName, "zz.txt"), ["text"]);
+            var output = new StringWriter();
+            Console.SetOut(output);
+            var root = new System.CommandLine.RootCommand { EvalLangIdCommand.Create() };
+            int exit = root.Parse(["langid", "--dir", dir.FullName, "--json"]).Invoke();
+            Console.SetOut(console);
+            Assert.Equal(0, exit);
+            using var doc = JsonDocument.Parse(output.ToString());
+            Assert.InRange(doc.RootElement.GetProperty("mean").GetDouble(), 0, 1);
+            var de = doc.RootElement.GetProperty("languages").GetProperty("de");
+            Assert.Equal(20, de.GetProperty("n").GetInt32());
+            Assert.InRange(de.GetProperty("accuracy").GetDouble(), 0, 1);
+            Assert.Equal("zz", doc.RootElement.GetProperty("skipped")[0].GetString());
+        }
+        finally
+        {
+            Console.SetOut(console);
+            dir.Delete(recursive: true);
+        }
+    }
+
+    [Fact]
     public void LanguagesAreIso639Codes()
     {
         // ISO 639-1 two-letter codes where one exists, else ISO 639-3 (hsb); from memory.
