@@ -1,6 +1,9 @@
 using LangIdTools;
 
 // Usage: LangIdTools train DATA OUT | eval DATA MODEL | bench DATA MODEL
+//        LangIdTools tune DATA              (compare smoothing settings on the calibration split)
+//        LangIdTools errors DATA MODEL CODE (held-out lines of CODE the model gets wrong)
+//        LangIdTools switch-errors DATA MODEL (synthetic calibration turns with missed switches)
 if (args is ["tune", var data]) return TrainCommand.Tune(data);
 if (args is ["errors", var d, var m, var code]) return EvalCommand.Errors(d, m, code);
 if (args is ["switch-errors", var sd, var sm]) return EvalCommand.SwitchErrors(sd, sm);

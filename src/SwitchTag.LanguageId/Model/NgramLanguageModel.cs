@@ -62,8 +62,6 @@ public sealed class NgramLanguageModel
 
     private const uint InlineFlag = 0x8000_0000;
 
-    public float Floor(int cls, int kind) => _floor[cls * NgramHasher.FeatureKinds + kind];
-
     /// <summary>Adds the features of one normalised word to <paramref name="acc"/>.</summary>
     [System.Runtime.CompilerServices.SkipLocalsInit]
     public void AddWord(ReadOnlySpan<char> normalizedWord, ScoreAccumulator acc)
@@ -281,11 +279,5 @@ public sealed class ScoreAccumulator(int classCount)
     {
         Array.Clear(Gains);
         Array.Clear(Counts);
-    }
-
-    public void Add(ScoreAccumulator other)
-    {
-        for (int i = 0; i < Gains.Length; i++) Gains[i] += other.Gains[i];
-        for (int i = 0; i < Counts.Length; i++) Counts[i] += other.Counts[i];
     }
 }

@@ -14,8 +14,10 @@ public static class WordNormalizer
         ReadOnlySpan<char> source = word;
         if (NeedsComposition(word))
         {
-            var composed = word.ToString().Normalize(NormalizationForm.FormC);
-            source = composed;
+            // Tokenizer words hold no surrogates, so Normalize has nothing to reject; should ICU still
+            // refuse a sequence, the word is scored as written rather than failing the call.
+            try { source = word.ToString().Normalize(NormalizationForm.FormC); }
+            catch (ArgumentException) { }
         }
         int n = Math.Min(source.Length, buffer.Length);
         for (int i = 0; i < n; i++)
