@@ -65,7 +65,7 @@ public static class CollectionWriter
             else
             {
                 w.WriteStartObject("place");
-                w.WriteNumber("geonameId", row.Place.GeonameId);
+                if (row.Place.HasGeonameId) w.WriteNumber("geonameId", row.Place.GeonameId); else w.WriteNull("geonameId");
                 w.WriteNumber("lat", row.Place.Latitude);
                 w.WriteNumber("lon", row.Place.Longitude);
                 w.WriteString("country", row.Place.Country);

@@ -174,7 +174,7 @@ public static class IndexJsonWriter
     private static void WritePlace(Utf8JsonWriter w, PlaceLink p)
     {
         w.WriteStartObject();
-        w.WriteNumber("geonameId", p.GeonameId);
+        if (p.HasGeonameId) w.WriteNumber("geonameId", p.GeonameId); else w.WriteNull("geonameId");
         w.WriteNumber("lat", p.Latitude);
         w.WriteNumber("lon", p.Longitude);
         w.WriteString("country", p.Country);

@@ -30,7 +30,7 @@ public static class PlacesGeoJsonWriter
             w.WriteString("interview", index.Transcript.Name);
             w.WriteString("heading", h.Id);
             w.WriteString("name", h.Name);
-            w.WriteNumber("geonameId", h.Place.GeonameId);
+            if (h.Place.HasGeonameId) w.WriteNumber("geonameId", h.Place.GeonameId); else w.WriteNull("geonameId");
             w.WriteString("country", h.Place.Country);
             w.WriteStartArray("variants");
             foreach (var v in h.Variants) w.WriteStringValue(v);

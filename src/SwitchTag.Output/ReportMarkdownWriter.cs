@@ -72,7 +72,7 @@ public static class ReportMarkdownWriter
     {
         if (h.Place is null) return h.Label == NameLabel.LOC ? "not in the gazetteer" : "";
         var p = h.Place;
-        var text = $"{MarkdownText.Escape(p.Name)}, {MarkdownText.Escape(p.Country)} ({Numbers.Coordinate(p.Latitude)}, {Numbers.Coordinate(p.Longitude)}; GeoNames {p.GeonameId})";
+        var text = $"{MarkdownText.Escape(p.Name)}, {MarkdownText.Escape(p.Country)} ({Numbers.Coordinate(p.Latitude)}, {Numbers.Coordinate(p.Longitude)}; {(p.HasGeonameId ? $"GeoNames {p.GeonameId}" : "country")})";
         if (!h.Alternatives.IsEmpty)
             text += "; or: " + string.Join(", ", h.Alternatives.Take(5).Select(a => $"{MarkdownText.Escape(a.Name)}, {MarkdownText.Escape(a.Country)}"));
         return text;

@@ -3,8 +3,12 @@ using SwitchTag.Core.Time;
 
 namespace SwitchTag.Core.Documents;
 
-/// <summary>A gazetteer place a heading is linked to.</summary>
-public sealed record PlaceLink(long GeonameId, string Name, double Latitude, double Longitude, string Country, long Population);
+/// <summary>A gazetteer place a heading is linked to. Countries come from an ISO 3166 list rather
+/// than GeoNames and carry a non-positive id (minus the ISO numeric code) that is no GeoNames id.</summary>
+public sealed record PlaceLink(long GeonameId, string Name, double Latitude, double Longitude, string Country, long Population)
+{
+    public bool HasGeonameId => GeonameId > 0;
+}
 
 /// <summary>One index entry: every mention of one person, place or organisation.</summary>
 /// <param name="Mentions">Indices into <see cref="InterviewIndex.Mentions"/>, in time order.</param>
