@@ -11,7 +11,8 @@ namespace SwitchTag.Tagging;
 /// a listed place never as a person. In <see cref="TaggingMode.RulesThenModel"/> the model then
 /// tags the rest of the turn; a model mention wins over a gazetteer match it overlaps (it has seen
 /// the context: "Jordan Peterson" is a person, not the country), and gazetteer matches elsewhere are
-/// kept. Rule matching runs once per language of the turn's spans, a match counting for the
+/// kept. Model mentions in scripts the model never saw in training are dropped
+/// (<see cref="TrainedScripts"/>). Rule matching runs once per language of the turn's spans, a match counting for the
 /// language of the span it starts in.</summary>
 public sealed class NameTagger : INameTagger
 {
@@ -46,6 +47,7 @@ public sealed class NameTagger : INameTagger
             {
                 int start = words[s.Start].Start, end = words[s.End - 1].End;
                 if (authority.Any(a => a.CharStart < end && start < a.CharEnd)) continue;
+                if (!TrainedScripts.Covers(turnText.AsSpan(start, end - start))) continue;
                 models.Add(new Mention(turnIndex, start, end, turnText[start..end], s.Label, LanguageAt(spans, start), s.Confidence, MentionSource.Model));
             }
         }
