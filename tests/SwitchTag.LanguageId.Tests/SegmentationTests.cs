@@ -51,6 +51,12 @@ public sealed class SegmentationTests(ModelFixture fixture)
         Assert.Equal("en", spans[0].Language);
     }
 
+    [Theory]
+    [InlineData("I was born in 1950 in Szczebrzeszyn")]
+    [InlineData("Then we went to see Grzegorz Brzęczyszczykiewicz in Łódź")]
+    public void IdentifyIgnoresNamesInsideASentence(string text) =>
+        Assert.Equal("en", fixture.Segmenter.Identify(text).Language);
+
     [Fact]
     public void KnownNamesFromTheLexiconAreNeutralEvenSentenceInitially()
     {

@@ -43,28 +43,37 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
 
     public IReadOnlyList<string> Languages { get; }
 
+    /// <summary>Words that look like names (capitalised mid-sentence, all capitals, or known to the
+    /// lexicon) are left out unless the stretch has nothing else, so "born in Szczebrzeszyn" stays
+    /// English.</summary>
     public LanguageGuess Identify(ReadOnlySpan<char> text)
     {
         var tokens = Tokenizer.Tokenize(text);
         var acc = new ScoreAccumulator(_model.ClassCount);
         Span<char> buffer = stackalloc char[NgramHasher.MaxWordChars];
-        int words = 0, lastWord = -1;
+        int words = 0, names = 0, lastName = -1;
         for (int t = 0; t < tokens.Count; t++)
         {
             var token = tokens[t];
             if (token.IsNeutral) continue;
+            if (NameWeight(text, token, _model.Parameters) < 1) { names++; lastName = t; continue; }
             int len = WordNormalizer.Normalize(text[token.Start..token.End], buffer);
             _model.AddWord(buffer[..len], acc);
             words++;
-            lastWord = t;
             if (words % EarlyStopCheckEvery == 0 && IsDecided(acc)) break;
         }
-        if (acc.FeatureHits == 0) return new LanguageGuess(Undetermined, 0);
-        if (words == 1 && _names is not null)
+        if (words == 0 && names > 0)
         {
-            var only = text[tokens[lastWord].Start..tokens[lastWord].End];
-            if (_names.IsKnownName(only)) return new LanguageGuess(Undetermined, 0);
+            if (names == 1 && _names is not null && _names.IsKnownName(text[tokens[lastName].Start..tokens[lastName].End]))
+                return new LanguageGuess(Undetermined, 0);
+            foreach (var token in tokens)
+            {
+                if (token.IsNeutral) continue;
+                int len = WordNormalizer.Normalize(text[token.Start..token.End], buffer);
+                _model.AddWord(buffer[..len], acc);
+            }
         }
+        if (acc.FeatureHits == 0) return new LanguageGuess(Undetermined, 0);
         var (code, p) = Best(acc);
         return p < MinConfidence ? new LanguageGuess(Undetermined, 0) : new LanguageGuess(_codes[code], p);
     }
@@ -171,9 +180,9 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
 
     /// <summary>1 for an ordinary word; 0 for a name the lexicon knows; NameWeight for a word that
     /// only looks like a name (capitalised mid-sentence or all capitals).</summary>
-    private float NameWeight(string text, Token token, ModelParameters p)
+    private float NameWeight(ReadOnlySpan<char> text, Token token, ModelParameters p)
     {
-        var word = text.AsSpan(token.Start, token.Length);
+        var word = text.Slice(token.Start, token.Length);
         if (_names is not null && _names.IsKnownName(word)) return 0;
         if (word.Length < 2 || !char.IsUpper(word[0])) return 1;
         if (IsAllUpper(word)) return p.NameWeight;
@@ -188,7 +197,7 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
 
     /// <summary>True at the text start or after sentence-final punctuation (skipping spaces, quotes,
     /// brackets and transcriber tags), where capitals say nothing about names.</summary>
-    private static bool IsSentenceStart(string text, int start)
+    private static bool IsSentenceStart(ReadOnlySpan<char> text, int start)
     {
         for (int i = start - 1; i >= 0; i--)
         {
@@ -196,7 +205,7 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
             if (char.IsWhiteSpace(c) || c is '"' or '\'' or '\u201C' or '\u201D' or '\u2018' or '\u2019' or '(' or '\u00AB' or '\u201E' or '-' or '\u2014') continue;
             if (c == ']')
             {
-                int open = text.LastIndexOf('[', i);
+                int open = text[..i].LastIndexOf('[');
                 if (open < 0) return false;
                 i = open;
                 continue;
