@@ -44,8 +44,8 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
     public IReadOnlyList<string> Languages { get; }
 
     /// <summary>Words that look like names (capitalised mid-sentence, all capitals, or known to the
-    /// lexicon) are left out unless the stretch has nothing else, so "born in Szczebrzeszyn" stays
-    /// English.</summary>
+    /// lexicon) are left out when at least two other words remain, so "born in Szczebrzeszyn" stays
+    /// English while a title-case headline or a short "Az Európai" still has words to go on.</summary>
     public LanguageGuess Identify(ReadOnlySpan<char> text)
     {
         var tokens = Tokenizer.Tokenize(text);
@@ -62,10 +62,11 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
             words++;
             if (words % EarlyStopCheckEvery == 0 && IsDecided(acc)) break;
         }
-        if (words == 0 && names > 0)
+        if (words < 2 && names > 0)
         {
-            if (names == 1 && _names is not null && _names.IsKnownName(text[tokens[lastName].Start..tokens[lastName].End]))
+            if (words == 0 && names == 1 && _names is not null && _names.IsKnownName(text[tokens[lastName].Start..tokens[lastName].End]))
                 return new LanguageGuess(Undetermined, 0);
+            acc.Clear();
             foreach (var token in tokens)
             {
                 if (token.IsNeutral) continue;
