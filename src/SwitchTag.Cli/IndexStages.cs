@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Pipeline;
+using SwitchTag.Core.Stages;
 using SwitchTag.Indexing;
 using SwitchTag.LanguageId.Segmentation;
 using SwitchTag.Lexicon;
@@ -42,7 +43,9 @@ public sealed class IndexStages
         }
 
         CodeSwitchSegmenter segmenter;
-        try { segmenter = CodeSwitchSegmenter.Load(langid, gazetteer); }
+        // Names on the archive's list are language-neutral too, like gazetteer places.
+        INameLexicon names = authority is null ? gazetteer : new NameLexiconUnion(authority, gazetteer);
+        try { segmenter = CodeSwitchSegmenter.Load(langid, names); }
         catch (Exception e) when (e is IOException or InvalidDataException or UnauthorizedAccessException or EndOfStreamException)
         {
             error = $"cannot load the language model {langid}: {e.Message}";
