@@ -160,6 +160,27 @@ def read_columns(path, sep=None):
     return sents
 
 
+WNUT_TYPES = {"person": "PER", "location": "LOC", "corporation": "ORG", "group": "ORG"}
+
+
+def read_wnut(path):
+    """WNUT-17 token<TAB>tag IOB2 (dev file starts with a BOM; some lines carry trailing spaces):
+    person/location become PER/LOC, corporation and group (teams, bands, parties) ORG, the rest O."""
+    sents, words, tags = [], [], []
+    with open(path, encoding="utf-8-sig") as f:
+        for line in f:
+            cols = line.rstrip("\n").split("\t")
+            if not line.strip():
+                if words: sents.append((words, clean_iob2(tags)))
+                words, tags = [], []
+                continue
+            tag = cols[-1].strip()
+            typ = WNUT_TYPES.get(tag[2:]) if tag != "O" else None
+            words.append(cols[0].strip()); tags.append(tag[:2] + typ if typ else "O")
+    if words: sents.append((words, clean_iob2(tags)))
+    return sents
+
+
 def load_all(data_root):
     """Returns {split: {dataset: sentences}} with split in train/dev/test. English-EWT has no
     train file: its dev file is trained on (documented in models/ner.md) and it is selected on
@@ -184,4 +205,7 @@ def load_all(data_root):
     out["train"]["GUM"] = gum
     out["train"]["WikiGold"] = read_columns(os.path.join(data_root, "ner-extra/wikigold/wikigold.conll.txt"))
     out["train"]["BTC"] = read_columns(os.path.join(data_root, "ner-extra/btc/btc.train"), "\t")
+    # WNUT-17 train and dev are trained on (English web text, like EWT); its test file is never read.
+    out["train"]["WNUT17"] = [s for f in ("wnut17train.conll", "emerging.dev.conll")
+                              for s in read_wnut(os.path.join(data_root, "ner-extra/wnut17", f))]
     return out, stats

@@ -5,6 +5,7 @@ import json
 import os
 import random
 import time
+from collections import Counter
 
 import numpy as np
 import sentencepiece as spm
@@ -92,11 +93,23 @@ class Featurizer:
 UNKNOWN_WORD = fx.fid("w:")  # the "w:" feature of an empty word, which no real word has
 
 
-def drop_words(rng, f, p=0.25):
+def drop_table(sents, p, k):
+    """Per-word dropout probability, indexed by the word's "w:" feature id: p for words seen at most
+    k times in training, falling as k/count above that, so frequent words ("she", "her") keep their
+    identity and only rare ones (most names) teach the tagger to work from affixes and context."""
+    counts = Counter(fx.lower(w) for ws, _ in sents for w in ws)
+    table = np.full(fx.HASH_ROWS, p, dtype=np.float64)
+    for w, c in counts.items():
+        if c > k:
+            table[fx.fid("w:" + w)] = p * k / c
+    table[0] = 0.0
+    return torch.from_numpy(table)
+
+
+def drop_words(rng, f, table):
     """Word dropout: a word's identity features (slots 0 and 1) are replaced by an unknown-word id
-    so the tagger learns from affixes, pieces, shape and context rather than memorising names."""
-    if p <= 0: return f
-    drop = torch.from_numpy(rng.random(f.shape[:2]) < p) & (f[:, :, 0] > 0)
+    with the probability drop_table gives its lower-cased form."""
+    drop = torch.from_numpy(rng.random(f.shape[:2])) < table[f[:, :, 0]]
     f = f.clone()
     f[:, :, 0][drop] = UNKNOWN_WORD
     f[:, :, 1][drop] = 0
@@ -179,10 +192,12 @@ def run(args, data, sp, drop_groups, dim, dilations, epochs, log):
     model = Tagger(fx.HASH_ROWS, sp.get_piece_size() + 1, dim, dilations)
     opt = torch.optim.Adam(model.parameters(), lr=2e-3)
     nerkor = data["train"]["NerKor"]
-    others = [s for n, ss in sorted(data["train"].items()) if n != "NerKor" for s in ss]
+    repeat = dict((n, int(k)) for n, k in (r.split("=") for r in args.repeat.split(",") if r))
+    others = [s for n, ss in sorted(data["train"].items()) if n != "NerKor" for s in ss * repeat.get(n, 1)]
     if args.ablations:
         others = random.Random(SEED).sample(others, int(len(others) * args.ablation_share))
     dev = data["dev"]
+    dropout_table = drop_table(others + nerkor, args.word_dropout, args.dropout_count)
     total_steps = epochs * ((len(others) + int(len(nerkor) * args.nerkor_share)) // 32 + 1)
     sched = torch.optim.lr_scheduler.OneCycleLR(opt, max_lr=2e-3, total_steps=total_steps + 10, pct_start=0.1)
     best, best_state, t0 = -1.0, None, time.time()
@@ -196,7 +211,7 @@ def run(args, data, sp, drop_groups, dim, dilations, epochs, log):
         loss_sum = 0.0
         for b in batches:
             f, p, y = batch_tensors(feat, b)
-            logits = model(drop_words(nrng, f, args.word_dropout), p)
+            logits = model(drop_words(nrng, f, dropout_table), p)
             loss = torch.nn.functional.cross_entropy(logits.reshape(-1, len(LABELS)), y.reshape(-1), ignore_index=-100)
             opt.zero_grad(); loss.backward(); opt.step(); sched.step()
             loss_sum += loss.item()
@@ -249,11 +264,16 @@ def main():
     ap.add_argument("--epochs", type=int, default=5)
     ap.add_argument("--nerkor-share", type=float, default=0.2)
     ap.add_argument("--word-dropout", type=float, default=0.25)
+    ap.add_argument("--dropout-count", type=int, default=50, help="words seen more often are dropped less")
+    ap.add_argument("--dilations", default="1,2,4,8,1", help="receptive field = sum, at most the C# window overlap (16)")
+    ap.add_argument("--threads", type=int, default=1)
+    ap.add_argument("--repeat", default="English-EWT=3",
+                    help="training sets seen several times per epoch: English's only in-domain data is small")
     ap.add_argument("--ablations", action="store_true")
     ap.add_argument("--ablation-epochs", type=int, default=2)
     ap.add_argument("--ablation-share", type=float, default=0.4, help="share of the non-NerKor training sentences")
     args = ap.parse_args()
-    torch.set_num_threads(1)
+    torch.set_num_threads(args.threads)
     logf = open(os.path.join(args.out, "ner.ablations.log" if args.ablations else "ner.train.log"), "w", encoding="utf-8")
 
     def log(msg):
@@ -286,7 +306,10 @@ def main():
             for name, best, secs in rows:
                 fh.write(f"{name}\t{best:.4f}\t{secs:.0f}\n")
         return
-    model, feat, best, secs = run(args, data, sp, (), 96, (1, 2, 4, 1), args.epochs, log)
+    dilations = tuple(int(d) for d in args.dilations.split(","))
+    assert sum(dilations) <= 16, "receptive field beyond the C# window overlap"
+    log(f"dilations {dilations}, word dropout {args.word_dropout} (count > {args.dropout_count} scaled down), {args.epochs} epochs, repeats {args.repeat}")
+    model, feat, best, secs = run(args, data, sp, (), 96, dilations, args.epochs, log)
     log(f"best dev mean F1 {best:.4f}, training {secs:.0f}s")
     export(model, feat, sp, args.out, log)
     for n, s in sorted(data["test"].items()):

@@ -5,8 +5,8 @@ namespace SwitchTag.Tagging;
 /// <summary>Tags pre-tokenised sentences with a <see cref="NerModel"/>. Long sentences are cut into
 /// windows of <see cref="Window"/> words overlapping by <see cref="Overlap"/> on each side; every
 /// word takes its logits from the one window whose core holds it, and the whole sentence is then
-/// decoded at once. The network sees 8 words either side (kernel 3, dilations 1, 2, 4, 1) and the
-/// features use the full sentence, so with an overlap of at least 8 the stitched logits equal the
+/// decoded at once. The network sees 16 words either side (kernel 3, dilations 1, 2, 4, 8, 1) and the
+/// features use the full sentence, so with an overlap of at least 16 the stitched logits equal the
 /// unchunked ones and no mention is lost or doubled at a seam. Windows of many sentences are
 /// batched together, longest first, each batch holding windows of similar length.</summary>
 public sealed class SequenceTagger(NerModel model, int window = 256, int overlap = 16, int batchWords = 2048)

@@ -19,7 +19,7 @@ public class ChunkingTests
     {
         var words = LongInput(700);
         var whole = new SequenceTagger(Models.Ner, window: 1000).Logits([words])[0];
-        var chunked = new SequenceTagger(Models.Ner, window: 64, overlap: 8).Logits([words])[0];
+        var chunked = new SequenceTagger(Models.Ner, window: 64, overlap: 16).Logits([words])[0];
         Assert.Equal(whole.Length, chunked.Length);
         for (int i = 0; i < whole.Length; i++)
             Assert.True(Math.Abs(whole[i] - chunked[i]) <= 1e-4, $"logit {i}: {whole[i]} vs {chunked[i]}");
@@ -32,10 +32,11 @@ public class ChunkingTests
         var words = Enumerable.Repeat("Yesterday Anna Maria Novak flew from New York City to Rio de Janeiro .".Split(' '), 50)
             .SelectMany(w => w).ToList();
         var whole = new SequenceTagger(Models.Ner, window: 1000).Spans([words])[0];
-        var chunked = new SequenceTagger(Models.Ner, window: 40, overlap: 8).Spans([words])[0];
+        var chunked = new SequenceTagger(Models.Ner, window: 56, overlap: 16).Spans([words])[0];
         Assert.Equal(whole.Select(s => (s.Start, s.End, s.Label)), chunked.Select(s => (s.Start, s.End, s.Label)));
-        // Window 40, overlap 8: cores end at 32, 56, 80, ... (stride 24); these are the seams.
-        var seams = Enumerable.Range(0, words.Count / 24).Select(k => 32 + 24 * k).ToList();
+        // Window 56, overlap 16 (the network sees 16 words either side): cores end at 40, 64, 88, ...
+        // (stride 24); these are the seams.
+        var seams = Enumerable.Range(0, words.Count / 24).Select(k => 40 + 24 * k).ToList();
         Assert.Contains(chunked, s => seams.Any(q => s.Start < q && q < s.End));
     }
 }
