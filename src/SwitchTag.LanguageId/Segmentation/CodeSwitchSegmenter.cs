@@ -112,6 +112,7 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
         if (evidence.Count == 0) return [new LanguageSpan(0, text.Length, Undetermined, 0)];
 
         var labels = Decode(scores, weights, mainLanguage, parameters);
+        MergeShortIslands(text, tokens, evidence, labels, scores, weights);
         return BuildSpans(text, tokens, evidence, labels, scores);
     }
 
@@ -154,6 +155,61 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
             if (switched[w * classes + state]) state = switchedFrom[w];
         }
         return labels;
+    }
+
+    /// <summary>At most one ordinary word of evidence (or only names) between words of another language in the same script is a loanword, a cognate or
+    /// a name ("voyage?", "Kurt. [pause] Kurt"), not a switch: such an island takes the language of
+    /// the run before it (or after it, at the start). A different script is evidence enough.</summary>
+    private void MergeShortIslands(string text, List<Token> tokens, List<int> evidence, int[] labels,
+        List<float[]> scores, List<float> weights)
+    {
+        int n = labels.Length;
+        int start = 0;
+        while (start < n)
+        {
+            int end = start;
+            while (end + 1 < n && _codeOfClass[labels[end + 1]] == _codeOfClass[labels[start]]) end++;
+            bool hasBefore = start > 0, hasAfter = end + 1 < n;
+            if (hasBefore || hasAfter)
+            {
+                float weight = 0;
+                for (int w = start; w <= end; w++) weight += weights[w];
+                int neighbour = hasBefore ? start - 1 : end + 1;
+                if (weight < MinIslandWeight && SameScript(text, tokens[evidence[start]], tokens[evidence[neighbour]]))
+                {
+                    int code = _codeOfClass[labels[neighbour]];
+                    for (int w = start; w <= end; w++) labels[w] = BestClassOf(code, scores[w]);
+                }
+            }
+            start = end + 1;
+        }
+    }
+
+    /// <summary>Just above one ordinary word: a word plus a name-like one ("dzięki Bogu", 1 + NameWeight)
+    /// is a switch.</summary>
+    private const float MinIslandWeight = 1.1f;
+
+    private int BestClassOf(int code, float[] wordScores)
+    {
+        int best = -1;
+        for (int c = 0; c < wordScores.Length; c++)
+            if (_codeOfClass[c] == code && (best < 0 || wordScores[c] > wordScores[best])) best = c;
+        return best;
+    }
+
+    private static bool SameScript(string text, Token a, Token b) =>
+        ScriptOf(text.AsSpan(a.Start, a.Length)) == ScriptOf(text.AsSpan(b.Start, b.Length));
+
+    /// <summary>A coarse script class from the first letter: Latin blocks as one, else the Unicode
+    /// block's high byte (Cyrillic, Greek, Hebrew, Arabic... each fall in their own).</summary>
+    private static int ScriptOf(ReadOnlySpan<char> word)
+    {
+        foreach (char c in word)
+        {
+            if (!char.IsLetter(c)) continue;
+            return c <= '\u024F' || (c >= '\u1E00' && c <= '\u1EFF') ? 0 : c >> 8;
+        }
+        return -1;
     }
 
     private ImmutableArray<LanguageSpan> BuildSpans(string text, List<Token> tokens, List<int> evidence, int[] labels,
