@@ -20,8 +20,10 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// named); other one-word names group by folded key.
 /// Organisations group by folded key.
 /// Held for review instead: mentions below the confidence floor, PER mentions that are the own name
-/// of a place of 100,000 people or more, surfaces tagged both PER and LOC in the interview, and model mentions whose first letter is
-/// lower case (names in cased scripts are capitalised; uncased scripts are never caught).</summary>
+/// of a place of 100,000 people or more, surfaces tagged both PER and LOC in the interview, model mentions whose first letter is
+/// lower case (names in cased scripts are capitalised; uncased scripts are never caught), and one-word
+/// model mentions the interview also writes in lower case as an ordinary word (unless a place
+/// mention the gazetteer knows: "o porto" beside Porto).</summary>
 public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow = HeadingBuilder.DefaultReviewBelow)
 {
     public const double DefaultReviewBelow = 0.5;
@@ -55,10 +57,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (!labelsOfSurface.TryGetValue(mentions[i].Text, out var set)) labelsOfSurface[mentions[i].Text] = set = [];
             set.Add(mentions[i].Label);
         }
+        var lowerWords = LowerCaseWords(turns);
         for (int i = 0; i < n; i++)
         {
             if (accepted?.Contains(i) == true) continue;
-            var reason = ReviewReason(mentions[i], keys[i], places[i], labelsOfSurface[mentions[i].Text]);
+            var reason = ReviewReason(mentions[i], keys[i], places[i], labelsOfSurface[mentions[i].Text], lowerWords);
             if (reason is null) continue;
             held[i] = true;
             review.Add(new ReviewItem(i, reason));
@@ -93,7 +96,28 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         return found.IsDefault ? [] : found;
     }
 
-    private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, HashSet<NameLabel> labelsOfSurface)
+    /// <summary>Every word of the interview written with a lower-case first letter: a capitalised
+    /// one-word "name" that the same talk also uses as an ordinary word ("Her", "She", "Schnell" at a
+    /// sentence start beside "her", "schnell") is more likely that word than a name.</summary>
+    private static HashSet<string> LowerCaseWords(ImmutableArray<Turn> turns)
+    {
+        var words = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var turn in turns)
+        {
+            var text = turn.Text;
+            for (int i = 0; i < text.Length;)
+            {
+                if (!char.IsLetter(text[i])) { i++; continue; }
+                int start = i;
+                while (i < text.Length && (char.IsLetter(text[i]) || char.GetUnicodeCategory(text[i]) == System.Globalization.UnicodeCategory.NonSpacingMark)) i++;
+                if (char.IsLower(text[start])) words.Add(text[start..i]);
+            }
+        }
+        return words;
+    }
+
+    private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, HashSet<NameLabel> labelsOfSurface,
+        HashSet<string> lowerWords)
     {
         if (labelsOfSurface.Contains(NameLabel.PER) && labelsOfSurface.Contains(NameLabel.LOC) && m.Label != NameLabel.ORG)
             return "the same name is tagged both PER and LOC in this interview";
@@ -101,6 +125,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return $"tagged PER, but \"{m.Text}\" is also the name of a place ({place.Name}, {place.Country})";
         if (m.Source == MentionSource.Model && m.Text.FirstOrDefault(char.IsLetter) is var first && char.IsLower(first))
             return "the model tagged a name that does not start with a capital letter";
+        if (m.Source == MentionSource.Model && (m.Label != NameLabel.LOC || places.IsEmpty) && !m.Text.Any(char.IsWhiteSpace) && m.Text.Length > 0 && char.IsUpper(m.Text[0])
+            && lowerWords.Contains(m.Text.ToLowerInvariant()))
+            return $"\"{m.Text}\" is also used as an ordinary word in this interview (\"{m.Text.ToLowerInvariant()}\")";
         if (m.Confidence < reviewBelow)
             return FormattableString.Invariant($"low confidence ({m.Confidence:0.00})");
         return null;

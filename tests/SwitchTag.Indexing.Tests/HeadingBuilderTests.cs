@@ -98,4 +98,19 @@ public class HeadingBuilderTests
         Assert.Equal("the model tagged a name that does not start with a capital letter", Assert.Single(result.Review).Reason);
         Assert.Equal(2, result.Headings.Length);
     }
+
+    [Fact]
+    public void A_one_word_model_name_the_talk_also_uses_as_an_ordinary_word_goes_to_review()
+    {
+        // English grammar (from memory): "her" is a pronoun; capitalised only at a sentence start.
+        var mentions = ImmutableArray.Create(
+            new Mention(0, 0, 3, "Her", NameLabel.PER, "en", 0.9, MentionSource.Model),
+            new Mention(0, 26, 31, "Irena", NameLabel.PER, "en", 0.9, MentionSource.Model));
+        var times = ImmutableArray.Create(new TimeRange(Timecode.Zero, new Timecode(500)), new TimeRange(new Timecode(1000), new Timecode(1500)));
+        const string text = "Her mother knew her well. Irena";
+        var turn = new Turn(0, "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);
+        var result = new HeadingBuilder(Fixture.Lexicon()).Build(mentions, times, [turn]);
+        Assert.Equal("\"Her\" is also used as an ordinary word in this interview (\"her\")", Assert.Single(result.Review).Reason);
+        Assert.Equal("Irena", Assert.Single(result.Headings).Name);
+    }
 }
