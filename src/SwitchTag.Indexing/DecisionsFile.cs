@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Indexing;
 
@@ -37,8 +38,9 @@ public static class DecisionsFile
     public static (ImmutableArray<Decision> Decisions, ImmutableArray<Diagnostic> Problems) Parse(string path, string text)
     {
         var problems = ImmutableArray.CreateBuilder<Diagnostic>();
-        if (!CsvRecords.TryParse(text, out var records, out var error))
-            problems.Add(new Diagnostic(new SourceLine(path, error!.Value.Line), Severity.Error, error.Value.Message));
+        var (records, csvProblems) = Rfc4180Reader.Parse(text);
+        foreach (var (line, message) in csvProblems)
+            problems.Add(new Diagnostic(new SourceLine(path, line), Severity.Error, message));
         if (records.IsEmpty) return ([], problems.ToImmutable());
 
         var header = records[0].Fields.Select(f => f.Trim().ToLowerInvariant()).ToList();

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Lexicon;
 

@@ -1,3 +1,5 @@
+using SwitchTag.Core.Text;
+
 namespace SwitchTag.Lexicon;
 
 /// <summary>Which alternate names the gazetteer keeps: those written in Latin, Cyrillic, Greek or
@@ -27,17 +29,6 @@ public static class ScriptFilter
     private static bool IsCode(string name) =>
         name.Length is >= 2 and <= 4 && name.All(char.IsAsciiLetterUpper);
 
-    private static bool IsKeptScript(char c) => c switch
-    {
-        <= '\u024F' => true,                        // Basic Latin, Latin-1, Latin Extended-A and -B
-        >= '\u1E00' and <= '\u1EFF' => true,        // Latin Extended Additional (Vietnamese, Welsh...)
-        >= '\u0370' and <= '\u03FF' => true,        // Greek and Coptic
-        >= '\u1F00' and <= '\u1FFF' => true,        // Greek Extended
-        >= '\u0400' and <= '\u052F' => true,        // Cyrillic and Cyrillic Supplement
-        >= '\u0590' and <= '\u05FF' => true,        // Hebrew
-        >= '\uFB1D' and <= '\uFB4F' => true,        // Hebrew presentation forms
-        >= '\u2C60' and <= '\u2C7F' => true,        // Latin Extended-C
-        >= '\uA720' and <= '\uA7FF' => true,        // Latin Extended-D
-        _ => false,
-    };
+    private static bool IsKeptScript(char c) =>
+        WritingScripts.Of(c) is WritingScript.Latin or WritingScript.Greek or WritingScript.Cyrillic or WritingScript.Hebrew;
 }

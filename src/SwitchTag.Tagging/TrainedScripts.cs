@@ -1,4 +1,4 @@
-using System.Globalization;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging;
 
@@ -11,11 +11,7 @@ public static class TrainedScripts
     public static bool Covers(ReadOnlySpan<char> text)
     {
         foreach (char c in text)
-        {
-            if (!char.IsLetter(c)) continue;
-            if (c <= '\u024F' || (c >= '\u1E00' && c <= '\u1EFF')) return true; // Latin blocks incl. Vietnamese
-            if (char.GetUnicodeCategory(c) == UnicodeCategory.OtherLetter && c >= '\u3400' && c <= '\u9FFF') return true; // CJK ideographs
-        }
+            if (WritingScripts.Of(c) is WritingScript.Latin or WritingScript.Han) return true;
         return false;
     }
 }

@@ -1,4 +1,4 @@
-using SwitchTag.Lexicon;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Lexicon.Tests;
 

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
+using SwitchTag.Core.Text;
 using SwitchTag.LanguageId.Model;
 using SwitchTag.LanguageId.Text;
 
@@ -198,19 +199,7 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
     }
 
     private static bool SameScript(string text, Token a, Token b) =>
-        ScriptOf(text.AsSpan(a.Start, a.Length)) == ScriptOf(text.AsSpan(b.Start, b.Length));
-
-    /// <summary>A coarse script class from the first letter: Latin blocks as one, else the Unicode
-    /// block's high byte (Cyrillic, Greek, Hebrew, Arabic... each fall in their own).</summary>
-    private static int ScriptOf(ReadOnlySpan<char> word)
-    {
-        foreach (char c in word)
-        {
-            if (!char.IsLetter(c)) continue;
-            return c <= '\u024F' || (c >= '\u1E00' && c <= '\u1EFF') ? 0 : c >> 8;
-        }
-        return -1;
-    }
+        WritingScripts.OfFirstLetter(text.AsSpan(a.Start, a.Length)) == WritingScripts.OfFirstLetter(text.AsSpan(b.Start, b.Length));
 
     private ImmutableArray<LanguageSpan> BuildSpans(string text, List<Token> tokens, List<int> evidence, int[] labels,
         List<float[]> scores)

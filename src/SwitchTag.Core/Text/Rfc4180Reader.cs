@@ -1,7 +1,7 @@
 using System.Collections.Immutable;
 using System.Text;
 
-namespace SwitchTag.Lexicon;
+namespace SwitchTag.Core.Text;
 
 /// <summary>One CSV record: its fields and the 1-based line it starts on.</summary>
 public sealed record CsvRecord(int Line, ImmutableArray<string> Fields);
