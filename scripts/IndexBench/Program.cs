@@ -1,11 +1,11 @@
 using System.Collections.Immutable;
 using System.Diagnostics;
 using System.Globalization;
-using SwitchTag.Cli;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Formats;
 using SwitchTag.Indexing;
 using SwitchTag.Output;
+using SwitchTag.Pipeline;
 using SwitchTag.Tagging;
 
 // End-to-end throughput of `switchtag index` on one core: the demo interviews read from disk, run
@@ -25,9 +25,10 @@ if (sizes.Count == 0) sizes = [10_000, 100_000, 200_000, 1_000_000];
 
 var files = TranscriptFile.Expand([demo], new List<SwitchTag.Core.Documents.Diagnostic>()).ToList();
 var load = Stopwatch.StartNew();
-var stages = IndexStages.Load(mode, null, out var error) ?? throw new InvalidOperationException(error);
-Console.WriteLine($"models loaded in {load.Elapsed.TotalSeconds:0.00} s; names: {(mode == TaggingMode.RulesOnly ? "rules-only" : "default")}; notes: {stages.Notes.Length}");
-foreach (var n in stages.Notes) Console.WriteLine($"  {n}");
+var build = new IndexPipelineBuilder().UseShippedModels(mode).Build();
+var pipeline = build.Pipeline ?? throw new InvalidOperationException(build.Error);
+Console.WriteLine($"models loaded in {load.Elapsed.TotalSeconds:0.00} s; names: {(mode == TaggingMode.RulesOnly ? "rules-only" : "default")}; notes: {build.Notes.Length}");
+foreach (var n in build.Notes) Console.WriteLine($"  {n}");
 
 long setWords = files.Sum(f => TurnBuilder.Build(TranscriptFile.Read(f).Transcript!).Sum(t => LanguageStatistics.CountWords(t.Text, 0, t.Text.Length)));
 Console.WriteLine($"demo set: {files.Count} interviews, {setWords} words");
@@ -58,15 +59,15 @@ void StageTimes()
         var transcript = TranscriptFile.Read(file).Transcript!;
         t[0] += Lap();
         var turns = TurnBuilder.Build(transcript);
-        string main = MainLanguage.Detect(stages.Languages, turns);
+        string main = MainLanguage.Detect(pipeline.Languages, turns);
         t[1] += Lap();
-        var spans = turns.Select(x => stages.Languages.Segment(x.Text, main)).ToImmutableArray();
+        var spans = turns.Select(x => pipeline.Languages.Segment(x.Text, main)).ToImmutableArray();
         t[2] += Lap();
-        var mentions = turns.SelectMany((x, i) => stages.Names.Tag(i, x.Text, spans[i])).ToImmutableArray();
+        var mentions = turns.SelectMany((x, i) => pipeline.Names.Tag(i, x.Text, spans[i])).ToImmutableArray();
         t[3] += Lap();
-        var index = new IndexBuilder(stages.Lexicon).Build(transcript, turns, main, spans, mentions);
+        var index = new IndexBuilder(pipeline.Lexicon).Build(transcript, turns, main, spans, mentions);
         t[4] += Lap();
-        InterviewOutputs.Write(index, Path.Combine(outDir, index.Transcript.Name));
+        pipeline.Write(index, Path.Combine(outDir, index.Transcript.Name));
         t[5] += Lap();
     }
     Directory.Delete(outDir, recursive: true);
@@ -84,13 +85,13 @@ void StageTimes()
         foreach (var file in files)
         {
             var transcript = TranscriptFile.Read(file).Transcript!;
-            var (index, _) = stages.Run(transcript, null, []);
+            var index = pipeline.Run(transcript);
             string folder = $"{index.Transcript.Name}-{c}";
-            InterviewOutputs.Write(index, Path.Combine(outDir, folder));
+            pipeline.Write(index, Path.Combine(outDir, folder));
             entries.Add(CollectionEntry.From(index, folder));
             words += index.Turns.Sum(t => LanguageStatistics.CountWords(t.Text, 0, t.Text.Length));
         }
-    InterviewOutputs.WriteCollection(entries, outDir);
+    pipeline.WriteCollection(entries, outDir);
     double seconds = clock.Elapsed.TotalSeconds;
     Directory.Delete(outDir, recursive: true);
     return (words, entries.Count, seconds);

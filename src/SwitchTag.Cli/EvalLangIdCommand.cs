@@ -1,7 +1,5 @@
 using System.CommandLine;
-using System.Text;
-using System.Text.Json;
-using SwitchTag.LanguageId.Segmentation;
+using SwitchTag.Pipeline;
 
 namespace SwitchTag.Cli;
 
@@ -24,69 +22,10 @@ public static class EvalLangIdCommand
             }
             var segmenter = LangIdCommand.LoadSegmenter();
             if (segmenter is null) return ExitCodes.InputsRejected;
-            var result = Evaluate(segmenter, folder.FullName);
-            Console.WriteLine(parseResult.GetValue(json) ? ToJson(result) : ToText(result));
+            var result = LanguageIdEvaluation.Evaluate(segmenter, folder.FullName);
+            Console.WriteLine(parseResult.GetValue(json) ? LanguageIdEvaluation.ToJson(result) : LanguageIdEvaluation.ToText(result));
             return ExitCodes.Success;
         });
         return command;
-    }
-
-    public sealed record LanguageScore(double Accuracy, int N);
-
-    public sealed record Result(double Mean, SortedDictionary<string, LanguageScore> Languages, List<string> Skipped);
-
-    public static Result Evaluate(CodeSwitchSegmenter segmenter, string folder)
-    {
-        var supported = segmenter.Languages.ToHashSet(StringComparer.Ordinal);
-        var scores = new SortedDictionary<string, LanguageScore>(StringComparer.Ordinal);
-        var skipped = new List<string>();
-        foreach (var file in Directory.GetFiles(folder, "*.txt").Order(StringComparer.Ordinal))
-        {
-            var code = Path.GetFileNameWithoutExtension(file);
-            if (!supported.Contains(code)) { skipped.Add(code); continue; }
-            int n = 0, right = 0;
-            foreach (var line in File.ReadLines(file, Encoding.UTF8))
-            {
-                if (string.IsNullOrWhiteSpace(line)) continue;
-                n++;
-                if (segmenter.Identify(line).Language == code) right++;
-            }
-            scores[code] = new LanguageScore(n == 0 ? 0 : (double)right / n, n);
-        }
-        double mean = scores.Count == 0 ? 0 : scores.Values.Average(s => s.Accuracy);
-        return new Result(mean, scores, skipped);
-    }
-
-    private static string ToJson(Result result)
-    {
-        var buffer = new MemoryStream();
-        using (var w = new Utf8JsonWriter(buffer))
-        {
-            w.WriteStartObject();
-            w.WriteNumber("mean", Math.Round(result.Mean, 6));
-            w.WriteStartObject("languages");
-            foreach (var (code, s) in result.Languages)
-            {
-                w.WriteStartObject(code);
-                w.WriteNumber("accuracy", Math.Round(s.Accuracy, 6));
-                w.WriteNumber("n", s.N);
-                w.WriteEndObject();
-            }
-            w.WriteEndObject();
-            w.WriteStartArray("skipped");
-            foreach (var code in result.Skipped) w.WriteStringValue(code);
-            w.WriteEndArray();
-            w.WriteEndObject();
-        }
-        return Encoding.UTF8.GetString(buffer.ToArray());
-    }
-
-    private static string ToText(Result result)
-    {
-        var sb = new StringBuilder();
-        foreach (var (code, s) in result.Languages) sb.AppendLine($"{code}\t{s.Accuracy:P1}\t{s.N}");
-        sb.AppendLine($"mean\t{result.Mean:P1}");
-        if (result.Skipped.Count > 0) sb.Append($"skipped\t{string.Join(" ", result.Skipped)}");
-        return sb.ToString().TrimEnd();
     }
 }

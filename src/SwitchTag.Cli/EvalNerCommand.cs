@@ -1,10 +1,10 @@
 using System.CommandLine;
-using SwitchTag.Tagging;
+using SwitchTag.Pipeline;
 
 namespace SwitchTag.Cli;
 
 /// <summary><c>switchtag eval ner --gold FILE... [--json]</c>: scores the shipped name model on
-/// pre-tokenised gold files (DESIGN.md contract; format rules in <see cref="GoldReader"/>).</summary>
+/// pre-tokenised gold files (<see cref="NameModelEvaluation"/>).</summary>
 public static class EvalNerCommand
 {
     public static Command Create()
@@ -17,38 +17,12 @@ public static class EvalNerCommand
         };
         var json = new Option<bool>("--json") { Description = "Print {\"micro\", \"PER\", \"LOC\", \"ORG\"} precision/recall/f1 as JSON" };
         var command = new Command("ner", "Score the name tagger on gold files (exact span match, conlleval rules).") { gold, json };
-        command.SetAction(parse => Run(parse.GetValue(gold) ?? [], parse.GetValue(json), Console.Out, Console.Error));
+        command.SetAction(parse => NameModelEvaluation.Run(parse.GetValue(gold) ?? [], parse.GetValue(json), Console.Out, Console.Error) switch
+        {
+            NameEvaluationResult.Scored => ExitCodes.Success,
+            NameEvaluationResult.NoInput => ExitCodes.Usage,
+            _ => ExitCodes.InputsRejected,
+        });
         return command;
-    }
-
-    public static int Run(IReadOnlyList<string> goldFiles, bool json, TextWriter output, TextWriter error)
-    {
-        if (goldFiles.Count == 0)
-        {
-            error.WriteLine("switchtag eval ner: give at least one --gold FILE");
-            return ExitCodes.Usage;
-        }
-        var problems = new List<string>();
-        var sentences = new List<GoldSentence>();
-        int rejected = 0;
-        foreach (var file in goldFiles)
-        {
-            if (!File.Exists(file)) { problems.Add($"{file}: no such file"); rejected++; continue; }
-            sentences.AddRange(GoldReader.Read(file, problems));
-        }
-        foreach (var p in problems) error.WriteLine($"switchtag eval ner: {p}");
-        NerModel model;
-        try
-        {
-            model = NerModel.Shared(ModelLocator.ModelsDirectory);
-        }
-        catch (Exception e) when (e is IOException or InvalidDataException or UnauthorizedAccessException or Microsoft.ML.OnnxRuntime.OnnxRuntimeException or System.Text.Json.JsonException or KeyNotFoundException)
-        {
-            error.WriteLine($"switchtag eval ner: cannot load the name model from {ModelLocator.ModelsDirectory}: {e.Message}");
-            return ExitCodes.InputsRejected;
-        }
-        var scores = NerEvaluation.Evaluate(new SequenceTagger(model), sentences);
-        output.WriteLine(json ? NerEvaluation.ToJson(scores) : NerEvaluation.ToTable(scores));
-        return rejected > 0 ? ExitCodes.InputsRejected : ExitCodes.Success;
     }
 }

@@ -1,8 +1,5 @@
-using System.Collections.Immutable;
 using System.CommandLine;
-using SwitchTag.Core.Documents;
-using SwitchTag.Indexing;
-using SwitchTag.Tagging;
+using SwitchTag.Pipeline;
 
 namespace SwitchTag.Cli;
 
@@ -25,61 +22,20 @@ public static class IndexCommand
         };
         command.SetAction(parse =>
         {
-            var options = IndexOptions.From(parse.GetValue(paths) ?? [], parse.GetValue(output)!, parse.GetValue(format), parse.GetValue(main),
+            var request = IndexRequest.From(parse.GetValue(paths) ?? [], parse.GetValue(output)!, parse.GetValue(format), parse.GetValue(main),
                 parse.GetValue(names)!, parse.GetValue(authority), parse.GetValue(decisions), out string? usage);
-            if (options is null)
+            if (request is null)
             {
                 Console.Error.WriteLine($"switchtag index: {usage}");
                 return ExitCodes.Usage;
             }
-            return IndexRun.Execute(options, Console.Error);
+            return IndexRun.Execute(request, Console.Error, IndexProgress.Run) switch
+            {
+                IndexRunResult.Indexed => ExitCodes.Success,
+                IndexRunResult.InputsRejected => ExitCodes.InputsRejected,
+                _ => ExitCodes.Usage,
+            };
         });
         return command;
-    }
-}
-
-/// <summary>The checked options of one index run.</summary>
-public sealed record IndexOptions(
-    ImmutableArray<string> Paths,
-    string OutDir,
-    TranscriptFormat? Format,
-    string? MainLanguage,
-    TaggingMode Names,
-    string? AuthorityPath,
-    ImmutableArray<Decision> Decisions,
-    ImmutableArray<Diagnostic> DecisionProblems)
-{
-    public static IndexOptions? From(string[] paths, string outDir, string? format, string? main, string names,
-        string? authority, string? decisions, out string? usage)
-    {
-        usage = null;
-        TranscriptFormat? forced = null;
-        if (format is not null)
-        {
-            if (!TranscriptFormatNames.TryParse(format, out var f)) { usage = $"unknown --format \"{format}\" (webvtt, srt, text or markdown)"; return null; }
-            forced = f;
-        }
-        TaggingMode mode;
-        switch (names)
-        {
-            case "rules-only": mode = TaggingMode.RulesOnly; break;
-            case "default": mode = TaggingMode.RulesThenModel; break;
-            default: usage = $"unknown --names \"{names}\" (rules-only or default)"; return null;
-        }
-        if (main is not null && (main.Length is < 2 or > 3 || !main.All(char.IsAsciiLetterLower)))
-        {
-            usage = $"--main wants an ISO 639 code such as en or pl, not \"{main}\"";
-            return null;
-        }
-        if (authority is not null && !File.Exists(authority)) { usage = $"--authority: no such file {authority}"; return null; }
-        ImmutableArray<Decision> list = [];
-        ImmutableArray<Diagnostic> problems = [];
-        if (decisions is not null)
-        {
-            if (!File.Exists(decisions)) { usage = $"--decisions: no such file {decisions}"; return null; }
-            (list, problems) = DecisionsFile.Read(decisions);
-        }
-        if (File.Exists(outDir)) { usage = $"--out {outDir} is a file, not a folder"; return null; }
-        return new IndexOptions([.. paths], outDir, forced, main, mode, authority, list, problems);
     }
 }

@@ -1,7 +1,8 @@
 using System.CommandLine;
 using System.Text;
-using System.Text.Json;
 using SwitchTag.LanguageId.Segmentation;
+using SwitchTag.Pipeline;
+using SwitchTag.Pipeline.Models;
 
 namespace SwitchTag.Cli;
 
@@ -9,8 +10,6 @@ namespace SwitchTag.Cli;
 /// (DESIGN.md contract: one JSON object per input line, in order).</summary>
 public static class LangIdCommand
 {
-    public const string ModelFile = "langid.bin";
-
     public static Command Create()
     {
         var languages = new Option<bool>("--languages") { Description = "Print the supported language codes, one per line." };
@@ -38,58 +37,17 @@ public static class LangIdCommand
                 Console.Error.WriteLine($"switchtag langid: {file.FullName}: file not found");
                 return ExitCodes.InputsRejected;
             }
-            WriteLines(segmenter, File.ReadLines(file.FullName, Encoding.UTF8), Console.Out, parseResult.GetValue(json));
+            LanguageIdLines.Write(segmenter, File.ReadLines(file.FullName, Encoding.UTF8), Console.Out, parseResult.GetValue(json));
             return ExitCodes.Success;
         });
         return command;
     }
 
+    /// <summary>The shipped language model, or null after saying on stderr why it cannot be loaded.</summary>
     internal static CodeSwitchSegmenter? LoadSegmenter()
     {
-        var path = ModelLocator.PathOf(ModelFile);
-        try
-        {
-            return CodeSwitchSegmenter.Load(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or InvalidDataException)
-        {
-            Console.Error.WriteLine($"switchtag: cannot load the language model {path}: {e.Message} (rebuild it with scripts/train-langid)");
-            return null;
-        }
-    }
-
-    public static void WriteLines(CodeSwitchSegmenter segmenter, IEnumerable<string> lines, TextWriter output, bool json)
-    {
-        var buffer = new MemoryStream();
-        foreach (var line in lines)
-        {
-            var guess = segmenter.Identify(line);
-            var spans = segmenter.Segment(line, guess.Language);
-            if (!json)
-            {
-                output.WriteLine($"{guess.Language}\t{guess.Confidence:F3}\t" +
-                    string.Join(" ", spans.Select(s => $"{s.CharStart}-{s.CharEnd}:{s.Language}")));
-                continue;
-            }
-            buffer.SetLength(0);
-            using (var w = new Utf8JsonWriter(buffer))
-            {
-                w.WriteStartObject();
-                w.WriteString("language", guess.Language);
-                w.WriteNumber("confidence", Math.Round(guess.Confidence, 4));
-                w.WriteStartArray("spans");
-                foreach (var s in spans)
-                {
-                    w.WriteStartObject();
-                    w.WriteNumber("start", s.CharStart);
-                    w.WriteNumber("end", s.CharEnd);
-                    w.WriteString("language", s.Language);
-                    w.WriteEndObject();
-                }
-                w.WriteEndArray();
-                w.WriteEndObject();
-            }
-            output.WriteLine(Encoding.UTF8.GetString(buffer.GetBuffer(), 0, (int)buffer.Length));
-        }
+        var segmenter = ShippedModels.LoadLanguageModel(ModelLocation.Default, null, out var error);
+        if (segmenter is null) Console.Error.WriteLine($"switchtag: {error}");
+        return segmenter;
     }
 }

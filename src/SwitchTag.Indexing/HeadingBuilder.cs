@@ -81,11 +81,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             foreach (int i in heading.Mentions) headingOf[i] = heading.Id;
             headings.Add(heading);
         }
-        var ordered = headings
-            .OrderBy(h => h.Label)
-            .ThenBy(h => h.Name, StringComparer.InvariantCultureIgnoreCase)
-            .ThenBy(h => h.Id, StringComparer.Ordinal)
-            .ToImmutableArray();
+        var ordered = HeadingOrder.Sort(headings);
         return new HeadingResult(ordered, [.. headingOf], review.ToImmutable());
     }
 

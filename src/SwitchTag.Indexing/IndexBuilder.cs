@@ -1,21 +1,19 @@
 using System.Collections.Immutable;
+using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Time;
+using SwitchTag.Indexing.Decisions;
 
 namespace SwitchTag.Indexing;
 
 /// <summary>The time and index stages: places mentions and language spans in time, applies the
-/// reviewers' decisions, groups headings, and builds the translators' worklist.</summary>
+/// reviewers' decisions (their outcomes go on the index), groups headings, and builds the
+/// translators' worklist.</summary>
 public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decision> decisions = default,
     double reviewBelow = HeadingBuilder.DefaultReviewBelow) : IIndexBuilder
 {
     public InterviewIndex Build(Transcript transcript, ImmutableArray<Turn> turns, string mainLanguage,
-        ImmutableArray<ImmutableArray<LanguageSpan>> spans, ImmutableArray<Mention> mentions) =>
-        BuildWithOutcomes(transcript, turns, mainLanguage, spans, mentions).Index;
-
-    public (InterviewIndex Index, ImmutableArray<DecisionOutcome> Outcomes) BuildWithOutcomes(
-        Transcript transcript, ImmutableArray<Turn> turns, string mainLanguage,
         ImmutableArray<ImmutableArray<LanguageSpan>> spans, ImmutableArray<Mention> mentions)
     {
         var diagnostics = ImmutableArray.CreateBuilder<Diagnostic>();
@@ -33,11 +31,12 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         }
         var ordered = valid.OrderBy(m => m.Turn).ThenBy(m => m.CharStart).ThenBy(m => m.CharEnd).ToImmutableArray();
 
-        var applier = new DecisionApplier(decisions, transcript.Name);
-        var (decided, accepted) = applier.ApplyToMentions(ordered);
+        var decisionStage = new DecisionStage(decisions, transcript.Name);
+        var (decided, accepted, mentionOutcomes) = decisionStage.ApplyToMentions(ordered);
         var times = decided.Select(m => aligner.Align(turns[m.Turn], m.CharStart, m.CharEnd)).ToImmutableArray();
         var grouped = new HeadingBuilder(lexicon, reviewBelow).Build(decided, times, turns, accepted);
-        var (finalMentions, finalTimes, headings) = applier.ApplyToHeadings(decided, times, grouped);
+        var (finalMentions, finalTimes, headings, headingOutcomes) = decisionStage.ApplyToHeadings(decided, times, grouped);
+        var outcomes = mentionOutcomes.Zip(headingOutcomes, (m, h) => m with { Applied = m.Applied + h.Applied }).ToImmutableArray();
 
         var indexed = finalMentions.Select((m, i) => new IndexedMention(m, finalTimes[i], headings.HeadingOf[i])).ToImmutableArray();
         var safeSpans = Enumerable.Range(0, turns.Length)
@@ -49,9 +48,8 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         var worklist = WorklistBuilder.Build(turns, safeSpans, mainLanguage, aligner);
         var duration = transcript.Cues.IsEmpty ? Timecode.Zero : transcript.Cues.Max(c => c.Time.End);
 
-        var index = new InterviewIndex(transcript, mainLanguage, duration, turns, timedSpans, indexed,
-            headings.Headings, worklist, headings.Review, diagnostics.ToImmutable());
-        return (index, applier.Outcomes);
+        return new InterviewIndex(transcript, mainLanguage, duration, turns, timedSpans, indexed,
+            headings.Headings, worklist, headings.Review, diagnostics.ToImmutable(), outcomes);
     }
 
     private static SourceLine At(Transcript transcript, ImmutableArray<Turn> turns, int turn) =>

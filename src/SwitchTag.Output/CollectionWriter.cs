@@ -35,7 +35,7 @@ public static class CollectionWriter
                 if (!rows.TryGetValue(h.Id, out var row)) rows[h.Id] = row = new Row(h.Id, h.Label, h.Name, h.Place, []);
                 row.Uses.Add((e, h));
             }
-        return rows.Values.OrderBy(r => r.Label).ThenBy(r => r.Name, StringComparer.InvariantCultureIgnoreCase).ThenBy(r => r.Id, StringComparer.Ordinal).ToList();
+        return HeadingOrder.Apply(rows.Values, r => r.Label, r => r.Name, r => r.Id).ToList();
     }
 
     public static void WriteJson(IReadOnlyList<CollectionEntry> entries, Stream stream)

@@ -1,6 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
-using SwitchTag.Indexing;
+using SwitchTag.Indexing.Decisions;
 using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output;
 using Xunit;
@@ -56,11 +56,7 @@ public class DecisionsTests
     {
         var (decisions, _) = DecisionsFile.Parse("decisions.csv",
             "action,interview,label,name,turn,char,value\r\nreject-mention,anna-nowak,,Lisbon,0,3,\r\nrename-heading,,LOC,Paris,,,Paryż\r\n");
-        var t = Fixture.Transcript();
-        var turns = SwitchTag.Core.Pipeline.TurnBuilder.Build(t);
-        var spans = turns.Select(x => Fixture.Segmenter().Segment(x.Text, "en")).ToImmutableArray();
-        var mentions = turns.SelectMany((x, i) => Fixture.Tagger().Tag(i, x.Text, spans[i])).ToImmutableArray();
-        var (_, outcomes) = new IndexBuilder(Fixture.Lexicon(), decisions).BuildWithOutcomes(t, turns, "en", spans, mentions);
+        var outcomes = Fixture.Run(decisions).Decisions;
         Assert.Equal(0, outcomes[0].Applied);
         Assert.Equal(1, outcomes[1].Applied);
     }

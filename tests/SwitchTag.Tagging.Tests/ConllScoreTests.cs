@@ -1,5 +1,4 @@
 using System.Text.Json;
-using SwitchTag.Cli;
 using SwitchTag.Tagging;
 using SwitchTag.Tests.Shared;
 
@@ -62,44 +61,6 @@ public class ConllScoreTests
             Assert.Equal(0.3333, json.GetProperty("micro").GetProperty("precision").GetDouble());
         }
         finally { File.Delete(path); }
-    }
-
-    [Fact]
-    public void CommandPrintsContractJsonForAFile()
-    {
-        var path = Path.Combine(Path.GetTempPath(), $"switchtag-eval-{Guid.NewGuid():N}.conll");
-        // CoNLL layout: token first, tag last.
-        File.WriteAllText(path, "John\tNNP\tB-PER\nSmith\tNNP\tI-PER\nvisited\tVBD\tO\nLondon\tNNP\tB-LOC\n.\t.\tO\n");
-        try
-        {
-            var output = new StringWriter();
-            int code = EvalNerCommand.Run([path], json: true, output, new StringWriter());
-            Assert.Equal(0, code);
-            var json = JsonDocument.Parse(output.ToString()).RootElement;
-            foreach (var key in new[] { "micro", "PER", "LOC", "ORG" })
-                foreach (var field in new[] { "precision", "recall", "f1" })
-                    Assert.InRange(json.GetProperty(key).GetProperty(field).GetDouble(), 0, 1);
-        }
-        finally { File.Delete(path); }
-    }
-
-    [Fact]
-    public void MissingGoldFileIsRejectedWithExitCode1()
-    {
-        var error = new StringWriter();
-        Assert.Equal(1, EvalNerCommand.Run(["/nonexistent/gold.iob2"], json: true, new StringWriter(), error));
-        Assert.Contains("no such file", error.ToString());
-    }
-
-    [Fact]
-    public void DanishDdtTestStaysAboveFloor()
-    {
-        // Universal NER v1, Danish-DDT test split (CC BY-SA 4.0), never trained on or selected on.
-        var path = TestPaths.RequireData("ner/uner/Danish-DDT/da_ddt-ud-test.iob2");
-        var output = new StringWriter();
-        Assert.Equal(0, EvalNerCommand.Run([path], json: true, output, new StringWriter()));
-        var f1 = JsonDocument.Parse(output.ToString()).RootElement.GetProperty("micro").GetProperty("f1").GetDouble();
-        Assert.True(f1 >= 0.65, $"Danish-DDT test micro-F1 {f1}");
     }
 
     [Fact]

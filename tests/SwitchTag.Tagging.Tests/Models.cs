@@ -4,7 +4,7 @@ using SwitchTag.Tests.Shared;
 namespace SwitchTag.Tagging.Tests;
 
 /// <summary>The shipped model (the checkout's models/ folder, or SWITCHTAG_MODELS as the CLI's
-/// ModelLocator reads it), loaded once for all tests.</summary>
+/// ModelLocation reads it), loaded once for all tests.</summary>
 internal static class Models
 {
     public static string Directory { get; } =

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Time;
 
 namespace SwitchTag.Core.Documents;
@@ -43,6 +44,7 @@ public sealed record WorklistItem(
 public sealed record ReviewItem(int Mention, string Reason);
 
 /// <summary>Everything known about one interview after the whole pipeline has run.</summary>
+/// <param name="Decisions">Every reviewer decision meant for this interview and how often it took effect.</param>
 public sealed record InterviewIndex(
     Transcript Transcript,
     string MainLanguage,
@@ -53,4 +55,5 @@ public sealed record InterviewIndex(
     ImmutableArray<Heading> Headings,
     ImmutableArray<WorklistItem> Worklist,
     ImmutableArray<ReviewItem> Review,
-    ImmutableArray<Diagnostic> Diagnostics);
+    ImmutableArray<Diagnostic> Diagnostics,
+    ImmutableArray<DecisionOutcome> Decisions);

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Time;

@@ -1,20 +1,21 @@
 using System.Text.Json;
-using SwitchTag.Cli;
 using SwitchTag.LanguageId.Training;
+using SwitchTag.Tests.Shared;
+using Xunit;
 
-namespace SwitchTag.LanguageId.Tests;
+namespace SwitchTag.Pipeline.Tests;
 
 /// <summary>The JSON contracts of /work/shared/DESIGN.md ("Contracts other tools rely on"):
 /// <c>switchtag langid --lines FILE --json</c> and <c>switchtag eval langid --dir DIR --json</c>.</summary>
 [Collection(nameof(ModelCollection))]
-public sealed class CliContractTests(ModelFixture fixture)
+public sealed class LanguageIdContractTests(ModelFixture fixture)
 {
     [Fact]
     public void LinesJsonHasOneObjectPerInputLineInOrder()
     {
         string[] lines = ["We lived in a small house by the river.", "", "Mieszkaliśmy w małym domu nad rzeką.", "1945"];
         var output = new StringWriter();
-        LangIdCommand.WriteLines(fixture.Segmenter, lines, output, json: true);
+        LanguageIdLines.Write(fixture.Segmenter, lines, output, json: true);
         var objects = output.ToString().Split('\n', StringSplitOptions.RemoveEmptyEntries);
         Assert.Equal(lines.Length, objects.Length);
         var languages = new List<string>();
@@ -35,23 +36,17 @@ public sealed class CliContractTests(ModelFixture fixture)
     }
 
     [Fact]
-    public void EvalCommandPrintsTheDesignJsonShape()
+    public void EvalJsonHasTheDesignShape()
     {
         var dir = Directory.CreateTempSubdirectory("switchtag-evaljson-");
-        var console = Console.Out;
         try
         {
             // Held-out lines of lid/de.txt (Universal Dependencies); zz is no ISO 639 code.
             File.WriteAllLines(Path.Combine(dir.FullName, "de.txt"),
                 fixture.Corpus.Where(l => l.Split == Split.Evaluation && l.Code == "de").Take(20).Select(l => l.Text));
             File.WriteAllLines(Path.Combine(dir.FullName, "zz.txt"), ["text"]);
-            var output = new StringWriter();
-            Console.SetOut(output);
-            var root = new System.CommandLine.RootCommand { EvalLangIdCommand.Create() };
-            int exit = root.Parse(["langid", "--dir", dir.FullName, "--json"]).Invoke();
-            Console.SetOut(console);
-            Assert.Equal(0, exit);
-            using var doc = JsonDocument.Parse(output.ToString());
+            var result = LanguageIdEvaluation.Evaluate(fixture.Segmenter, dir.FullName);
+            using var doc = JsonDocument.Parse(LanguageIdEvaluation.ToJson(result));
             Assert.InRange(doc.RootElement.GetProperty("mean").GetDouble(), 0, 1);
             var de = doc.RootElement.GetProperty("languages").GetProperty("de");
             Assert.Equal(20, de.GetProperty("n").GetInt32());
@@ -60,7 +55,6 @@ public sealed class CliContractTests(ModelFixture fixture)
         }
         finally
         {
-            Console.SetOut(console);
             dir.Delete(recursive: true);
         }
     }
@@ -87,7 +81,7 @@ public sealed class CliContractTests(ModelFixture fixture)
             File.WriteAllLines(Path.Combine(dir.FullName, "fr.txt"),
                 fixture.Corpus.Where(l => l.Split == Split.Evaluation && l.Code == "fr").Take(40).Select(l => l.Text));
             File.WriteAllLines(Path.Combine(dir.FullName, "xx.txt"), ["some text"]);
-            var result = EvalLangIdCommand.Evaluate(fixture.Segmenter, dir.FullName);
+            var result = LanguageIdEvaluation.Evaluate(fixture.Segmenter, dir.FullName);
             Assert.Equal(["en", "fr"], result.Languages.Keys);
             Assert.Equal(40, result.Languages["en"].N);
             Assert.Equal(["xx"], result.Skipped);

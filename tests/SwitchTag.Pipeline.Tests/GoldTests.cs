@@ -1,5 +1,4 @@
 using System.Text.Json;
-using SwitchTag.Cli;
 using SwitchTag.Core.Documents;
 using SwitchTag.Formats;
 using SwitchTag.Lexicon;
@@ -8,7 +7,7 @@ using SwitchTag.Tests.Shared;
 using Xunit;
 using Xunit.Abstractions;
 
-namespace SwitchTag.Indexing.Tests;
+namespace SwitchTag.Pipeline.Tests;
 
 /// <summary>The whole pipeline with the shipped models on every demo interview, against the hand-made
 /// gold in Gold/*.gold.json. A gold heading is found when one produced heading of its label has a
@@ -16,11 +15,12 @@ namespace SwitchTag.Indexing.Tests;
 /// label is wrong. The floors asserted are ones the current models reach.</summary>
 public class GoldTests(ITestOutputHelper output)
 {
-    private static readonly Lazy<IndexStages> Stages = new(() =>
-        IndexStages.Load(TaggingMode.RulesThenModel, null, out var error) ?? throw new InvalidOperationException(error));
+    private static readonly Lazy<IndexPipeline> Pipeline = new(() =>
+        new IndexPipelineBuilder().UseShippedModels(TaggingMode.RulesThenModel).Build() is { Pipeline: { } p } ? p
+            : throw new InvalidOperationException("the shipped models could not be loaded"));
 
     public static TheoryData<string> Interviews() =>
-        new(Directory.GetFiles(Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Indexing.Tests", "Gold"), "*.gold.json")
+        new(Directory.GetFiles(Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Pipeline.Tests", "Gold"), "*.gold.json")
             .Select(Path.GetFileName).Order(StringComparer.Ordinal)!);
 
     private sealed record GoldHeading(string Label, string Name, string[] Surfaces, string? Country);
@@ -29,13 +29,13 @@ public class GoldTests(ITestOutputHelper output)
     [MemberData(nameof(Interviews))]
     public void Demo_interview_against_its_gold(string goldFile)
     {
-        using var gold = JsonDocument.Parse(File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Indexing.Tests", "Gold", goldFile)));
+        using var gold = JsonDocument.Parse(File.ReadAllText(Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Pipeline.Tests", "Gold", goldFile)));
         string name = gold.RootElement.GetProperty("interview").GetString()!;
         string main = gold.RootElement.GetProperty("mainLanguage").GetString()!;
         string input = Directory.GetFiles(Path.Combine(TestPaths.RepoRoot, "transcripts-demo"), name + ".*").Single();
         var read = TranscriptFile.Read(input);
         Assert.NotNull(read.Transcript);
-        var (index, _) = Stages.Value.Run(read.Transcript!, null, []);
+        var index = Pipeline.Value.Run(read.Transcript!);
         Assert.Equal(main, index.MainLanguage);
 
         var headings = gold.RootElement.GetProperty("headings").EnumerateArray().Select(h => new GoldHeading(
@@ -95,8 +95,8 @@ public class GoldTests(ITestOutputHelper output)
         foreach (var file in Directory.GetFiles(Path.Combine(TestPaths.RepoRoot, "transcripts-demo")).Where(f => !f.EndsWith("README.md", StringComparison.Ordinal)))
         {
             var read = TranscriptFile.Read(file);
-            if (read.Transcript is null) continue;
-            var (index, _) = Stages.Value.Run(read.Transcript, null, []);
+            Assert.True(read.Transcript is not null, $"{file}: the demo transcript was rejected: {string.Join("; ", read.Diagnostics)}");
+            var index = Pipeline.Value.Run(read.Transcript);
             foreach (var m in index.Mentions)
             {
                 var turn = index.Turns[m.Mention.Turn];

@@ -3,11 +3,11 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Indexing;
 using SwitchTag.Lexicon;
 
-namespace SwitchTag.Cli;
+namespace SwitchTag.Pipeline;
 
 /// <summary>The lexicon seen by heading building: the lexicon's own grouping key (fold and per-language
 /// stem) and its gazetteer lookup (folded, inflected and other-language names).</summary>
-public sealed class IndexLexicon(Gazetteer gazetteer) : IHeadingLexicon
+public sealed class HeadingLexicon(Gazetteer gazetteer) : IHeadingLexicon
 {
     public string Key(string name, string language) => NameFolding.Key(name, language);
 

@@ -1,0 +1,12 @@
+using SwitchTag.Core.Documents;
+
+namespace SwitchTag.Core.Decisions;
+
+/// <summary>One reviewer decision read from a decisions file (columns in SCHEMA.md). Each action is
+/// its own record deriving from this one (SwitchTag.Indexing/Decisions/Actions), so applying one needs
+/// no parsing. <paramref name="Interview"/> is null for a heading decision meant for every interview.</summary>
+public abstract record Decision(SourceLine At, string Action, string? Interview, string Name);
+
+/// <summary>How often one decision took effect in one interview (0: it no longer matched anything).
+/// Carried on the finished index so a caller reports it without watching the stage run.</summary>
+public sealed record DecisionOutcome(Decision Decision, int Applied);

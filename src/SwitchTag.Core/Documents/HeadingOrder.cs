@@ -1,0 +1,14 @@
+using System.Collections.Immutable;
+
+namespace SwitchTag.Core.Documents;
+
+/// <summary>The one order headings are listed in everywhere (index, reports, collection): by label
+/// (PER, LOC, ORG), then name ignoring case, then id.</summary>
+public static class HeadingOrder
+{
+    public static IOrderedEnumerable<T> Apply<T>(IEnumerable<T> items, Func<T, NameLabel> label, Func<T, string> name, Func<T, string> id) =>
+        items.OrderBy(label).ThenBy(name, StringComparer.InvariantCultureIgnoreCase).ThenBy(id, StringComparer.Ordinal);
+
+    public static ImmutableArray<Heading> Sort(IEnumerable<Heading> headings) =>
+        Apply(headings, h => h.Label, h => h.Name, h => h.Id).ToImmutableArray();
+}

@@ -1,0 +1,22 @@
+using SwitchTag.Core.Decisions;
+using SwitchTag.Core.Documents;
+
+namespace SwitchTag.Indexing.Decisions.Actions;
+
+/// <summary><c>reject-mention</c>: the mention is not a name; it leaves the index.</summary>
+public sealed record RejectMention(SourceLine At, string Interview, string Name, int Turn, int Char)
+    : MentionDecision(At, ActionName, Interview, Name, Turn, Char)
+{
+    public const string ActionName = "reject-mention";
+
+    public override Mention? Apply(Mention mention) => null;
+
+    public sealed class Parser : IDecisionAction
+    {
+        public string Name => ActionName;
+
+        public Decision? Parse(DecisionRow row, out string? problem) =>
+            (problem = row.MentionTarget(out var interview, out int turn, out int at)) is null
+                ? new RejectMention(row.At, interview, row.Name, turn, at) : null;
+    }
+}

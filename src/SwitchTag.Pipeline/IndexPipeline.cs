@@ -1,0 +1,38 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Decisions;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Pipeline;
+using SwitchTag.Core.Stages;
+using SwitchTag.Formats;
+using SwitchTag.Indexing;
+using SwitchTag.Output;
+
+namespace SwitchTag.Pipeline;
+
+/// <summary>The stages of one run, loaded: reads a transcript, runs turns, language spans, names,
+/// times, headings, worklist and the reviewers' decisions on it, and writes the outputs. Built by
+/// <see cref="IndexPipelineBuilder"/>; holds no per-interview state, so one instance serves a run.</summary>
+public sealed class IndexPipeline(
+    ILanguageSegmenter languages,
+    INameTagger names,
+    IHeadingLexicon lexicon,
+    TranscriptFormat? format,
+    string? mainLanguage,
+    ImmutableArray<Decision> decisions)
+{
+    public ILanguageSegmenter Languages => languages;
+    public INameTagger Names => names;
+    public IHeadingLexicon Lexicon => lexicon;
+    public ImmutableArray<Decision> Decisions => decisions;
+
+    public ReadResult Read(string path) => TranscriptFile.Read(path, format);
+
+    /// <summary>The finished index of one transcript; the decisions' outcomes are on it.</summary>
+    public InterviewIndex Run(Transcript transcript) =>
+        new InterviewPipeline(languages, names, new IndexBuilder(lexicon, decisions)).Run(transcript, mainLanguage);
+
+    /// <summary>Every per-interview output into <paramref name="folder"/>.</summary>
+    public void Write(InterviewIndex index, string folder) => InterviewOutputs.Write(index, folder);
+
+    public void WriteCollection(IReadOnlyList<CollectionEntry> entries, string outDir) => InterviewOutputs.WriteCollection(entries, outDir);
+}

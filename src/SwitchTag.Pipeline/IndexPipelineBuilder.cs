@@ -1,0 +1,124 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Decisions;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Stages;
+using SwitchTag.Indexing;
+using SwitchTag.Lexicon;
+using SwitchTag.Pipeline.Models;
+using SwitchTag.Tagging;
+
+namespace SwitchTag.Pipeline;
+
+/// <summary>Composes an <see cref="IndexPipeline"/>: each <c>Use...</c> call registers one stage or
+/// setting, <see cref="Build"/> loads what was registered (models once, for a whole run). A stage
+/// given as an object (<see cref="UseSegmenter"/>, <see cref="UseTagger"/>,
+/// <see cref="UseHeadingLexicon"/>) replaces the shipped one, which is how tests run fakes.</summary>
+public sealed class IndexPipelineBuilder
+{
+    private ModelLocation _models = ModelLocation.Default;
+    private bool _languageModel, _gazetteer, _nameModel;
+    private string? _authorityPath;
+    private ILanguageSegmenter? _segmenter;
+    private INameTagger? _tagger;
+    private IHeadingLexicon? _lexicon;
+    private TranscriptFormat? _format;
+    private string? _mainLanguage;
+    private ImmutableArray<Decision> _decisions = [];
+
+    public IndexPipelineBuilder UseModels(ModelLocation location) { _models = location; return this; }
+
+    /// <summary>The shipped language model (models/langid.bin); gazetteer places and listed names
+    /// count as language-neutral words in it.</summary>
+    public IndexPipelineBuilder UseLanguageModel() { _languageModel = true; return this; }
+
+    /// <summary>The shipped gazetteer: place names for tagging and place links for headings.</summary>
+    public IndexPipelineBuilder UseGazetteer() { _gazetteer = true; return this; }
+
+    /// <summary>An archive's authority list (CSV label,name,variants); null registers nothing.</summary>
+    public IndexPipelineBuilder UseAuthorityList(string? path) { _authorityPath = path; return this; }
+
+    /// <summary>The shipped name model after the rules; when its file is missing the run goes on with
+    /// the rules only and says so in a note.</summary>
+    public IndexPipelineBuilder UseNameModel() { _nameModel = true; return this; }
+
+    /// <summary>Every shipped stage: language model, gazetteer and, for
+    /// <see cref="TaggingMode.RulesThenModel"/>, the name model.</summary>
+    public IndexPipelineBuilder UseShippedModels(TaggingMode names)
+    {
+        UseLanguageModel().UseGazetteer();
+        return names == TaggingMode.RulesThenModel ? UseNameModel() : this;
+    }
+
+    public IndexPipelineBuilder UseSegmenter(ILanguageSegmenter segmenter) { _segmenter = segmenter; return this; }
+
+    public IndexPipelineBuilder UseTagger(INameTagger tagger) { _tagger = tagger; return this; }
+
+    public IndexPipelineBuilder UseHeadingLexicon(IHeadingLexicon lexicon) { _lexicon = lexicon; return this; }
+
+    /// <summary>Read every file as this format instead of detecting it; null detects.</summary>
+    public IndexPipelineBuilder UseFormat(TranscriptFormat? format) { _format = format; return this; }
+
+    /// <summary>The interviews' main language; null detects it per interview.</summary>
+    public IndexPipelineBuilder UseMainLanguage(string? code) { _mainLanguage = code; return this; }
+
+    public IndexPipelineBuilder UseDecisions(ImmutableArray<Decision> decisions) { _decisions = decisions.IsDefault ? [] : decisions; return this; }
+
+    /// <summary>Loads what was registered. On failure the result holds no pipeline and says why.</summary>
+    public PipelineBuild Build()
+    {
+        var notes = ImmutableArray.CreateBuilder<Diagnostic>();
+        if (_segmenter is null && !_languageModel)
+            return PipelineBuild.Failed("no language stage registered (UseLanguageModel or UseSegmenter)");
+
+        var gazetteer = Gazetteer.Empty;
+        if (_gazetteer)
+        {
+            gazetteer = ShippedModels.LoadGazetteer(_models);
+            notes.AddRange(gazetteer.Problems.Select(p => p with { Severity = Severity.Warning, Message = p.Message + "; places get no coordinates" }));
+        }
+
+        AuthorityList? authority = null;
+        if (_authorityPath is not null)
+        {
+            var (list, problems) = AuthorityList.Load(_authorityPath);
+            if (list.Entries.IsEmpty && problems.Any(p => p.Severity == Severity.Error))
+                return PipelineBuild.Failed(string.Join(Environment.NewLine, problems));
+            notes.AddRange(problems);
+            authority = list;
+        }
+
+        var segmenter = _segmenter;
+        if (segmenter is null)
+        {
+            // Names on the archive's list are language-neutral too, like gazetteer places.
+            INameLexicon names = authority is null ? gazetteer : new NameLexiconUnion(authority, gazetteer);
+            segmenter = ShippedModels.LoadLanguageModel(_models, names, out var error);
+            if (segmenter is null) return PipelineBuild.Failed(error!.ToString());
+        }
+
+        var tagger = _tagger;
+        if (tagger is null)
+        {
+            NerModel? model = null;
+            if (_nameModel && !File.Exists(_models.PathOf(ShippedModels.NameModelFile)))
+                notes.Add(new Diagnostic(new SourceLine(_models.PathOf(ShippedModels.NameModelFile), 0), Severity.Warning,
+                    "the name model is missing; names come from the authority list and gazetteer only"));
+            else if (_nameModel)
+            {
+                model = ShippedModels.LoadNameModel(_models, out var error);
+                if (model is null) return PipelineBuild.Failed(error!.ToString());
+            }
+            tagger = new NameTagger(model, authority, gazetteer, model is null ? TaggingMode.RulesOnly : TaggingMode.RulesThenModel);
+        }
+
+        var pipeline = new IndexPipeline(segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer), _format, _mainLanguage, _decisions);
+        return new PipelineBuild(pipeline, null, notes.ToImmutable());
+    }
+}
+
+/// <summary>What <see cref="IndexPipelineBuilder.Build"/> gave: the pipeline, or null and the reason;
+/// and notes about stages that run degraded (a missing gazetteer or name model, authority-list rows skipped).</summary>
+public sealed record PipelineBuild(IndexPipeline? Pipeline, string? Error, ImmutableArray<Diagnostic> Notes)
+{
+    public static PipelineBuild Failed(string error) => new(null, error, []);
+}

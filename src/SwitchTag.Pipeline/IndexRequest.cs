@@ -1,0 +1,62 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Decisions;
+using SwitchTag.Core.Documents;
+using SwitchTag.Indexing.Decisions;
+using SwitchTag.Tagging;
+
+namespace SwitchTag.Pipeline;
+
+/// <summary>The checked settings of one index run, from the words a person typed.</summary>
+public sealed record IndexRequest(
+    ImmutableArray<string> Paths,
+    string OutDir,
+    TranscriptFormat? Format,
+    string? MainLanguage,
+    TaggingMode Names,
+    string? AuthorityPath,
+    ImmutableArray<Decision> Decisions,
+    ImmutableArray<Diagnostic> DecisionProblems)
+{
+    /// <summary>The request, or null with <paramref name="usage"/> saying which value is wrong.</summary>
+    public static IndexRequest? From(string[] paths, string outDir, string? format, string? main, string names,
+        string? authority, string? decisions, out string? usage)
+    {
+        usage = null;
+        TranscriptFormat? forced = null;
+        if (format is not null)
+        {
+            if (!TranscriptFormatNames.TryParse(format, out var f)) { usage = $"unknown --format \"{format}\" (webvtt, srt, text or markdown)"; return null; }
+            forced = f;
+        }
+        TaggingMode mode;
+        switch (names)
+        {
+            case "rules-only": mode = TaggingMode.RulesOnly; break;
+            case "default": mode = TaggingMode.RulesThenModel; break;
+            default: usage = $"unknown --names \"{names}\" (rules-only or default)"; return null;
+        }
+        if (main is not null && (main.Length is < 2 or > 3 || !main.All(char.IsAsciiLetterLower)))
+        {
+            usage = $"--main wants an ISO 639 code such as en or pl, not \"{main}\"";
+            return null;
+        }
+        if (authority is not null && !File.Exists(authority)) { usage = $"--authority: no such file {authority}"; return null; }
+        ImmutableArray<Decision> list = [];
+        ImmutableArray<Diagnostic> problems = [];
+        if (decisions is not null)
+        {
+            if (!File.Exists(decisions)) { usage = $"--decisions: no such file {decisions}"; return null; }
+            (list, problems) = DecisionsFile.Read(decisions);
+        }
+        if (File.Exists(outDir)) { usage = $"--out {outDir} is a file, not a folder"; return null; }
+        return new IndexRequest([.. paths], outDir, forced, main, mode, authority, list, problems);
+    }
+
+    /// <summary>The builder for this request: the shipped models and the request's settings.</summary>
+    public IndexPipelineBuilder Builder() => new IndexPipelineBuilder()
+        .UseShippedModels(Names)
+        .UseAuthorityList(AuthorityPath)
+        .UseFormat(Format)
+        .UseMainLanguage(MainLanguage)
+        .UseDecisions(Decisions);
+}

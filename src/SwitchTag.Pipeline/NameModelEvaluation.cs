@@ -1,0 +1,38 @@
+using SwitchTag.Pipeline.Models;
+using SwitchTag.Tagging;
+
+namespace SwitchTag.Pipeline;
+
+public enum NameEvaluationResult { Scored, SomeInputsRejected, NoInput, ModelNotLoaded }
+
+/// <summary>The <c>switchtag eval ner</c> contract (DESIGN.md): the shipped name model scored on
+/// pre-tokenised gold files (format rules in <see cref="GoldReader"/>), printed as a table or JSON.</summary>
+public static class NameModelEvaluation
+{
+    public static NameEvaluationResult Run(IReadOnlyList<string> goldFiles, bool json, TextWriter output, TextWriter error, ModelLocation? models = null)
+    {
+        if (goldFiles.Count == 0)
+        {
+            error.WriteLine("switchtag eval ner: give at least one --gold FILE");
+            return NameEvaluationResult.NoInput;
+        }
+        var problems = new List<string>();
+        var sentences = new List<GoldSentence>();
+        int rejected = 0;
+        foreach (var file in goldFiles)
+        {
+            if (!File.Exists(file)) { problems.Add($"{file}: no such file"); rejected++; continue; }
+            sentences.AddRange(GoldReader.Read(file, problems));
+        }
+        foreach (var p in problems) error.WriteLine($"switchtag eval ner: {p}");
+        var model = ShippedModels.LoadNameModel(models ?? ModelLocation.Default, out var loadError);
+        if (model is null)
+        {
+            error.WriteLine($"switchtag eval ner: {loadError}");
+            return NameEvaluationResult.ModelNotLoaded;
+        }
+        var scores = NerEvaluation.Evaluate(new SequenceTagger(model), sentences);
+        output.WriteLine(json ? NerEvaluation.ToJson(scores) : NerEvaluation.ToTable(scores));
+        return rejected > 0 ? NameEvaluationResult.SomeInputsRejected : NameEvaluationResult.Scored;
+    }
+}
