@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Diagnostics;
 using System.Globalization;
 using SwitchTag.Core.Pipeline;
+using SwitchTag.Core.Text;
 using SwitchTag.Formats;
 using SwitchTag.Indexing;
 using SwitchTag.Output;
@@ -30,7 +31,7 @@ var pipeline = build.Pipeline ?? throw new InvalidOperationException(build.Error
 Console.WriteLine($"models loaded in {load.Elapsed.TotalSeconds:0.00} s; names: {(mode == TaggingMode.RulesOnly ? "rules-only" : "default")}; notes: {build.Notes.Length}");
 foreach (var n in build.Notes) Console.WriteLine($"  {n}");
 
-long setWords = files.Sum(f => TurnBuilder.Build(TranscriptFile.Read(f).Transcript!).Sum(t => LanguageStatistics.CountWords(t.Text, 0, t.Text.Length)));
+long setWords = files.Sum(f => TurnBuilder.Build(TranscriptFile.Read(f).Transcript!).Sum(t => WordCount.Of(t.Text)));
 Console.WriteLine($"demo set: {files.Count} interviews, {setWords} words");
 
 // Warm-up so JIT time is not billed to the smallest size, and where one copy's time goes.
@@ -89,7 +90,7 @@ void StageTimes()
             string folder = $"{index.Transcript.Name}-{c}";
             pipeline.Write(index, Path.Combine(outDir, folder));
             entries.Add(CollectionEntry.From(index, folder));
-            words += index.Turns.Sum(t => LanguageStatistics.CountWords(t.Text, 0, t.Text.Length));
+            words += index.Turns.Sum(t => WordCount.Of(t.Text));
         }
     pipeline.WriteCollection(entries, outDir);
     double seconds = clock.Elapsed.TotalSeconds;

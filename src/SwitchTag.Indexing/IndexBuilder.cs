@@ -48,7 +48,10 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         var worklist = WorklistBuilder.Build(turns, safeSpans, mainLanguage, aligner);
         var duration = transcript.Cues.IsEmpty ? Timecode.Zero : transcript.Cues.Max(c => c.Time.End);
 
-        return new InterviewIndex(transcript, mainLanguage, duration, turns, timedSpans, indexed,
+        var foreign = safeSpans
+            .SelectMany((list, t) => list.Where(s => WorklistBuilder.IsForeign(s.Language, mainLanguage)).Select(s => new ForeignSpan(t, s.CharStart, s.CharEnd, s.Language)))
+            .ToImmutableArray();
+        return new InterviewIndex(transcript, mainLanguage, duration, turns, timedSpans, LanguageStatistics.Compute(turns, timedSpans), foreign, indexed,
             headings.Headings, worklist, headings.Review, diagnostics.ToImmutable(), outcomes);
     }
 

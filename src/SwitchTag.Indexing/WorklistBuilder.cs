@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Pipeline;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Indexing;
 
@@ -39,7 +40,7 @@ public static class WorklistBuilder
                 if (end == start) { i = j + 1; continue; }
                 items.Add(new WorklistItem(
                     aligner.Align(turn, start, end), turn.Speaker, span.Language, Math.Round(confidence, 4),
-                    turn.Text[start..end], t, start, end));
+                    turn.Text[start..end], t, start, end, WordCount.Of(turn.Text, start, end)));
                 i = j + 1;
             }
         }

@@ -1,5 +1,3 @@
-using System.Text;
-
 namespace SwitchTag.Output;
 
 /// <summary>Writes a file so that readers see either the old or the new content, never half of it:
@@ -8,8 +6,6 @@ namespace SwitchTag.Output;
 /// writing, and a crash loses at most a run that can be repeated.</summary>
 public static class AtomicFile
 {
-    private static readonly UTF8Encoding Utf8NoBom = new(encoderShouldEmitUTF8Identifier: false);
-
     public static void Write(string path, Action<Stream> write)
     {
         string full = Path.GetFullPath(path);
@@ -29,7 +25,4 @@ public static class AtomicFile
             if (File.Exists(temp)) File.Delete(temp);
         }
     }
-
-    public static void WriteText(string path, string text) =>
-        Write(path, stream => stream.Write(Utf8NoBom.GetBytes(text)));
 }

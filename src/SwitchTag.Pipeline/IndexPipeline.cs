@@ -18,7 +18,8 @@ public sealed class IndexPipeline(
     IHeadingLexicon lexicon,
     TranscriptFormat? format,
     string? mainLanguage,
-    ImmutableArray<Decision> decisions)
+    ImmutableArray<Decision> decisions,
+    OutputWriters writers)
 {
     public ILanguageSegmenter Languages => languages;
     public INameTagger Names => names;
@@ -32,7 +33,8 @@ public sealed class IndexPipeline(
         new InterviewPipeline(languages, names, new IndexBuilder(lexicon, decisions)).Run(transcript, mainLanguage);
 
     /// <summary>Every per-interview output into <paramref name="folder"/>.</summary>
-    public void Write(InterviewIndex index, string folder) => InterviewOutputs.Write(index, folder);
+    public void Write(InterviewIndex index, string folder) => writers.WriteInterview(index, folder);
 
-    public void WriteCollection(IReadOnlyList<CollectionEntry> entries, string outDir) => InterviewOutputs.WriteCollection(entries, outDir);
+    /// <summary>Every collection output into <paramref name="outDir"/>.</summary>
+    public void WriteCollection(IReadOnlyList<CollectionEntry> entries, string outDir) => writers.WriteCollection(entries, outDir);
 }

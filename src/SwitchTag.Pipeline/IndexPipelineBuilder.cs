@@ -4,6 +4,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Indexing;
 using SwitchTag.Lexicon;
+using SwitchTag.Output;
 using SwitchTag.Pipeline.Models;
 using SwitchTag.Tagging;
 
@@ -24,6 +25,7 @@ public sealed class IndexPipelineBuilder
     private TranscriptFormat? _format;
     private string? _mainLanguage;
     private ImmutableArray<Decision> _decisions = [];
+    private OutputWriters? _writers;
 
     public IndexPipelineBuilder UseModels(ModelLocation location) { _models = location; return this; }
 
@@ -62,6 +64,15 @@ public sealed class IndexPipelineBuilder
     public IndexPipelineBuilder UseMainLanguage(string? code) { _mainLanguage = code; return this; }
 
     public IndexPipelineBuilder UseDecisions(ImmutableArray<Decision> decisions) { _decisions = decisions.IsDefault ? [] : decisions; return this; }
+
+    /// <summary>Adds a per-interview output to the shipped ones (or to those of <see cref="UseWriters"/>).</summary>
+    public IndexPipelineBuilder UseWriter(IInterviewWriter writer) { (_writers ??= OutputWriters.Default).Add(writer); return this; }
+
+    /// <summary>Adds a collection output to the shipped ones (or to those of <see cref="UseWriters"/>).</summary>
+    public IndexPipelineBuilder UseWriter(ICollectionWriter writer) { (_writers ??= OutputWriters.Default).Add(writer); return this; }
+
+    /// <summary>Exactly these outputs instead of the shipped ones.</summary>
+    public IndexPipelineBuilder UseWriters(OutputWriters writers) { _writers = writers; return this; }
 
     /// <summary>Loads what was registered. On failure the result holds no pipeline and says why.</summary>
     public PipelineBuild Build()
@@ -111,7 +122,7 @@ public sealed class IndexPipelineBuilder
             tagger = new NameTagger(model, authority, gazetteer, model is null ? TaggingMode.RulesOnly : TaggingMode.RulesThenModel);
         }
 
-        var pipeline = new IndexPipeline(segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer), _format, _mainLanguage, _decisions);
+        var pipeline = new IndexPipeline(segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer), _format, _mainLanguage, _decisions, _writers ?? OutputWriters.Default);
         return new PipelineBuild(pipeline, null, notes.ToImmutable());
     }
 }

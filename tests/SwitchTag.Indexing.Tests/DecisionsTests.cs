@@ -2,7 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Indexing.Decisions;
 using SwitchTag.Indexing.Tests.Fakes;
-using SwitchTag.Output;
+using SwitchTag.Output.IndexJson;
 using Xunit;
 
 namespace SwitchTag.Indexing.Tests;

@@ -11,7 +11,7 @@ public class GoldenFileTests
 {
     private static readonly string GoldenDir = Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Indexing.Tests", "Golden");
 
-    public static TheoryData<string> Files() => new([.. InterviewOutputs.FileNames, "collection.json", "collection.html"]);
+    public static TheoryData<string> Files() => new([.. OutputWriters.Default.InterviewFileNames, .. OutputWriters.Default.CollectionFileNames]);
 
     [Theory]
     [MemberData(nameof(Files))]
@@ -21,9 +21,9 @@ public class GoldenFileTests
         try
         {
             var index = Fixture.Run();
-            InterviewOutputs.Write(index, Path.Combine(dir, "anna-nowak"));
-            InterviewOutputs.WriteCollection([CollectionEntry.From(index, "anna-nowak")], dir);
-            string produced = name.StartsWith("collection", StringComparison.Ordinal) ? Path.Combine(dir, name) : Path.Combine(dir, "anna-nowak", name);
+            OutputWriters.Default.WriteInterview(index, Path.Combine(dir, "anna-nowak"));
+            OutputWriters.Default.WriteCollection([CollectionEntry.From(index, "anna-nowak")], dir);
+            string produced = OutputWriters.Default.CollectionFileNames.Contains(name) ? Path.Combine(dir, name) : Path.Combine(dir, "anna-nowak", name);
             string golden = Path.Combine(GoldenDir, name);
             if (Environment.GetEnvironmentVariable("SWITCHTAG_UPDATE_GOLDEN") == "1")
             {
@@ -45,9 +45,9 @@ public class GoldenFileTests
         string dir = Path.Combine(Path.GetTempPath(), "switchtag-atomic-" + Guid.NewGuid().ToString("N"));
         try
         {
-            InterviewOutputs.Write(Fixture.Run(), dir);
-            InterviewOutputs.Write(Fixture.Run(), dir); // overwriting goes through the same rename
-            Assert.Equal(InterviewOutputs.FileNames.Order(StringComparer.Ordinal), Directory.GetFiles(dir).Select(Path.GetFileName).Order(StringComparer.Ordinal));
+            OutputWriters.Default.WriteInterview(Fixture.Run(), dir);
+            OutputWriters.Default.WriteInterview(Fixture.Run(), dir); // overwriting goes through the same rename
+            Assert.Equal(OutputWriters.Default.InterviewFileNames.Order(StringComparer.Ordinal), Directory.GetFiles(dir).Select(Path.GetFileName).Order(StringComparer.Ordinal));
         }
         finally
         {

@@ -5,6 +5,14 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Formats;
 using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output;
+using SwitchTag.Output.AnnotatedVtt;
+using SwitchTag.Output.Collection;
+using SwitchTag.Output.IndexJson;
+using SwitchTag.Output.MentionsCsv;
+using SwitchTag.Output.PlacesGeoJson;
+using SwitchTag.Output.Report;
+using SwitchTag.Output.Text;
+using SwitchTag.Output.WorklistCsv;
 using Xunit;
 
 namespace SwitchTag.Indexing.Tests;
@@ -151,7 +159,7 @@ public class OutputTests
         // Markdig rejects one pipe table of many thousand rows; the writers split tables into chunks.
         var entry = CollectionEntry.From(Fixture.Run(), "anna-nowak");
         var entries = Enumerable.Range(0, 2500).Select(i => entry with { Interview = $"copy-{i}", Folder = $"copy-{i}" }).ToList();
-        string html = HtmlReport.Render("c", CollectionWriter.RenderMarkdown(entries));
+        string html = HtmlReport.Render("c", CollectionHtmlWriter.RenderMarkdown(entries));
         Assert.Contains("copy-2499", html);
     }
 }

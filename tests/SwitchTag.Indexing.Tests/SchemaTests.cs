@@ -2,7 +2,7 @@ using System.Text;
 using System.Text.Json;
 using System.Text.RegularExpressions;
 using SwitchTag.Indexing.Tests.Fakes;
-using SwitchTag.Output;
+using SwitchTag.Output.IndexJson;
 using SwitchTag.Tests.Shared;
 using Xunit;
 

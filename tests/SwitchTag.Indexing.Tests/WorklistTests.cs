@@ -1,4 +1,4 @@
-using SwitchTag.Indexing;
+using SwitchTag.Core.Text;
 using SwitchTag.Indexing.Tests.Fakes;
 using Xunit;
 
@@ -25,8 +25,8 @@ public class WorklistTests
     public void Seconds_and_words_per_language_add_up()
     {
         var index = Fixture.Run();
-        var shares = LanguageStatistics.Compute(index.Turns, index.Spans);
-        int words = index.Turns.Sum(t => LanguageStatistics.CountWords(t.Text, 0, t.Text.Length));
+        var shares = index.Languages;
+        int words = index.Turns.Sum(t => WordCount.Of(t.Text));
         Assert.Equal(words, shares.Sum(s => s.Words));
         Assert.Equal(8, shares.Single(s => s.Language == "pl").Words);
         Assert.Equal(2, shares.Single(s => s.Language == "de").Words);

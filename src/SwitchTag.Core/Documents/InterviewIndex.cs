@@ -38,12 +38,22 @@ public sealed record WorklistItem(
     string Text,
     int Turn,
     int CharStart,
-    int CharEnd);
+    int CharEnd,
+    int Words);
+
+/// <summary>How much of the interview is in one language: seconds of recording and words.</summary>
+public sealed record LanguageShare(string Language, double Seconds, int Words);
+
+/// <summary>A language span outside the interview's main language (<c>und</c> excluded), offsets into
+/// its turn's text: what the annotated transcript marks.</summary>
+public sealed record ForeignSpan(int Turn, int CharStart, int CharEnd, string Language);
 
 /// <summary>A mention held back from the index for a person to decide.</summary>
 public sealed record ReviewItem(int Mention, string Reason);
 
 /// <summary>Everything known about one interview after the whole pipeline has run.</summary>
+/// <param name="Languages">Seconds and words per language, most seconds first.</param>
+/// <param name="ForeignSpans">The spans outside the main language, in turn and text order.</param>
 /// <param name="Decisions">Every reviewer decision meant for this interview and how often it took effect.</param>
 public sealed record InterviewIndex(
     Transcript Transcript,
@@ -51,6 +61,8 @@ public sealed record InterviewIndex(
     Timecode Duration,
     ImmutableArray<Turn> Turns,
     ImmutableArray<ImmutableArray<Timed<LanguageSpan>>> Spans,
+    ImmutableArray<LanguageShare> Languages,
+    ImmutableArray<ForeignSpan> ForeignSpans,
     ImmutableArray<IndexedMention> Mentions,
     ImmutableArray<Heading> Headings,
     ImmutableArray<WorklistItem> Worklist,

@@ -1,12 +1,17 @@
 using System.Text.Json;
 using SwitchTag.Core.Documents;
+using SwitchTag.Output.IndexJson;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.PlacesGeoJson;
 
 /// <summary><c>places.geojson</c>: an RFC 7946 FeatureCollection with one Point per linked place
 /// heading. RFC 7946 section 3.1.1: positions are [longitude, latitude] in WGS 84.</summary>
-public static class PlacesGeoJsonWriter
+public sealed class PlacesGeoJsonWriter : IInterviewWriter
 {
+    public string FileName => "places.geojson";
+
+    void IInterviewWriter.Write(InterviewIndex index, Stream stream) => Write(index, stream);
+
     public static void Write(InterviewIndex index, Stream stream)
     {
         using var w = new Utf8JsonWriter(stream, IndexJsonWriter.Options);

@@ -1,11 +1,16 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Output.Text;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.MentionsCsv;
 
 /// <summary><c>mentions.csv</c>: one row per mention in time order of the transcript. <c>turn</c> and
 /// <c>char</c> are what a decisions file row names a mention by.</summary>
-public static class MentionsCsvWriter
+public sealed class MentionsCsvWriter : IInterviewWriter
 {
+    public string FileName => "mentions.csv";
+
+    public void Write(InterviewIndex index, Stream stream) => Utf8Text.Write(stream, Render(index));
+
     public static readonly string[] Header =
         ["start", "end", "start_seconds", "end_seconds", "speaker", "text", "label", "heading", "heading_name",
          "language", "confidence", "source", "review", "turn", "char", "char_end"];

@@ -1,8 +1,8 @@
 using System.Globalization;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.Text;
 
-internal static class Numbers
+public static class Numbers
 {
     public static string Confidence(double value) => value.ToString("0.####", CultureInfo.InvariantCulture);
 

@@ -1,6 +1,6 @@
 using System.Text;
 
-namespace SwitchTag.Formats;
+namespace SwitchTag.Core.Text;
 
 /// <summary>Plain text made safe as WebVTT cue text (W3C WebVTT: '&amp;' and '&lt;' must be escaped in
 /// cue text; '&gt;' is escaped too so that "-->" can never appear).</summary>

@@ -1,6 +1,6 @@
 using System.Text;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.Text;
 
 /// <summary>RFC 4180 output: CRLF after every record, a field quoted when it holds a comma, a quote,
 /// CR or LF, and a quote inside a quoted field doubled.</summary>

@@ -1,6 +1,6 @@
 using System.Text;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.Text;
 
 /// <summary>Transcript text made inert in Markdown: the ASCII punctuation that can start inline syntax
 /// (emphasis, code, links, images, raw HTML, entities, table cells, escapes) is backslash-escaped

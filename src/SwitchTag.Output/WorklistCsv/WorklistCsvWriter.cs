@@ -1,11 +1,15 @@
 using SwitchTag.Core.Documents;
-using SwitchTag.Indexing;
+using SwitchTag.Output.Text;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.WorklistCsv;
 
 /// <summary><c>worklist.csv</c>: the translators' stretches, in time order.</summary>
-public static class WorklistCsvWriter
+public sealed class WorklistCsvWriter : IInterviewWriter
 {
+    public string FileName => "worklist.csv";
+
+    public void Write(InterviewIndex index, Stream stream) => Utf8Text.Write(stream, Render(index));
+
     public static readonly string[] Header =
         ["start", "end", "start_seconds", "end_seconds", "speaker", "language", "confidence", "words", "text", "turn", "char", "char_end"];
 
@@ -15,7 +19,7 @@ public static class WorklistCsvWriter
         foreach (var item in index.Worklist)
             csv.Row(item.Time.Start.ToString(), item.Time.End.ToString(), item.Time.Start.ToSecondsString(), item.Time.End.ToSecondsString(),
                 item.Speaker, item.Language, Numbers.Confidence(item.Confidence),
-                Numbers.Integer(LanguageStatistics.CountWords(item.Text, 0, item.Text.Length)), item.Text,
+                Numbers.Integer(item.Words), item.Text,
                 Numbers.Integer(item.Turn), Numbers.Integer(item.CharStart), Numbers.Integer(item.CharEnd));
         return csv.ToString();
     }

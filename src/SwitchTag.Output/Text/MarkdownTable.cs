@@ -1,6 +1,6 @@
 using System.Text;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.Text;
 
 /// <summary>A pipe table written in chunks of at most <see cref="RowsPerChunk"/> rows, each chunk with
 /// its own header: Markdig refuses a single table of many thousand rows ("depth limit exceeded"), and a

@@ -1,7 +1,7 @@
 using System.Net;
 using Markdig;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.Text;
 
 /// <summary>Renders a Markdown report to one self-contained HTML page (inline style, no external
 /// assets). Raw HTML in the Markdown is disabled, so even unescaped text could not inject markup.</summary>

@@ -1,13 +1,17 @@
 using System.Text;
 using SwitchTag.Core.Documents;
-using SwitchTag.Indexing;
+using SwitchTag.Output.Text;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.Report;
 
 /// <summary><c>index.md</c>: the readable report of one interview. It opens with the caution that it
 /// is a machine draft. All transcript-derived text passes through <see cref="MarkdownText.Escape"/>.</summary>
-public static class ReportMarkdownWriter
+public sealed class ReportMarkdownWriter : IInterviewWriter
 {
+    public string FileName => "index.md";
+
+    public void Write(InterviewIndex index, Stream stream) => Utf8Text.Write(stream, Render(index));
+
     public const string Caution =
         "**Machine draft — review before publication.** This index, its place links and the translators' worklist " +
         "were produced automatically by SwitchTag. Names may be missed, mislabelled or linked to the wrong place. " +
@@ -40,7 +44,7 @@ public static class ReportMarkdownWriter
     {
         md.Append("## Languages\n\n");
         var table = new MarkdownTable(md, "| Language | Time (s) | Words |", "| --- | ---: | ---: |");
-        foreach (var s in LanguageStatistics.Compute(index.Turns, index.Spans))
+        foreach (var s in index.Languages)
             table.Row().Append("| ").Append(MarkdownText.Escape(s.Language)).Append(" | ")
               .Append(s.Seconds.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)).Append(" | ").Append(s.Words).Append(" |\n");
         md.Append('\n');

@@ -2,17 +2,20 @@ using System.Text.Encodings.Web;
 using System.Text.Json;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
-using SwitchTag.Indexing;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.IndexJson;
 
 /// <summary>Writes <c>index.json</c>, schema <c>switchtag.index/1</c> (fields in SCHEMA.md).
 /// Times are seconds as JSON numbers; numbers are written in invariant form by Utf8JsonWriter.</summary>
-public static class IndexJsonWriter
+public sealed class IndexJsonWriter : IInterviewWriter
 {
+    public string FileName => "index.json";
+
+    void IInterviewWriter.Write(InterviewIndex index, Stream stream) => Write(index, stream);
+
     public const string Schema = "switchtag.index/1";
 
-    internal static readonly JsonWriterOptions Options = new()
+    public static readonly JsonWriterOptions Options = new()
     {
         Indented = true,
         // Names and transcript text stay readable; the file is never embedded in HTML.
@@ -34,7 +37,7 @@ public static class IndexJsonWriter
         Seconds(w, "duration", index.Duration);
 
         w.WriteStartArray("languages");
-        foreach (var share in LanguageStatistics.Compute(index.Turns, index.Spans))
+        foreach (var share in index.Languages)
         {
             w.WriteStartObject();
             w.WriteString("language", share.Language);
@@ -198,11 +201,11 @@ public static class IndexJsonWriter
             w.WriteNumber("turn", item.Turn);
             w.WriteNumber("charStart", item.CharStart);
             w.WriteNumber("charEnd", item.CharEnd);
-            w.WriteNumber("words", LanguageStatistics.CountWords(item.Text, 0, item.Text.Length));
+            w.WriteNumber("words", item.Words);
             w.WriteEndObject();
         }
         w.WriteEndArray();
     }
 
-    internal static void Seconds(Utf8JsonWriter w, string name, Timecode t) => w.WriteNumber(name, t.Milliseconds / 1000m);
+    public static void Seconds(Utf8JsonWriter w, string name, Timecode t) => w.WriteNumber(name, t.Milliseconds / 1000m);
 }

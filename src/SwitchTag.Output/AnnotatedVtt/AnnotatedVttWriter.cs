@@ -1,21 +1,26 @@
 using System.Text;
 using SwitchTag.Core.Documents;
-using SwitchTag.Formats;
-using SwitchTag.Indexing;
+using SwitchTag.Core.Text;
+using SwitchTag.Output.Text;
 
-namespace SwitchTag.Output;
+namespace SwitchTag.Output.AnnotatedVtt;
 
 /// <summary><c>annotated.vtt</c>: every cue with its original times, identifier, settings, speaker
 /// (as a <c>&lt;v&gt;</c> voice) and word timestamps, and each stretch outside the main language wrapped
 /// in <c>&lt;lang xx&gt;…&lt;/lang&gt;</c> (W3C WebVTT cue language span). Text is escaped as cue text.</summary>
-public static class AnnotatedVttWriter
+public sealed class AnnotatedVttWriter : IInterviewWriter
 {
+    public string FileName => "annotated.vtt";
+
+    public void Write(InterviewIndex index, Stream stream) => Utf8Text.Write(stream, Render(index));
+
     public static string Render(InterviewIndex index)
     {
         var cueTurn = new Dictionary<int, (Turn Turn, TurnCue Part, int TurnIndex)>();
         for (int t = 0; t < index.Turns.Length; t++)
             foreach (var part in index.Turns[t].Cues)
                 cueTurn[part.CueIndex] = (index.Turns[t], part, t);
+        var foreign = index.ForeignSpans.ToLookup(f => f.Turn);
 
         var sb = new StringBuilder("WEBVTT\n\nNOTE\nMachine annotation of ");
         sb.Append(Escape(Path.GetFileName(index.Transcript.Source.Path)))
@@ -31,20 +36,18 @@ public static class AnnotatedVttWriter
             sb.Append('\n');
             if (cue.SpeakerLabel is { Length: > 0 } label)
                 sb.Append("<v ").Append(Escape(label.TrimEnd(':').Trim())).Append('>');
-            var spans = cueTurn.TryGetValue(c, out var place) ? ForeignSpans(index, place.TurnIndex, place.Part) : [];
+            var spans = cueTurn.TryGetValue(c, out var place) ? CueSpans(foreign[place.TurnIndex], place.Part) : [];
             AppendText(sb, cue, spans);
             sb.Append("\n\n");
         }
         return sb.ToString();
     }
 
-    private static List<(int Start, int End, string Language)> ForeignSpans(InterviewIndex index, int turn, TurnCue part)
+    private static List<(int Start, int End, string Language)> CueSpans(IEnumerable<ForeignSpan> spans, TurnCue part)
     {
         var result = new List<(int, int, string)>();
-        foreach (var timed in index.Spans[turn])
+        foreach (var s in spans)
         {
-            var s = timed.Value;
-            if (!WorklistBuilder.IsForeign(s.Language, index.MainLanguage)) continue;
             int start = Math.Max(s.CharStart, part.CharStart) - part.CharStart;
             int end = Math.Min(s.CharEnd, part.CharEnd) - part.CharStart;
             if (end > start) result.Add((start, end, s.Language));
