@@ -95,7 +95,7 @@ public sealed class AuthorityList : INameLexicon
             var best = BestHit(text, words, i, rule);
             if (best is not { } hit) continue;
             var entry = Entries[_index.IdsAt(hit.KeyIndex)[0]];
-            candidates.Add(new NameMatch(words[i].Start, words[i + hit.WordCount - 1].End, entry.Label, entry.Name, MentionSource.Authority, entry));
+            candidates.Add(new NameMatch(words[i].Start, words[i + hit.WordCount - 1].End, entry.Label, entry.Name, MentionSource.Authority));
         }
         return NameMatchSelection.LongestFirst(candidates);
     }

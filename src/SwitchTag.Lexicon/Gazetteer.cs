@@ -106,7 +106,7 @@ public sealed class Gazetteer : INameLexicon
         foreach (var hit in hits)
             foreach (int id in _index.IdsAt(hit.KeyIndex))
                 if (!best.TryGetValue(id, out var seen) || hit.Kind < seen.Kind)
-                    best[id] = new GazetteerCandidate(_places[id], hit.Kind, _index.KeyAt(hit.KeyIndex));
+                    best[id] = new GazetteerCandidate(_places[id], hit.Kind);
         return best.Values.OrderByDescending(c => c.Place.Population).ThenBy(c => c.Place.GeonameId).ToList();
     }
 
@@ -138,7 +138,7 @@ public sealed class Gazetteer : INameLexicon
                 .Select(id => _places[id])
                 .OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId)
                 .First();
-            candidates.Add(new NameMatch(words[i].Start, words[i + longest - 1].End, NameLabel.LOC, place.Name, MentionSource.Gazetteer, place));
+            candidates.Add(new NameMatch(words[i].Start, words[i + longest - 1].End, NameLabel.LOC, place.Name, MentionSource.Gazetteer));
         }
         return NameMatchSelection.LongestFirst(candidates);
     }

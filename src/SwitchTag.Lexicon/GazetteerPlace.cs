@@ -5,4 +5,4 @@ namespace SwitchTag.Lexicon;
 public sealed record GazetteerPlace(long GeonameId, string Name, double Latitude, double Longitude, string Country, long Population, string FeatureCode);
 
 /// <summary>A place found for a name, and how the name met one of the place's names.</summary>
-public sealed record GazetteerCandidate(GazetteerPlace Place, MatchKind Kind, string MatchedName);
+public sealed record GazetteerCandidate(GazetteerPlace Place, MatchKind Kind);

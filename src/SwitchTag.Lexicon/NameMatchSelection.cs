@@ -15,9 +15,4 @@ public static class NameMatchSelection
             if (!taken.Any(t => t.Overlaps(m))) taken.Add(m);
         return [.. taken.OrderBy(m => m.CharStart)];
     }
-
-    /// <summary>Authority matches win: a gazetteer match overlapping any authority match is dropped,
-    /// so a person on the list ("Paris Hilton", "Jordan") is never also tagged as a place.</summary>
-    public static ImmutableArray<NameMatch> Combine(ImmutableArray<NameMatch> authority, ImmutableArray<NameMatch> gazetteer) =>
-        [.. authority.Concat(gazetteer.Where(g => !authority.Any(a => a.Overlaps(g)))).OrderBy(m => m.CharStart)];
 }

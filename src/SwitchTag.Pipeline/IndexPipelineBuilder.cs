@@ -7,6 +7,10 @@ using SwitchTag.Lexicon;
 using SwitchTag.Output;
 using SwitchTag.Pipeline.Models;
 using SwitchTag.Tagging;
+using SwitchTag.Tagging.Sources;
+using SwitchTag.Tagging.Sources.Authority;
+using SwitchTag.Tagging.Sources.Gazetteer;
+using SwitchTag.Tagging.Sources.Model;
 
 namespace SwitchTag.Pipeline;
 
@@ -26,6 +30,8 @@ public sealed class IndexPipelineBuilder
     private string? _mainLanguage;
     private ImmutableArray<Decision> _decisions = [];
     private OutputWriters? _writers;
+    private readonly List<INameSource> _nameSources = [];
+    private NamePrecedence? _precedence;
 
     public IndexPipelineBuilder UseModels(ModelLocation location) { _models = location; return this; }
 
@@ -50,6 +56,12 @@ public sealed class IndexPipelineBuilder
         UseLanguageModel().UseGazetteer();
         return names == TaggingMode.RulesThenModel ? UseNameModel() : this;
     }
+
+    /// <summary>Another name source beside the shipped ones; give it a place with <see cref="UseNamePrecedence"/>.</summary>
+    public IndexPipelineBuilder UseNameSource(INameSource source) { _nameSources.Add(source); return this; }
+
+    /// <summary>The policy deciding between overlapping names; <see cref="NamePrecedence.Default"/> when not given.</summary>
+    public IndexPipelineBuilder UseNamePrecedence(NamePrecedence precedence) { _precedence = precedence; return this; }
 
     public IndexPipelineBuilder UseSegmenter(ILanguageSegmenter segmenter) { _segmenter = segmenter; return this; }
 
@@ -119,7 +131,12 @@ public sealed class IndexPipelineBuilder
                 model = ShippedModels.LoadNameModel(_models, out var error);
                 if (model is null) return PipelineBuild.Failed(error!.ToString());
             }
-            tagger = new NameTagger(model, authority, gazetteer, model is null ? TaggingMode.RulesOnly : TaggingMode.RulesThenModel);
+            var sources = new NameSources()
+                .Add(new AuthorityListSource(authority ?? AuthorityList.Empty))
+                .Add(new GazetteerSource(gazetteer));
+            if (model is not null) sources.Add(new NameModelSource(model));
+            foreach (var source in _nameSources) sources.Add(source);
+            tagger = new NameTagger(sources, _precedence);
         }
 
         var pipeline = new IndexPipeline(segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer), _format, _mainLanguage, _decisions, _writers ?? OutputWriters.Default);

@@ -8,7 +8,7 @@ namespace SwitchTag.Tagging.Tests;
 /// <summary>Bad input gives a defined result, never an exception. Sentences are invented.</summary>
 public class BadInputTests
 {
-    private static readonly NameTagger Tagger = new(Models.Ner);
+    private static readonly NameTagger Tagger = NameTagger.Create(Models.Ner);
 
     private static ImmutableArray<Mention> Tag(string text) =>
         Tagger.Tag(0, text, [new LanguageSpan(0, text.Length, "und", 0.5)]);

@@ -18,7 +18,7 @@ public class NameTaggerTests
     {
         // "Washington" and "Georgia" are places to any model that saw US news; here both are people.
         var list = Authority("label,name,variants\nPER,Washington,\nPER,Georgia Brown,Georgia\n");
-        var tagger = new NameTagger(Models.Ner, list);
+        var tagger = NameTagger.Create(Models.Ner, list);
         const string text = "Washington said that Georgia moved to Washington with the Red Cross.";
         var mentions = tagger.Tag(0, text, English(text));
         var listed = mentions.Where(m => m.Text is "Washington" or "Georgia").ToList();
@@ -31,7 +31,7 @@ public class NameTaggerTests
     public void ListedPlaceIsNeverAPerson()
     {
         var list = Authority("label,name,variants\nLOC,Paris,\nORG,Ford,\n");
-        var tagger = new NameTagger(Models.Ner, list);
+        var tagger = NameTagger.Create(Models.Ner, list);
         const string text = "Paris Hilton told Henry Ford about Paris.";
         var mentions = tagger.Tag(3, text, English(text));
         Assert.All(mentions.Where(m => text[m.CharStart..m.CharEnd].Contains("Paris")), m => Assert.Equal(NameLabel.LOC, m.Label));
@@ -45,7 +45,7 @@ public class NameTaggerTests
     public void RulesOnlyUsesOnlyListsAndGazetteer()
     {
         var list = Authority("label,name,variants\nPER,Maria Kowalska,\n");
-        var tagger = new NameTagger(Models.Ner, list, mode: TaggingMode.RulesOnly);
+        var tagger = NameTagger.Create(Models.Ner, list, mode: TaggingMode.RulesOnly);
         const string text = "Maria Kowalska met John Smith in Chicago.";
         var mentions = tagger.Tag(0, text, English(text));
         var only = Assert.Single(mentions);
@@ -55,7 +55,7 @@ public class NameTaggerTests
     [Fact]
     public void ModelMentionsCarryOffsetsConfidenceAndSpanLanguage()
     {
-        var tagger = new NameTagger(Models.Ner);
+        var tagger = NameTagger.Create(Models.Ner);
         const string text = "My father worked in Chicago, and then jsme se vrátili do Prahy.";
         ImmutableArray<LanguageSpan> spans = [new(0, 36, "en", 0.9), new(36, text.Length, "cs", 0.8)];
         var mentions = tagger.Tag(0, text, spans);

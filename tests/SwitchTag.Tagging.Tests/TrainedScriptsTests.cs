@@ -1,3 +1,4 @@
+using SwitchTag.Tagging.Sources.Model;
 using SwitchTag.Tagging;
 using Xunit;
 

@@ -9,7 +9,16 @@ public sealed record LanguageSpan(int CharStart, int CharEnd, string Language, d
 
 public enum NameLabel { PER, LOC, ORG }
 
-public enum MentionSource { Model, Authority, Gazetteer }
+/// <summary>The name source that found a mention. <see cref="Name"/> is what the outputs show; a new
+/// source brings its own value, so this is no closed list.</summary>
+public readonly record struct MentionSource(string Name)
+{
+    public static readonly MentionSource Model = new("model");
+    public static readonly MentionSource Authority = new("authority");
+    public static readonly MentionSource Gazetteer = new("gazetteer");
+
+    public override string ToString() => Name;
+}
 
 /// <summary>A name found in a turn: offsets into <see cref="Turn.Text"/>.</summary>
 public sealed record Mention(
@@ -24,14 +33,3 @@ public sealed record Mention(
 
 /// <summary>Anything with char offsets into a turn, placed in the recording.</summary>
 public sealed record Timed<T>(T Value, TimeRange Time);
-
-public static class MentionSourceNames
-{
-    public static string ToName(this MentionSource source) => source switch
-    {
-        MentionSource.Model => "model",
-        MentionSource.Authority => "authority",
-        MentionSource.Gazetteer => "gazetteer",
-        _ => throw new ArgumentOutOfRangeException(nameof(source)),
-    };
-}

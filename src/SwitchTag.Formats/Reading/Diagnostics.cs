@@ -14,8 +14,6 @@ internal sealed class Diagnostics(string path)
 
     public string Path { get; } = path;
 
-    public bool HasErrors => items.Exists(d => d.Severity == Severity.Error);
-
     public void Warn(int line, string message) => items.Add(new Diagnostic(new SourceLine(Path, line), Severity.Warning, message));
 
     public void Error(int line, string message) => items.Add(new Diagnostic(new SourceLine(Path, line), Severity.Error, message));

@@ -123,7 +123,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             Seconds(w, "end", time.End);
             w.WriteString("language", m.Language);
             w.WriteNumber("confidence", Math.Round(m.Confidence, 4));
-            w.WriteString("source", m.Source.ToName());
+            w.WriteString("source", m.Source.Name);
             w.WriteString("heading", heading);
             w.WriteString("speaker", index.Turns[m.Turn].Speaker);
             w.WriteString("review", reasons.GetValueOrDefault(i));
@@ -168,7 +168,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             foreach (var s in h.Speakers) w.WriteStringValue(s);
             w.WriteEndArray();
             w.WriteNumber("confidence", h.Confidence);
-            w.WriteString("source", h.Source.ToName());
+            w.WriteString("source", h.Source.Name);
             w.WriteEndObject();
         }
         w.WriteEndArray();

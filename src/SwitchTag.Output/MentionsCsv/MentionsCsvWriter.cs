@@ -26,7 +26,7 @@ public sealed class MentionsCsvWriter : IInterviewWriter
             csv.Row(time.Start.ToString(), time.End.ToString(), time.Start.ToSecondsString(), time.End.ToSecondsString(),
                 index.Turns[m.Turn].Speaker, m.Text, m.Label.ToString(), heading,
                 heading is null ? null : names.GetValueOrDefault(heading), m.Language, Numbers.Confidence(m.Confidence),
-                m.Source.ToName(), reasons.GetValueOrDefault(i), Numbers.Integer(m.Turn), Numbers.Integer(m.CharStart),
+                m.Source.Name, reasons.GetValueOrDefault(i), Numbers.Integer(m.Turn), Numbers.Integer(m.CharStart),
                 Numbers.Integer(m.CharEnd));
         }
         return csv.ToString();

@@ -1,6 +1,6 @@
 using SwitchTag.Core.Text;
 
-namespace SwitchTag.Tagging;
+namespace SwitchTag.Tagging.Sources.Model;
 
 /// <summary>The scripts the name model has seen in training: Latin (the UNER European treebanks,
 /// NerKor, GUM, WikiGold, BTC) and Han (UNER Chinese-GSD). On other scripts (Hebrew-script Yiddish,

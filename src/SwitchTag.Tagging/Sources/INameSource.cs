@@ -1,0 +1,16 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+
+namespace SwitchTag.Tagging.Sources;
+
+/// <summary>One source of names for the tag stage: it proposes mentions in a turn, each carrying
+/// <see cref="Source"/>, and <see cref="NamePrecedence"/> decides which proposals stand where they overlap.
+/// A source need not avoid overlapping other sources; its own proposals must not overlap each other.</summary>
+public interface INameSource
+{
+    MentionSource Source { get; }
+
+    /// <summary>Mentions in <paramref name="turnText"/> (offsets into it) of turn <paramref name="turn"/>,
+    /// each with the language of the span it starts in.</summary>
+    ImmutableArray<Mention> Find(int turn, string turnText, ImmutableArray<LanguageSpan> spans);
+}

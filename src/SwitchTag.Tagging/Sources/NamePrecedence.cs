@@ -1,0 +1,70 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+
+namespace SwitchTag.Tagging.Sources;
+
+/// <summary>Which proposal stands where name sources overlap. Sources are ranked; a proposal is
+/// dropped when it overlaps a standing proposal of a higher-ranked source (never split, shortened or
+/// relabelled), and stands otherwise. Protected sources rank above every other: a span from an
+/// archive's own list is never overwritten by a model or a gazetteer, whatever is inserted later.
+/// <see cref="Default"/>: authority list (protected), then the model (it has seen the context:
+/// "Jordan Peterson" is a person, not the country), then the gazetteer. A new source takes its place
+/// with <see cref="InsertBefore"/> or <see cref="InsertAfter"/>.</summary>
+public sealed class NamePrecedence
+{
+    private readonly ImmutableArray<MentionSource> _order;
+    private readonly ImmutableHashSet<MentionSource> _protected;
+
+    public NamePrecedence(IEnumerable<MentionSource> order, IEnumerable<MentionSource> protectedSources)
+    {
+        _protected = protectedSources.ToImmutableHashSet();
+        var all = order.ToList();
+        foreach (var p in _protected)
+            if (!all.Contains(p)) throw new ArgumentException($"protected source {p} has no place in the order");
+        if (all.Distinct().Count() != all.Count) throw new ArgumentException("a source is ranked twice");
+        _order = [.. all.Where(_protected.Contains), .. all.Where(s => !_protected.Contains(s))];
+    }
+
+    public static NamePrecedence Default { get; } =
+        new([MentionSource.Authority, MentionSource.Model, MentionSource.Gazetteer], [MentionSource.Authority]);
+
+    /// <summary>Highest rank first.</summary>
+    public ImmutableArray<MentionSource> Order => _order;
+
+    public bool IsProtected(MentionSource source) => _protected.Contains(source);
+
+    public bool Ranks(MentionSource source) => _order.Contains(source);
+
+    public NamePrecedence InsertBefore(MentionSource existing, MentionSource added) => Insert(existing, added, 0);
+
+    public NamePrecedence InsertAfter(MentionSource existing, MentionSource added) => Insert(existing, added, 1);
+
+    /// <summary>The proposals that stand, ordered by start then end.</summary>
+    public ImmutableArray<Mention> Resolve(IEnumerable<Mention> proposals)
+    {
+        var byRank = proposals.GroupBy(RankOf).OrderBy(g => g.Key);
+        var standing = new List<Mention>();
+        foreach (var rank in byRank)
+        {
+            // Proposals of one rank are checked against higher ranks only, all of them at once.
+            var higher = standing.Count;
+            foreach (var m in rank)
+                if (!standing.Take(higher).Any(s => s.CharStart < m.CharEnd && m.CharStart < s.CharEnd))
+                    standing.Add(m);
+        }
+        return [.. standing.OrderBy(m => m.CharStart).ThenBy(m => m.CharEnd)];
+    }
+
+    private int RankOf(Mention m)
+    {
+        int rank = _order.IndexOf(m.Source);
+        return rank >= 0 ? rank : throw new ArgumentException($"name source {m.Source} has no place in the precedence");
+    }
+
+    private NamePrecedence Insert(MentionSource existing, MentionSource added, int offset)
+    {
+        int at = _order.IndexOf(existing);
+        if (at < 0) throw new ArgumentException($"{existing} has no place in the precedence");
+        return new NamePrecedence(_order.Insert(at + offset, added), _protected);
+    }
+}
