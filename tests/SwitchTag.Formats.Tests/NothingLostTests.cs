@@ -73,7 +73,7 @@ public partial class NothingLostTests
         }
         string s = kept.ToString();
         if (format == TranscriptFormat.Markdown) s = LinkDestination().Replace(s, "]");
-        if (format is TranscriptFormat.WebVtt or TranscriptFormat.Srt) s = Tag().Replace(s, " ");
+        if (format == TranscriptFormat.WebVtt || format == TranscriptFormat.Srt) s = Tag().Replace(s, " ");
         if (format == TranscriptFormat.Srt) s = OverrideCode().Replace(s, " ");
         if (format != TranscriptFormat.Srt) s = WebUtility.HtmlDecode(s);
         return s;

@@ -3,31 +3,16 @@ using SwitchTag.Core.Time;
 
 namespace SwitchTag.Core.Documents;
 
-public enum TranscriptFormat { WebVtt, Srt, Text, Markdown }
-
-public static class TranscriptFormatNames
+/// <summary>A transcript format by the name index.json (<c>source.format</c>) and <c>--format</c> use.
+/// The readers of SwitchTag.Formats bring their own values, so this is no closed list.</summary>
+public readonly record struct TranscriptFormat(string Name)
 {
-    /// <summary>The names used in index.json (<c>source.format</c>) and by <c>--format</c>.</summary>
-    public static string ToName(this TranscriptFormat format) => format switch
-    {
-        TranscriptFormat.WebVtt => "webvtt",
-        TranscriptFormat.Srt => "srt",
-        TranscriptFormat.Text => "text",
-        TranscriptFormat.Markdown => "markdown",
-        _ => throw new ArgumentOutOfRangeException(nameof(format)),
-    };
+    public static readonly TranscriptFormat WebVtt = new("webvtt");
+    public static readonly TranscriptFormat Srt = new("srt");
+    public static readonly TranscriptFormat Text = new("text");
+    public static readonly TranscriptFormat Markdown = new("markdown");
 
-    public static bool TryParse(string name, out TranscriptFormat format)
-    {
-        switch (name.Trim().ToLowerInvariant())
-        {
-            case "webvtt" or "vtt": format = TranscriptFormat.WebVtt; return true;
-            case "srt": format = TranscriptFormat.Srt; return true;
-            case "text" or "txt": format = TranscriptFormat.Text; return true;
-            case "markdown" or "md": format = TranscriptFormat.Markdown; return true;
-            default: format = default; return false;
-        }
-    }
+    public override string ToString() => Name;
 }
 
 /// <summary>Where a piece of input came from: file and 1-based line.</summary>

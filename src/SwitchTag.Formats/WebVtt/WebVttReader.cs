@@ -9,9 +9,27 @@ namespace SwitchTag.Formats.WebVtt;
 /// header lines up to the first blank line, then blocks separated by blank lines. A block whose first
 /// or second line holds "-->" is a cue (the line before the timing line is its identifier); NOTE,
 /// STYLE and REGION blocks are skipped; any other block is reported, its text quoted.</summary>
-internal static class WebVttReader
+public sealed class WebVttReader : ITranscriptReader
 {
-    public static ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
+    public TranscriptFormat Format => TranscriptFormat.WebVtt;
+    public IReadOnlyList<string> Aliases { get; } = ["vtt"];
+    public IReadOnlyList<string> Extensions { get; } = [".vtt"];
+    public bool ClaimsExtensions => true;
+    public string? MissingSignature => "no WEBVTT header line";
+
+    /// <summary>The first non-blank line is the WEBVTT signature.</summary>
+    public bool Detects(string text, string extension)
+    {
+        var lines = new LineScanner(DetectionWindow.Body(text));
+        while (lines.Next(out var line))
+        {
+            if (line.IsWhiteSpace()) continue;
+            return line.StartsWith("WEBVTT", StringComparison.Ordinal) && (line.Length == 6 || line[6] is ' ' or '\t');
+        }
+        return false;
+    }
+
+    public ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
     {
         int signature = 0;
         while (signature < src.LineCount && SourceText.IsBlank(src.Span(src[signature]))) signature++;
