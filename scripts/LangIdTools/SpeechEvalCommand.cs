@@ -26,6 +26,7 @@ public static class SpeechEvalCommand
         var modes = new (string Name, Labeller Label)[]
         {
             ("each line alone", c => c.Select(t => segmenter.Segment(t, segmenter.Identify(t).Language)).ToArray()),
+            ("interview profile", c => segmenter.SegmentInterview(c).Spans.ToArray()),
         };
         SpeechScore? last = null;
         foreach (var (name, label) in modes)

@@ -1,0 +1,52 @@
+using System.Collections.Frozen;
+using System.Reflection;
+
+namespace SwitchTag.LanguageId.Profiles;
+
+/// <summary>Hesitations, backchannels and unbracketed transcriber notes, read from the embedded
+/// <c>Profiles/&lt;code&gt;/hesitations.txt</c> and <c>tags.txt</c>. Words of the <c>mul</c> folder are
+/// neutral in every language; a word listed for some languages is neutral only towards those (it
+/// carries no evidence against them, but ordinary evidence for or against every other one).</summary>
+public sealed class NeutralWords
+{
+    public const string AllLanguages = "mul";
+
+    private readonly FrozenSet<string>.AlternateLookup<ReadOnlySpan<char>> _everywhere;
+    private readonly FrozenDictionary<string, string[]>.AlternateLookup<ReadOnlySpan<char>> _byWord;
+
+    public NeutralWords(IEnumerable<(string Code, string Word)> entries)
+    {
+        var list = entries.Select(e => (e.Code, Word: e.Word.ToLowerInvariant())).ToList();
+        _everywhere = list.Where(e => e.Code == AllLanguages).Select(e => e.Word)
+            .ToFrozenSet(StringComparer.OrdinalIgnoreCase).GetAlternateLookup<ReadOnlySpan<char>>();
+        _byWord = list.Where(e => e.Code != AllLanguages).GroupBy(e => e.Word)
+            .ToFrozenDictionary(g => g.Key, g => g.Select(e => e.Code).Distinct().Order(StringComparer.Ordinal).ToArray(), StringComparer.OrdinalIgnoreCase)
+            .GetAlternateLookup<ReadOnlySpan<char>>();
+    }
+
+    /// <summary>The lists shipped in this assembly.</summary>
+    public static NeutralWords Default { get; } = new(ReadEmbedded());
+
+    /// <summary>A filler in every language: never language evidence.</summary>
+    public bool IsNeutralEverywhere(ReadOnlySpan<char> word) => _everywhere.Contains(word);
+
+    /// <summary>Languages in which <paramref name="word"/> is a filler or a transcriber note (empty for most words).</summary>
+    public ReadOnlySpan<string> NeutralIn(ReadOnlySpan<char> word) =>
+        _byWord.TryGetValue(word, out var codes) ? codes : [];
+
+    private static IEnumerable<(string, string)> ReadEmbedded()
+    {
+        var assembly = typeof(NeutralWords).Assembly;
+        foreach (var name in assembly.GetManifestResourceNames().Order(StringComparer.Ordinal))
+        {
+            var parts = name.Split('/', '\\');
+            if (parts is not ["Profiles", var code, "hesitations.txt" or "tags.txt"]) continue;
+            using var reader = new StreamReader(assembly.GetManifestResourceStream(name)!);
+            while (reader.ReadLine() is { } line)
+            {
+                var word = line.Trim();
+                if (word.Length > 0 && word[0] != '#') yield return (code, word);
+            }
+        }
+    }
+}

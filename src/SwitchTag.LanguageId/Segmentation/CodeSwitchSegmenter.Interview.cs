@@ -1,0 +1,127 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Stages;
+
+namespace SwitchTag.LanguageId.Segmentation;
+
+/// <summary>Interview-level segmentation: the languages of a whole interview first, then each turn
+/// decided within them.</summary>
+public sealed partial class CodeSwitchSegmenter
+{
+    private const int ProfileIterations = 30;
+    private const float ProfileSmoothing = 0.1f;
+    private const double ReportedShare = 0.001;
+
+    /// <summary>Segments all turns of one interview, in order. First pass: the interview's language
+    /// shares, as the mixture weights that best explain its turns (EM over turns, each turn scored
+    /// as one language with capped word evidence, so a short turn in a close language cannot
+    /// invent a language); languages with at least <see cref="InterviewParameters.MinShare"/> form
+    /// the profile. Second pass: each turn is decoded with ln(share) as the prior of starting in and
+    /// switching into a language (every language outside the profile gets
+    /// <see cref="InterviewParameters.OutsideShare"/>: a third language needs strong evidence, but
+    /// gets through when it has it), and with the previous turn's last language mixed into the
+    /// starting prior, so "no." or "sí." follows the conversation.</summary>
+    public InterviewSegmentation SegmentInterview(IReadOnlyList<string> turns, InterviewParameters? parameters = null)
+    {
+        var p = parameters ?? InterviewParameters.Default;
+        var mp = _model.Parameters;
+        var cache = new Dictionary<string, float[]>(StringComparer.Ordinal);
+        var evidence = new TurnEvidence[turns.Count];
+        for (int t = 0; t < turns.Count; t++) evidence[t] = CollectEvidence(turns[t] ?? "", mp, cache);
+
+        var classShare = EstimateShares(evidence);
+        var profile = ProfileOf(classShare, p);
+        int classes = _model.ClassCount;
+        var logPrior = new float[classes];
+        for (int c = 0; c < classes; c++)
+            logPrior[c] = (float)Math.Log(profile.Contains(_model.ClassCodes[c]) ? Math.Max(classShare[c], p.OutsideShare) : p.OutsideShare);
+
+        var enter = new float[classes];
+        for (int c = 0; c < classes; c++) enter[c] = p.SwitchCost - p.EnterWeight * logPrior[c];
+        var noBonus = new float[classes];
+        var guesses = ImmutableArray.CreateBuilder<LanguageGuess>(turns.Count);
+        var spans = ImmutableArray.CreateBuilder<ImmutableArray<LanguageSpan>>(turns.Count);
+        int previousCode = -1;
+        for (int t = 0; t < turns.Count; t++)
+        {
+            string text = turns[t] ?? "";
+            var ev = evidence[t];
+            if (text.Length == 0) { spans.Add([]); guesses.Add(new LanguageGuess(Undetermined, 0)); continue; }
+            if (ev.Count == 0)
+            {
+                spans.Add([new LanguageSpan(0, text.Length, Undetermined, 0)]);
+                guesses.Add(new LanguageGuess(Undetermined, 0));
+                continue;
+            }
+            var start = StartPrior(logPrior, previousCode, p);
+            var labels = Decode(ev, new DecoderPriors(start, enter, noBonus));
+            MergeShortIslands(text, ev, labels, p.MinIslandWeight, code => !profile.Contains(_codes[code]));
+            spans.Add(BuildSpans(text, ev, labels, logPrior));
+            var posterior = CodePosterior(ev, 0, ev.Count, logPrior);
+            int best = ArgMax(posterior);
+            guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(posterior[best], 4)));
+            previousCode = _codeOfClass[labels[^1]];
+        }
+        return new InterviewSegmentation(profile, guesses.MoveToImmutable(), spans.MoveToImmutable());
+    }
+
+    /// <summary>Mixture weights per class maximising the likelihood of the turns, each turn one
+    /// language: EM with a small Dirichlet smoothing, turns weighted by their words.</summary>
+    private double[] EstimateShares(TurnEvidence[] evidence)
+    {
+        int classes = _model.ClassCount;
+        var turnScores = new List<(float Weight, float[] Score)>();
+        foreach (var ev in evidence)
+        {
+            if (ev.Count == 0) continue;
+            var sum = new float[classes];
+            foreach (var e in ev.Emissions) for (int c = 0; c < classes; c++) sum[c] += e[c];
+            turnScores.Add((ev.TotalWeight, sum));
+        }
+        var share = Enumerable.Repeat(1.0 / classes, classes).ToArray();
+        var next = new double[classes];
+        var post = new double[classes];
+        for (int it = 0; it < ProfileIterations && turnScores.Count > 0; it++)
+        {
+            Array.Fill(next, ProfileSmoothing);
+            foreach (var (weight, score) in turnScores)
+            {
+                double max = double.NegativeInfinity;
+                for (int c = 0; c < classes; c++) max = Math.Max(max, post[c] = Math.Log(share[c]) + score[c]);
+                double sum = 0;
+                for (int c = 0; c < classes; c++) sum += post[c] = Math.Exp(post[c] - max);
+                for (int c = 0; c < classes; c++) next[c] += weight * post[c] / sum;
+            }
+            double total = next.Sum();
+            for (int c = 0; c < classes; c++) share[c] = next[c] / total;
+        }
+        return share;
+    }
+
+    private InterviewLanguages ProfileOf(double[] classShare, InterviewParameters p)
+    {
+        var byCode = new double[_codes.Length];
+        for (int c = 0; c < classShare.Length; c++) byCode[_codeOfClass[c]] += classShare[c];
+        var shares = Enumerable.Range(0, _codes.Length).Where(i => byCode[i] >= ReportedShare)
+            .OrderByDescending(i => byCode[i]).ThenBy(i => _codes[i], StringComparer.Ordinal)
+            .Select(i => new LanguageShare(_codes[i], Math.Round(byCode[i], 4))).ToImmutableArray();
+        return new InterviewLanguages(shares.Where(s => s.Share >= p.MinShare).ToImmutableArray(), shares);
+    }
+
+    /// <summary>ln of the profile's shares mixed with the previous turn's last language.</summary>
+    private float[] StartPrior(float[] logPrior, int previousCode, InterviewParameters p)
+    {
+        int classes = logPrior.Length;
+        var start = new float[classes];
+        int sameCode = 0;
+        if (previousCode >= 0) for (int c = 0; c < classes; c++) if (_codeOfClass[c] == previousCode) sameCode++;
+        for (int c = 0; c < classes; c++)
+        {
+            double prior = Math.Exp(logPrior[c]);
+            double context = previousCode >= 0 && _codeOfClass[c] == previousCode ? 1.0 / sameCode : 0;
+            double mixed = previousCode >= 0 ? (1 - p.Context) * prior + p.Context * context : prior;
+            start[c] = p.StartWeight * (float)Math.Log(mixed);
+        }
+        return start;
+    }
+}
