@@ -49,6 +49,8 @@ public static class SpeechEvalCommand
         Console.WriteLine($"Counts in parentheses: scored words, words in switched utterances, one-word utterances, utterances with a gold switch. Last mode: {last!.GoldOneWord} gold and {last.PredictedOneWord} predicted one-word switches.");
         Console.WriteLine();
         PrintConfusions(last);
+        PrintWords("One-word switches predicted but not in gold", last.FalseOneWord);
+        PrintWords("One-word switches in gold but not predicted", last.MissedOneWord);
         return 0;
     }
 
@@ -64,6 +66,13 @@ public static class SpeechEvalCommand
             var examples = list.Where((_, i) => i % Math.Max(1, list.Count / 3) == 0).Take(3).Select(x => $"\"{x.Text}\" ({Clean(x.Word)})");
             Console.WriteLine($"| {gold} → {predicted} | {list.Count} | {string.Join(", ", words)} | {string.Join("; ", examples)} |");
         }
+        Console.WriteLine();
+    }
+
+    private static void PrintWords(string title, List<(string Word, string Text)> list)
+    {
+        Console.WriteLine($"{title} ({list.Count}), most frequent words: " + string.Join(", ",
+            list.GroupBy(x => Clean(x.Word)).OrderByDescending(g => g.Count()).Take(25).Select(g => $"{g.Key} {g.Count()}")));
         Console.WriteLine();
     }
 

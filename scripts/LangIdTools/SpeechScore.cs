@@ -13,18 +13,21 @@ public sealed class SpeechScore
     public int GoldOneWord, PredictedOneWord, MatchedOneWord;
     public int GoldTwoWord, PredictedTwoWord, MatchedTwoWord;
     public readonly Dictionary<(string Gold, string Predicted), List<(string Word, string Text)>> Confusions = [];
+    public readonly List<(string Word, string Text)> FalseOneWord = [], MissedOneWord = [];
 
     public void Add(SpeechUtterance u, ImmutableArray<LanguageSpan> spans)
     {
         var starts = u.WordStarts();
         var gold = new List<string>();
         var predicted = new List<string>();
+        var words = new List<string>();
         for (int w = 0; w < starts.Length; w++)
         {
             if (!u.IsScored(w)) continue;
             int end = w + 1 < starts.Length ? starts[w + 1] - 1 : u.Text.Length;
             string p = LanguageAt(spans, FirstLetterOrDigit(u.Text, starts[w], end));
             gold.Add(u.Labels[w]);
+            words.Add(u.Text[starts[w]..end]);
             predicted.Add(p);
             if (p != u.Labels[w])
             {
@@ -52,6 +55,10 @@ public sealed class SpeechScore
         var goldRuns = Runs(gold);
         var predictedRuns = Runs(predicted);
         CountRuns(goldRuns, predictedRuns, 1, ref GoldOneWord, ref PredictedOneWord, ref MatchedOneWord);
+        if (goldRuns.Count > 1)
+            foreach (var r in goldRuns.Where(r => r.Length == 1 && !(predictedRuns.Count > 1 && predictedRuns.Contains(r)))) MissedOneWord.Add((words[r.Start], u.Text));
+        if (predictedRuns.Count > 1)
+            foreach (var r in predictedRuns.Where(r => r.Length == 1 && !(goldRuns.Count > 1 && goldRuns.Contains(r)))) FalseOneWord.Add((words[r.Start], u.Text));
         CountRuns(goldRuns, predictedRuns, 2, ref GoldTwoWord, ref PredictedTwoWord, ref MatchedTwoWord);
     }
 

@@ -14,10 +14,10 @@ namespace SwitchTag.LanguageId.Segmentation;
 public sealed record InterviewParameters(
     double MinShare = 0.02,
     double OutsideShare = 1e-4,
-    float SwitchCost = 2.5f,
-    float EnterWeight = 1f,
+    float SwitchCost = 1.5f,
+    float EnterWeight = 0.75f,
     float StartWeight = 1f,
-    double Context = 0.5,
+    double Context = 0.3,
     float MinIslandWeight = 1.1f)
 {
     public static readonly InterviewParameters Default = new();
