@@ -1,3 +1,4 @@
+using SwitchTag.LanguageId.Interview;
 using SwitchTag.LanguageId.Segmentation;
 
 namespace LangIdTools;

@@ -16,9 +16,13 @@ public static class LangIdCommand
         var languages = new Option<bool>("--languages") { Description = "Print the supported language codes, one per line." };
         var lines = new Option<FileInfo?>("--lines") { Description = "Identify every line of this UTF-8 file." };
         var json = new Option<bool>("--json") { Description = "One JSON object per input line: language, confidence, spans." };
+        var eachLine = new Option<bool>("--each-line")
+        {
+            Description = "Judge every line alone. By default the file is one conversation: its languages are found from all lines first, and each line is decided within them.",
+        };
         var command = new Command("langid", "Identify the language of text, line by line, with switch points inside each line.")
         {
-            languages, lines, json,
+            languages, lines, json, eachLine,
         };
         command.SetAction(parseResult =>
         {
@@ -38,7 +42,7 @@ public static class LangIdCommand
                 Console.Error.WriteLine($"switchtag langid: {file.FullName}: file not found");
                 return ExitCodes.InputsRejected;
             }
-            WriteLines(segmenter, File.ReadLines(file.FullName, Encoding.UTF8), Console.Out, parseResult.GetValue(json));
+            WriteLines(segmenter, File.ReadAllLines(file.FullName, Encoding.UTF8), Console.Out, parseResult.GetValue(json), parseResult.GetValue(eachLine));
             return ExitCodes.Success;
         });
         return command;
@@ -58,13 +62,15 @@ public static class LangIdCommand
         }
     }
 
-    public static void WriteLines(CodeSwitchSegmenter segmenter, IEnumerable<string> lines, TextWriter output, bool json)
+    public static void WriteLines(CodeSwitchSegmenter segmenter, IReadOnlyList<string> lines, TextWriter output, bool json, bool eachLineAlone = false)
     {
+        var conversation = eachLineAlone ? null : segmenter.SegmentInterview(lines);
         var buffer = new MemoryStream();
-        foreach (var line in lines)
+        for (int i = 0; i < lines.Count; i++)
         {
-            var guess = segmenter.Identify(line);
-            var spans = segmenter.Segment(line, guess.Language);
+            string line = lines[i];
+            var guess = conversation?.TurnLanguages[i] ?? segmenter.Identify(line);
+            var spans = conversation?.Spans[i] ?? segmenter.Segment(line, guess.Language);
             if (!json)
             {
                 output.WriteLine($"{guess.Language}\t{guess.Confidence:F3}\t" +

@@ -1,5 +1,4 @@
 using System.Collections.Frozen;
-using System.Reflection;
 
 namespace SwitchTag.LanguageId.Profiles;
 
@@ -25,7 +24,7 @@ public sealed class NeutralWords
     }
 
     /// <summary>The lists shipped in this assembly.</summary>
-    public static NeutralWords Default { get; } = new(ReadEmbedded());
+    public static NeutralWords Default { get; } = new(ProfileFiles.Read("hesitations.txt").Concat(ProfileFiles.Read("tags.txt")));
 
     /// <summary>A filler in every language: never language evidence.</summary>
     public bool IsNeutralEverywhere(ReadOnlySpan<char> word) => _everywhere.Contains(word);
@@ -33,20 +32,4 @@ public sealed class NeutralWords
     /// <summary>Languages in which <paramref name="word"/> is a filler or a transcriber note (empty for most words).</summary>
     public ReadOnlySpan<string> NeutralIn(ReadOnlySpan<char> word) =>
         _byWord.TryGetValue(word, out var codes) ? codes : [];
-
-    private static IEnumerable<(string, string)> ReadEmbedded()
-    {
-        var assembly = typeof(NeutralWords).Assembly;
-        foreach (var name in assembly.GetManifestResourceNames().Order(StringComparer.Ordinal))
-        {
-            var parts = name.Split('/', '\\');
-            if (parts is not ["Profiles", var code, "hesitations.txt" or "tags.txt"]) continue;
-            using var reader = new StreamReader(assembly.GetManifestResourceStream(name)!);
-            while (reader.ReadLine() is { } line)
-            {
-                var word = line.Trim();
-                if (word.Length > 0 && word[0] != '#') yield return (code, word);
-            }
-        }
-    }
 }

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
+using SwitchTag.LanguageId.Interview;
 
 namespace SwitchTag.LanguageId.Segmentation;
 
@@ -104,7 +105,7 @@ public sealed partial class CodeSwitchSegmenter
         for (int c = 0; c < classShare.Length; c++) byCode[_codeOfClass[c]] += classShare[c];
         var shares = Enumerable.Range(0, _codes.Length).Where(i => byCode[i] >= ReportedShare)
             .OrderByDescending(i => byCode[i]).ThenBy(i => _codes[i], StringComparer.Ordinal)
-            .Select(i => new LanguageShare(_codes[i], Math.Round(byCode[i], 4))).ToImmutableArray();
+            .Select(i => new SpokenLanguage(_codes[i], Math.Round(byCode[i], 4))).ToImmutableArray();
         return new InterviewLanguages(shares.Where(s => s.Share >= p.MinShare).ToImmutableArray(), shares);
     }
 

@@ -1,4 +1,4 @@
-namespace SwitchTag.LanguageId.Segmentation;
+namespace SwitchTag.LanguageId.Interview;
 
 /// <summary>Numbers of the interview-level decoder (see models/langid.md, "Interview profile").
 /// The defaults were fitted on the development half of the Miami Spanish-English conversations

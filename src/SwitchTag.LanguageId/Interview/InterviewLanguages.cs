@@ -2,15 +2,15 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 
-namespace SwitchTag.LanguageId.Segmentation;
+namespace SwitchTag.LanguageId.Interview;
 
 /// <summary>One language of an interview and its share of the interview's words.</summary>
-public sealed record LanguageShare(string Language, double Share);
+public sealed record SpokenLanguage(string Language, double Share);
 
 /// <summary>The languages an interview is spoken in, found by a first pass over all its turns:
 /// every language whose share reaches <see cref="InterviewParameters.MinShare"/>, largest first.
 /// <see cref="Shares"/> also lists smaller shares (down to 0.001) for reports.</summary>
-public sealed record InterviewLanguages(ImmutableArray<LanguageShare> Spoken, ImmutableArray<LanguageShare> Shares)
+public sealed record InterviewLanguages(ImmutableArray<SpokenLanguage> Spoken, ImmutableArray<SpokenLanguage> Shares)
 {
     public static readonly InterviewLanguages None = new([], []);
 
