@@ -14,12 +14,12 @@ public static class SpeechTuneCommand
         var segmenter = CodeSwitchSegmenter.Load(modelPath);
         var texts = conversations.Select(c => c.Select(u => u.Text).ToList()).ToList();
         var results = new List<(InterviewParameters P, SpeechScore S)>();
-        foreach (float switchCost in new[] { 0.5f, 1f, 1.5f })
-        foreach (float enter in new[] { 0f, 0.25f, 0.5f })
-        foreach (double context in new[] { 0.0, 0.15, 0.3 })
-        foreach (float startWeight in new[] { 1f })
+        foreach (float switchCost in new[] { 1f, 1.5f, 2f })
+        foreach (float enter in new[] { 0.5f, 0.75f })
+        foreach (double context in new[] { 0.3 })
+        foreach (bool known in new[] { false, true })
         {
-            var p = InterviewParameters.Default with { SwitchCost = switchCost, EnterWeight = enter, Context = context, StartWeight = startWeight };
+            var p = InterviewParameters.Default with { SwitchCost = switchCost, EnterWeight = enter, Context = context, KeepKnownWords = known };
             var score = new SpeechScore();
             for (int i = 0; i < conversations.Count; i++)
             {
@@ -36,6 +36,6 @@ public static class SpeechTuneCommand
     }
 
     private static string Line(InterviewParameters p, SpeechScore s) =>
-        $"switch {p.SwitchCost} enter {p.EnterWeight} context {p.Context} start {p.StartWeight} | tokens {s.Tokens.Value:F4} switched {s.SwitchedTokens.Value:F4} " +
+        $"switch {p.SwitchCost} enter {p.EnterWeight} context {p.Context} known {p.KeepKnownWords} | tokens {s.Tokens.Value:F4} switched {s.SwitchedTokens.Value:F4} " +
         $"one-word {s.OneWordTokens.Value:F4} switch-utt {s.SwitchUtterances.Value:F4} 1w P {SpeechScore.Rate(s.MatchedOneWord, s.PredictedOneWord):F3} R {SpeechScore.Rate(s.MatchedOneWord, s.GoldOneWord):F3}";
 }

@@ -10,6 +10,7 @@ namespace SwitchTag.LanguageId.Interview;
 /// <param name="EnterWeight">times −ln(share) added to the cost of switching into a language</param>
 /// <param name="StartWeight">times ln(prior) for the first word of a turn</param>
 /// <param name="Context">weight of the previous turn's last language in a turn's starting prior (the rest is the profile's shares)</param>
+/// <param name="KeepKnownWords">a one-word island whose word the surrounding language's training text also has as a word stays in the surrounding language</param>
 /// <param name="MinIslandWeight">a run of less word weight than this inside a turn, in a language outside the profile and the script of its neighbours, is merged into them</param>
 public sealed record InterviewParameters(
     double MinShare = 0.02,
@@ -18,7 +19,8 @@ public sealed record InterviewParameters(
     float EnterWeight = 0.75f,
     float StartWeight = 1f,
     double Context = 0.3,
-    float MinIslandWeight = 1.1f)
+    float MinIslandWeight = 1.1f,
+    bool KeepKnownWords = true)
 {
     public static readonly InterviewParameters Default = new();
 }

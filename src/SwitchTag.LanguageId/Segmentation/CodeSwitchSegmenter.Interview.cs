@@ -56,7 +56,9 @@ public sealed partial class CodeSwitchSegmenter
             }
             var start = StartPrior(logPrior, previousCode, p);
             var labels = Decode(ev, new DecoderPriors(start, enter, noBonus));
-            MergeShortIslands(text, ev, labels, p.MinIslandWeight, code => !profile.Contains(_codes[code]));
+            // A lone name ("Irena Kowalczyk.") is no switch even into a language of the interview.
+            MergeShortIslands(text, ev, labels, p.MinIslandWeight, (code, namesOnly) => namesOnly || !profile.Contains(_codes[code]));
+            if (p.KeepKnownWords) MergeKnownWords(text, ev, labels);
             spans.Add(BuildSpans(text, ev, labels, logPrior));
             var posterior = CodePosterior(ev, 0, ev.Count, logPrior);
             int best = ArgMax(posterior);
@@ -64,6 +66,35 @@ public sealed partial class CodeSwitchSegmenter
             previousCode = _codeOfClass[labels[^1]];
         }
         return new InterviewSegmentation(profile, guesses.MoveToImmutable(), spans.MoveToImmutable());
+    }
+
+    /// <summary>A one-word island whose word the surrounding language also uses as a word of its own
+    /// (its training text kept the whole word: "café", "horrible", "principal" in English) is a
+    /// loanword or cognate, not a switch, and takes the surrounding language.</summary>
+    private void MergeKnownWords(string text, TurnEvidence evidence, int[] labels)
+    {
+        int n = labels.Length;
+        Span<char> buffer = stackalloc char[SwitchTag.LanguageId.Model.NgramHasher.MaxWordChars];
+        Span<bool> kept = stackalloc bool[_model.ClassCount];
+        for (int w = 0; w < n; w++)
+        {
+            int code = _codeOfClass[labels[w]];
+            bool before = w > 0 && _codeOfClass[labels[w - 1]] != code;
+            bool after = w + 1 < n && _codeOfClass[labels[w + 1]] != code;
+            if (w > 0 && !before || w + 1 < n && !after || !before && !after) continue;
+            int neighbour = before ? labels[w - 1] : labels[w + 1];
+            if (before && after && _codeOfClass[labels[w - 1]] != _codeOfClass[labels[w + 1]]) continue;
+            var token = evidence.Tokens[evidence.TokenIndex[w]];
+            int len = Text.WordNormalizer.Normalize(text.AsSpan(token.Start, token.Length), buffer);
+            _model.WholeWordClasses(buffer[..len], kept);
+            int neighbourCode = _codeOfClass[neighbour];
+            for (int c = 0; c < kept.Length; c++)
+                if (kept[c] && _codeOfClass[c] == neighbourCode)
+                {
+                    labels[w] = BestClassOf(neighbourCode, evidence.Scores[w]);
+                    break;
+                }
+        }
     }
 
     /// <summary>Mixture weights per class maximising the likelihood of the turns, each turn one

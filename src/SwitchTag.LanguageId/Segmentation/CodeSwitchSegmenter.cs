@@ -104,7 +104,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             bonus[c] = _model.ClassCodes[c] == mainLanguage ? parameters.MainLanguageBonus : 0;
         }
         var labels = Decode(evidence, new DecoderPriors(start, enter, bonus));
-        MergeShortIslands(text, evidence, labels, MinIslandWeight, _ => true);
+        MergeShortIslands(text, evidence, labels, MinIslandWeight, (_, _) => true);
         return BuildSpans(text, evidence, labels, null);
     }
 
@@ -199,8 +199,9 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
     /// language in the same script is a loanword, a cognate or a name ("voyage?", "Kurt. [pause] Kurt"),
     /// not a switch: such an island takes the language of the run before it (or after it, at the
     /// start). A different script is evidence enough. Only islands whose language passes
-    /// <paramref name="mergeable"/> are merged (within an interview: languages outside its profile).</summary>
-    private void MergeShortIslands(string text, TurnEvidence evidence, int[] labels, float minWeight, Func<int, bool> mergeable)
+    /// <paramref name="mergeable"/> (given the island's code and whether all its words are name-like)
+    /// are merged.</summary>
+    private void MergeShortIslands(string text, TurnEvidence evidence, int[] labels, float minWeight, Func<int, bool, bool> mergeable)
     {
         var tokens = evidence.Tokens;
         int n = labels.Length;
@@ -210,12 +211,17 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             int end = start;
             while (end + 1 < n && _codeOfClass[labels[end + 1]] == _codeOfClass[labels[start]]) end++;
             bool hasBefore = start > 0, hasAfter = end + 1 < n;
-            if ((hasBefore || hasAfter) && mergeable(_codeOfClass[labels[start]]))
+            if (hasBefore || hasAfter)
             {
                 float weight = 0;
-                for (int w = start; w <= end; w++) weight += evidence.Weights[w];
+                bool namesOnly = true;
+                for (int w = start; w <= end; w++)
+                {
+                    weight += evidence.Weights[w];
+                    namesOnly &= evidence.Weights[w] < 1;
+                }
                 int neighbour = hasBefore ? start - 1 : end + 1;
-                if (weight < minWeight && SameScript(text, tokens[evidence.TokenIndex[start]], tokens[evidence.TokenIndex[neighbour]]))
+                if (weight < minWeight && mergeable(_codeOfClass[labels[start]], namesOnly) && SameScript(text, tokens[evidence.TokenIndex[start]], tokens[evidence.TokenIndex[neighbour]]))
                 {
                     int code = _codeOfClass[labels[neighbour]];
                     for (int w = start; w <= end; w++) labels[w] = BestClassOf(code, evidence.Scores[w]);
