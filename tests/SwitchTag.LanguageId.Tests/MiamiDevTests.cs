@@ -17,6 +17,7 @@ public sealed class MiamiDevTests(ModelFixture fixture)
         var path = TestPaths.RequireData("codeswitch/miami-dev/gold.jsonl");
         var conversations = File.ReadLines(path).Select(Parse).GroupBy(u => u.Conversation).ToList();
         int right = 0, total = 0, oneRight = 0, oneTotal = 0, aloneOneRight = 0;
+        var stretches = new List<(double Confidence, bool Right)>();
         foreach (var conversation in conversations)
         {
             var utterances = conversation.ToList();
@@ -33,6 +34,7 @@ public sealed class MiamiDevTests(ModelFixture fixture)
                         var span = result.Spans[i].Single(s => at >= s.CharStart && at < s.CharEnd);
                         scored++;
                         if (span.Language == u.Labels[w]) ok++;
+                        stretches.Add((span.Confidence, span.Language == u.Labels[w]));
                     }
                     at += words[w].Length + 1;
                 }
@@ -48,6 +50,11 @@ public sealed class MiamiDevTests(ModelFixture fixture)
         Assert.True(right >= 0.985 * total, $"token accuracy {right}/{total}");
         Assert.True(oneRight >= 0.93 * oneTotal, $"one-word utterances {oneRight}/{oneTotal}");
         Assert.True(aloneOneRight < oneRight, $"judged alone {aloneOneRight}, within the conversation {oneRight}");
+        // Confidence must tell: words in stretches below the check threshold are right clearly less often.
+        var low = stretches.Where(s => s.Confidence < Interview.StretchCalibration.CheckBelow).ToList();
+        var high = stretches.Where(s => s.Confidence >= Interview.StretchCalibration.CheckBelow).ToList();
+        Assert.NotEmpty(low);
+        Assert.True(low.Count(s => s.Right) / (double)low.Count < high.Count(s => s.Right) / (double)high.Count - 0.1);
     }
 
     private static Utterance Parse(string line)

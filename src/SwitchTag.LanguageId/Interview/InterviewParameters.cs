@@ -23,4 +23,7 @@ public sealed record InterviewParameters(
     bool KeepKnownWords = true)
 {
     public static readonly InterviewParameters Default = new();
+
+    /// <summary>How span and turn confidences are calibrated (<see cref="StretchCalibration.Raw"/> to fit it).</summary>
+    public StretchCalibration Calibration { get; init; } = StretchCalibration.Fitted;
 }

@@ -59,14 +59,33 @@ public sealed partial class CodeSwitchSegmenter
             // A lone name ("Irena Kowalczyk.") is no switch even into a language of the interview.
             MergeShortIslands(text, ev, labels, p.MinIslandWeight, (code, namesOnly) => namesOnly || !profile.Contains(_codes[code]));
             if (p.KeepKnownWords) MergeKnownWords(text, ev, labels);
-            spans.Add(BuildSpans(text, ev, labels, logPrior));
+            spans.Add(Calibrate(BuildSpans(text, ev, labels, logPrior), ev, profile, p));
             var posterior = CodePosterior(ev, 0, ev.Count, logPrior);
             int best = ArgMax(posterior);
-            guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(posterior[best], 4)));
+            double confidence = p.Calibration.Apply(posterior[best], WordsIn(ev, 0, text.Length), ShareOf(profile, _codes[best], p));
+            guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(confidence, 4)));
             previousCode = _codeOfClass[labels[^1]];
         }
         return new InterviewSegmentation(profile, guesses.MoveToImmutable(), spans.MoveToImmutable());
     }
+
+    private static ImmutableArray<LanguageSpan> Calibrate(ImmutableArray<LanguageSpan> spans, TurnEvidence evidence,
+        InterviewLanguages profile, InterviewParameters p) =>
+        spans.Select(s => s with
+        {
+            Confidence = Math.Round(p.Calibration.Apply(s.Confidence, WordsIn(evidence, s.CharStart, s.CharEnd), ShareOf(profile, s.Language, p)), 4),
+        }).ToImmutableArray();
+
+    /// <summary>Words (letters, not numbers or fillers of every language) starting in [start, end).</summary>
+    public static int WordsIn(IReadOnlyList<Text.Token> tokens, int start, int end) =>
+        tokens.Count(t => t.Kind == Text.TokenKind.Word && t.Start >= start && t.Start < end);
+
+    private static int WordsIn(TurnEvidence evidence, int start, int end) => WordsIn(evidence.Tokens, start, end);
+
+    /// <summary>A language's share of the interview as the calibration sees it (outside the profile:
+    /// <see cref="InterviewParameters.OutsideShare"/>).</summary>
+    public static double ShareOf(InterviewLanguages profile, string language, InterviewParameters p) =>
+        profile.Spoken.FirstOrDefault(s => s.Language == language)?.Share ?? p.OutsideShare;
 
     /// <summary>A one-word island whose word the surrounding language also uses as a word of its own
     /// (its training text kept the whole word: "café", "horrible", "principal" in English) is a
