@@ -26,7 +26,7 @@ public sealed partial class CodeSwitchSegmenter
     {
         var p = parameters ?? InterviewParameters.Default;
         var mp = _model.Parameters;
-        var cache = new Dictionary<string, float[]>(StringComparer.Ordinal);
+        var cache = new Dictionary<string, ScoredWord>(StringComparer.Ordinal);
         var evidence = new TurnEvidence[turns.Count];
         for (int t = 0; t < turns.Count; t++) evidence[t] = CollectEvidence(turns[t] ?? "", mp, cache);
 
@@ -121,33 +121,47 @@ public sealed partial class CodeSwitchSegmenter
     private double[] EstimateShares(TurnEvidence[] evidence)
     {
         int classes = _model.ClassCount;
-        var turnScores = new List<(float Weight, float[] Score)>();
+        // Per turn only the classes within Negligible nats of its best matter: below that a class's
+        // posterior stays under e^-40 whatever the shares (they are at least ~e^-15).
+        var turns = new List<(float Weight, int[] Classes, float[] Scores)>();
+        var sum = new float[classes];
         foreach (var ev in evidence)
         {
             if (ev.Count == 0) continue;
-            var sum = new float[classes];
+            Array.Clear(sum);
             foreach (var e in ev.Emissions) for (int c = 0; c < classes; c++) sum[c] += e[c];
-            turnScores.Add((ev.TotalWeight, sum));
+            float max = sum.Max();
+            var kept = Enumerable.Range(0, classes).Where(c => sum[c] >= max - Negligible).ToArray();
+            turns.Add((ev.TotalWeight, kept, kept.Select(c => sum[c]).ToArray()));
         }
         var share = Enumerable.Repeat(1.0 / classes, classes).ToArray();
         var next = new double[classes];
         var post = new double[classes];
-        for (int it = 0; it < ProfileIterations && turnScores.Count > 0; it++)
+        for (int it = 0; it < ProfileIterations && turns.Count > 0; it++)
         {
             Array.Fill(next, ProfileSmoothing);
-            foreach (var (weight, score) in turnScores)
+            foreach (var (weight, kept, score) in turns)
             {
                 double max = double.NegativeInfinity;
-                for (int c = 0; c < classes; c++) max = Math.Max(max, post[c] = Math.Log(share[c]) + score[c]);
-                double sum = 0;
-                for (int c = 0; c < classes; c++) sum += post[c] = Math.Exp(post[c] - max);
-                for (int c = 0; c < classes; c++) next[c] += weight * post[c] / sum;
+                for (int k = 0; k < kept.Length; k++) max = Math.Max(max, post[k] = Math.Log(share[kept[k]]) + score[k]);
+                double total = 0;
+                for (int k = 0; k < kept.Length; k++) total += post[k] = Math.Exp(post[k] - max);
+                for (int k = 0; k < kept.Length; k++) next[kept[k]] += weight * post[k] / total;
             }
-            double total = next.Sum();
-            for (int c = 0; c < classes; c++) share[c] = next[c] / total;
+            double all = next.Sum(), change = 0;
+            for (int c = 0; c < classes; c++)
+            {
+                double updated = next[c] / all;
+                change = Math.Max(change, Math.Abs(updated - share[c]));
+                share[c] = updated;
+            }
+            if (change < Converged) break;
         }
         return share;
     }
+
+    private const float Negligible = 40;
+    private const double Converged = 1e-5;
 
     private InterviewLanguages ProfileOf(double[] classShare, InterviewParameters p)
     {

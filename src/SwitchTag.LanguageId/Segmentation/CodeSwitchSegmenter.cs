@@ -108,14 +108,15 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         return BuildSpans(text, evidence, labels, null);
     }
 
-    /// <summary>Scores every word of <paramref name="text"/> that carries evidence. Words are scored
-    /// once per <paramref name="cache"/> (normalised form to raw log-likelihoods) when one is given.</summary>
-    private TurnEvidence CollectEvidence(string text, ModelParameters parameters, Dictionary<string, float[]>? cache)
+    /// <summary>Scores every word of <paramref name="text"/> that carries evidence. With a
+    /// <paramref name="cache"/> (normalised form to scores) each distinct word is scored once, and
+    /// ordinary words share one emission array (never written after it is made).</summary>
+    private TurnEvidence CollectEvidence(string text, ModelParameters parameters, Dictionary<string, ScoredWord>? cache)
     {
         var evidence = new TurnEvidence(Tokenizer.Tokenize(text));
         var tokens = evidence.Tokens;
         int classes = _model.ClassCount;
-        var acc = new ScoreAccumulator(classes);
+        ScoreAccumulator? acc = null;
         Span<char> buffer = stackalloc char[NgramHasher.MaxWordChars];
         var lookup = cache?.GetAlternateLookup<ReadOnlySpan<char>>();
         for (int t = 0; t < tokens.Count; t++)
@@ -126,21 +127,35 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             if (weight == 0) continue;
             int len = WordNormalizer.Normalize(text.AsSpan(token.Start, token.Length), buffer);
             var word = buffer[..len];
-            if (lookup is not { } l || !l.TryGetValue(word, out var s))
+            if (lookup is not { } l || !l.TryGetValue(word, out var scored))
             {
+                acc ??= new ScoreAccumulator(classes);
                 acc.Clear();
                 _model.AddWord(word, acc);
-                s = acc.FeatureHits == 0 ? [] : new float[classes];
+                var s = acc.FeatureHits == 0 ? [] : new float[classes];
                 if (s.Length > 0) _model.LogLikelihoods(acc, s);
-                if (lookup is { } l2) l2[word] = s;
+                scored = new ScoredWord(s);
+                if (lookup is { } l2) l2[word] = scored;
             }
-            if (s.Length == 0) continue;
+            if (scored.Scores.Length == 0) continue;
+            var neutralIn = _neutral.NeutralIn(word);
             evidence.TokenIndex.Add(t);
-            evidence.Scores.Add(s);
+            evidence.Scores.Add(scored.Scores);
             evidence.Weights.Add(weight);
-            evidence.Emissions.Add(Emission(s, weight, _neutral.NeutralIn(word), parameters));
+            evidence.Emissions.Add(weight == 1 && neutralIn.IsEmpty
+                ? scored.PlainEmission ??= Emission(scored.Scores, 1, [], parameters)
+                : Emission(scored.Scores, weight, neutralIn, parameters));
         }
         return evidence;
+    }
+
+    /// <summary>A word's raw log-likelihoods per class (empty when no feature was known) and, once
+    /// needed, its emission as an ordinary word.</summary>
+    private sealed class ScoredWord(float[] scores)
+    {
+        public float[] Scores { get; } = scores;
+
+        public float[]? PlainEmission { get; set; }
     }
 
     /// <summary>The decoder's per-class score of one word: tempered log-likelihood relative to the
