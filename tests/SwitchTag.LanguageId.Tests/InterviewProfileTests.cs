@@ -66,3 +66,41 @@ public sealed class InterviewProfileTests(ModelFixture fixture)
         }
     }
 }
+
+/// <summary>What must not switch inside an interview of two languages: a loanword in common use
+/// (Profiles/en/loanwords.txt: "café", general knowledge) and a lone foreign name. The surrounding
+/// interview is held-out Universal Dependencies text (../shared/data/lid); the test sentences are
+/// invented.</summary>
+[Collection(nameof(ModelCollection))]
+public sealed class NoSwitchTests(ModelFixture fixture)
+{
+    private List<string> Interview(string other, params string[] extra)
+    {
+        var a = fixture.Corpus.Where(l => l.Split == Split.Evaluation && l.Code == "en").Take(40).Select(l => l.Text);
+        var b = fixture.Corpus.Where(l => l.Split == Split.Evaluation && l.Code == other).Take(40).Select(l => l.Text);
+        return a.Zip(b).SelectMany(p => new[] { p.First, p.Second }).Concat(extra).ToList();
+    }
+
+    [Theory]
+    [InlineData("de", "Sometimes we sat in a café and you heard German at the next table.")]
+    [InlineData("pl", "This is an interview with Irena Kowalczyk, recorded at her home.")]
+    [InlineData("es", "My father opened a small café on the corner, near the church.")]
+    public void StaysInTheSentencesLanguage(string other, string sentence)
+    {
+        var result = fixture.Segmenter.SegmentInterview(Interview(other, sentence));
+        Assert.Contains(result.Profile.Spoken, s => s.Language == other);
+        Assert.All(result.Spans[^1], s => Assert.Equal("en", s.Language));
+    }
+
+    [Fact]
+    public void AStrongOneWordInsertionIsFound()
+    {
+        // "pero" (Spanish "but") opening an English sentence in a Spanish-English interview, a
+        // common pattern in bilingual talk (from memory).
+        const string sentence = "pero the first time I went there I did not understand anything.";
+        var spans = fixture.Segmenter.SegmentInterview(Interview("es", sentence)).Spans[^1];
+        Assert.Equal("es", spans[0].Language);
+        Assert.Equal("pero ".Length, spans[0].CharEnd);
+        Assert.Equal("en", spans[^1].Language);
+    }
+}
