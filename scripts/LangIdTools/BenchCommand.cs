@@ -27,6 +27,20 @@ public static class BenchCommand
         Console.WriteLine($"held-out lines: {lines.Count:N0}, {bytes / 1048576.0:F2} MB UTF-8; machine load average {File.ReadAllText("/proc/loadavg").Split(' ')[0]} on {Environment.ProcessorCount} cores");
         Report("Identify", bytes, 3, () => { foreach (var t in lines) segmenter.Identify(t); });
         Report("Segment (main en)", bytes, 3, () => { foreach (var t in lines) segmenter.Segment(t, "en"); });
+        // Interviews: the held-out lines in chunks of 200 (the corpus is ordered by language, so
+        // most chunks hold one language and some two), and the Miami dev conversations as they are.
+        var interviews = lines.Chunk(200).Select(c => (IReadOnlyList<string>)c).ToList();
+        Report("Identify+Segment per line", bytes, 3, () => { foreach (var t in lines) segmenter.Segment(t, segmenter.Identify(t).Language); });
+        Report("SegmentInterview (profile)", bytes, 3, () => { foreach (var i in interviews) segmenter.SegmentInterview(i); });
+        var miamiPath = Path.Combine(dataRoot, SpeechGold.MiamiDev);
+        if (File.Exists(miamiPath))
+        {
+            var conversations = SpeechGold.Load(dataRoot).Select(c => (IReadOnlyList<string>)c.Select(u => u.Text).ToList()).ToList();
+            long speech = conversations.Sum(c => c.Sum(t => (long)Encoding.UTF8.GetByteCount(t)));
+            Console.WriteLine($"Miami dev conversations: {conversations.Count}, {speech / 1048576.0:F2} MB UTF-8");
+            Report("speech: per line", speech, 3, () => { foreach (var c in conversations) foreach (var t in c) segmenter.Segment(t, segmenter.Identify(t).Language); });
+            Report("speech: SegmentInterview", speech, 3, () => { foreach (var c in conversations) segmenter.SegmentInterview(c); });
+        }
         var big = BigLine(lines, 1 << 20);
         long bigBytes = Encoding.UTF8.GetByteCount(big);
         Report("Identify, one 1 MB line", bigBytes, 3, () => segmenter.Identify(big));

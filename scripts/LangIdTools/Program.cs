@@ -4,8 +4,14 @@ using LangIdTools;
 //        LangIdTools tune DATA              (compare smoothing settings on the calibration split)
 //        LangIdTools errors DATA MODEL CODE (held-out lines of CODE the model gets wrong)
 //        LangIdTools switch-errors DATA MODEL (synthetic calibration turns with missed switches)
+//        LangIdTools speech DATA MODEL      (transcribed Spanish-English conversation, Miami dev)
+//        LangIdTools tune-speech DATA MODEL (grid of the interview decoder numbers on Miami dev)
+//        LangIdTools calibrate-speech DATA MODEL (fit and report the stretch confidence calibration)
 if (args is ["tune", var data]) return TrainCommand.Tune(data);
 if (args is ["errors", var d, var m, var code]) return EvalCommand.Errors(d, m, code);
+if (args is ["tune-speech", var td, var tm]) return SpeechTuneCommand.Run(td, tm);
+if (args is ["calibrate-speech", var cd, var cm]) return SpeechCalibrateCommand.Run(cd, cm);
+if (args is ["speech", var pd, var pm]) return SpeechEvalCommand.Run(pd, pm);
 if (args is ["switch-errors", var sd, var sm]) return EvalCommand.SwitchErrors(sd, sm);
 if (args.Length != 3)
 {

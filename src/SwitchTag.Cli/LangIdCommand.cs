@@ -15,9 +15,13 @@ public static class LangIdCommand
         var languages = new Option<bool>("--languages") { Description = "Print the supported language codes, one per line." };
         var lines = new Option<FileInfo?>("--lines") { Description = "Identify every line of this UTF-8 file." };
         var json = new Option<bool>("--json") { Description = "One JSON object per input line: language, confidence, spans." };
+        var eachLine = new Option<bool>("--each-line")
+        {
+            Description = "Judge every line alone. By default the file is one conversation: its languages are found from all lines first, and each line is decided within them.",
+        };
         var command = new Command("langid", "Identify the language of text, line by line, with switch points inside each line.")
         {
-            languages, lines, json,
+            languages, lines, json, eachLine,
         };
         command.SetAction(parseResult =>
         {
@@ -37,7 +41,7 @@ public static class LangIdCommand
                 Console.Error.WriteLine($"switchtag langid: {file.FullName}: file not found");
                 return ExitCodes.InputsRejected;
             }
-            LanguageIdLines.Write(segmenter, File.ReadLines(file.FullName, Encoding.UTF8), Console.Out, parseResult.GetValue(json));
+            LanguageIdLines.Write(segmenter, File.ReadAllLines(file.FullName, Encoding.UTF8), Console.Out, parseResult.GetValue(json), parseResult.GetValue(eachLine));
             return ExitCodes.Success;
         });
         return command;

@@ -1,20 +1,24 @@
 using System.Text;
 using System.Text.Json;
-using SwitchTag.Core.Stages;
+using SwitchTag.LanguageId.Segmentation;
 
 namespace SwitchTag.Pipeline;
 
 /// <summary>The <c>switchtag langid --lines</c> contract (DESIGN.md): per input line, the whole-line
-/// language and confidence and the switch spans, as a tab-separated line or one JSON object.</summary>
+/// language and confidence and the switch spans, as a tab-separated line or one JSON object. By
+/// default the lines are one conversation: the languages of all lines are found first and each line
+/// is decided within them; <c>eachLineAlone</c> judges every line on its own.</summary>
 public static class LanguageIdLines
 {
-    public static void Write(ILanguageSegmenter segmenter, IEnumerable<string> lines, TextWriter output, bool json)
+    public static void Write(CodeSwitchSegmenter segmenter, IReadOnlyList<string> lines, TextWriter output, bool json, bool eachLineAlone = false)
     {
+        var conversation = eachLineAlone ? null : segmenter.SegmentInterview(lines);
         var buffer = new MemoryStream();
-        foreach (var line in lines)
+        for (int i = 0; i < lines.Count; i++)
         {
-            var guess = segmenter.Identify(line);
-            var spans = segmenter.Segment(line, guess.Language);
+            string line = lines[i];
+            var guess = conversation?.TurnLanguages[i] ?? segmenter.Identify(line);
+            var spans = conversation?.Spans[i] ?? segmenter.Segment(line, guess.Language);
             if (!json)
             {
                 output.WriteLine($"{guess.Language}\t{guess.Confidence:F3}\t" +

@@ -36,6 +36,24 @@ public sealed class LanguageIdContractTests(ModelFixture fixture)
     }
 
     [Fact]
+    public void LinesAreOneConversationUnlessEachLineIsAsked()
+    {
+        // Held-out Spanish lines of lid/es.txt (Universal Dependencies), then a one-word turn "sí"
+        // ("yes", from memory) that judged alone is easily another language.
+        var lines = fixture.Corpus.Where(l => l.Split == Split.Evaluation && l.Code == "es").Take(20).Select(l => l.Text).Append("sí.").ToList();
+        var conversation = new StringWriter();
+        LanguageIdLines.Write(fixture.Segmenter, lines, conversation, json: true);
+        var alone = new StringWriter();
+        LanguageIdLines.Write(fixture.Segmenter, lines, alone, json: true, eachLineAlone: true);
+        var last = conversation.ToString().Split('\n', StringSplitOptions.RemoveEmptyEntries);
+        Assert.Equal(lines.Count, last.Length);
+        Assert.Equal(lines.Count, alone.ToString().Split('\n', StringSplitOptions.RemoveEmptyEntries).Length);
+        using var doc = JsonDocument.Parse(last[^1]);
+        Assert.Equal("es", doc.RootElement.GetProperty("language").GetString());
+        Assert.Equal("es", doc.RootElement.GetProperty("spans")[0].GetProperty("language").GetString());
+    }
+
+    [Fact]
     public void EvalJsonHasTheDesignShape()
     {
         var dir = Directory.CreateTempSubdirectory("switchtag-evaljson-");

@@ -114,6 +114,41 @@ public sealed class NgramLanguageModel
         }
     }
 
+    /// <summary>Marks in <paramref name="kept"/> (one flag per class) the classes whose training text
+    /// had <paramref name="normalizedWord"/> often enough to keep it as a whole word.</summary>
+    public void WholeWordClasses(ReadOnlySpan<char> normalizedWord, Span<bool> kept)
+    {
+        kept.Clear();
+        var sink = new WholeWordSink();
+        NgramHasher.ForEachFeature(normalizedWord, ref sink);
+        if (sink.Key == 0) return;
+        int idx = (int)(sink.Key & (uint)_mask);
+        while (true)
+        {
+            ulong slot = _slots[idx];
+            if (slot == 0) return;
+            if ((uint)(slot >> 32) == sink.Key)
+            {
+                uint value = (uint)slot;
+                if ((value & InlineFlag) != 0) { kept[(int)((value >> 8) & 0xFF)] = true; return; }
+                int offset = (int)(value >> 8), end = offset + (int)(value & 0xFF);
+                for (int p = offset; p < end; p++) kept[_postings[p] >> 8] = true;
+                return;
+            }
+            idx = (idx + 1) & _mask;
+        }
+    }
+
+    private struct WholeWordSink : IFeatureSink
+    {
+        public uint Key;
+
+        public void Add(uint key, int kind)
+        {
+            if (kind == NgramHasher.WordFeature) Key = key;
+        }
+    }
+
     private ref struct CollectSink(Span<uint> keys, Span<byte> kinds) : IFeatureSink
     {
         private readonly Span<uint> _keys = keys;

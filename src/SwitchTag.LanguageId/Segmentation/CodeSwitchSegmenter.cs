@@ -3,6 +3,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Text;
 using SwitchTag.LanguageId.Model;
+using SwitchTag.LanguageId.Profiles;
 using SwitchTag.LanguageId.Text;
 
 namespace SwitchTag.LanguageId.Segmentation;
@@ -12,8 +13,10 @@ namespace SwitchTag.LanguageId.Segmentation;
 /// so a switch needs several words of evidence while one odd word stays in its sentence's language.
 /// Neutral tokens (numbers, hesitations, transcriber tags, false starts) carry no evidence and take
 /// the language of their neighbours; names (capitalised mid-sentence, all capitals, or known to the
-/// name lexicon) count only NameWeight of a word, too little to pay for a switch on their own.</summary>
-public sealed class CodeSwitchSegmenter : ILanguageSegmenter
+/// name lexicon) count only NameWeight of a word, too little to pay for a switch on their own.
+/// A language's own fillers (Profiles/&lt;code&gt;/hesitations.txt) carry no evidence against it.
+/// <see cref="SegmentInterview"/> decides each turn within the languages of the whole interview.</summary>
+public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 {
     public const string Undetermined = "und";
 
@@ -27,18 +30,20 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
     private readonly INameLexicon? _names;
     private readonly string[] _codes;
     private readonly int[] _codeOfClass;
+    private readonly NeutralWords _neutral;
 
-    public CodeSwitchSegmenter(NgramLanguageModel model, INameLexicon? names = null)
+    public CodeSwitchSegmenter(NgramLanguageModel model, INameLexicon? names = null, NeutralWords? neutral = null)
     {
         _model = model;
         _names = names;
+        _neutral = neutral ?? NeutralWords.Default;
         _codes = model.ClassCodes.Distinct().Order(StringComparer.Ordinal).ToArray();
         _codeOfClass = model.ClassCodes.Select(c => Array.IndexOf(_codes, c)).ToArray();
         Languages = _codes;
     }
 
-    public static CodeSwitchSegmenter Load(string modelPath, INameLexicon? names = null) =>
-        new(NgramLanguageModel.Load(modelPath), names);
+    public static CodeSwitchSegmenter Load(string modelPath, INameLexicon? names = null, NeutralWords? neutral = null) =>
+        new(NgramLanguageModel.Load(modelPath), names, neutral);
 
     public NgramLanguageModel Model => _model;
 
@@ -87,64 +92,111 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
     public ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage, ModelParameters parameters)
     {
         if (string.IsNullOrEmpty(text)) return [];
-        var tokens = Tokenizer.Tokenize(text);
+        var evidence = CollectEvidence(text, parameters, null);
+        if (evidence.Count == 0) return [new LanguageSpan(0, text.Length, Undetermined, 0)];
         int classes = _model.ClassCount;
-        var evidence = new List<int>(); // token indices of words that carry evidence
-        var scores = new List<float[]>();
-        var weights = new List<float>(); // names count for NameWeight of an ordinary word
-        var acc = new ScoreAccumulator(classes);
+        var start = new float[classes];
+        var enter = new float[classes];
+        var bonus = new float[classes];
+        for (int c = 0; c < classes; c++)
+        {
+            enter[c] = parameters.SwitchCost;
+            bonus[c] = _model.ClassCodes[c] == mainLanguage ? parameters.MainLanguageBonus : 0;
+        }
+        var labels = Decode(evidence, new DecoderPriors(start, enter, bonus));
+        MergeShortIslands(text, evidence, labels, MinIslandWeight, (_, _) => true);
+        return BuildSpans(text, evidence, labels, null);
+    }
+
+    /// <summary>Scores every word of <paramref name="text"/> that carries evidence. With a
+    /// <paramref name="cache"/> (normalised form to scores) each distinct word is scored once, and
+    /// ordinary words share one emission array (never written after it is made).</summary>
+    private TurnEvidence CollectEvidence(string text, ModelParameters parameters, Dictionary<string, ScoredWord>? cache)
+    {
+        var evidence = new TurnEvidence(Tokenizer.Tokenize(text));
+        var tokens = evidence.Tokens;
+        int classes = _model.ClassCount;
+        ScoreAccumulator? acc = null;
         Span<char> buffer = stackalloc char[NgramHasher.MaxWordChars];
+        var lookup = cache?.GetAlternateLookup<ReadOnlySpan<char>>();
         for (int t = 0; t < tokens.Count; t++)
         {
             var token = tokens[t];
             if (token.IsNeutral) continue;
             float weight = NameWeight(text, token, parameters);
             if (weight == 0) continue;
-            acc.Clear();
             int len = WordNormalizer.Normalize(text.AsSpan(token.Start, token.Length), buffer);
-            _model.AddWord(buffer[..len], acc);
-            if (acc.FeatureHits == 0) continue;
-            var s = new float[classes];
-            _model.LogLikelihoods(acc, s);
-            evidence.Add(t);
-            scores.Add(s);
-            weights.Add(weight);
+            var word = buffer[..len];
+            if (lookup is not { } l || !l.TryGetValue(word, out var scored))
+            {
+                acc ??= new ScoreAccumulator(classes);
+                acc.Clear();
+                _model.AddWord(word, acc);
+                var s = acc.FeatureHits == 0 ? [] : new float[classes];
+                if (s.Length > 0) _model.LogLikelihoods(acc, s);
+                scored = new ScoredWord(s);
+                if (lookup is { } l2) l2[word] = scored;
+            }
+            if (scored.Scores.Length == 0) continue;
+            var neutralIn = _neutral.NeutralIn(word);
+            evidence.TokenIndex.Add(t);
+            evidence.Scores.Add(scored.Scores);
+            evidence.Weights.Add(weight);
+            evidence.Emissions.Add(weight == 1 && neutralIn.IsEmpty
+                ? scored.PlainEmission ??= Emission(scored.Scores, 1, [], parameters)
+                : Emission(scored.Scores, weight, neutralIn, parameters));
         }
-        if (evidence.Count == 0) return [new LanguageSpan(0, text.Length, Undetermined, 0)];
-
-        var labels = Decode(scores, weights, mainLanguage, parameters);
-        MergeShortIslands(text, tokens, evidence, labels, scores, weights);
-        return BuildSpans(text, tokens, evidence, labels, scores);
+        return evidence;
     }
 
-    /// <summary>Viterbi over classes: stay for free, switch for <c>SwitchCost</c>; emissions are
-    /// tempered log-likelihoods relative to the word's best class, floored at <c>-EmissionCap</c>,
-    /// plus <c>MainLanguageBonus</c> per word for the main language, so that after a switch the
-    /// turn returns to the main language rather than drifting to whichever language suits the
-    /// last word.</summary>
-    private int[] Decode(List<float[]> scores, List<float> weights, string mainLanguage, ModelParameters p)
+    /// <summary>A word's raw log-likelihoods per class (empty when no feature was known) and, once
+    /// needed, its emission as an ordinary word.</summary>
+    private sealed class ScoredWord(float[] scores)
     {
-        int classes = _model.ClassCount, n = scores.Count;
-        var bonus = new float[classes];
-        for (int c = 0; c < classes; c++)
-            bonus[c] = _model.ClassCodes[c] == mainLanguage ? p.MainLanguageBonus : 0;
+        public float[] Scores { get; } = scores;
+
+        public float[]? PlainEmission { get; set; }
+    }
+
+    /// <summary>The decoder's per-class score of one word: tempered log-likelihood relative to the
+    /// word's best class, floored at <c>-EmissionCap</c>, times the word's weight; a filler of a
+    /// language scores that language as if it were its best.</summary>
+    private float[] Emission(float[] scores, float weight, ReadOnlySpan<string> neutralIn, ModelParameters p)
+    {
+        float best = float.NegativeInfinity;
+        foreach (var v in scores) best = Math.Max(best, v);
+        var e = new float[scores.Length];
+        for (int c = 0; c < e.Length; c++)
+            e[c] = weight * Math.Max((scores[c] - best) * p.Temperature, -p.EmissionCap);
+        foreach (var code in neutralIn)
+            for (int c = 0; c < e.Length; c++)
+                if (_model.ClassCodes[c] == code) e[c] = 0;
+        return e;
+    }
+
+    /// <summary>Viterbi over classes: staying is free, switching into class c costs
+    /// <c>Enter[c]</c>; each word adds its emission plus <c>Bonus[c]</c>. With the per-turn main
+    /// language bonus, after a switch the turn returns to the main language rather than drifting
+    /// to whichever language suits the last word.</summary>
+    private int[] Decode(TurnEvidence evidence, DecoderPriors priors)
+    {
+        int classes = _model.ClassCount, n = evidence.Count;
         var current = new float[classes];
         var next = new float[classes];
         var switched = new bool[n * classes];
         var switchedFrom = new int[n];
-        for (int w = 0; w < n; w++)
+        for (int c = 0; c < classes; c++) current[c] = priors.Start[c] + evidence.Emissions[0][c] + priors.Bonus[c];
+        for (int w = 1; w < n; w++)
         {
-            var s = scores[w];
-            float wordBest = s.Max();
+            var e = evidence.Emissions[w];
             int bestPrev = ArgMax(current);
             switchedFrom[w] = bestPrev;
-            float switchFrom = w == 0 ? float.NegativeInfinity : current[bestPrev] - p.SwitchCost;
             for (int c = 0; c < classes; c++)
             {
-                float emission = weights[w] * Math.Max((s[c] - wordBest) * p.Temperature, -p.EmissionCap) + bonus[c];
-                bool sw = switchFrom > current[c];
+                float switchFrom = current[bestPrev] - priors.Enter[c];
+                bool sw = c != bestPrev && switchFrom > current[c];
                 switched[w * classes + c] = sw;
-                next[c] = (sw ? switchFrom : current[c]) + emission;
+                next[c] = (sw ? switchFrom : current[c]) + e[c] + priors.Bonus[c];
             }
             (current, next) = (next, current);
         }
@@ -158,12 +210,15 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
         return labels;
     }
 
-    /// <summary>At most one ordinary word of evidence (or only names) between words of another language in the same script is a loanword, a cognate or
-    /// a name ("voyage?", "Kurt. [pause] Kurt"), not a switch: such an island takes the language of
-    /// the run before it (or after it, at the start). A different script is evidence enough.</summary>
-    private void MergeShortIslands(string text, List<Token> tokens, List<int> evidence, int[] labels,
-        List<float[]> scores, List<float> weights)
+    /// <summary>At most one ordinary word of evidence (or only names) between words of another
+    /// language in the same script is a loanword, a cognate or a name ("voyage?", "Kurt. [pause] Kurt"),
+    /// not a switch: such an island takes the language of the run before it (or after it, at the
+    /// start). A different script is evidence enough. Only islands whose language passes
+    /// <paramref name="mergeable"/> (given the island's code and whether all its words are name-like)
+    /// are merged.</summary>
+    private void MergeShortIslands(string text, TurnEvidence evidence, int[] labels, float minWeight, Func<int, bool, bool> mergeable)
     {
+        var tokens = evidence.Tokens;
         int n = labels.Length;
         int start = 0;
         while (start < n)
@@ -174,12 +229,17 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
             if (hasBefore || hasAfter)
             {
                 float weight = 0;
-                for (int w = start; w <= end; w++) weight += weights[w];
+                bool namesOnly = true;
+                for (int w = start; w <= end; w++)
+                {
+                    weight += evidence.Weights[w];
+                    namesOnly &= evidence.Weights[w] < 1;
+                }
                 int neighbour = hasBefore ? start - 1 : end + 1;
-                if (weight < MinIslandWeight && SameScript(text, tokens[evidence[start]], tokens[evidence[neighbour]]))
+                if (weight < minWeight && mergeable(_codeOfClass[labels[start]], namesOnly) && SameScript(text, tokens[evidence.TokenIndex[start]], tokens[evidence.TokenIndex[neighbour]]))
                 {
                     int code = _codeOfClass[labels[neighbour]];
-                    for (int w = start; w <= end; w++) labels[w] = BestClassOf(code, scores[w]);
+                    for (int w = start; w <= end; w++) labels[w] = BestClassOf(code, evidence.Scores[w]);
                 }
             }
             start = end + 1;
@@ -201,9 +261,12 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
     private static bool SameScript(string text, Token a, Token b) =>
         WritingScripts.OfFirstLetter(text.AsSpan(a.Start, a.Length)) == WritingScripts.OfFirstLetter(text.AsSpan(b.Start, b.Length));
 
-    private ImmutableArray<LanguageSpan> BuildSpans(string text, List<Token> tokens, List<int> evidence, int[] labels,
-        List<float[]> scores)
+    /// <summary>One span per run of words in one language. A span's confidence is its language's
+    /// posterior over the span's words (weighted log-likelihoods, tempered), with
+    /// <paramref name="logPrior"/> per class when given.</summary>
+    private ImmutableArray<LanguageSpan> BuildSpans(string text, TurnEvidence evidence, int[] labels, float[]? logPrior)
     {
+        var tokens = evidence.Tokens;
         var spans = ImmutableArray.CreateBuilder<LanguageSpan>();
         int runStart = 0, runFirst = 0;
         for (int w = 1; w <= evidence.Count; w++)
@@ -211,17 +274,36 @@ public sealed class CodeSwitchSegmenter : ILanguageSegmenter
             if (w < evidence.Count && _codeOfClass[labels[w]] == _codeOfClass[labels[runFirst]]) continue;
             // A run ends where the next run's first word starts, so neutral tokens between two
             // runs stay with the earlier language and the spans cover the text without gaps.
-            int end = w < evidence.Count ? tokens[evidence[w]].Start : text.Length;
-            // Log-likelihoods add over words, so the run's score is the sum of its words' scores.
-            var sum = new float[_model.ClassCount];
-            for (int i = runFirst; i < w; i++)
-                for (int c = 0; c < sum.Length; c++) sum[c] += scores[i][c];
+            int end = w < evidence.Count ? tokens[evidence.TokenIndex[w]].Start : text.Length;
             int code = _codeOfClass[labels[runFirst]];
-            spans.Add(new LanguageSpan(runStart, end, _codes[code], Math.Round(CodePosterior(sum)[code], 4)));
+            var posterior = CodePosterior(evidence, runFirst, w, logPrior);
+            spans.Add(new LanguageSpan(runStart, end, _codes[code], Math.Round(posterior[code], 4)));
             runStart = end;
             runFirst = w;
         }
         return spans.ToImmutable();
+    }
+
+    /// <summary>Posterior per code of words [from, to) of a turn: log-likelihoods add over words.</summary>
+    private float[] CodePosterior(TurnEvidence evidence, int from, int to, float[]? logPrior)
+    {
+        int classes = _model.ClassCount;
+        Span<float> z = stackalloc float[classes];
+        float t = _model.Parameters.Temperature;
+        for (int i = from; i < to; i++)
+        {
+            var s = evidence.Scores[i];
+            float weight = evidence.Weights[i];
+            for (int c = 0; c < classes; c++) z[c] += weight * s[c] * t;
+        }
+        if (logPrior is not null) for (int c = 0; c < classes; c++) z[c] += logPrior[c];
+        float max = float.NegativeInfinity;
+        foreach (var v in z) max = Math.Max(max, v);
+        var byCode = new float[_codes.Length];
+        float sum = 0;
+        for (int c = 0; c < classes; c++) sum += z[c] = MathF.Exp(z[c] - max);
+        for (int c = 0; c < classes; c++) byCode[_codeOfClass[c]] += z[c] / sum;
+        return byCode;
     }
 
     /// <summary>1 for an ordinary word; 0 for a name the lexicon knows; NameWeight for a word that

@@ -1,4 +1,5 @@
 using System.Globalization;
+using SwitchTag.LanguageId.Profiles;
 
 namespace SwitchTag.LanguageId.Text;
 
@@ -7,15 +8,6 @@ namespace SwitchTag.LanguageId.Text;
 /// surrogates, controls and symbols simply separate tokens.</summary>
 public static class Tokenizer
 {
-    /// <summary>Filled pauses common in English transcripts (and shared by many languages); they are
-    /// neutral so they never start a switch.</summary>
-    private static readonly HashSet<string>.AlternateLookup<ReadOnlySpan<char>> Hesitations =
-        new HashSet<string>(StringComparer.OrdinalIgnoreCase)
-        {
-            "uh", "uhh", "uhm", "um", "umm", "er", "erm", "err", "ah", "ahh", "eh", "hm", "hmm", "hmmm",
-            "mhm", "mm", "mmm", "mm-hmm", "uh-huh", "uh-uh", "huh",
-        }.GetAlternateLookup<ReadOnlySpan<char>>();
-
     private const int MaxTagLength = 40;
 
     public static List<Token> Tokenize(ReadOnlySpan<char> text)
@@ -95,7 +87,9 @@ public static class Tokenizer
     private static TokenKind Classify(ReadOnlySpan<char> text, int start, int end)
     {
         int len = end - start;
-        if (len <= 6 && (text[start] | 0x20) is 'u' or 'e' or 'a' or 'h' or 'm' && Hesitations.Contains(text[start..end]))
+        // Fillers of every language (Profiles/mul/hesitations.txt); a language's own fillers are
+        // words here and are weighed by the segmenter in that language's context.
+        if (len <= 6 && NeutralWords.Default.IsNeutralEverywhere(text[start..end]))
             return TokenKind.Hesitation;
         // "w-" followed by space or end: a cut-off word (a hyphen inside a word was consumed by ScanWord).
         if (len <= 4 && end < text.Length && text[end] == '-' && (end + 1 == text.Length || !IsWordChar(text[end + 1])))
