@@ -111,15 +111,23 @@ public static class TranscriptFile
             diagnostics.Error(1, text.Length == 0 ? "file is empty" : "file holds only whitespace");
             return new ReadResult(null, diagnostics.ToImmutable());
         }
+        string extension = Path.GetExtension(path);
+        var format = forced ?? FormatDetector.Detect(text, extension);
         int nul = text.IndexOf('\0');
         if (nul >= 0)
         {
-            diagnostics.Error(1 + text.AsSpan(0, nul).Count('\n'), $"binary content (NUL character at char offset {nul})");
-            return new ReadResult(null, diagnostics.ToImmutable());
+            int line = 1 + text.AsSpan(0, nul).Count('\n');
+            if (format != TranscriptFormat.WebVtt)
+            {
+                diagnostics.Error(line, $"binary content (NUL character at char offset {nul})");
+                return new ReadResult(null, diagnostics.ToImmutable());
+            }
+            // W3C WebVTT, "WebVTT parser algorithm": every U+0000 NULL is replaced by U+FFFD. One char
+            // for one, so every offset into the text still holds.
+            int count = text.AsSpan().Count('\0');
+            text = text.Replace('\0', '\uFFFD');
+            diagnostics.Warn(line, $"{count} NUL character{(count == 1 ? "" : "s")} replaced by U+FFFD, as the WebVTT parser does");
         }
-
-        string extension = Path.GetExtension(path);
-        var format = forced ?? FormatDetector.Detect(text, extension);
         if (format is null)
         {
             diagnostics.Error(1, "unknown format: no WEBVTT header, no SubRip timing line (\"00:00:01,000 --> 00:00:02,000\") and no line opening with a timestamp in the first lines");

@@ -53,11 +53,11 @@ public static class AnnotatedVttWriter
     }
 
     // Tags go in at char positions of the cue text: at one position, closing tags, then the word
-    // timestamp, then opening tags, so tags nest properly. Blank lines would end the cue, so runs of
-    // newlines collapse to one.
+    // timestamp, then opening tags, so tags nest properly.
     private static void AppendText(StringBuilder sb, Cue cue, List<(int Start, int End, string Language)> spans)
     {
         string text = cue.Text;
+        var breaks = LineBreaks(text);
         var times = cue.WordTimes.IsDefault ? [] : cue.WordTimes.Where(w => w.CharOffset >= 0 && w.CharOffset < text.Length).ToList();
         var cuts = spans.SelectMany(s => new[] { s.Start, s.End }).Concat(times.Select(w => w.CharOffset)).Append(0).Append(text.Length)
             .Distinct().Order().ToList();
@@ -67,14 +67,43 @@ public static class AnnotatedVttWriter
             if (spans.Any(s => s.End == at)) sb.Append("</lang>");
             foreach (var w in times.Where(w => w.CharOffset == at).Take(1)) sb.Append('<').Append(w.Time).Append('>');
             foreach (var s in spans.Where(s => s.Start == at)) sb.Append("<lang ").Append(s.Language).Append('>');
-            if (k + 1 < cuts.Count) sb.Append(Escape(text[at..cuts[k + 1]]));
+            if (k + 1 < cuts.Count) AppendEscaped(sb, text, at, cuts[k + 1], breaks);
         }
     }
 
-    private static string Escape(string text)
+    /// <summary>Which '\n' of the text may be written as a line break. A reader ends a cue at a blank or
+    /// whitespace-only line, so a break next to such a line is written as the character reference
+    /// <c>&amp;#10;</c> instead, and the cue reads back with the same text.</summary>
+    private static bool[] LineBreaks(string text)
     {
-        string single = text.Replace("\r", "");
-        while (single.Contains("\n\n", StringComparison.Ordinal)) single = single.Replace("\n\n", "\n");
-        return WebVttText.Escape(single);
+        var raw = new bool[text.Length];
+        int lineStart = 0;
+        bool previousBlank = true;
+        for (int i = 0; i <= text.Length; i++)
+        {
+            if (i < text.Length && text[i] != '\n') continue;
+            bool blank = text.AsSpan(lineStart, i - lineStart).IsWhiteSpace();
+            if (lineStart > 0) raw[lineStart - 1] = !previousBlank && !blank;
+            previousBlank = blank;
+            lineStart = i + 1;
+        }
+        return raw;
     }
+
+    /// <summary>Cue text escaped (WebVttText.Escape), with CR kept as <c>&amp;#13;</c> (a raw one would end
+    /// the line) and each line break written as <see cref="LineBreaks"/> says.</summary>
+    private static void AppendEscaped(StringBuilder sb, string text, int from, int to, bool[] breaks)
+    {
+        int run = from;
+        for (int i = from; i < to; i++)
+        {
+            char c = text[i];
+            if (c != '\r' && (c != '\n' || breaks[i])) continue;
+            sb.Append(WebVttText.Escape(text[run..i])).Append(c == '\r' ? "&#13;" : "&#10;");
+            run = i + 1;
+        }
+        sb.Append(WebVttText.Escape(text[run..to]));
+    }
+
+    private static string Escape(string text) => WebVttText.Escape(text.ReplaceLineEndings(" "));
 }
