@@ -11,11 +11,14 @@ namespace SwitchTag.Formats.Files;
 /// /dev/zero would never end).</summary>
 public static class InputWalker
 {
-    public static ImmutableArray<InputFile> Find(IEnumerable<string> paths, ICollection<Diagnostic> problems)
+    /// <param name="skipFolders">Real paths of folders never walked (an output folder inside an input,
+    /// <see cref="OutputSafety"/>); files named directly are still read.</param>
+    public static ImmutableArray<InputFile> Find(IEnumerable<string> paths, ICollection<Diagnostic> problems, IEnumerable<string>? skipFolders = null)
     {
         var files = ImmutableArray.CreateBuilder<InputFile>();
         var seenFiles = new HashSet<string>(StringComparer.Ordinal);
-        var seenFolders = new HashSet<string>(StringComparer.Ordinal);
+        // A folder marked seen is never walked: that is all skipping takes.
+        var seenFolders = new HashSet<string>(skipFolders ?? [], StringComparer.Ordinal);
         foreach (var path in paths)
         {
             string? real = RealPath.Resolve(path, out var error);
