@@ -38,12 +38,22 @@ public static class AnnotatedVttWriter
         return sb.ToString();
     }
 
+    /// <summary>The foreign stretches inside one cue of a turn. A turn's spans are in text order and do
+    /// not overlap, so the first one that can reach the cue is found by binary search: a turn of one
+    /// speaker may hold hundreds of thousands of cues and as many spans.</summary>
     private static List<(int Start, int End, string Language)> ForeignSpans(InterviewIndex index, int turn, TurnCue part)
     {
         var result = new List<(int, int, string)>();
-        foreach (var timed in index.Spans[turn])
+        var spans = index.Spans[turn];
+        int lo = 0, hi = spans.Length;
+        while (lo < hi)
         {
-            var s = timed.Value;
+            int mid = (lo + hi) >>> 1;
+            if (spans[mid].Value.CharEnd <= part.CharStart) lo = mid + 1; else hi = mid;
+        }
+        for (int i = lo; i < spans.Length && spans[i].Value.CharStart < part.CharEnd; i++)
+        {
+            var s = spans[i].Value;
             if (!WorklistBuilder.IsForeign(s.Language, index.MainLanguage)) continue;
             int start = Math.Max(s.CharStart, part.CharStart) - part.CharStart;
             int end = Math.Min(s.CharEnd, part.CharEnd) - part.CharStart;
