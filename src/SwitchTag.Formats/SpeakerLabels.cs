@@ -4,7 +4,8 @@ namespace SwitchTag.Formats;
 
 /// <summary>Folds the ways one speaker is written into one label: surrounding space and trailing colons
 /// dropped, inner whitespace runs made one space, each word capitalised (first letter, and the letter
-/// after a hyphen, upper case; the rest lower case, culture-invariant). <c>INTERVIEWER</c>,
+/// after a hyphen or an opening parenthesis, upper case; the rest lower case, culture-invariant), the
+/// result in NFC. <c>INTERVIEWER</c>,
 /// <c>Interviewer:</c> and <c> interviewer </c> all become <c>Interviewer</c>.</summary>
 public static class SpeakerLabels
 {
@@ -22,8 +23,8 @@ public static class SpeakerLabels
             if (Rune.IsWhiteSpace(rune)) { pendingSpace = sb.Length > 0; wordStart = true; continue; }
             if (pendingSpace) { sb.Append(' '); pendingSpace = false; }
             sb.Append(wordStart ? Rune.ToUpperInvariant(rune).ToString() : Rune.ToLowerInvariant(rune).ToString());
-            wordStart = rune.Value == '-';
+            wordStart = rune.Value is '-' or '(';
         }
-        return sb.ToString();
+        return sb.ToString().Normalize(NormalizationForm.FormC);
     }
 }

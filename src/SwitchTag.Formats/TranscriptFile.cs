@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Security.Cryptography;
 using System.Text;
 using SwitchTag.Core.Documents;
+using SwitchTag.Formats.Files;
 using SwitchTag.Formats.Reading;
 using SwitchTag.Formats.Text;
 
@@ -17,23 +18,51 @@ public static class TranscriptFile
     /// <summary>The extensions of the default readers, which a folder walk picks up.</summary>
     public static IReadOnlyList<string> KnownExtensions => TranscriptReaders.Default.Extensions;
 
-    /// <summary>Reads bytes, decodes them (UTF-8, or UTF-16 with a BOM), detects the format from the
-    /// content (unless <paramref name="forced"/>) and parses.</summary>
-    public static ReadResult Read(string path, TranscriptFormat? forced = null, TranscriptReaders? readers = null)
+    /// <summary>Files larger than this are refused unless a caller passes a larger limit: the longest
+    /// real transcripts are a few MB, and reading takes several times the file's size in memory.</summary>
+    public const long DefaultMaxBytes = 64L * 1024 * 1024;
+
+    /// <summary>Reads bytes, decodes them (UTF-8, UTF-16 or UTF-32 with a BOM), detects the format from
+    /// the content (unless <paramref name="forced"/>) and parses. Only a regular file is read (symbolic
+    /// links followed), and only up to <paramref name="maxBytes"/>.</summary>
+    public static ReadResult Read(string path, TranscriptFormat? forced = null, TranscriptReaders? readers = null, long maxBytes = DefaultMaxBytes)
     {
+        var kind = FileKinds.Of(path);
+        if (kind == FileKind.Missing) return Rejected(path, WholeFile, "cannot read the file: no such file");
+        if (kind != FileKind.RegularFile) return Rejected(path, WholeFile, $"not a regular file ({kind.Describe()}); not read");
         byte[] bytes;
         try
         {
-            bytes = File.ReadAllBytes(path);
+            bytes = ReadBounded(path, maxBytes);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
         {
             return Rejected(path, WholeFile, $"cannot read the file: {e.Message}");
         }
+        if (bytes.Length > maxBytes)
+            return Rejected(path, WholeFile, $"file is larger than the limit of {maxBytes:N0} bytes; not read");
         if (bytes.Length == 0) return Rejected(path, 1, "file is empty");
         var decoded = TextDecoding.Decode(bytes);
         if (decoded.Text is null) return Rejected(path, decoded.ErrorLine, decoded.Error!);
         return ParseCore(path, decoded.Text, forced, Convert.ToHexStringLower(SHA256.HashData(bytes)), readers ?? TranscriptReaders.Default);
+    }
+
+    /// <summary>The file's bytes, or one byte more than the limit when it is larger (the stated length
+    /// is not trusted: a file can grow while it is read).</summary>
+    private static byte[] ReadBounded(string path, long maxBytes)
+    {
+        using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
+        long length = stream.Length;
+        if (length > maxBytes) return new byte[checked((int)Math.Min(maxBytes + 1, int.MaxValue))];
+        using var buffer = new MemoryStream((int)Math.Max(length, 0) + 1);
+        var chunk = new byte[81920];
+        int read;
+        while ((read = stream.Read(chunk, 0, (int)Math.Min(chunk.Length, maxBytes + 1 - buffer.Length))) > 0)
+        {
+            buffer.Write(chunk, 0, read);
+            if (buffer.Length > maxBytes) break;
+        }
+        return buffer.ToArray();
     }
 
     /// <summary>Parses text already in memory; the recorded SHA-256 is of its UTF-8 encoding.</summary>
@@ -44,48 +73,14 @@ public static class TranscriptFile
         return ParseCore(path, text, forced, Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text))), readers ?? TranscriptReaders.Default);
     }
 
-    /// <summary>Files to read: folders are walked recursively for <see cref="KnownExtensions"/>, in
-    /// ordinal path order, skipping hidden entries and the notes a folder of transcripts carries
-    /// (README, LICENSE, CHANGELOG, CONTRIBUTING, SOURCES: <see cref="IsFolderNote"/>); a named file is
-    /// taken whatever its name; a missing path is reported in <paramref name="problems"/>. Each file
-    /// comes once.</summary>
-    public static IEnumerable<string> Expand(IEnumerable<string> paths, ICollection<Diagnostic> problems)
-    {
-        var seen = new HashSet<string>(StringComparer.Ordinal);
-        foreach (var path in paths)
-        {
-            if (Directory.Exists(path))
-            {
-                List<string> found;
-                try
-                {
-                    found = [.. Walk(path)];
-                }
-                catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-                {
-                    problems.Add(new Diagnostic(new SourceLine(path, WholeFile), Severity.Error, $"cannot list the folder: {e.Message}"));
-                    continue;
-                }
-                found.Sort(StringComparer.Ordinal);
-                foreach (var file in found)
-                    if (seen.Add(Path.GetFullPath(file))) yield return file;
-            }
-            else if (File.Exists(path))
-            {
-                if (seen.Add(Path.GetFullPath(path))) yield return path;
-            }
-            else
-                problems.Add(new Diagnostic(new SourceLine(path, WholeFile), Severity.Error, "no such file or folder"));
-        }
-    }
-
-    private static IEnumerable<string> Walk(string folder)
-    {
-        var options = new EnumerationOptions { RecurseSubdirectories = true, AttributesToSkip = FileAttributes.Hidden | FileAttributes.System, IgnoreInaccessible = true };
-        return Directory.EnumerateFiles(folder, "*", options)
-            .Where(f => !Path.GetRelativePath(folder, f).Split(Path.DirectorySeparatorChar).Any(part => part.StartsWith('.')))
-            .Where(f => KnownExtensions.Contains(Path.GetExtension(f).ToLowerInvariant()) && !IsFolderNote(f));
-    }
+    /// <summary>Files to read, as paths (see <see cref="InputWalker.Find"/> for the real paths and input
+    /// roots): folders are walked recursively for <see cref="KnownExtensions"/>, in ordinal path order,
+    /// skipping hidden entries, the notes a folder of transcripts carries (<see cref="IsFolderNote"/>)
+    /// and this tool's own outputs (<see cref="ToolOutputs"/>); symbolic links are followed, each real
+    /// file comes once, loops and special files are reported; a named file is taken whatever its name; a
+    /// missing path is reported in <paramref name="problems"/>.</summary>
+    public static IEnumerable<string> Expand(IEnumerable<string> paths, ICollection<Diagnostic> problems) =>
+        InputWalker.Find(paths, problems).Select(f => f.Path);
 
     /// <summary>A folder's own documentation rather than a transcript, by file name.</summary>
     public static bool IsFolderNote(string path) =>
@@ -113,15 +108,23 @@ public static class TranscriptFile
             diagnostics.Error(1, text.Length == 0 ? "file is empty" : "file holds only whitespace");
             return new ReadResult(null, diagnostics.ToImmutable());
         }
+        string extension = Path.GetExtension(path);
+        var reader = forced is { } f ? readers.Find(f) : readers.Detect(text, extension);
         int nul = text.IndexOf('\0');
         if (nul >= 0)
         {
-            diagnostics.Error(1 + text.AsSpan(0, nul).Count('\n'), $"binary content (NUL character at char offset {nul})");
-            return new ReadResult(null, diagnostics.ToImmutable());
+            int line = 1 + text.AsSpan(0, nul).Count('\n');
+            if (reader?.Format != TranscriptFormat.WebVtt)
+            {
+                diagnostics.Error(line, $"binary content (NUL character at char offset {nul})");
+                return new ReadResult(null, diagnostics.ToImmutable());
+            }
+            // W3C WebVTT, "WebVTT parser algorithm": every U+0000 NULL is replaced by U+FFFD. One char
+            // for one, so every offset into the text still holds.
+            int count = text.AsSpan().Count('\0');
+            text = text.Replace('\0', '\uFFFD');
+            diagnostics.Warn(line, $"{count} NUL character{(count == 1 ? "" : "s")} replaced by U+FFFD, as the WebVTT parser does");
         }
-
-        string extension = Path.GetExtension(path);
-        var reader = forced is { } f ? readers.Find(f) : readers.Detect(text, extension);
         if (reader is null)
         {
             diagnostics.Error(1, forced is null

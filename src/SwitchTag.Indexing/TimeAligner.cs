@@ -24,18 +24,32 @@ public sealed class TimeAligner(Transcript transcript)
         return new TimeRange(start, Timecode.Max(start, end));
     }
 
+    // Binary searches: a turn's cues are in text order, and a long turn (one speaker for hours) has
+    // hundreds of thousands of them, so a scan per mention would make alignment quadratic.
     private static TurnCue CueAtStart(Turn turn, int charStart)
     {
-        foreach (var c in turn.Cues)
-            if (charStart < c.CharEnd) return c;
-        return turn.Cues[^1];
+        // The first cue that ends after charStart.
+        var cues = turn.Cues;
+        int lo = 0, hi = cues.Length;
+        while (lo < hi)
+        {
+            int mid = (lo + hi) >>> 1;
+            if (charStart < cues[mid].CharEnd) hi = mid; else lo = mid + 1;
+        }
+        return lo < cues.Length ? cues[lo] : cues[^1];
     }
 
     private static TurnCue CueAtEnd(Turn turn, int charEnd)
     {
-        for (int i = turn.Cues.Length - 1; i >= 0; i--)
-            if (charEnd > turn.Cues[i].CharStart) return turn.Cues[i];
-        return turn.Cues[0];
+        // The last cue that starts before charEnd.
+        var cues = turn.Cues;
+        int lo = 0, hi = cues.Length;
+        while (lo < hi)
+        {
+            int mid = (lo + hi) >>> 1;
+            if (charEnd > cues[mid].CharStart) lo = mid + 1; else hi = mid;
+        }
+        return lo > 0 ? cues[lo - 1] : cues[0];
     }
 
     private Timecode StartTime(TurnCue part, int local)

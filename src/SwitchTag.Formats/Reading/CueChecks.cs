@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
+using SwitchTag.Formats.Text;
 
 namespace SwitchTag.Formats.Reading;
 
@@ -15,14 +16,16 @@ internal static class CueChecks
         return new TimeRange(start, start);
     }
 
-    /// <summary>Drops cues with no text (warning: there is nothing to lose but the time), then warns on
-    /// cues that start before the one above (file order is kept) and, where the format has no reason to
-    /// overlap, on cues that start before the one above has ended.</summary>
+    /// <summary>Brings each cue's text to NFC (offsets in it moved along), drops cues with no text
+    /// (warning: there is nothing to lose but the time), then warns on cues that start before the one
+    /// above (file order is kept) and, where the format has no reason to overlap, on cues that start
+    /// before the one above has ended.</summary>
     public static ImmutableArray<Cue> Finish(IEnumerable<Cue> cues, bool overlapAllowed, Diagnostics diagnostics)
     {
         var kept = ImmutableArray.CreateBuilder<Cue>();
-        foreach (var cue in cues)
+        foreach (var read in cues)
         {
+            var cue = Nfc(read);
             if (string.IsNullOrWhiteSpace(cue.Text))
             {
                 diagnostics.Warn(cue.At.Line, $"cue {cue.Time} has no text; skipped");
@@ -39,5 +42,23 @@ internal static class CueChecks
             kept.Add(cue);
         }
         return kept.ToImmutable();
+    }
+
+    /// <summary>The cue with its text in NFC (FORMATS.md, "Unicode normalisation"): the original form
+    /// stays in the file's text at RawStart..RawEnd.</summary>
+    private static Cue Nfc(Cue cue)
+    {
+        string text = NfcText.Normalize(cue.Text, out var map);
+        if (map is null) return cue;
+        return cue with
+        {
+            Text = text,
+            WordTimes = cue.WordTimes.IsDefault ? cue.WordTimes : [.. cue.WordTimes.Select(w => w with { CharOffset = map[Math.Clamp(w.CharOffset, 0, map.Length - 1)] })],
+            LanguageHints = cue.LanguageHints.IsDefault ? cue.LanguageHints : [.. cue.LanguageHints.Select(h => h with
+            {
+                CharStart = map[Math.Clamp(h.CharStart, 0, map.Length - 1)],
+                CharEnd = map[Math.Clamp(h.CharEnd, 0, map.Length - 1)],
+            })],
+        };
     }
 }

@@ -5,7 +5,9 @@ namespace SwitchTag.Formats.Reading;
 /// <summary>Finds a <c>NAME:</c> speaker prefix at the start of a line: one to four words, the first and
 /// last starting with an upper-case letter (so <c>MARIA</c>, <c>Dr. Nowak</c>, <c>Speaker 2</c>,
 /// <c>Maria de la Cruz</c>), at most 40 characters, then a colon followed by whitespace or the end of the
-/// line. Middle words may be numbers or lower-case name particles (de, la, van, ...).</summary>
+/// line. Middle words may be numbers or lower-case name particles (de, la, van, ...), and a qualifier
+/// in parentheses may follow the name (<c>LMP (EAGLE)</c>). Whether a prefix found here names a speaker
+/// is decided per file (<see cref="SpeakerVotes"/>).</summary>
 internal static class SpeakerPrefix
 {
     private const int MaxWords = 4;
@@ -35,6 +37,28 @@ internal static class SpeakerPrefix
 
         var label = line[p..colon];
         if (label.Length != label.TrimEnd().Length || label.IsEmpty) return false;
+        if (!IsName(label)) return false;
+
+        labelEnd = colon;
+        textStart = colon + 1;
+        while (textStart < line.Length && char.IsWhiteSpace(line[textStart])) textStart++;
+        return true;
+    }
+
+    /// <summary>The name, and an optional qualifier in parentheses after it: <c>LMP (EAGLE)</c>,
+    /// <c>Anna (translator)</c>. The qualifier's words are name words in any case.</summary>
+    private static bool IsName(ReadOnlySpan<char> label)
+    {
+        int open = label.IndexOf(" (", StringComparison.Ordinal);
+        if (open > 0 && label[^1] == ')')
+        {
+            var qualifier = label[(open + 2)..^1];
+            if (qualifier.IsEmpty || qualifier.IndexOfAny('(', ')') >= 0) return false;
+            int count = 0;
+            foreach (var range in qualifier.Split(' '))
+                if (qualifier[range] is var word && (word.IsEmpty || ++count > MaxWords || !IsNameWord(word))) return false;
+            label = label[..open];
+        }
         int words = 0;
         bool lastCapital = false;
         foreach (var range in label.Split(' '))
@@ -46,12 +70,7 @@ internal static class SpeakerPrefix
             if (!capital && (words == 1 || !middleOk)) return false;
             lastCapital = capital || (char.IsAsciiDigit(word[0]) && IsDigits(word));
         }
-        if (!lastCapital) return false;
-
-        labelEnd = colon;
-        textStart = colon + 1;
-        while (textStart < line.Length && char.IsWhiteSpace(line[textStart])) textStart++;
-        return true;
+        return lastCapital;
     }
 
     private static bool StartsUpper(ReadOnlySpan<char> word) =>

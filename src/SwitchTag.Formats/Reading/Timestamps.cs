@@ -59,7 +59,18 @@ internal static class Timestamps
     /// 59 when no hours are given), each with an optional <c>.f</c>/<c>,f</c> fraction of 1-3 digits.</summary>
     public static bool TryLoose(ReadOnlySpan<char> s, ref int pos, out Timecode time)
     {
+        int p = pos;
+        if (!TryLooseShape(s, ref p, out time, out bool inRange) || !inRange) return false;
+        pos = p;
+        return true;
+    }
+
+    /// <summary>The shape of a loose stamp, whatever its numbers: <paramref name="inRange"/> says whether
+    /// minutes (with hours) and seconds are 00-59, so "[99:99:99]" can be told from text.</summary>
+    public static bool TryLooseShape(ReadOnlySpan<char> s, ref int pos, out Timecode time, out bool inRange)
+    {
         time = default;
+        inRange = true;
         int p = pos;
         if (!Number(s, ref p, 1, 3, out long a, out _) || !Expect(s, ref p, ':') || !Number(s, ref p, 2, 2, out long b, out _))
             return false;
@@ -68,7 +79,7 @@ internal static class Timestamps
         {
             p++;
             if (!Number(s, ref p, 2, 2, out long c, out _)) return false;
-            if (b > 59) return false;
+            if (b > 59) inRange = false;
             h = a; m = b; sec = c;
         }
         long ms = 0;
@@ -77,9 +88,9 @@ internal static class Timestamps
             p++;
             if (!Fraction(s, ref p, out ms)) return false;
         }
-        if (sec > 59) return false;
+        if (sec > 59) inRange = false;
         if (p < s.Length && (char.IsAsciiDigit(s[p]) || s[p] == ':')) return false;
-        time = new Timecode(((h * 60 + m) * 60 + sec) * 1000 + ms);
+        if (inRange) time = new Timecode(((h * 60 + m) * 60 + sec) * 1000 + ms);
         pos = p;
         return true;
     }

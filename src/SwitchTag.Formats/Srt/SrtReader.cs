@@ -38,7 +38,6 @@ public sealed class SrtReader : ITranscriptReader
     public ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
     {
         var cues = new List<Cue>();
-        string? label = null;
         int i = 0, n = src.LineCount;
         while (i < n)
         {
@@ -54,11 +53,13 @@ public sealed class SrtReader : ITranscriptReader
                 continue;
             }
             var line = src[timing];
-            if (!TryTiming(src.Span(line), out var start, out var end, out var settings))
+            if (!TryTiming(src.Span(line), out var start, out var end, out var settings, out bool glued))
             {
                 diagnostics.Warn(line.Number, $"malformed cue timing {Diagnostics.Quote(src.Span(line))} (SubRip wants HH:MM:SS,mmm --> HH:MM:SS,mmm); cue not read: {Quote(src, timing + 1, i)}");
                 continue;
             }
+            if (glued)
+                diagnostics.Warn(line.Number, $"text right after the end time ({Diagnostics.Quote(settings)}); kept as the cue's settings");
             var range = CueChecks.Range(start, end, line.Number, diagnostics);
             var text = new StringBuilder();
             for (int k = timing + 1; k < i; k++)
@@ -66,17 +67,29 @@ public sealed class SrtReader : ITranscriptReader
                 if (k > timing + 1) text.Append('\n');
                 text.Append(Markup.StripSrtTags(src.Span(src[k])));
             }
-            string plain = text.ToString();
-            if (SpeakerPrefix.TryMatch(plain, out int ls, out int le, out int ts))
+            cues.Add(new Cue(range, null, null, text.ToString(), [], [],
+                src.At(src[blockStart].Number), src[blockStart].Start, src[i - 1].End,
+                Identifier: timing > blockStart ? src.Str(src[blockStart]).Trim() : null, Settings: settings));
+        }
+        return CueChecks.Finish(Speakers(cues), overlapAllowed: false, diagnostics);
+    }
+
+    /// <summary>A <c>NAME:</c> prefix the file uses as a speaker label (<see cref="SpeakerVotes"/>) names
+    /// the speaker; a cue without one continues the speaker before it.</summary>
+    private static IEnumerable<Cue> Speakers(List<Cue> cues)
+    {
+        var votes = new SpeakerVotes(cues.Select(c => c.Text));
+        string? label = null;
+        foreach (var cue in cues)
+        {
+            string plain = cue.Text;
+            if (votes.TryMatch(plain, out int ls, out int le, out int ts))
             {
                 label = plain[ls..le];
                 plain = plain[ts..];
             }
-            cues.Add(new Cue(range, SpeakerLabels.Normalise(label), label, plain, [], [],
-                src.At(src[blockStart].Number), src[blockStart].Start, src[i - 1].End,
-                Identifier: timing > blockStart ? src.Str(src[blockStart]).Trim() : null, Settings: settings));
+            yield return cue with { Speaker = SpeakerLabels.Normalise(label), SpeakerLabel = label, Text = plain };
         }
-        return CueChecks.Finish(cues, overlapAllowed: false, diagnostics);
     }
 
     private static bool IsCounter(SourceText src, int i)
@@ -90,21 +103,24 @@ public sealed class SrtReader : ITranscriptReader
     private static bool HasArrow(SourceText src, int i) => src.Span(src[i]).Contains("-->", StringComparison.Ordinal);
 
     private static bool StartsCue(SourceText src, int i) =>
-        (IsCounter(src, i) && i + 1 < src.LineCount && HasArrow(src, i + 1) && TryTiming(src.Span(src[i + 1]), out _, out _, out _))
-        || (HasArrow(src, i) && TryTiming(src.Span(src[i]), out _, out _, out _));
+        (IsCounter(src, i) && i + 1 < src.LineCount && HasArrow(src, i + 1) && TryTiming(src.Span(src[i + 1]), out _, out _, out _, out _))
+        || (HasArrow(src, i) && TryTiming(src.Span(src[i]), out _, out _, out _, out _));
 
-    /// <summary>"start --> end [X1:.. Y2:..]"; anything after the end time is kept as the cue's settings.</summary>
-    private static bool TryTiming(ReadOnlySpan<char> line, out Timecode start, out Timecode end, out string? settings)
+    /// <summary>"start --> end [X1:.. Y2:..]"; anything after the end time is kept as the cue's settings,
+    /// also when no space comes before it (<paramref name="glued"/>: "00:01:20,000?" should not cost the
+    /// cue its text).</summary>
+    private static bool TryTiming(ReadOnlySpan<char> line, out Timecode start, out Timecode end, out string? settings, out bool glued)
     {
         start = end = default;
         settings = null;
+        glued = false;
         int p = Skip(line, 0);
         if (!Stamp(line, ref p, out start)) return false;
         p = Skip(line, p);
         if (!line[p..].StartsWith("-->")) return false;
         p = Skip(line, p + 3);
         if (!Stamp(line, ref p, out end)) return false;
-        if (p < line.Length && !char.IsWhiteSpace(line[p])) return false;
+        glued = p < line.Length && !char.IsWhiteSpace(line[p]);
         var rest = line[p..].Trim();
         settings = rest.IsEmpty ? null : rest.ToString();
         return true;

@@ -1,4 +1,3 @@
-using System.Collections.Immutable;
 using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
@@ -11,24 +10,33 @@ namespace SwitchTag.Formats.Timestamped;
 /// an entry ends where the next begins. A line holding only a timestamp, with no text after it before
 /// the next entry, is a closing stamp: it ends the entry above and makes no cue. The last entry with
 /// no closing stamp gets a speaking-rate estimate. Text before the first entry (or between a heading
-/// and the first entry under it) is in no cue and is reported.</summary>
+/// and the first entry under it), and an entry whose stamp is no valid time, are in no cue and are
+/// reported. A stamp that repeats an earlier entry's start followed by a continuation mark resumes
+/// that entry's speaker after an interruption.</summary>
 internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
 {
+    /// <summary>How many entries back a resumed stamp is looked for: an interruption is a few lines.</summary>
+    private const int ResumeWindow = 16;
+
     private sealed record EntryLine(int Line, string Text);
 
-    private sealed class Entry(Timecode start, Timecode? end, int line, string? section)
+    private sealed class Entry(Timecode start, Timecode? end, int line, string? section, Entry? resumes)
     {
         public Timecode Start { get; } = start;
         public Timecode? End { get; } = end;
         public int Line { get; } = line;
         public string? Section { get; } = section;
+        public Entry? Resumes { get; } = resumes;
         public List<EntryLine> Lines { get; } = [];
+        /// <summary>The speaker in force at the entry's end, once built.</summary>
+        public string? EndLabel { get; set; }
     }
 
     private readonly List<Entry> entries = [];
     private readonly List<EntryLine> unplaced = [];
     private Entry? open;
     private string? section;
+    private (int Line, string Stamp)? invalid;
 
     /// <summary>A heading: later entries sit under it, and it closes the entry above to continuation.</summary>
     public void Heading(string? text)
@@ -44,9 +52,23 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
         if (EntryStamp.TryMatch(text, out var stamp))
         {
             FlushUnplaced();
-            open = new Entry(stamp.Start, stamp.End, line, section);
-            entries.Add(open);
             var rest = text[stamp.TextStart..].Trim();
+            if (!stamp.Valid)
+            {
+                open = null;
+                invalid = (line, text[..stamp.TextStart].Trim().ToString());
+                if (!rest.IsEmpty) unplaced.Add(new EntryLine(line, rest.ToString()));
+                return;
+            }
+            if (stamp.Resumes && stamp.End is null && open is not null && open.Start == stamp.Start)
+            {
+                // The same stamp again, as on each page of a typed transcript: the entry goes on.
+                open.Lines.Add(new EntryLine(line, rest.ToString()));
+                return;
+            }
+            var resumes = stamp.Resumes ? entries.TakeLast(ResumeWindow).LastOrDefault(e => e.Start == stamp.Start && e.Lines.Count > 0) : null;
+            open = new Entry(stamp.Start, stamp.End, line, section, resumes);
+            entries.Add(open);
             if (!rest.IsEmpty) open.Lines.Add(new EntryLine(line, rest.ToString()));
             return;
         }
@@ -59,6 +81,7 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
     public List<Cue> Build()
     {
         FlushUnplaced();
+        var votes = SpeakerVotes.Trusting;
         var cues = new List<Cue>();
         string? label = null;
         for (int k = 0; k < entries.Count; k++)
@@ -66,11 +89,14 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
             var entry = entries[k];
             if (entry.Lines.Count == 0) continue;
             var next = k + 1 < entries.Count ? entries[k + 1] : null;
-            int chars = entry.Lines.Sum(SpokenLength);
+            int chars = entry.Lines.Sum(l => SpokenLength(votes, l));
+            // A resumed utterance is spoken after the interruption above it, whatever its stamp says.
+            var start = entry.Resumes is not null && cues.Count > 0 ? Timecode.Max(entry.Start, cues[^1].Time.End) : entry.Start;
+            if (entry.Resumes is not null) label = entry.Resumes.EndLabel;
             Timecode end = entry.End
-                ?? (next is not null && next.Start >= entry.Start ? next.Start : SpeakingRate.EstimateEnd(entry.Start, chars));
-            var range = CueChecks.Range(entry.Start, end, entry.Line, diagnostics);
-            label = Segment(entry, range, label, cues);
+                ?? (next is not null && next.Start >= start ? next.Start : SpeakingRate.EstimateEnd(start, chars));
+            var range = CueChecks.Range(start, end, entry.Line, diagnostics);
+            label = entry.EndLabel = Segment(votes, entry, range, label, cues);
         }
         return cues;
     }
@@ -78,12 +104,12 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
     /// <summary>Splits an entry where a line starts with a new <c>NAME:</c> (an untimed speaker change);
     /// the parts share the entry's time in proportion to their characters. Returns the speaker in force
     /// at the end, which an unlabelled entry after it continues.</summary>
-    private string? Segment(Entry entry, TimeRange range, string? label, List<Cue> cues)
+    private string? Segment(SpeakerVotes votes, Entry entry, TimeRange range, string? label, List<Cue> cues)
     {
         var parts = new List<(string? Label, List<EntryLine> Lines)>();
         foreach (var line in entry.Lines)
         {
-            if (SpeakerPrefix.TryMatch(line.Text, out int ls, out int le, out int ts))
+            if (votes.TryMatch(line.Text, out int ls, out int le, out int ts))
             {
                 label = line.Text[ls..le];
                 parts.Add((label, [line with { Text = line.Text[ts..] }]));
@@ -114,11 +140,19 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
     }
 
     /// <summary>A line's length without its speaker prefix: the label is not spoken.</summary>
-    private static int SpokenLength(EntryLine line) =>
-        SpeakerPrefix.TryMatch(line.Text, out _, out _, out int textStart) ? line.Text.Length - textStart : line.Text.Length;
+    private static int SpokenLength(SpeakerVotes votes, EntryLine line) =>
+        votes.TryMatch(line.Text, out _, out _, out int textStart) ? line.Text.Length - textStart : line.Text.Length;
 
     private void FlushUnplaced()
     {
+        if (invalid is var (line, stamp))
+        {
+            invalid = null;
+            var lost = string.Join(' ', unplaced.Select(l => l.Text));
+            unplaced.Clear();
+            diagnostics.Warn(line, $"timestamp {Diagnostics.Quote(stamp)} is not a valid time (minutes and seconds run from 00 to 59); entry not read: {Diagnostics.Quote(lost)}");
+            return;
+        }
         if (unplaced.Count == 0) return;
         string where = entries.Count == 0 && section is null ? "before the first timestamp" : "after a heading, before the first timestamp under it";
         var text = string.Join(' ', unplaced.Select(l => l.Text));

@@ -35,8 +35,8 @@ internal static class EntryScan
         return h is >= 1 and <= 6 && h < body.Length && body[h] == ' ';
     }
 
-    /// <summary>The line without a list marker (<c>- * +</c> or <c>1.</c>) and emphasis or code marks
-    /// in its head; <paramref name="marked"/> says whether there was any such Markdown. Only a timestamp
+    /// <summary>The line without a list marker (<c>- * +</c> or <c>1.</c>) and emphasis, code or
+    /// backslash-escape marks in its head; <paramref name="marked"/> says whether there was any such Markdown. Only a timestamp
     /// behind such marks counts as a Markdown signal: a line "1987. We left" in a typed transcript is
     /// not a numbered list.</summary>
     private static string Unwrap(ReadOnlySpan<char> body, out bool marked)
@@ -51,9 +51,13 @@ internal static class EntryScan
         }
         var head = body[..Math.Min(body.Length, 120)];
         var sb = new System.Text.StringBuilder(head.Length);
-        foreach (char c in head)
+        for (int i = 0; i < head.Length; i++)
         {
+            char c = head[i];
             if (c is '*' or '_' or '`') marked = true;
+            // A backslash before ASCII punctuation is a CommonMark escape ("\[00:00:00\]", as Markdown
+            // editors save a bracketed stamp); only Markdown writes it.
+            else if (c == '\\' && i + 1 < head.Length && head[i + 1] is >= '!' and <= '/' or >= ':' and <= '@' or >= '[' and <= '`' or >= '{' and <= '~') marked = true;
             else sb.Append(c);
         }
         return sb.ToString();

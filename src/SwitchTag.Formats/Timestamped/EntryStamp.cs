@@ -10,7 +10,11 @@ namespace SwitchTag.Formats.Timestamped;
 /// so a sentence starting "10:30 in the morning" stays text; a bare <c>h:mm:ss</c> always does.</summary>
 internal static class EntryStamp
 {
-    public readonly record struct Stamp(Timecode Start, Timecode? End, int TextStart);
+    /// <param name="Valid">False for a stamp of the right shape with minutes or seconds past 59
+    /// ("[99:99:99]"): it opens an entry that is reported, not read.</param>
+    /// <param name="Resumes">The text after the stamp opens with a continuation mark ("- -", "--", "…",
+    /// "..."): the line may take up an utterance that another speaker interrupted.</param>
+    public readonly record struct Stamp(Timecode Start, Timecode? End, int TextStart, bool Valid = true, bool Resumes = false);
 
     public static bool TryMatch(ReadOnlySpan<char> line, out Stamp stamp)
     {
@@ -19,8 +23,9 @@ internal static class EntryStamp
         char close = p < line.Length ? line[p] switch { '[' => ']', '(' => ')', _ => '\0' } : '\0';
         if (close != '\0') p = Skip(line, p + 1);
         int stampStart = p;
-        if (!Timestamps.TryLoose(line, ref p, out var start)) return false;
+        if (!Timestamps.TryLooseShape(line, ref p, out var start, out bool valid)) return false;
         bool hasHours = line[stampStart..p].Count(':') == 2;
+        if (!valid && close == '\0' && !hasHours) return false;
 
         Timecode? end = null;
         int q = Skip(line, p);
@@ -40,13 +45,19 @@ internal static class EntryStamp
             return false;
 
         p = Skip(line, p);
+        var after = line[p..];
+        if (valid && (close != '\0' || hasHours) && (after.StartsWith("- -") || after.StartsWith("--") || after.StartsWith("…") || after.StartsWith("...")))
+        {
+            stamp = new Stamp(start, end, p, Resumes: true);
+            return true;
+        }
         int sep = Dash(line, p);
         if (sep == 0 && p < line.Length && line[p] == '|') sep = 1;
         if (sep > 0 && (p + sep == line.Length || char.IsWhiteSpace(line[p + sep]))) p = Skip(line, p + sep);
 
         if (close == '\0' && !hasHours && end is null && p < line.Length && !SpeakerPrefix.TryMatch(line[p..], out _, out _, out _))
             return false;
-        stamp = new Stamp(start, end, p);
+        stamp = new Stamp(start, end, p, valid);
         return true;
     }
 

@@ -17,7 +17,8 @@ internal sealed record CueText(
 /// <summary>Parses WebVTT cue text (W3C WebVTT, "cue text parsing rules"): <c>&lt;c&gt; &lt;i&gt; &lt;b&gt;
 /// &lt;u&gt; &lt;ruby&gt; &lt;rt&gt; &lt;v&gt; &lt;lang&gt;</c> spans with classes, inline timestamps and
 /// character references. Tags are dropped from the plain text; ruby text is kept in parentheses after
-/// its base; an unclosed '&lt;' is kept as text with a warning.</summary>
+/// its base (closed by <c>&lt;/rt&gt;</c>, <c>&lt;/ruby&gt;</c> or the cue's end); a '&lt;' with no '&gt;' before
+/// the next '&lt;' is kept as text, with one warning per cue counting them.</summary>
 internal static class CueTextParser
 {
     /// <param name="raw">The cue's text lines joined by '\n'.</param>
@@ -30,7 +31,8 @@ internal static class CueTextParser
         var langs = new Stack<(string Language, int Start)>();
         string? voice = null;
         int voices = 0;
-        bool noCloseAhead = false;
+        bool noCloseAhead = false, rubyText = false;
+        int unclosed = 0, unclosedLine = 0;
         var s = raw.AsSpan();
         int countedTo = 0, line = firstLine;
 
@@ -51,13 +53,16 @@ internal static class CueTextParser
                 i++;
                 continue;
             }
-            int close = noCloseAhead ? -1 : s[(i + 1)..].IndexOf('>');
-            if (close < 0)
+            // A '<' whose next '<' comes before any '>' has no '>' of its own: the spec's tokenizer would
+            // swallow the text up to the later '>' into the tag (so "<c.first That's awesome!</c>" shows
+            // nothing); it is kept as text instead. Looking for either character keeps this linear.
+            int close = noCloseAhead ? -1 : s[(i + 1)..].IndexOfAny('<', '>');
+            if (close < 0 || s[i + 1 + close] == '<')
             {
-                noCloseAhead = true;
+                noCloseAhead = close < 0;
                 line += s[countedTo..i].Count('\n');
                 countedTo = i;
-                diagnostics.Warn(line, "'<' with no closing '>' in cue text; kept as text");
+                if (unclosed++ == 0) unclosedLine = line;
                 plain.Append('<');
                 i++;
                 continue;
@@ -76,8 +81,12 @@ internal static class CueTextParser
                     var (language, start) = langs.Pop();
                     hints.Add(new LanguageHint(start, plain.Length, language));
                 }
-                else if (name.SequenceEqual("rt"))
+                else if ((name.SequenceEqual("rt") || name.SequenceEqual("ruby")) && rubyText)
+                {
+                    // "</ruby>" also ends an open ruby text (W3C WebVTT, cue text parsing rules).
                     plain.Append(')');
+                    rubyText = false;
+                }
                 continue;
             }
             if (tag.Length > 0 && char.IsAsciiDigit(tag[0]))
@@ -114,7 +123,8 @@ internal static class CueTextParser
                     langs.Push((annotation, plain.Length));
                     break;
                 case "rt":
-                    plain.Append('(');
+                    if (!rubyText) plain.Append('(');
+                    rubyText = true;
                     break;
                 case "c" or "i" or "b" or "u" or "ruby":
                     break;
@@ -124,6 +134,11 @@ internal static class CueTextParser
                     break;
             }
         }
+        if (rubyText) plain.Append(')');
+        if (unclosed > 0)
+            diagnostics.Warn(unclosedLine, unclosed == 1
+                ? "'<' with no closing '>' in cue text; kept as text"
+                : $"{unclosed} '<' with no closing '>' of their own in cue text; kept as text");
         while (langs.Count > 0)
         {
             var (language, start) = langs.Pop();

@@ -99,15 +99,17 @@ public sealed class WebVttReader : ITranscriptReader
         if (!line[p..].StartsWith("-->")) return false;
         p = SkipSpace(line, p + 3);
         if (!Timestamps.TryWebVtt(line, ref p, out end)) return false;
-        if (p < line.Length && !char.IsWhiteSpace(line[p])) return false;
+        // The spec parses whatever follows the end time as settings, space before it or not
+        // ("00:01.000line:40%"); a fourth fraction digit already failed the timestamp.
         var rest = line[p..].Trim();
         settings = rest.IsEmpty ? null : rest.ToString();
         return true;
     }
 
+    /// <summary>The spec's "skip whitespace": space, tab and form feed (line breaks cannot occur here).</summary>
     private static int SkipSpace(ReadOnlySpan<char> s, int p)
     {
-        while (p < s.Length && (s[p] == ' ' || s[p] == '\t')) p++;
+        while (p < s.Length && (s[p] is ' ' or '\t' or '\f')) p++;
         return p;
     }
 
@@ -132,11 +134,12 @@ public sealed class WebVttReader : ITranscriptReader
 
     /// <summary>Speakers (FORMATS.md, "Speakers"): a file that uses voice spans names the speaker of
     /// every cue that has one and of no other (the spec ties a voice to its cue). A file with no voice
-    /// span at all is read like SubRip: a "NAME:" prefix names the speaker, and a cue without one
-    /// continues the speaker before it.</summary>
+    /// span at all is read like SubRip: a "NAME:" prefix the file uses as a label (SpeakerVotes) names the
+    /// speaker, and a cue without one continues the speaker before it.</summary>
     private static IEnumerable<Cue> Speakers(List<Cue> cues)
     {
         bool voices = cues.Exists(c => c.SpeakerLabel is not null);
+        var votes = voices ? null : new SpeakerVotes(cues.Select(c => c.Text));
         string? label = null;
         foreach (var cue in cues)
         {
@@ -145,7 +148,7 @@ public sealed class WebVttReader : ITranscriptReader
                 yield return cue with { Speaker = SpeakerLabels.Normalise(cue.SpeakerLabel) };
                 continue;
             }
-            var (prefixed, text, shift) = CutPrefix(cue.Text);
+            var (prefixed, text, shift) = CutPrefix(votes!, cue.Text);
             if (prefixed is not null) label = prefixed;
             yield return cue with
             {
@@ -160,9 +163,9 @@ public sealed class WebVttReader : ITranscriptReader
         }
     }
 
-    private static (string? Label, string Text, int Shift) CutPrefix(string text)
+    private static (string? Label, string Text, int Shift) CutPrefix(SpeakerVotes votes, string text)
     {
-        if (!SpeakerPrefix.TryMatch(text, out int labelStart, out int labelEnd, out int textStart)) return (null, text, 0);
+        if (!votes.TryMatch(text, out int labelStart, out int labelEnd, out int textStart)) return (null, text, 0);
         return (text[labelStart..labelEnd], text[textStart..], textStart);
     }
 }

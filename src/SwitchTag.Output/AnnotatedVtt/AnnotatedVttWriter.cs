@@ -20,7 +20,7 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
         for (int t = 0; t < index.Turns.Length; t++)
             foreach (var part in index.Turns[t].Cues)
                 cueTurn[part.CueIndex] = (index.Turns[t], part, t);
-        var foreign = index.ForeignSpans.ToLookup(f => f.Turn);
+        var foreign = index.ForeignSpans.GroupBy(f => f.Turn).ToDictionary(g => g.Key, g => g.OrderBy(f => f.CharStart).ToArray());
 
         var sb = new StringBuilder("WEBVTT\n\nNOTE\nMachine annotation of ");
         sb.Append(Escape(Path.GetFileName(index.Transcript.Source.Path)))
@@ -36,18 +36,28 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
             sb.Append('\n');
             if (cue.SpeakerLabel is { Length: > 0 } label)
                 sb.Append("<v ").Append(Escape(label.TrimEnd(':').Trim())).Append('>');
-            var spans = cueTurn.TryGetValue(c, out var place) ? CueSpans(foreign[place.TurnIndex], place.Part) : [];
+            var spans = cueTurn.TryGetValue(c, out var place) ? CueSpans(foreign.GetValueOrDefault(place.TurnIndex, []), place.Part) : [];
             AppendText(sb, cue, spans);
             sb.Append("\n\n");
         }
         return sb.ToString();
     }
 
-    private static List<(int Start, int End, string Language)> CueSpans(IEnumerable<ForeignSpan> spans, TurnCue part)
+    /// <summary>The foreign stretches inside one cue of a turn. A turn's stretches are in text order and
+    /// do not overlap, so the first one that can reach the cue is found by binary search: a turn of one
+    /// speaker may hold hundreds of thousands of cues and as many stretches.</summary>
+    private static List<(int Start, int End, string Language)> CueSpans(ForeignSpan[] spans, TurnCue part)
     {
         var result = new List<(int, int, string)>();
-        foreach (var s in spans)
+        int lo = 0, hi = spans.Length;
+        while (lo < hi)
         {
+            int mid = (lo + hi) >>> 1;
+            if (spans[mid].CharEnd <= part.CharStart) lo = mid + 1; else hi = mid;
+        }
+        for (int i = lo; i < spans.Length && spans[i].CharStart < part.CharEnd; i++)
+        {
+            var s = spans[i];
             int start = Math.Max(s.CharStart, part.CharStart) - part.CharStart;
             int end = Math.Min(s.CharEnd, part.CharEnd) - part.CharStart;
             if (end > start) result.Add((start, end, s.Language));
@@ -56,11 +66,11 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
     }
 
     // Tags go in at char positions of the cue text: at one position, closing tags, then the word
-    // timestamp, then opening tags, so tags nest properly. Blank lines would end the cue, so runs of
-    // newlines collapse to one.
+    // timestamp, then opening tags, so tags nest properly.
     private static void AppendText(StringBuilder sb, Cue cue, List<(int Start, int End, string Language)> spans)
     {
         string text = cue.Text;
+        var breaks = LineBreaks(text);
         var times = cue.WordTimes.IsDefault ? [] : cue.WordTimes.Where(w => w.CharOffset >= 0 && w.CharOffset < text.Length).ToList();
         var cuts = spans.SelectMany(s => new[] { s.Start, s.End }).Concat(times.Select(w => w.CharOffset)).Append(0).Append(text.Length)
             .Distinct().Order().ToList();
@@ -70,14 +80,43 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
             if (spans.Any(s => s.End == at)) sb.Append("</lang>");
             foreach (var w in times.Where(w => w.CharOffset == at).Take(1)) sb.Append('<').Append(w.Time).Append('>');
             foreach (var s in spans.Where(s => s.Start == at)) sb.Append("<lang ").Append(s.Language).Append('>');
-            if (k + 1 < cuts.Count) sb.Append(Escape(text[at..cuts[k + 1]]));
+            if (k + 1 < cuts.Count) AppendEscaped(sb, text, at, cuts[k + 1], breaks);
         }
     }
 
-    private static string Escape(string text)
+    /// <summary>Which '\n' of the text may be written as a line break. A reader ends a cue at a blank or
+    /// whitespace-only line, so a break next to such a line is written as the character reference
+    /// <c>&amp;#10;</c> instead, and the cue reads back with the same text.</summary>
+    private static bool[] LineBreaks(string text)
     {
-        string single = text.Replace("\r", "");
-        while (single.Contains("\n\n", StringComparison.Ordinal)) single = single.Replace("\n\n", "\n");
-        return WebVttText.Escape(single);
+        var raw = new bool[text.Length];
+        int lineStart = 0;
+        bool previousBlank = true;
+        for (int i = 0; i <= text.Length; i++)
+        {
+            if (i < text.Length && text[i] != '\n') continue;
+            bool blank = text.AsSpan(lineStart, i - lineStart).IsWhiteSpace();
+            if (lineStart > 0) raw[lineStart - 1] = !previousBlank && !blank;
+            previousBlank = blank;
+            lineStart = i + 1;
+        }
+        return raw;
     }
+
+    /// <summary>Cue text escaped (WebVttText.Escape), with CR kept as <c>&amp;#13;</c> (a raw one would end
+    /// the line) and each line break written as <see cref="LineBreaks"/> says.</summary>
+    private static void AppendEscaped(StringBuilder sb, string text, int from, int to, bool[] breaks)
+    {
+        int run = from;
+        for (int i = from; i < to; i++)
+        {
+            char c = text[i];
+            if (c != '\r' && (c != '\n' || breaks[i])) continue;
+            sb.Append(WebVttText.Escape(text[run..i])).Append(c == '\r' ? "&#13;" : "&#10;");
+            run = i + 1;
+        }
+        sb.Append(WebVttText.Escape(text[run..to]));
+    }
+
+    private static string Escape(string text) => WebVttText.Escape(text.ReplaceLineEndings(" "));
 }

@@ -1,11 +1,19 @@
 using System.Diagnostics;
+using System.Globalization;
 using System.Text;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Time;
 using SwitchTag.Formats;
+using SwitchTag.Indexing;
 
-// Reader benchmark: times TranscriptFile.Parse on generated inputs (best of three runs, after one warm-up)
-// and prints one line per case. Arguments: files to read and report on instead (diagnostics printed).
+// Reader benchmark. Each case runs in a child process of its own, so its peak working set is its own;
+// a case times TranscriptFile.Parse on a generated input (best of three runs, after one warm-up) and
+// prints one line. The "one turn" cases also build the turn and place one mention per cue in time
+// (TimeAligner), the work that grew quadratically inside one long speaker turn; the 200k/50k time
+// ratio is printed after them (linear cost gives 4). Arguments: "--case NAME" runs one case; files
+// to read and report on instead (diagnostics printed).
+if (args is ["--case", var only]) return RunCase(only);
 if (args.Length > 0)
 {
     var problems = new List<Diagnostic>();
@@ -16,36 +24,77 @@ if (args.Length > 0)
         foreach (var d in result.Diagnostics) Console.WriteLine("  " + d);
     }
     foreach (var p in problems) Console.WriteLine(p);
-    return;
+    return 0;
 }
 
-var words = string.Concat(Enumerable.Repeat("palavra słowo ", 10_000_000 / 14 + 1));
-var cases = new (string Name, string Path, string Text)[]
+var seconds = new Dictionary<string, double>();
+foreach (var name in Cases().Select(c => c.Name))
 {
-    ("webvtt 10 MB single line", "huge.vtt", "WEBVTT\n\n00:01.000 --> 00:02.000\n" + words),
-    ("srt 10 MB single line", "huge.srt", "1\n00:00:01,000 --> 00:00:02,000\n" + words),
-    ("text 10 MB single line", "huge.txt", "[00:00:01] ANNA: " + words),
-    ("markdown 10 MB single line", "huge.md", "# T\n\n**[00:00:01] ANNA:** " + words),
-    ("unknown 10 MB single line", "huge-prose.txt", new string('a', 10_000_000)),
-    ("webvtt 100k cues", "many.vtt", Many(100_000, i => $"{T(i)} --> {T(i + 1)}\n<v Speaker {i % 3}>Cue number {i} with <i>some</i> &amp; <{new Timecode(i * 2000L + 500)}>words", "WEBVTT\n\n")),
-    ("srt 100k cues", "many.srt", Many(100_000, i => $"{i + 1}\n{T(i).Replace('.', ',')} --> {T(i + 1).Replace('.', ',')}\n{(i % 4 == 0 ? "ANNA: " : "")}Cue number {i} with some words", "")),
-    ("text 100k entries", "many.txt", Many(100_000, i => $"[{T(i)}] {(i % 4 == 0 ? "ANNA: " : "")}Entry number {i} with some words", "", "\n")),
-    ("markdown 100k entries", "many.md", "# Interview\n\n" + Many(100_000, i => $"**[{T(i)}] ANNA:** Entry number {i} with *some* words", "")),
-};
+    var start = new ProcessStartInfo(Environment.ProcessPath!, ["--case", name]) { RedirectStandardOutput = true };
+    using var child = Process.Start(start)!;
+    string line = child.StandardOutput.ReadToEnd().TrimEnd();
+    child.WaitForExit();
+    Console.WriteLine(line);
+    seconds[name] = double.Parse(line.Split('\t')[2].TrimEnd('s', ' '), CultureInfo.InvariantCulture);
+}
+Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+    $"one turn, 200k cues / 50k cues time ratio: {seconds["webvtt one turn 200k cues"] / seconds["webvtt one turn 50k cues"]:0.00} (linear: 4)"));
+return 0;
 
-foreach (var (name, path, text) in cases)
+static int RunCase(string name)
 {
-    TranscriptFile.Parse(path, text);
+    var (_, path, make, align) = Cases().Single(c => c.Name == name);
+    string text = make();
+    Run(path, text, align);
     double best = double.MaxValue;
     ReadResult last = null!;
     for (int run = 0; run < 3; run++)
     {
         var sw = Stopwatch.StartNew();
-        last = TranscriptFile.Parse(path, text);
+        last = Run(path, text, align);
         best = Math.Min(best, sw.Elapsed.TotalSeconds);
     }
-    Console.WriteLine($"{name,-28} {text.Length / 1e6,6:0.0} M chars  {best,7:0.000} s  {last.Transcript?.Cues.Length ?? 0,7} cues  {last.Diagnostics.Length} diagnostics");
+    Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+        $"{name,-30}\t{text.Length / 1e6,6:0.0} M chars\t{best,7:0.000} s\t{last.Transcript?.Cues.Length ?? 0,7} cues\t{last.Diagnostics.Length} diagnostics\tpeak {Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024):0} MB"));
+    return 0;
 }
+
+static ReadResult Run(string path, string text, bool align)
+{
+    var result = TranscriptFile.Parse(path, text);
+    if (!align || result.Transcript is null) return result;
+    var turns = TurnBuilder.Build(result.Transcript);
+    var aligner = new TimeAligner(result.Transcript);
+    long sum = 0;
+    foreach (var turn in turns)
+        foreach (var part in turn.Cues)
+            sum += aligner.Align(turn, part.CharStart, Math.Min(part.CharEnd, part.CharStart + 6)).End.Milliseconds;
+    GC.KeepAlive(sum);
+    return result;
+}
+
+// Inputs are made only in the child that runs the case, so no case's peak holds another's input.
+static (string Name, string Path, Func<string> Text, bool Align)[] Cases()
+{
+    static string Words() => string.Concat(Enumerable.Repeat("palavra słowo ", 10_000_000 / 14 + 1));
+    return
+    [
+        ("webvtt 10 MB single line", "huge.vtt", () => "WEBVTT\n\n00:01.000 --> 00:02.000\n" + Words(), false),
+        ("srt 10 MB single line", "huge.srt", () => "1\n00:00:01,000 --> 00:00:02,000\n" + Words(), false),
+        ("text 10 MB single line", "huge.txt", () => "[00:00:01] ANNA: " + Words(), false),
+        ("markdown 10 MB single line", "huge.md", () => "# T\n\n**[00:00:01] ANNA:** " + Words(), false),
+        ("unknown 10 MB single line", "huge-prose.txt", () => new string('a', 10_000_000), false),
+        ("webvtt 100 KB of '<'", "lt.vtt", () => "WEBVTT\n\n00:01.000 --> 00:02.000\n" + new string('<', 100_000), false),
+        ("webvtt 100k cues", "many.vtt", () => Many(100_000, i => $"{T(i)} --> {T(i + 1)}\n<v Speaker {i % 3}>Cue number {i} with <i>some</i> &amp; <{new Timecode(i * 2000L + 500)}>words", "WEBVTT\n\n"), false),
+        ("srt 100k cues", "many.srt", () => Many(100_000, i => $"{i + 1}\n{T(i).Replace('.', ',')} --> {T(i + 1).Replace('.', ',')}\n{(i % 4 == 0 ? "ANNA: " : "")}Cue number {i} with some words", ""), false),
+        ("text 100k entries", "many.txt", () => Many(100_000, i => $"[{T(i)}] {(i % 4 == 0 ? "ANNA: " : "")}Entry number {i} with some words", "", "\n"), false),
+        ("markdown 100k entries", "many.md", () => "# Interview\n\n" + Many(100_000, i => $"**[{T(i)}] ANNA:** Entry number {i} with *some* words", ""), false),
+        ("webvtt one turn 50k cues", "turn50k.vtt", () => OneTurn(50_000), true),
+        ("webvtt one turn 200k cues", "turn200k.vtt", () => OneTurn(200_000), true),
+    ];
+}
+
+static string OneTurn(int n) => Many(n, i => $"{T(i)} --> {T(i + 1)}\n<v Anna>Then we went from Warsaw to Paris, number {i}.", "WEBVTT\n\n");
 
 static string T(int i) => new Timecode(i * 2000L).ToString();
 
