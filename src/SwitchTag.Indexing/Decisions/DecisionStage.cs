@@ -19,18 +19,20 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
     /// <summary>Rejected mentions removed, relabelled ones changed; <c>Accepted</c> holds the indices
     /// (into the returned list) of every mention a decision touched.</summary>
     public (ImmutableArray<Mention> Mentions, IReadOnlySet<int> Accepted, ImmutableArray<DecisionOutcome> Applied) ApplyToMentions(
-        ImmutableArray<Mention> mentions)
+        ImmutableArray<Mention> mentions, Func<Mention, TimeRange> timeOf)
     {
         var counts = new int[Mine.Length];
         var kept = ImmutableArray.CreateBuilder<Mention>();
         var accepted = new HashSet<int>();
-        foreach (var m in mentions)
+        var times = mentions.Select(timeOf).ToArray();
+        var picked = Mine.Select(d => d is MentionDecision md ? md.Pick(mentions, times).ToHashSet() : null).ToArray();
+        for (int i = 0; i < mentions.Length; i++)
         {
-            var current = m;
+            var current = mentions[i];
             bool decided = false, rejected = false;
             for (int d = 0; d < Mine.Length; d++)
             {
-                if (Mine[d] is not MentionDecision decision || !decision.Matches(m)) continue;
+                if (Mine[d] is not MentionDecision decision || !picked[d]!.Contains(i)) continue;
                 counts[d]++;
                 decided = true;
                 if (decision.Apply(current) is { } next) current = next; else rejected = true;
