@@ -37,6 +37,7 @@ public sealed class NameTagger : INameTagger
         var authority = RuleMatches(turnText, spans, _authority.Find);
         var gazetteer = RuleMatches(turnText, spans, _gazetteer.Find);
         var rules = NameMatchSelection.Combine(authority, gazetteer);
+        var listed = new DisjointSpans(authority.Select(a => (a.CharStart, a.CharEnd)));
         var mentions = new List<Mention>();
         var models = new List<Mention>();
         if (_mode == TaggingMode.RulesThenModel && _model is not null)
@@ -46,14 +47,15 @@ public sealed class NameTagger : INameTagger
             foreach (var s in tagged)
             {
                 int start = words[s.Start].Start, end = words[s.End - 1].End;
-                if (authority.Any(a => a.CharStart < end && start < a.CharEnd)) continue;
+                if (listed.Overlaps(start, end)) continue;
                 if (!TrainedScripts.Covers(turnText.AsSpan(start, end - start))) continue;
                 models.Add(new Mention(turnIndex, start, end, turnText[start..end], s.Label, LanguageAt(spans, start), s.Confidence, MentionSource.Model));
             }
         }
+        var modelled = new DisjointSpans(models.Select(m => (m.CharStart, m.CharEnd)));
         foreach (var r in rules)
         {
-            if (r.Source == MentionSource.Gazetteer && models.Any(m => m.CharStart < r.CharEnd && r.CharStart < m.CharEnd)) continue;
+            if (r.Source == MentionSource.Gazetteer && modelled.Overlaps(r.CharStart, r.CharEnd)) continue;
             mentions.Add(new Mention(turnIndex, r.CharStart, r.CharEnd, turnText[r.CharStart..r.CharEnd], r.Label,
                 LanguageAt(spans, r.CharStart), 1.0, r.Source));
         }
@@ -70,10 +72,17 @@ public sealed class NameTagger : INameTagger
         return NameMatchSelection.LongestFirst(matches);
     }
 
+    /// <summary>The language of the span holding <paramref name="charStart"/> (spans are in text order
+    /// and disjoint, so a binary search finds it), else of the nearest span.</summary>
     private static string LanguageAt(ImmutableArray<LanguageSpan> spans, int charStart)
     {
-        foreach (var s in spans)
-            if (s.CharStart <= charStart && charStart < s.CharEnd) return s.Language;
+        int lo = 0, hi = spans.Length;
+        while (lo < hi)
+        {
+            int mid = (lo + hi) >>> 1;
+            if (spans[mid].CharEnd <= charStart) lo = mid + 1; else hi = mid;
+        }
+        if (lo < spans.Length && spans[lo].CharStart <= charStart) return spans[lo].Language;
         return spans.IsEmpty ? "und" : spans.MinBy(s => Math.Min(Math.Abs(s.CharStart - charStart), Math.Abs(s.CharEnd - charStart)))!.Language;
     }
 }
