@@ -10,9 +10,18 @@ public static class NameMatchSelection
     /// taken; the result is in text order.</summary>
     public static ImmutableArray<NameMatch> LongestFirst(IEnumerable<NameMatch> candidates)
     {
+        var list = candidates.Where(m => m.CharEnd > m.CharStart && m.CharStart >= 0).ToList();
+        if (list.Count == 0) return [];
+        // One flag per char taken: a match is checked over its own chars only (names are short), so
+        // the cost stays linear in the matches of a turn however many there are.
+        var used = new bool[list.Max(m => m.CharEnd)];
         var taken = new List<NameMatch>();
-        foreach (var m in candidates.OrderByDescending(m => m.Length).ThenBy(m => m.CharStart))
-            if (!taken.Any(t => t.Overlaps(m))) taken.Add(m);
+        foreach (var m in list.OrderByDescending(m => m.Length).ThenBy(m => m.CharStart))
+        {
+            if (used.AsSpan(m.CharStart, m.Length).Contains(true)) continue;
+            used.AsSpan(m.CharStart, m.Length).Fill(true);
+            taken.Add(m);
+        }
         return [.. taken.OrderBy(m => m.CharStart)];
     }
 }

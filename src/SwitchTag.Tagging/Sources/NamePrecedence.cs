@@ -42,15 +42,20 @@ public sealed class NamePrecedence
     /// <summary>The proposals that stand, ordered by start then end.</summary>
     public ImmutableArray<Mention> Resolve(IEnumerable<Mention> proposals)
     {
-        var byRank = proposals.GroupBy(RankOf).OrderBy(g => g.Key);
+        var all = proposals.Where(m => m.CharEnd > m.CharStart && m.CharStart >= 0).ToList();
+        if (all.Count == 0) return [];
+        // One flag per char held by a higher rank: each proposal is checked over its own chars only,
+        // so one long speaker turn with many names stays linear, not quadratic.
+        var held = new bool[all.Max(m => m.CharEnd)];
         var standing = new List<Mention>();
-        foreach (var rank in byRank)
+        foreach (var rank in all.GroupBy(RankOf).OrderBy(g => g.Key))
         {
             // Proposals of one rank are checked against higher ranks only, all of them at once.
-            var higher = standing.Count;
+            var added = new List<Mention>();
             foreach (var m in rank)
-                if (!standing.Take(higher).Any(s => s.CharStart < m.CharEnd && m.CharStart < s.CharEnd))
-                    standing.Add(m);
+                if (!held.AsSpan(m.CharStart, m.CharEnd - m.CharStart).Contains(true)) added.Add(m);
+            foreach (var m in added) held.AsSpan(m.CharStart, m.CharEnd - m.CharStart).Fill(true);
+            standing.AddRange(added);
         }
         return [.. standing.OrderBy(m => m.CharStart).ThenBy(m => m.CharEnd)];
     }

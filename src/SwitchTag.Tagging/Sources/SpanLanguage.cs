@@ -9,8 +9,14 @@ public static class SpanLanguage
 {
     public static string At(ImmutableArray<LanguageSpan> spans, int charStart)
     {
-        foreach (var s in spans)
-            if (s.CharStart <= charStart && charStart < s.CharEnd) return s.Language;
+        // Spans are in text order and disjoint: a binary search finds the one holding charStart.
+        int lo = 0, hi = spans.Length;
+        while (lo < hi)
+        {
+            int mid = (lo + hi) >>> 1;
+            if (spans[mid].CharEnd <= charStart) lo = mid + 1; else hi = mid;
+        }
+        if (lo < spans.Length && spans[lo].CharStart <= charStart) return spans[lo].Language;
         return spans.IsEmpty ? "und" : spans.MinBy(s => Math.Min(Math.Abs(s.CharStart - charStart), Math.Abs(s.CharEnd - charStart)))!.Language;
     }
 }
