@@ -48,10 +48,67 @@ public static class SpeechEvalCommand
         Console.WriteLine();
         Console.WriteLine($"Counts in parentheses: scored words, words in switched utterances, one-word utterances, utterances with a gold switch. Last mode: {last!.GoldOneWord} gold and {last.PredictedOneWord} predicted one-word switches.");
         Console.WriteLine();
+        PrintThirdLanguage(dataRoot, conversations, segmenter);
         PrintConfusions(last);
         PrintWords("One-word switches predicted but not in gold", last.FalseOneWord);
         PrintWords("One-word switches in gold but not predicted", last.MissedOneWord);
         return 0;
+    }
+
+    private static readonly string[] ThirdLanguages = ["de", "fr", "it", "pt", "ca", "gl", "pl", "tr", "cy", "nl"];
+
+    /// <summary>A real third language must still come through: into each conversation go 4
+    /// held-out UD lines (of at least 6 words) of one other language at fixed places; counts how
+    /// many of them come out in that language, and how many Miami words leave en/es.</summary>
+    private static void PrintThirdLanguage(string dataRoot, List<List<SpeechUtterance>> conversations, CodeSwitchSegmenter segmenter)
+    {
+        var corpus = SwitchTag.LanguageId.Training.LidCorpus.Load(dataRoot)
+            .Where(l => l.Split == SwitchTag.LanguageId.Training.Split.Evaluation && l.Text.Split(' ').Length >= 6).ToList();
+        var byLanguage = ThirdLanguages.ToDictionary(c => c, c => corpus.Where(l => l.Code == c).Select(l => l.Text).ToList());
+        var found = ThirdLanguages.ToDictionary(c => c, _ => 0);
+        var inserted = ThirdLanguages.ToDictionary(c => c, _ => 0);
+        int leftPair = 0, words = 0;
+        for (int i = 0; i < conversations.Count; i++)
+        {
+            string code = ThirdLanguages[i % ThirdLanguages.Length];
+            var texts = conversations[i].Select(u => u.Text).ToList();
+            var places = new List<int>();
+            for (int k = 0; k < 4; k++)
+            {
+                int at = (k + 1) * texts.Count / 5 + k;
+                texts.Insert(at, byLanguage[code][(i * 4 + k) % byLanguage[code].Count]);
+                places.Add(at);
+            }
+            var result = segmenter.SegmentInterview(texts);
+            foreach (var at in places)
+            {
+                inserted[code]++;
+                if (result.TurnLanguages[at].Language == code) found[code]++;
+            }
+            for (int t = 0; t < texts.Count; t++)
+            {
+                if (places.Contains(t)) continue;
+                foreach (var span in result.Spans[t])
+                {
+                    int n = texts[t][span.CharStart..span.CharEnd].Split(' ', StringSplitOptions.RemoveEmptyEntries).Length;
+                    words += n;
+                    if (span.Language is not ("en" or "es" or "und")) leftPair += n;
+                }
+            }
+        }
+        Console.WriteLine("### A third language still comes through");
+        Console.WriteLine();
+        Console.WriteLine("Four held-out UD lines (≥ 6 words) of one other language put into each conversation (the language cycles over the conversations); " +
+            "a line counts when its turn language is that language.");
+        Console.WriteLine();
+        Console.WriteLine("| inserted language | lines | found |");
+        Console.WriteLine("|---|---:|---:|");
+        foreach (var c in ThirdLanguages.Where(c => inserted[c] > 0))
+            Console.WriteLine($"| {c} | {inserted[c]} | {found[c]} |");
+        Console.WriteLine($"| **all** | {inserted.Values.Sum()} | {found.Values.Sum()} ({(double)found.Values.Sum() / inserted.Values.Sum():P0}) |");
+        Console.WriteLine();
+        Console.WriteLine($"Miami words put in a language other than en, es or und in the same runs: {leftPair} of {words:N0}.");
+        Console.WriteLine();
     }
 
     private static void PrintConfusions(SpeechScore score)

@@ -12,8 +12,6 @@ public sealed record SpokenLanguage(string Language, double Share);
 /// <see cref="Shares"/> also lists smaller shares (down to 0.001) for reports.</summary>
 public sealed record InterviewLanguages(ImmutableArray<SpokenLanguage> Spoken, ImmutableArray<SpokenLanguage> Shares)
 {
-    public static readonly InterviewLanguages None = new([], []);
-
     public bool Contains(string language) => Spoken.Any(s => s.Language == language);
 }
 

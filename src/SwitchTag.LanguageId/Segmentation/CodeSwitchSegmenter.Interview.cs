@@ -43,6 +43,7 @@ public sealed partial class CodeSwitchSegmenter
         var guesses = ImmutableArray.CreateBuilder<LanguageGuess>(turns.Count);
         var spans = ImmutableArray.CreateBuilder<ImmutableArray<LanguageSpan>>(turns.Count);
         int previousCode = -1;
+        var startPriors = new Dictionary<int, float[]>();
         for (int t = 0; t < turns.Count; t++)
         {
             string text = turns[t] ?? "";
@@ -54,7 +55,8 @@ public sealed partial class CodeSwitchSegmenter
                 guesses.Add(new LanguageGuess(Undetermined, 0));
                 continue;
             }
-            var start = StartPrior(logPrior, previousCode, p);
+            if (!startPriors.TryGetValue(previousCode, out var start))
+                startPriors[previousCode] = start = StartPrior(logPrior, previousCode, p);
             var labels = Decode(ev, new DecoderPriors(start, enter, noBonus));
             // A lone name ("Irena Kowalczyk.") is no switch even into a language of the interview.
             MergeShortIslands(text, ev, labels, p.MinIslandWeight, (code, namesOnly) => namesOnly || !profile.Contains(_codes[code]));

@@ -134,26 +134,28 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
                 _model.AddWord(word, acc);
                 var s = acc.FeatureHits == 0 ? [] : new float[classes];
                 if (s.Length > 0) _model.LogLikelihoods(acc, s);
-                scored = new ScoredWord(s);
+                scored = new ScoredWord(s, s.Length == 0 ? [] : _neutral.NeutralIn(word).ToArray());
                 if (lookup is { } l2) l2[word] = scored;
             }
             if (scored.Scores.Length == 0) continue;
-            var neutralIn = _neutral.NeutralIn(word);
+            var neutralIn = scored.NeutralIn;
             evidence.TokenIndex.Add(t);
             evidence.Scores.Add(scored.Scores);
             evidence.Weights.Add(weight);
-            evidence.Emissions.Add(weight == 1 && neutralIn.IsEmpty
+            evidence.Emissions.Add(weight == 1 && neutralIn.Length == 0
                 ? scored.PlainEmission ??= Emission(scored.Scores, 1, [], parameters)
                 : Emission(scored.Scores, weight, neutralIn, parameters));
         }
         return evidence;
     }
 
-    /// <summary>A word's raw log-likelihoods per class (empty when no feature was known) and, once
-    /// needed, its emission as an ordinary word.</summary>
-    private sealed class ScoredWord(float[] scores)
+    /// <summary>A word's raw log-likelihoods per class (empty when no feature was known), the
+    /// languages it is a filler or loanword in, and, once needed, its emission as an ordinary word.</summary>
+    private sealed class ScoredWord(float[] scores, string[] neutralIn)
     {
         public float[] Scores { get; } = scores;
+
+        public string[] NeutralIn { get; } = neutralIn;
 
         public float[]? PlainEmission { get; set; }
     }
