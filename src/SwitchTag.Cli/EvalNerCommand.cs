@@ -3,8 +3,9 @@ using SwitchTag.Tagging;
 
 namespace SwitchTag.Cli;
 
-/// <summary><c>switchtag eval ner --gold FILE... [--json]</c>: scores the shipped name model on
-/// pre-tokenised gold files (DESIGN.md contract; format rules in <see cref="GoldReader"/>).</summary>
+/// <summary><c>switchtag eval ner --gold FILE... [--json] [--lowercase]</c>: scores the shipped name
+/// model on pre-tokenised gold files (DESIGN.md contract; format rules in <see cref="GoldReader"/>),
+/// pooled and per source and language (<see cref="GoldFileLabel"/>).</summary>
 public static class EvalNerCommand
 {
     public static Command Create()
@@ -15,13 +16,14 @@ public static class EvalNerCommand
             Required = true,
             AllowMultipleArgumentsPerToken = true,
         };
-        var json = new Option<bool>("--json") { Description = "Print {\"micro\", \"PER\", \"LOC\", \"ORG\"} precision/recall/f1 as JSON" };
-        var command = new Command("ner", "Score the name tagger on gold files (exact span match, conlleval rules).") { gold, json };
-        command.SetAction(parse => Run(parse.GetValue(gold) ?? [], parse.GetValue(json), Console.Out, Console.Error));
+        var json = new Option<bool>("--json") { Description = "Print {\"micro\", \"PER\", \"LOC\", \"ORG\"} precision/recall/f1, then bySource and byLanguage, as JSON" };
+        var lowercase = new Option<bool>("--lowercase") { Description = "Score lower-cased copies of the gold sentences" };
+        var command = new Command("ner", "Score the name tagger on gold files (exact span match, conlleval rules).") { gold, json, lowercase };
+        command.SetAction(parse => Run(parse.GetValue(gold) ?? [], parse.GetValue(json), Console.Out, Console.Error, parse.GetValue(lowercase)));
         return command;
     }
 
-    public static int Run(IReadOnlyList<string> goldFiles, bool json, TextWriter output, TextWriter error)
+    public static int Run(IReadOnlyList<string> goldFiles, bool json, TextWriter output, TextWriter error, bool lowercase = false)
     {
         if (goldFiles.Count == 0)
         {
@@ -29,12 +31,13 @@ public static class EvalNerCommand
             return ExitCodes.Usage;
         }
         var problems = new List<string>();
-        var sentences = new List<GoldSentence>();
+        var files = new List<(GoldFileLabel, IReadOnlyList<GoldSentence>)>();
         int rejected = 0;
         foreach (var file in goldFiles)
         {
             if (!File.Exists(file)) { problems.Add($"{file}: no such file"); rejected++; continue; }
-            sentences.AddRange(GoldReader.Read(file, problems));
+            var read = GoldReader.Read(file, problems);
+            files.Add((GoldFileLabel.Of(file), lowercase ? [.. read.Select(NerEvaluation.LowerCased)] : read));
         }
         foreach (var p in problems) error.WriteLine($"switchtag eval ner: {p}");
         NerModel model;
@@ -47,8 +50,8 @@ public static class EvalNerCommand
             error.WriteLine($"switchtag eval ner: cannot load the name model from {ModelLocator.ModelsDirectory}: {e.Message}");
             return ExitCodes.InputsRejected;
         }
-        var scores = NerEvaluation.Evaluate(new SequenceTagger(model), sentences);
-        output.WriteLine(json ? NerEvaluation.ToJson(scores) : NerEvaluation.ToTable(scores));
+        var report = NerEvaluation.Report(new SequenceTagger(model), files);
+        output.WriteLine(json ? NerEvaluation.ToJson(report) : NerEvaluation.ToTable(report));
         return rejected > 0 ? ExitCodes.InputsRejected : ExitCodes.Success;
     }
 }

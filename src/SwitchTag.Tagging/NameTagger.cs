@@ -11,7 +11,7 @@ namespace SwitchTag.Tagging;
 /// a listed place never as a person. In <see cref="TaggingMode.RulesThenModel"/> the model then
 /// tags the rest of the turn; a model mention wins over a gazetteer match it overlaps (it has seen
 /// the context: "Jordan Peterson" is a person, not the country), and gazetteer matches elsewhere are
-/// kept. Model mentions in scripts the model never saw in training are dropped
+/// kept. Model mentions in scripts the model never saw in training (Greek, Arabic...) are dropped
 /// (<see cref="TrainedScripts"/>). Rule matching runs once per language of the turn's spans, a match counting for the
 /// language of the span it starts in.</summary>
 public sealed class NameTagger : INameTagger
