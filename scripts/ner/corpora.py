@@ -2,6 +2,7 @@
 IOB2 over PER/LOC/ORG only (other types become O)."""
 import glob
 import os
+import random
 import re
 
 KEEP = {"PER", "LOC", "ORG"}
@@ -181,31 +182,102 @@ def read_wnut(path):
     return sents
 
 
+def blocks_split(sents, name, shares, block=50):
+    """A fixed split for a set that has none: the sentences are cut into blocks of `block`
+    consecutive sentences (so a document's neighbouring sentences stay together), the block order
+    is shuffled with a seed made from the set's name, and consecutive runs of that order take the
+    given shares. Each part keeps the file order of its blocks."""
+    blocks = [sents[i:i + block] for i in range(0, len(sents), block)]
+    order = list(range(len(blocks)))
+    random.Random(f"{SPLIT_SEED}:{name}").shuffle(order)
+    parts, start, acc = [], 0, 0.0
+    for share in shares:
+        acc += share
+        end = round(acc * len(blocks))
+        parts.append([s for b in sorted(order[start:end]) for s in blocks[b]])
+        start = end
+    return parts
+
+
+SPLIT_SEED = 20261202
+UNER_LANG = {"Chinese-GSD": "zh", "Croatian-SET": "hr", "Danish-DDT": "da", "English-EWT": "en",
+             "Portuguese-Bosque": "pt", "Serbian-SET": "sr", "Slovak-SNK": "sk", "Swedish-Talbanken": "sv"}
+# Sampling weights beside the size-based share (train.py sample_plan): sets whose tags are silver
+# (from Wikipedia links) or whose OCR text leaves names untagged weigh half; English-EWT's train
+# split, the only in-domain English web text and an English target, weighs twice (about one pass
+# per epoch instead of half of one).
+SAMPLING_WEIGHT = {"WikiNER/ru": 0.5, "Europeana-LFT/de": 0.5, "Europeana-ONB/de": 0.5, "Europeana-KB/nl": 0.5,
+                   "English-EWT/en": 2.0}
+# EHRI-NER languages too small for a held-out part with any weight (under 200 names in all): trained on whole.
+EHRI_TRAIN_ONLY = {"fr", "nl", "sk"}
+SPLITS = {  # shares of train / dev / test of the sets split here (block_split, seed SPLIT_SEED)
+    "GermEval2014/de": (0.45, 0.15, 0.40),   # of the GermEval test file; its dev file is all train
+    "FactRuEval2016/ru": (0.8, 0.2),         # of the dev file; the test file is test
+    "KPWr/pl": (0.5, 0.15, 0.35),            # of the only (test) file
+    "MultiLeg": (0.9, 0.1),                  # of each train file; the test files are test
+    "EHRI-NER": (0.7, 0.1, 0.2),             # of each language's file
+}
+
+
 def load_all(data_root):
-    """Returns {split: {dataset: sentences}} with split in train/dev/test. English-EWT has no
-    train file: its dev file is trained on (documented in models/ner.md) and it is selected on
-    the other datasets' dev files."""
+    """Returns {split: {"source/lang": sentences}} with split in train/dev/test; sets without a
+    split of their own are split by blocks_split as SPLITS says (documented in models/ner.md)."""
     out = {"train": {}, "dev": {}, "test": {}}
+    extra = os.path.join(data_root, "ner-extra")
+
+    def tsv(*parts):
+        return read_columns(os.path.join(extra, *parts), "\t")
+
+    def put(name, *parts):
+        for split, sents in zip(("train", "dev", "test"), parts):
+            if sents: out[split][name] = sents
+
     for tb in sorted(glob.glob(os.path.join(data_root, "ner/uner/*/"))):
         name = os.path.basename(tb.rstrip("/"))
         for f in glob.glob(os.path.join(tb, "*.iob2")):
             split = "train" if "-train" in f else "dev" if "-dev" in f else "test"
-            if name == "English-EWT" and split == "dev":
-                split = "train"
-            out[split][name] = read_uner(f)
+            out[split][f"{name}/{UNER_LANG[name]}"] = read_uner(f)
     for split, folder in (("train", "train"), ("dev", "devel"), ("test", "test")):
         sents = []
         for f in sorted(glob.glob(os.path.join(data_root, "ner/nerkor/data", folder, "*/*.conllup"))):
             sents += read_conllup(f)
-        out[split]["NerKor"] = sents
+        out[split]["NerKor/hu"] = sents
     stats = {"mentions": 0, "kept": 0}
     gum = []
-    for f in sorted(glob.glob(os.path.join(data_root, "ner-extra/gum/*.conllu"))):
+    for f in sorted(glob.glob(os.path.join(extra, "gum/*.conllu"))):
         gum += read_gum(f, stats)
-    out["train"]["GUM"] = gum
-    out["train"]["WikiGold"] = read_columns(os.path.join(data_root, "ner-extra/wikigold/wikigold.conll.txt"))
-    out["train"]["BTC"] = read_columns(os.path.join(data_root, "ner-extra/btc/btc.train"), "\t")
+    out["train"]["GUM/en"] = gum
+    out["train"]["WikiGold/en"] = read_columns(os.path.join(extra, "wikigold/wikigold.conll.txt"))
+    out["train"]["BTC/en"] = read_columns(os.path.join(extra, "btc/btc.train"), "\t")
     # WNUT-17 train and dev are trained on (English web text, like EWT); its test file is never read.
-    out["train"]["WNUT17"] = [s for f in ("wnut17train.conll", "emerging.dev.conll")
-                              for s in read_wnut(os.path.join(data_root, "ner-extra/wnut17", f))]
+    out["train"]["WNUT17/en"] = [s for f in ("wnut17train.conll", "emerging.dev.conll")
+                                 for s in read_wnut(os.path.join(extra, "wnut17", f))]
+    for code in ("nob", "nno"):
+        put("NorNE/" + {"nob": "nb", "nno": "nn"}[code],
+            *(tsv("norne", code, f"{code}-{s}.tsv") for s in ("train", "dev", "test")))
+    g_train, g_dev, g_test = blocks_split(tsv("germeval2014", "germeval2014-test.tsv"), "GermEval2014/de", SPLITS["GermEval2014/de"])
+    put("GermEval2014/de", tsv("germeval2014", "germeval2014-dev.tsv") + g_train, g_dev, g_test)
+    put("Europeana-LFT/de", tsv("europeana-newspapers", "enp_DE.lft.tsv"))
+    put("Europeana-ONB/de", tsv("europeana-newspapers", "enp_DE.onb.tsv"))
+    put("Europeana-KB/nl", tsv("europeana-newspapers", "enp_NL.kb.tsv"))
+    put("WikiNER/ru", tsv("wikiner-ru", "wikiner-ru-train.tsv"))
+    f_train, f_dev = blocks_split(tsv("factrueval2016", "factrueval-dev.tsv"), "FactRuEval2016/ru", SPLITS["FactRuEval2016/ru"])
+    put("FactRuEval2016/ru", f_train, f_dev, tsv("factrueval2016", "factrueval-test.tsv"))
+    put("KPWr/pl", *blocks_split(tsv("kpwr", "kpwr-ner-n82-test.tsv"), "KPWr/pl", SPLITS["KPWr/pl"]))
+    for lang in ("pl", "lv", "lt", "et"):
+        name = "MultiLeg/" + lang
+        m_train, m_dev = blocks_split(tsv("multileg", f"multileg-{lang}-train.tsv"), name, SPLITS["MultiLeg"])
+        put(name, m_train, m_dev, tsv("multileg", f"multileg-{lang}-test.tsv"))
+    for lang in ("cs", "de", "en", "fr", "hu", "nl", "pl", "sk", "yi"):
+        name = "EHRI-NER/" + lang
+        sents = tsv("ehri-ner", f"ehri_{lang}.tsv")
+        put(name, *([sents] if lang in EHRI_TRAIN_ONLY else blocks_split(sents, name, SPLITS["EHRI-NER"])))
     return out, stats
+
+
+def write_split(sents, path):
+    """Writes sentences as token<TAB>tag lines (the format `switchtag eval ner` reads)."""
+    os.makedirs(os.path.dirname(path), exist_ok=True)
+    with open(path, "w", encoding="utf-8") as f:
+        for words, tags in sents:
+            f.write("".join(f"{w}\t{t}\n" for w, t in zip(words, tags)) + "\n")

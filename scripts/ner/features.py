@@ -12,7 +12,7 @@ first 3 and the last one. lower() maps each BMP code point through its single-co
 (code points whose lowercase is longer, and non-BMP code points, stay as they are)."""
 import unicodedata
 
-HASH_ROWS = 1 << 16
+HASH_ROWS = 1 << 17
 FEATURE_SLOTS = 20
 PIECE_SLOTS = 4
 GROUPS = {"char": list(range(2, 8)) + list(range(10, 20)), "shape": [1, 8, 9]}

@@ -11,8 +11,10 @@ LABELS = ["O", "B-PER", "I-PER", "B-LOC", "I-LOC", "B-ORG", "I-ORG"]
 class Tagger(nn.Module):
     def __init__(self, hash_rows, piece_rows, dim=96, dilations=(1, 2, 4, 1), dropout=0.25):
         super().__init__()
-        self.hash = nn.Embedding(hash_rows, dim, padding_idx=0)
-        self.piece = nn.Embedding(piece_rows, dim, padding_idx=0)
+        # Sparse gradients: an optimizer step touches only the table rows of the batch's words
+        # (train.py pairs them with SparseAdam), which keeps large tables cheap to train.
+        self.hash = nn.Embedding(hash_rows, dim, padding_idx=0, sparse=True)
+        self.piece = nn.Embedding(piece_rows, dim, padding_idx=0, sparse=True)
         nn.init.normal_(self.hash.weight, std=0.1); nn.init.normal_(self.piece.weight, std=0.1)
         with torch.no_grad():
             self.hash.weight[0].zero_(); self.piece.weight[0].zero_()
@@ -24,8 +26,9 @@ class Tagger(nn.Module):
         self.half_tables = False
 
     def embed(self, table, ids):
-        w = table.weight.half() if self.half_tables else table.weight
-        return F.embedding(ids, w).float().sum(2)
+        if self.half_tables:
+            return F.embedding(ids, table.weight.half()).float().sum(2)
+        return F.embedding(ids, table.weight, sparse=table.sparse).sum(2)
 
     def forward(self, features, pieces):
         mask = (features[:, :, 0] > 0).unsqueeze(-1).float()

@@ -146,20 +146,44 @@ def predict(model, featurizer, sents, bs=64):
 
 def augment(rng, words):
     r = rng.random()
-    if r < 0.08: return [fx.lower(w) for w in words]
-    if r < 0.14: return [w.upper() for w in words]
+    if r < 0.12: return [fx.lower(w) for w in words]
+    if r < 0.17: return [w.upper() for w in words]
     return words
 
 
-def train_sp(data, path_prefix):
+def sample_plan(train, alpha, budget, max_repeat):
+    """Tokens each training set contributes per epoch: temperature sampling over sets,
+    share_s ~ weight_s * tokens_s ** alpha (alpha < 1 lifts small sets and holds large ones back),
+    scaled to `budget` tokens, never more than max_repeat passes over a set; silver or noisy sets
+    (corpora.SAMPLING_WEIGHT) weigh half, English-EWT's train split twice (see there). Returns {name: sentences per epoch}."""
+    tokens = {n: sum(len(w) for w, _ in s) for n, s in train.items()}
+    weight = {n: corpora.SAMPLING_WEIGHT.get(n, 1.0) * tokens[n] ** alpha for n in train}
+    total = sum(weight.values())
+    plan = {}
+    for n, ss in train.items():
+        want = min(budget * weight[n] / total, max_repeat * tokens[n])
+        plan[n] = max(1, round(len(ss) * want / tokens[n]))
+    return plan
+
+
+def draw(rng, sents, k):
+    """k sentences: whole passes over the set, then a seeded sample without replacement."""
+    return sents * (k // len(sents)) + rng.sample(sents, k % len(sents))
+
+
+def train_sp(data, path_prefix, per_set):
+    """Pieces from the lower-cased training text, at most per_set sentences of each set (a seeded
+    sample), so that no large set decides the vocabulary of the others' scripts and languages."""
     lines = []
     for name, sents in sorted(data["train"].items()):
+        if len(sents) > per_set:
+            sents = random.Random(f"{SEED}:{name}").sample(sents, per_set)
         lines += [" ".join(fx.lower(w) for w in ws) for ws, _ in sents]
     tmp = path_prefix + ".sp-input.txt"
     with open(tmp, "w", encoding="utf-8") as f:
         f.write("\n".join(lines))
     spm.SentencePieceTrainer.train(
-        input=tmp, model_prefix=path_prefix, model_type="unigram", vocab_size=12000,
+        input=tmp, model_prefix=path_prefix, model_type="unigram", vocab_size=16000,
         character_coverage=0.9995, normalization_rule_name="identity", num_threads=1,
         shuffle_input_sentence=False, input_sentence_size=0, split_digits=True, seed_sentencepiece_size=200000,
         bos_id=-1, eos_id=-1, unk_id=0, pad_id=-1, minloglevel=2)
@@ -190,31 +214,35 @@ def run(args, data, sp, drop_groups, dim, dilations, epochs, log):
     nrng = np.random.default_rng(SEED)
     feat = Featurizer(sp, drop_groups)
     model = Tagger(fx.HASH_ROWS, sp.get_piece_size() + 1, dim, dilations)
-    opt = torch.optim.Adam(model.parameters(), lr=2e-3)
-    nerkor = data["train"]["NerKor"]
-    repeat = dict((n, int(k)) for n, k in (r.split("=") for r in args.repeat.split(",") if r))
-    others = [s for n, ss in sorted(data["train"].items()) if n != "NerKor" for s in ss * repeat.get(n, 1)]
-    if args.ablations:
-        others = random.Random(SEED).sample(others, int(len(others) * args.ablation_share))
+    tables = [model.hash.weight, model.piece.weight]
+    opts = [torch.optim.SparseAdam(tables, lr=2e-3),
+            torch.optim.Adam([p for p in model.parameters() if all(p is not t for t in tables)], lr=2e-3)]
+    train = data["train"]
+    budget = args.budget * (args.ablation_share if args.ablations else 1.0)
+    plan = sample_plan(train, args.alpha, budget, args.max_repeat)
     dev = data["dev"]
-    dropout_table = drop_table(others + nerkor, args.word_dropout, args.dropout_count)
-    total_steps = epochs * ((len(others) + int(len(nerkor) * args.nerkor_share)) // 32 + 1)
-    sched = torch.optim.lr_scheduler.OneCycleLR(opt, max_lr=2e-3, total_steps=total_steps + 10, pct_start=0.1)
+    dropout_table = drop_table([s for ss in train.values() for s in ss], args.word_dropout, args.dropout_count)
+    total_steps = epochs * (sum(plan.values()) // 32 + len(plan) + 1)
+    scheds = [torch.optim.lr_scheduler.OneCycleLR(o, max_lr=2e-3, total_steps=total_steps + 10, pct_start=0.1) for o in opts]
     best, best_state, t0 = -1.0, None, time.time()
     for ep in range(epochs):
         model.train()
-        sample = others + rng.sample(nerkor, int(len(nerkor) * args.nerkor_share))
+        sample = [s for n in sorted(train) for s in draw(rng, train[n], plan[n])]
         sample = [(augment(rng, w), t) for w, t in sample]
         sample.sort(key=lambda s: len(s[0]))
         batches = [sample[i:i + 32] for i in range(0, len(sample), 32)]
         rng.shuffle(batches)
         loss_sum = 0.0
-        for b in batches:
+        for bi, b in enumerate(batches):
             f, p, y = batch_tensors(feat, b)
             logits = model(drop_words(nrng, f, dropout_table), p)
             loss = torch.nn.functional.cross_entropy(logits.reshape(-1, len(LABELS)), y.reshape(-1), ignore_index=-100)
-            opt.zero_grad(); loss.backward(); opt.step(); sched.step()
+            for o in opts: o.zero_grad()
+            loss.backward()
+            for o, sc in zip(opts, scheds): o.step(); sc.step()
             loss_sum += loss.item()
+            if (bi + 1) % 1000 == 0:
+                log(f"  epoch {ep + 1} batch {bi + 1}/{len(batches)} loss {loss_sum / (bi + 1):.4f} [{time.time() - t0:.0f}s]")
         scores = {n: prf(zip([t for _, t in s], predict(model, feat, s))) for n, s in sorted(dev.items())}
         mean = sum(scores.values()) / len(scores)
         log(f"epoch {ep + 1} loss {loss_sum / len(batches):.4f} dev mean F1 {mean:.4f} "
@@ -236,6 +264,9 @@ def export(model, feat, sp, out_dir, log):
         "JA SAM ROĐEN U SARAJEVU , A MOJA MAJKA U MOSTARU".split(),
         "Budapestről jöttünk , Nagy Imre idején".split(),
         "我 的 祖母 住 在 北京".split(),
+        "Wir sind 1942 von Wien nach Theresienstadt gekommen , sagte Frau Löwy .".split(),
+        "Мы жили в Москве у Ивана Петровича до войны".split(),
+        "מיר זײַנען געקומען קיין ווילנע מיט משה ראָזענבערג".split(),
         "émigré O'Connor's co-op ... Москва !".split(),
         ["x"],
     ]
@@ -262,16 +293,19 @@ def main():
     ap.add_argument("--data", default="../shared/data")
     ap.add_argument("--out", default="models")
     ap.add_argument("--epochs", type=int, default=5)
-    ap.add_argument("--nerkor-share", type=float, default=0.2)
+    ap.add_argument("--budget", type=float, default=1.9e6, help="training tokens per epoch (sample_plan)")
+    ap.add_argument("--alpha", type=float, default=0.5, help="sampling temperature exponent over training sets")
+    ap.add_argument("--max-repeat", type=float, default=3.0, help="most passes over one set per epoch")
+    ap.add_argument("--sp-per-set", type=int, default=15000, help="sentences per set for the piece vocabulary")
+    ap.add_argument("--splits-out", default="/tmp/switchtag-ner-test",
+                    help="held-out test parts are written here as SOURCE/LANG-test.tsv for `switchtag eval ner`")
     ap.add_argument("--word-dropout", type=float, default=0.25)
     ap.add_argument("--dropout-count", type=int, default=50, help="words seen more often are dropped less")
     ap.add_argument("--dilations", default="1,2,4,8,1", help="receptive field = sum, at most the C# window overlap (16)")
     ap.add_argument("--threads", type=int, default=1)
-    ap.add_argument("--repeat", default="English-EWT=3",
-                    help="training sets seen several times per epoch: English's only in-domain data is small")
     ap.add_argument("--ablations", action="store_true")
     ap.add_argument("--ablation-epochs", type=int, default=2)
-    ap.add_argument("--ablation-share", type=float, default=0.4, help="share of the non-NerKor training sentences")
+    ap.add_argument("--ablation-share", type=float, default=0.4, help="share of the per-epoch token budget")
     args = ap.parse_args()
     torch.set_num_threads(args.threads)
     logf = open(os.path.join(args.out, "ner.ablations.log" if args.ablations else "ner.train.log"), "w", encoding="utf-8")
@@ -283,10 +317,19 @@ def main():
     log(f"GUM person/place/organization mentions {gum_stats['mentions']}, kept as names {gum_stats['kept']}")
     for split in data:
         for n, s in sorted(data[split].items()):
-            log(f"{split} {n}: {len(s)} sentences, {sum(len(w) for w, _ in s)} tokens")
+            names = sum(t.startswith("B-") for _, ts in s for t in ts)
+            log(f"{split} {n}: {len(s)} sentences, {sum(len(w) for w, _ in s)} tokens, {names} names")
+    for n, s in sorted(data["test"].items()):
+        corpora.write_split(s, os.path.join(args.splits_out, n + "-test.tsv"))
+    log(f"test parts written to {args.splits_out}/SOURCE/LANG-test.tsv")
+    plan = sample_plan(data["train"], args.alpha, args.budget, args.max_repeat)
+    for n, k in sorted(plan.items()):
+        ss = data["train"][n]
+        log(f"sampling {n}: {k} of {len(ss)} sentences per epoch ({k / len(ss):.2f} passes, "
+            f"~{round(k * sum(len(w) for w, _ in ss) / len(ss))} tokens)")
     sp_prefix = os.path.join(args.out, "ner")
     if not (args.ablations and os.path.exists(sp_prefix + ".spm")):  # ablations reuse the shipped pieces
-        train_sp(data, sp_prefix)
+        train_sp(data, sp_prefix, args.sp_per_set)
         os.replace(sp_prefix + ".model", sp_prefix + ".spm")
         os.remove(sp_prefix + ".vocab")
         add_control_pieces(sp_prefix + ".spm")
@@ -308,7 +351,8 @@ def main():
         return
     dilations = tuple(int(d) for d in args.dilations.split(","))
     assert sum(dilations) <= 16, "receptive field beyond the C# window overlap"
-    log(f"dilations {dilations}, word dropout {args.word_dropout} (count > {args.dropout_count} scaled down), {args.epochs} epochs, repeats {args.repeat}")
+    log(f"dilations {dilations}, word dropout {args.word_dropout} (count > {args.dropout_count} scaled down), {args.epochs} epochs, "
+        f"budget {args.budget:.0f} tokens/epoch, alpha {args.alpha}, max repeat {args.max_repeat}, hash rows {fx.HASH_ROWS}")
     model, feat, best, secs = run(args, data, sp, (), 96, dilations, args.epochs, log)
     log(f"best dev mean F1 {best:.4f}, training {secs:.0f}s")
     export(model, feat, sp, args.out, log)

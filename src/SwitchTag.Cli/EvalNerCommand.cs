@@ -3,8 +3,8 @@ using SwitchTag.Pipeline;
 
 namespace SwitchTag.Cli;
 
-/// <summary><c>switchtag eval ner --gold FILE... [--json]</c>: scores the shipped name model on
-/// pre-tokenised gold files (<see cref="NameModelEvaluation"/>).</summary>
+/// <summary><c>switchtag eval ner --gold FILE... [--json] [--lowercase]</c>: scores the shipped name
+/// model on pre-tokenised gold files, pooled and per source and language (<see cref="NameModelEvaluation"/>).</summary>
 public static class EvalNerCommand
 {
     public static Command Create()
@@ -16,9 +16,10 @@ public static class EvalNerCommand
             AllowMultipleArgumentsPerToken = true,
             HelpName = "FILE",
         };
-        var json = new Option<bool>("--json") { Description = "Print {\"micro\", \"PER\", \"LOC\", \"ORG\"} precision/recall/f1 as JSON" };
-        var command = new Command("ner", "Score the name tagger on gold files (exact span match, conlleval rules).") { gold, json };
-        command.SetAction(parse => NameModelEvaluation.Run(parse.GetValue(gold) ?? [], parse.GetValue(json), Console.Out, Console.Error) switch
+        var json = new Option<bool>("--json") { Description = "Print {\"micro\", \"PER\", \"LOC\", \"ORG\"} precision/recall/f1, then bySource and byLanguage, as JSON" };
+        var lowercase = new Option<bool>("--lowercase") { Description = "Score lower-cased copies of the gold sentences" };
+        var command = new Command("ner", "Score the name tagger on gold files (exact span match, conlleval rules).") { gold, json, lowercase };
+        command.SetAction(parse => NameModelEvaluation.Run(parse.GetValue(gold) ?? [], parse.GetValue(json), Console.Out, Console.Error, lowercase: parse.GetValue(lowercase)) switch
         {
             NameEvaluationResult.Scored => ExitCodes.Success,
             NameEvaluationResult.NoInput => ExitCodes.Usage,

@@ -6,10 +6,12 @@ namespace SwitchTag.Pipeline;
 public enum NameEvaluationResult { Scored, SomeInputsRejected, NoInput, ModelNotLoaded }
 
 /// <summary>The <c>switchtag eval ner</c> contract (DESIGN.md): the shipped name model scored on
-/// pre-tokenised gold files (format rules in <see cref="GoldReader"/>), printed as a table or JSON.</summary>
+/// pre-tokenised gold files (format rules in <see cref="GoldReader"/>), pooled and per source and
+/// language (<see cref="GoldFileLabel"/>), printed as a table or JSON; <c>lowercase</c> scores
+/// lower-cased copies.</summary>
 public static class NameModelEvaluation
 {
-    public static NameEvaluationResult Run(IReadOnlyList<string> goldFiles, bool json, TextWriter output, TextWriter error, ModelLocation? models = null)
+    public static NameEvaluationResult Run(IReadOnlyList<string> goldFiles, bool json, TextWriter output, TextWriter error, ModelLocation? models = null, bool lowercase = false)
     {
         if (goldFiles.Count == 0)
         {
@@ -17,12 +19,13 @@ public static class NameModelEvaluation
             return NameEvaluationResult.NoInput;
         }
         var problems = new List<string>();
-        var sentences = new List<GoldSentence>();
+        var files = new List<(GoldFileLabel, IReadOnlyList<GoldSentence>)>();
         int rejected = 0;
         foreach (var file in goldFiles)
         {
             if (!File.Exists(file)) { problems.Add($"{file}: no such file"); rejected++; continue; }
-            sentences.AddRange(GoldReader.Read(file, problems));
+            var read = GoldReader.Read(file, problems);
+            files.Add((GoldFileLabel.Of(file), lowercase ? [.. read.Select(NerEvaluation.LowerCased)] : read));
         }
         foreach (var p in problems) error.WriteLine($"switchtag eval ner: {p}");
         var model = ShippedModels.LoadNameModel(models ?? ModelLocation.Default, out var loadError);
@@ -31,8 +34,8 @@ public static class NameModelEvaluation
             error.WriteLine($"switchtag eval ner: {loadError}");
             return NameEvaluationResult.ModelNotLoaded;
         }
-        var scores = NerEvaluation.Evaluate(new SequenceTagger(model), sentences);
-        output.WriteLine(json ? NerEvaluation.ToJson(scores) : NerEvaluation.ToTable(scores));
+        var report = NerEvaluation.Report(new SequenceTagger(model), files);
+        output.WriteLine(json ? NerEvaluation.ToJson(report) : NerEvaluation.ToTable(report));
         return rejected > 0 ? NameEvaluationResult.SomeInputsRejected : NameEvaluationResult.Scored;
     }
 }

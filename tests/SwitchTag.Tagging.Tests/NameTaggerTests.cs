@@ -67,4 +67,15 @@ public class NameTaggerTests
             Assert.Equal(m.CharStart < 36 ? "en" : "cs", m.Language);
         }
     }
+
+    [Theory]
+    // Cyrillic and Hebrew script are trained scripts now (TrainedScripts; models/ner.md: WikiNER and
+    // FactRuEval Russian, EHRI-NER Yiddish), so the model's mentions there are kept. Invented sentences.
+    [InlineData("Мы жили в Москве у Ивана Петровича до войны.", "ru", "Москве")]
+    [InlineData("מיר זײַנען געקומען קיין ווילנע מיט משה ראָזענבערג.", "yi", "ווילנע")]
+    public void ModelMentionsInCyrillicAndHebrewAreKept(string text, string language, string name)
+    {
+        var mentions = new NameTagger(Models.Ner).Tag(0, text, [new LanguageSpan(0, text.Length, language, 1.0)]);
+        Assert.Contains(mentions, m => m.Source == MentionSource.Model && m.Text.Contains(name));
+    }
 }
