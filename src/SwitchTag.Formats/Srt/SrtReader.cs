@@ -72,7 +72,7 @@ public sealed class SrtReader : ITranscriptReader
                 label = plain[ls..le];
                 plain = plain[ts..];
             }
-            cues.Add(new Cue(range, SpeakerLabels.Normalise(label), label, plain, [], [],
+            cues.Add(new Cue(range, SpeakerLabels.Normalise(label), label, plain, [],
                 src.At(src[blockStart].Number), src[blockStart].Start, src[i - 1].End,
                 Identifier: timing > blockStart ? src.Str(src[blockStart]).Trim() : null, Settings: settings));
         }
