@@ -8,7 +8,7 @@ namespace SwitchTag.Output;
 
 /// <summary>What the collection pages keep of one interview: its headings, and for the review page its
 /// mentions with their sentences and the decisions already applied to it (small beside the index).</summary>
-public sealed record CollectionEntry(string Interview, string Folder, string MainLanguage, Timecode Duration, ImmutableArray<CollectionHeading> Headings,
+public sealed record CollectionEntry(string Interview, string Folder, string MainLanguage, Duration Duration, ImmutableArray<CollectionHeading> Headings,
     ImmutableArray<CollectionMention> Mentions = default, ImmutableArray<Decision> Decisions = default)
 {
     public static CollectionEntry From(InterviewIndex index, string folder)

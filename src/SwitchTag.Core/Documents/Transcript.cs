@@ -35,27 +35,21 @@ public sealed record SourceInfo(string Path, TranscriptFormat Format, string Sha
 /// <paramref name="CharOffset"/> points into the cue's plain <see cref="Cue.Text"/>.</summary>
 public sealed record WordTime(int CharOffset, Timecode Time);
 
-/// <summary>A stretch the file itself marks as a language (WebVTT <c>&lt;lang xx&gt;</c>), offsets into <see cref="Cue.Text"/>.</summary>
-public sealed record LanguageHint(int CharStart, int CharEnd, string Language);
-
 /// <summary>One timed unit of the transcript.</summary>
 /// <param name="Speaker">Normalised speaker label (case, spacing and trailing colon folded), or null.</param>
 /// <param name="SpeakerLabel">The label exactly as written in the file, or null.</param>
 /// <param name="Text">Plain text: markup removed, character references decoded, lines joined by '\n'.</param>
 /// <param name="RawStart">Char offset of the cue's first line in <see cref="Transcript.OriginalText"/>.</param>
 /// <param name="RawEnd">Char offset just past the cue's last line in <see cref="Transcript.OriginalText"/>.</param>
-/// <param name="Section">The heading the cue sits under (Markdown), or null.</param>
 public sealed record Cue(
     TimeRange Time,
     string? Speaker,
     string? SpeakerLabel,
     string Text,
     ImmutableArray<WordTime> WordTimes,
-    ImmutableArray<LanguageHint> LanguageHints,
     SourceLine At,
     int RawStart,
     int RawEnd,
-    string? Section = null,
     string? Identifier = null,
     string? Settings = null);
 

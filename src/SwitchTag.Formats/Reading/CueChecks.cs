@@ -54,11 +54,6 @@ internal static class CueChecks
         {
             Text = text,
             WordTimes = cue.WordTimes.IsDefault ? cue.WordTimes : [.. cue.WordTimes.Select(w => w with { CharOffset = map[Math.Clamp(w.CharOffset, 0, map.Length - 1)] })],
-            LanguageHints = cue.LanguageHints.IsDefault ? cue.LanguageHints : [.. cue.LanguageHints.Select(h => h with
-            {
-                CharStart = map[Math.Clamp(h.CharStart, 0, map.Length - 1)],
-                CharEnd = map[Math.Clamp(h.CharEnd, 0, map.Length - 1)],
-            })],
         };
     }
 }

@@ -67,7 +67,7 @@ public sealed class SrtReader : ITranscriptReader
                 if (k > timing + 1) text.Append('\n');
                 text.Append(Markup.StripSrtTags(src.Span(src[k])));
             }
-            cues.Add(new Cue(range, null, null, text.ToString(), [], [],
+            cues.Add(new Cue(range, null, null, text.ToString(), [],
                 src.At(src[blockStart].Number), src[blockStart].Start, src[i - 1].End,
                 Identifier: timing > blockStart ? src.Str(src[blockStart]).Trim() : null, Settings: settings));
         }

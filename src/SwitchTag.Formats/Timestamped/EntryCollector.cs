@@ -20,12 +20,11 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
 
     private sealed record EntryLine(int Line, string Text);
 
-    private sealed class Entry(Timecode start, Timecode? end, int line, string? section, Entry? resumes)
+    private sealed class Entry(Timecode start, Timecode? end, int line, Entry? resumes)
     {
         public Timecode Start { get; } = start;
         public Timecode? End { get; } = end;
         public int Line { get; } = line;
-        public string? Section { get; } = section;
         public Entry? Resumes { get; } = resumes;
         public List<EntryLine> Lines { get; } = [];
         /// <summary>The speaker in force at the entry's end, once built.</summary>
@@ -67,7 +66,7 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
                 return;
             }
             var resumes = stamp.Resumes ? entries.TakeLast(ResumeWindow).LastOrDefault(e => e.Start == stamp.Start && e.Lines.Count > 0) : null;
-            open = new Entry(stamp.Start, stamp.End, line, section, resumes);
+            open = new Entry(stamp.Start, stamp.End, line, resumes);
             entries.Add(open);
             if (!rest.IsEmpty) open.Lines.Add(new EntryLine(line, rest.ToString()));
             return;
@@ -133,8 +132,8 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
                 text.Append(l.Text);
             }
             int firstLine = p == 0 ? entry.Line : lines[0].Line;
-            cues.Add(new Cue(time, SpeakerLabels.Normalise(partLabel), partLabel, text.ToString(), [], [],
-                src.At(firstLine), src[firstLine - 1].Start, src[lines[^1].Line - 1].End, Section: entry.Section));
+            cues.Add(new Cue(time, SpeakerLabels.Normalise(partLabel), partLabel, text.ToString(), [],
+                src.At(firstLine), src[firstLine - 1].Start, src[lines[^1].Line - 1].End));
         }
         return label;
     }

@@ -84,7 +84,7 @@ public sealed class WebVttReader : ITranscriptReader
         var text = CueTextParser.Parse(raw, range, firstText, diagnostics);
         string? identifier = timing > blockStart ? src.Str(src[blockStart]) : null;
         int rawEnd = src[blockEnd - 1].End;
-        cues.Add(new Cue(range, text.Voice, text.Voice, text.Plain, text.WordTimes, text.LanguageHints,
+        cues.Add(new Cue(range, text.Voice, text.Voice, text.Plain, text.WordTimes,
             src.At(src[blockStart].Number), src[blockStart].Start, rawEnd, Identifier: identifier, Settings: settings));
     }
 
@@ -156,9 +156,6 @@ public sealed class WebVttReader : ITranscriptReader
                 SpeakerLabel = label,
                 Text = text,
                 WordTimes = [.. cue.WordTimes.Select(w => w with { CharOffset = Math.Max(0, w.CharOffset - shift) })],
-                LanguageHints = [.. cue.LanguageHints
-                    .Select(h => h with { CharStart = Math.Max(0, h.CharStart - shift), CharEnd = Math.Max(0, h.CharEnd - shift) })
-                    .Where(h => h.CharEnd > h.CharStart)],
             };
         }
     }

@@ -23,14 +23,14 @@ public static class MainLanguageChooser
     {
         isInterviewer ??= InterviewerLabels.IsInterviewer;
         bool timed = Enumerable.Range(0, turns.Count).Where(t => spans[t].Any(s => s.Language != Undetermined))
-            .All(t => turns[t].Time.DurationMilliseconds > 0);
+            .All(t => turns[t].Time.Duration.Milliseconds > 0);
         var talk = new Dictionary<string, Dictionary<string, double>>(StringComparer.Ordinal);
         for (int t = 0; t < turns.Count; t++)
         {
             var turn = turns[t];
             int chars = spans[t].Sum(s => s.CharEnd - s.CharStart);
             if (chars == 0 || spans[t].All(s => s.Language == Undetermined)) continue;
-            double amount = timed ? turn.Time.DurationMilliseconds / 1000.0 : chars;
+            double amount = timed ? turn.Time.Duration.TotalSeconds : chars;
             string speaker = turn.SpeakerLabel ?? turn.Speaker ?? "";
             if (!talk.TryGetValue(speaker, out var bySpeaker)) talk[speaker] = bySpeaker = new(StringComparer.Ordinal);
             foreach (var s in spans[t])

@@ -209,4 +209,6 @@ public sealed class IndexJsonWriter : IInterviewWriter
     }
 
     public static void Seconds(Utf8JsonWriter w, string name, Timecode t) => w.WriteNumber(name, t.Milliseconds / 1000m);
+
+    public static void Seconds(Utf8JsonWriter w, string name, Duration d) => w.WriteNumber(name, d.Milliseconds / 1000m);
 }
