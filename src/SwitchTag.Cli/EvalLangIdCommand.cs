@@ -9,7 +9,7 @@ public static class EvalLangIdCommand
 {
     public static Command Create()
     {
-        var dir = new Option<DirectoryInfo>("--dir") { Description = "Folder of <code>.txt files, one text per line.", Required = true };
+        var dir = new Option<DirectoryInfo>("--dir") { Description = "Folder of <code>.txt files, one text per line.", Required = true, HelpName = "DIR" };
         var json = new Option<bool>("--json") { Description = "Print {\"mean\", \"languages\": {code: {accuracy, n}}, \"skipped\"}." };
         var command = new Command("langid", "Score language identification on DIR/<code>.txt files.") { dir, json };
         command.SetAction(parseResult =>

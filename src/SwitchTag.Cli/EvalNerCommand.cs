@@ -14,6 +14,7 @@ public static class EvalNerCommand
             Description = "Gold files: IOB2 (Universal NER), CoNLL token ... tag, or NerKor CoNLL-U Plus",
             Required = true,
             AllowMultipleArgumentsPerToken = true,
+            HelpName = "FILE",
         };
         var json = new Option<bool>("--json") { Description = "Print {\"micro\", \"PER\", \"LOC\", \"ORG\"} precision/recall/f1 as JSON" };
         var command = new Command("ner", "Score the name tagger on gold files (exact span match, conlleval rules).") { gold, json };

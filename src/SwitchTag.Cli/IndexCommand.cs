@@ -1,4 +1,5 @@
 using System.CommandLine;
+using SwitchTag.Output;
 using SwitchTag.Pipeline;
 
 namespace SwitchTag.Cli;
@@ -7,23 +8,32 @@ namespace SwitchTag.Cli;
 /// interview's outputs in <c>DIR/&lt;interview&gt;/</c>, and the collection index in DIR.</summary>
 public static class IndexCommand
 {
+    /// <summary>What <c>index --help</c> adds below the options.</summary>
+    public static string Epilogue =>
+        $"Writes DIR/<interview>/ {string.Join(" ", OutputWriters.Default.InterviewFileNames)}\n" +
+        $"and DIR/ {string.Join(" ", OutputWriters.Default.CollectionFileNames)}.\n\n" +
+        "Exit codes: 0 every input indexed; 1 some inputs rejected (each reported as file:line: error: reason,\nthe others still indexed); " +
+        "2 usage error or a model that cannot be loaded.\n";
+
     public static Command Create()
     {
         var paths = new Argument<string[]>("PATH") { Description = "Transcript files or folders (walked for .vtt .srt .txt .md).", Arity = ArgumentArity.OneOrMore };
-        var output = new Option<string>("--out", "-o") { Description = "Output folder.", Required = true };
-        var format = new Option<string?>("--format") { Description = "Force the input format: webvtt, srt, text or markdown." };
-        var main = new Option<string?>("--main") { Description = "The interviews' main language (ISO 639 code); detected when absent." };
-        var names = new Option<string>("--names") { Description = "rules-only (authority list and gazetteer) or default (rules, then the name model).", DefaultValueFactory = _ => "default" };
-        var authority = new Option<string?>("--authority") { Description = "Authority list CSV (label,name,variants)." };
-        var decisions = new Option<string?>("--decisions") { Description = "Reviewers' decisions CSV (see SCHEMA.md)." };
+        UnknownOptions.RejectIn(paths);
+        var output = new Option<string>("--out", "-o") { Description = "Output folder (created if missing).", Required = true, HelpName = "DIR" };
+        var format = new Option<string?>("--format") { Description = "Force the input format instead of detecting it.", HelpName = "webvtt|srt|text|markdown" };
+        var main = new Option<string?>("--main") { Description = "The interviews' main language, an ISO 639 code such as en; detected when absent.", HelpName = "CODE" };
+        var names = new Option<string>("--names") { Description = "rules-only (authority list and gazetteer) or default (rules, then the name model).", DefaultValueFactory = _ => "default", HelpName = "default|rules-only" };
+        var authority = new Option<string?>("--authority") { Description = "Authority list CSV (label,name,variants).", HelpName = "NAMES.csv" };
+        var decisions = new Option<string?>("--decisions") { Description = "Reviewers' decisions CSV, as review.html exports it (see SCHEMA.md).", HelpName = "DECISIONS.csv" };
+        var media = new Option<string?>("--media") { Description = "The recording, so each time in the report opens it at that second; {interview} stands for the interview's name.", HelpName = "URL" };
         var command = new Command("index", "Index people, places and organisations and list the stretches to translate.")
         {
-            paths, output, format, main, names, authority, decisions,
+            paths, output, format, main, names, authority, decisions, media,
         };
         command.SetAction(parse =>
         {
             var request = IndexRequest.From(parse.GetValue(paths) ?? [], parse.GetValue(output)!, parse.GetValue(format), parse.GetValue(main),
-                parse.GetValue(names)!, parse.GetValue(authority), parse.GetValue(decisions), out string? usage);
+                parse.GetValue(names)!, parse.GetValue(authority), parse.GetValue(decisions), out string? usage, parse.GetValue(media));
             if (request is null)
             {
                 Console.Error.WriteLine($"switchtag index: {usage}");

@@ -13,7 +13,7 @@ public static class LangIdCommand
     public static Command Create()
     {
         var languages = new Option<bool>("--languages") { Description = "Print the supported language codes, one per line." };
-        var lines = new Option<FileInfo?>("--lines") { Description = "Identify every line of this UTF-8 file." };
+        var lines = new Option<FileInfo?>("--lines") { Description = "Identify every line of this UTF-8 file.", HelpName = "FILE" };
         var json = new Option<bool>("--json") { Description = "One JSON object per input line: language, confidence, spans." };
         var command = new Command("langid", "Identify the language of text, line by line, with switch points inside each line.")
         {

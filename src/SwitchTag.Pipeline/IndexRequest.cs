@@ -16,11 +16,12 @@ public sealed record IndexRequest(
     TaggingMode Names,
     string? AuthorityPath,
     ImmutableArray<Decision> Decisions,
-    ImmutableArray<Diagnostic> DecisionProblems)
+    ImmutableArray<Diagnostic> DecisionProblems,
+    string? Media = null)
 {
     /// <summary>The request, or null with <paramref name="usage"/> saying which value is wrong.</summary>
     public static IndexRequest? From(string[] paths, string outDir, string? format, string? main, string names,
-        string? authority, string? decisions, out string? usage)
+        string? authority, string? decisions, out string? usage, string? media = null)
     {
         usage = null;
         TranscriptFormat? forced = null;
@@ -50,8 +51,11 @@ public sealed record IndexRequest(
             (list, problems) = DecisionsFile.Read(decisions);
         }
         if (File.Exists(outDir)) { usage = $"--out {outDir} is a file, not a folder"; return null; }
-        return new IndexRequest([.. paths], outDir, forced, main, mode, authority, list, problems);
+        return new IndexRequest([.. paths], outDir, forced, main, mode, authority, list, problems, string.IsNullOrWhiteSpace(media) ? null : media);
     }
+
+    /// <summary>The recording of one interview: <see cref="Media"/> with <c>{interview}</c> replaced by its name.</summary>
+    public string? MediaOf(string interview) => Media?.Replace("{interview}", Uri.EscapeDataString(interview), StringComparison.Ordinal);
 
     /// <summary>The builder for this request: the shipped models and the request's settings.</summary>
     public IndexPipelineBuilder Builder() => new IndexPipelineBuilder()

@@ -44,7 +44,7 @@ public static class IndexRun
             if (read.Transcript is null) { rejected = true; return; }
             try
             {
-                var index = pipeline.Run(read.Transcript);
+                var index = pipeline.Run(read.Transcript) with { Media = request.MediaOf(read.Transcript.Name) };
                 string folder = UniqueFolder(index.Transcript.Name, folders);
                 pipeline.Write(index, Path.Combine(request.OutDir, folder));
                 entries.Add(CollectionEntry.From(index, folder));

@@ -55,6 +55,7 @@ public sealed record ReviewItem(int Mention, string Reason);
 /// <param name="Languages">Seconds and words per language, most seconds first.</param>
 /// <param name="ForeignSpans">The spans outside the main language, in turn and text order.</param>
 /// <param name="Decisions">Every reviewer decision meant for this interview and how often it took effect.</param>
+/// <param name="Media">Where the recording is (URL or relative path), so a report can open it at a time; null when not given.</param>
 public sealed record InterviewIndex(
     Transcript Transcript,
     string MainLanguage,
@@ -68,4 +69,5 @@ public sealed record InterviewIndex(
     ImmutableArray<WorklistItem> Worklist,
     ImmutableArray<ReviewItem> Review,
     ImmutableArray<Diagnostic> Diagnostics,
-    ImmutableArray<DecisionOutcome> Decisions);
+    ImmutableArray<DecisionOutcome> Decisions,
+    string? Media = null);
