@@ -1,20 +1,31 @@
 using SwitchTag.Core.Decisions;
+using System.Globalization;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Time;
 
 namespace SwitchTag.Indexing.Decisions;
 
 /// <summary>One row of a decisions file, its action known and its name and label checked; the other
 /// columns are raw text (null when empty) for the action to check.</summary>
-public sealed record DecisionRow(SourceLine At, string Action, string? Interview, NameLabel? Label, string Name, string? Turn, string? Char, string? Value)
+public sealed record DecisionRow(SourceLine At, string Action, string? Interview, NameLabel? Label, string Name, string? Time, string? Turn, string? Char, string? Value)
 {
-    /// <summary>The interview, turn and char a mention decision needs; the problem when one is missing.</summary>
-    public string? MentionTarget(out string interview, out int turn, out int charAt)
+    /// <summary>The interview and the place in it a mention decision needs: the time column (seconds),
+    /// else the turn and char columns of the first format; the problem when neither is usable.</summary>
+    public string? MentionTarget(out string interview, out MentionTarget? target)
     {
         interview = Interview ?? "";
-        turn = charAt = 0;
+        target = null;
         if (Interview is null) return "a mention decision needs the interview column";
-        if (!int.TryParse(Turn, out turn) || !int.TryParse(Char, out charAt) || turn < 0 || charAt < 0)
-            return "a mention decision needs the turn and char columns (whole numbers, from mentions.csv)";
+        if (Time is not null)
+        {
+            if (!double.TryParse(Time, NumberStyles.Float, CultureInfo.InvariantCulture, out double seconds) || seconds < 0 || !double.IsFinite(seconds))
+                return $"the time column wants seconds such as 754.2, not \"{Time}\"";
+            target = new MentionAtTime(Timecode.FromSeconds(seconds));
+            return null;
+        }
+        if (!int.TryParse(Turn, out int turn) || !int.TryParse(Char, out int charAt) || turn < 0 || charAt < 0)
+            return "a mention decision needs the time column (seconds), or the turn and char columns (whole numbers, from mentions.csv)";
+        target = new MentionAtPosition(turn, charAt);
         return null;
     }
 

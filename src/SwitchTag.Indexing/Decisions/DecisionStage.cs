@@ -19,7 +19,7 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
     /// <summary>Rejected mentions removed, relabelled ones changed; <c>Accepted</c> holds the indices
     /// (into the returned list) of every mention a decision touched.</summary>
     public (ImmutableArray<Mention> Mentions, IReadOnlySet<int> Accepted, ImmutableArray<DecisionOutcome> Applied) ApplyToMentions(
-        ImmutableArray<Mention> mentions)
+        ImmutableArray<Mention> mentions, Func<Mention, TimeRange> timeOf)
     {
         var counts = new int[Mine.Length];
         var kept = ImmutableArray.CreateBuilder<Mention>();
@@ -27,10 +27,11 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
         foreach (var m in mentions)
         {
             var current = m;
+            var time = timeOf(m);
             bool decided = false, rejected = false;
             for (int d = 0; d < Mine.Length; d++)
             {
-                if (Mine[d] is not MentionDecision decision || !decision.Matches(m)) continue;
+                if (Mine[d] is not MentionDecision decision || !decision.Matches(m, time)) continue;
                 counts[d]++;
                 decided = true;
                 if (decision.Apply(current) is { } next) current = next; else rejected = true;

@@ -6,12 +6,13 @@ using SwitchTag.Core.Text;
 namespace SwitchTag.Indexing.Decisions;
 
 /// <summary>Reads the reviewers' decisions CSV (RFC 4180, header row required):
-/// <c>action,interview,label,name,turn,char,value</c>. Bad rows become diagnostics with file:line and
+/// <c>action,interview,label,name,time,value</c>, or the first format's <c>turn</c> and <c>char</c>
+/// columns in place of <c>time</c> (both read; columns in any order). Bad rows become diagnostics with file:line and
 /// are skipped; the rest still apply. Each row becomes the typed record of its action
 /// (<see cref="DecisionActions"/>).</summary>
 public static class DecisionsFile
 {
-    public static readonly ImmutableArray<string> Columns = ["action", "interview", "label", "name", "turn", "char", "value"];
+    public static readonly ImmutableArray<string> Columns = ["action", "interview", "label", "name", "time", "turn", "char", "value"];
 
     public static (ImmutableArray<Decision> Decisions, ImmutableArray<Diagnostic> Problems) Read(string path)
     {
@@ -37,7 +38,7 @@ public static class DecisionsFile
         if (column["action"] < 0 || column["name"] < 0)
         {
             problems.Add(new Diagnostic(new SourceLine(path, records[0].Line), Severity.Error,
-                $"the header must name the columns {string.Join(',', Columns)}"));
+                $"the header must name the columns action,interview,label,name,time,value"));
             return ([], problems.ToImmutable());
         }
 
@@ -76,6 +77,6 @@ public static class DecisionsFile
             if (!Enum.TryParse<NameLabel>(labelText, ignoreCase: true, out var l)) { problem = $"unknown label \"{labelText}\" (PER, LOC or ORG)"; return null; }
             label = l;
         }
-        return action.Parse(new DecisionRow(at, action.Name, get("interview"), label, name, get("turn"), get("char"), get("value")), out problem);
+        return action.Parse(new DecisionRow(at, action.Name, get("interview"), label, name, get("time"), get("turn"), get("char"), get("value")), out problem);
     }
 }

@@ -14,6 +14,8 @@ public abstract record HeadingDecision(SourceLine At, string Action, string? Int
 
     protected virtual string? Value => null;
 
+    public sealed override DecisionFields Fields => new(Action, Interview, Label?.ToString(), Name, null, null, null, Value);
+
     public sealed override string ToString() =>
         $"{At}: {Action} {Label?.ToString() ?? "any"} \"{Name}\"{(Value is null ? "" : " -> " + Value)}";
 }

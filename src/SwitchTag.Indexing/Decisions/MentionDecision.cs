@@ -1,14 +1,19 @@
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Time;
 
 namespace SwitchTag.Indexing.Decisions;
 
-/// <summary>A decision about one tagged mention, named as mentions.csv names it: interview, turn,
-/// char offset and text. Applied before grouping; a decided mention skips the review section.</summary>
-public abstract record MentionDecision(SourceLine At, string Action, string Interview, string Name, int Turn, int Char)
+/// <summary>A decision about one tagged mention, named by its interview, its text and where it is
+/// (<see cref="MentionTarget"/>: its time, or the turn and char offset of the first format). Applied
+/// before grouping; a decided mention skips the review section.</summary>
+public abstract record MentionDecision(SourceLine At, string Action, string Interview, string Name, MentionTarget Target)
     : Decision(At, Action, Interview, Name)
 {
-    public bool Matches(Mention m) => m.Turn == Turn && m.CharStart == Char && string.Equals(m.Text, Name, StringComparison.Ordinal);
+    /// <summary>The text must be the same (case aside for a timed target, which a reviewer may retype)
+    /// and the target must match.</summary>
+    public bool Matches(Mention m, TimeRange time) =>
+        string.Equals(m.Text, Name, Target is MentionAtTime ? StringComparison.OrdinalIgnoreCase : StringComparison.Ordinal) && Target.Matches(m, time);
 
     /// <summary>The mention after this decision, or null when it leaves the index.</summary>
     public abstract Mention? Apply(Mention mention);
@@ -16,6 +21,15 @@ public abstract record MentionDecision(SourceLine At, string Action, string Inte
     /// <summary>The value column as the log shows it, or null.</summary>
     protected virtual string? Value => null;
 
+    public sealed override DecisionFields Fields
+    {
+        get
+        {
+            var (time, turn, charAt) = Target.Cells;
+            return new DecisionFields(Action, Interview, null, Name, time, turn, charAt, Value);
+        }
+    }
+
     public sealed override string ToString() =>
-        $"{At}: {Action} \"{Name}\" in {Interview} turn {Turn} char {Char}{(Value is null ? "" : " -> " + Value)}";
+        $"{At}: {Action} \"{Name}\" in {Interview} {Target}{(Value is null ? "" : " -> " + Value)}";
 }

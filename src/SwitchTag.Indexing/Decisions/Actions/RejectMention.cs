@@ -4,8 +4,8 @@ using SwitchTag.Core.Documents;
 namespace SwitchTag.Indexing.Decisions.Actions;
 
 /// <summary><c>reject-mention</c>: the mention is not a name; it leaves the index.</summary>
-public sealed record RejectMention(SourceLine At, string Interview, string Name, int Turn, int Char)
-    : MentionDecision(At, ActionName, Interview, Name, Turn, Char)
+public sealed record RejectMention(SourceLine At, string Interview, string Name, MentionTarget Target)
+    : MentionDecision(At, ActionName, Interview, Name, Target)
 {
     public const string ActionName = "reject-mention";
 
@@ -16,7 +16,7 @@ public sealed record RejectMention(SourceLine At, string Interview, string Name,
         public string Name => ActionName;
 
         public Decision? Parse(DecisionRow row, out string? problem) =>
-            (problem = row.MentionTarget(out var interview, out int turn, out int at)) is null
-                ? new RejectMention(row.At, interview, row.Name, turn, at) : null;
+            (problem = row.MentionTarget(out var interview, out var target)) is null
+                ? new RejectMention(row.At, interview, row.Name, target!) : null;
     }
 }

@@ -4,8 +4,8 @@ using SwitchTag.Core.Documents;
 namespace SwitchTag.Indexing.Decisions.Actions;
 
 /// <summary><c>relabel-mention</c>: the mention is a name of another kind.</summary>
-public sealed record RelabelMention(SourceLine At, string Interview, string Name, int Turn, int Char, NameLabel NewLabel)
-    : MentionDecision(At, ActionName, Interview, Name, Turn, Char)
+public sealed record RelabelMention(SourceLine At, string Interview, string Name, MentionTarget Target, NameLabel NewLabel)
+    : MentionDecision(At, ActionName, Interview, Name, Target)
 {
     public const string ActionName = "relabel-mention";
 
@@ -20,8 +20,8 @@ public sealed record RelabelMention(SourceLine At, string Interview, string Name
         public Decision? Parse(DecisionRow row, out string? problem)
         {
             NameLabel label = default;
-            problem = row.MentionTarget(out var interview, out int turn, out int at) ?? row.NewLabel(out label);
-            return problem is null ? new RelabelMention(row.At, interview, row.Name, turn, at, label) : null;
+            problem = row.MentionTarget(out var interview, out var target) ?? row.NewLabel(out label);
+            return problem is null ? new RelabelMention(row.At, interview, row.Name, target!, label) : null;
         }
     }
 }
