@@ -5,6 +5,7 @@ using SwitchTag.Output.IndexJson;
 using SwitchTag.Output.MentionsCsv;
 using SwitchTag.Output.PlacesGeoJson;
 using SwitchTag.Output.Report;
+using SwitchTag.Output.Review;
 using SwitchTag.Output.WorklistCsv;
 
 namespace SwitchTag.Output;
@@ -26,7 +27,8 @@ public sealed class OutputWriters
         .Add(new PlacesGeoJsonWriter())
         .Add(new AnnotatedVttWriter())
         .Add(new CollectionJsonWriter())
-        .Add(new CollectionHtmlWriter());
+        .Add(new CollectionHtmlWriter())
+        .Add(new ReviewHtmlWriter());
 
     public IReadOnlyList<IInterviewWriter> Interview => _interview;
     public IReadOnlyList<ICollectionWriter> Collection => _collection;

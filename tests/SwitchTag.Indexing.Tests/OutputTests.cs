@@ -30,7 +30,7 @@ public class OutputTests
     public void Report_html_shows_transcript_markup_as_text()
     {
         var index = Fixture.Run();
-        string html = HtmlReport.Render("t", ReportMarkdownWriter.Render(index));
+        string html = ReportHtmlWriter.Render(index);
         // The fixture's worklist holds "<script>alert(1)</script>" (HTML Living Standard: text shown
         // literally must have '<' written as &lt;).
         Assert.DoesNotContain("<script", html, StringComparison.OrdinalIgnoreCase);
@@ -158,10 +158,9 @@ public class OutputTests
     [Fact]
     public void A_collection_of_many_interviews_still_renders()
     {
-        // Markdig rejects one pipe table of many thousand rows; the writers split tables into chunks.
         var entry = CollectionEntry.From(Fixture.Run(), "anna-nowak");
         var entries = Enumerable.Range(0, 2500).Select(i => entry with { Interview = $"copy-{i}", Folder = $"copy-{i}" }).ToList();
-        string html = HtmlReport.Render("c", CollectionHtmlWriter.RenderMarkdown(entries));
-        Assert.Contains("copy-2499", html);
+        string html = CollectionHtmlWriter.Render(entries);
+        Assert.Contains("href=\"copy-2499/index.html", html);
     }
 }

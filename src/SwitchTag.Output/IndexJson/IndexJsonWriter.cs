@@ -35,6 +35,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
         w.WriteEndObject();
         w.WriteString("mainLanguage", index.MainLanguage);
         Seconds(w, "duration", index.Duration);
+        if (index.Media is not null) w.WriteString("media", index.Media);
 
         w.WriteStartArray("languages");
         foreach (var share in index.Languages)

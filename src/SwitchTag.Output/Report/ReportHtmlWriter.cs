@@ -1,14 +1,181 @@
+using System.Text;
 using SwitchTag.Core.Documents;
+using SwitchTag.Output.Html;
+using SwitchTag.Output.Map;
 using SwitchTag.Output.Text;
+using SwitchTag.Output.Timeline;
+using static SwitchTag.Output.Html.HtmlText;
 
 namespace SwitchTag.Output.Report;
 
-/// <summary><c>index.html</c>: the readable report of <see cref="ReportMarkdownWriter"/> as one
-/// self-contained page.</summary>
+/// <summary><c>index.html</c>: the interview's report as one self-contained page to navigate: the
+/// caution first, contents, languages in time and words, a timeline of languages per speaker, a map of
+/// the linked places, every heading linked to its mentions (each with its time, speaker and sentence),
+/// the mentions held for review, the worklist and the reading notes. No script; all transcript text is
+/// escaped and carries <c>dir="auto"</c>.</summary>
 public sealed class ReportHtmlWriter : IInterviewWriter
 {
     public string FileName => "index.html";
 
-    public void Write(InterviewIndex index, Stream stream) =>
-        Utf8Text.Write(stream, HtmlReport.Render($"Interview index: {index.Transcript.Name}", ReportMarkdownWriter.Render(index)));
+    private static readonly (NameLabel Label, string Id, string Title)[] Sections =
+        [(NameLabel.PER, "people", "People"), (NameLabel.LOC, "places", "Places"), (NameLabel.ORG, "organisations", "Organisations")];
+
+    public void Write(InterviewIndex index, Stream stream) => Utf8Text.Write(stream, Render(index));
+
+    public static string Render(InterviewIndex index)
+    {
+        var b = new StringBuilder();
+        string name = index.Transcript.Name;
+        b.Append("<h1>Interview index: ").Append(Said(name)).Append("</h1>\n");
+        b.Append(CautionBlock());
+        Facts(b, index);
+        Contents(b, index);
+        Languages(b, index);
+        b.Append("<section id=\"timeline\">\n<h2>Timeline of languages</h2>\n").Append(LanguageTimeline.Render(index)).Append("</section>\n");
+        b.Append("<section id=\"map\">\n<h2>Map of places</h2>\n").Append(PlaceMap.Render(Places(index), $"Places named in {name}")).Append("</section>\n");
+        foreach (var (label, id, title) in Sections) Headings(b, index, label, id, title);
+        Review(b, index);
+        Worklist(b, index);
+        Notes(b, index);
+        return HtmlPage.Render($"Interview index: {name}", b.ToString());
+    }
+
+    /// <summary>The caution of the Markdown report, its bold lead kept bold.</summary>
+    public static string CautionBlock()
+    {
+        var parts = ReportMarkdownWriter.Caution.Split("**");
+        return $"<div class=\"caution\" role=\"note\"><strong>{Esc(parts[1])}</strong>{Esc(parts[2])}</div>\n";
+    }
+
+    /// <summary>One marker per heading linked to a place, linking to the heading's mentions.</summary>
+    public static List<MapPlace> Places(InterviewIndex index) =>
+        index.Headings.Where(h => h.Place is not null)
+            .Select(h => new MapPlace(h.Id, h.Name, h.Place!.Latitude, h.Place.Longitude, "#" + HeadingAnchor(h.Id))).ToList();
+
+    private static void Facts(StringBuilder b, InterviewIndex index)
+    {
+        var source = index.Transcript.Source;
+        b.Append("<ul class=\"facts\">\n")
+         .Append("<li>Source: ").Append(Said(source.Path)).Append(" (").Append(source.Format.ToName()).Append(")</li>\n")
+         .Append("<li>SHA-256: <code>").Append(Esc(source.Sha256)).Append("</code></li>\n")
+         .Append("<li>Main language: ").Append(Esc(LanguageNames.WithCode(index.MainLanguage))).Append("</li>\n")
+         .Append("<li>Duration: <span class=\"time\" title=\"").Append(index.Duration).Append("\">").Append(Clock(index.Duration)).Append("</span></li>\n")
+         .Append("<li>Turns: ").Append(index.Turns.Length).Append(", mentions indexed: ").Append(index.Mentions.Count(m => m.HeadingId is not null))
+         .Append(", held for review: ").Append(index.Review.Length).Append("</li>\n")
+         .Append("<li>Recording: ");
+        if (index.Media is null) b.Append("<span class=\"muted\">not given (switchtag index --media URL makes every time open it)</span>");
+        else b.Append("<a href=\"").Append(Esc(index.Media)).Append("\">").Append(Esc(index.Media)).Append("</a>; every time opens it at that second");
+        b.Append("</li>\n</ul>\n");
+    }
+
+    private static void Contents(StringBuilder b, InterviewIndex index)
+    {
+        b.Append("<nav class=\"contents\">\n<h2>Contents</h2>\n<ol>\n")
+         .Append("<li><a href=\"#languages\">Languages</a></li>\n<li><a href=\"#timeline\">Timeline of languages</a></li>\n<li><a href=\"#map\">Map of places</a></li>\n");
+        foreach (var (label, id, title) in Sections)
+            b.Append("<li><a href=\"#").Append(id).Append("\">").Append(title).Append("</a> (").Append(index.Headings.Count(h => h.Label == label)).Append(")</li>\n");
+        b.Append("<li><a href=\"#review\">For review</a> (").Append(index.Review.Length).Append(")</li>\n")
+         .Append("<li><a href=\"#worklist\">Translators' worklist</a> (").Append(index.Worklist.Length).Append(")</li>\n");
+        if (!index.Diagnostics.IsEmpty) b.Append("<li><a href=\"#notes\">Reading notes</a> (").Append(index.Diagnostics.Length).Append(")</li>\n");
+        b.Append("</ol>\n</nav>\n");
+    }
+
+    private static void Languages(StringBuilder b, InterviewIndex index)
+    {
+        double total = index.Languages.Sum(s => s.Seconds);
+        b.Append("<section id=\"languages\">\n<h2>Languages</h2>\n<table>\n<tr><th>Language</th><th>Time</th><th>Share of time</th><th>Words</th></tr>\n");
+        foreach (var s in index.Languages)
+            b.Append("<tr><td>").Append(Esc(LanguageNames.WithCode(s.Language))).Append("</td><td class=\"n\" title=\"")
+             .Append(Number(s.Seconds, "0.###")).Append(" s\">").Append(Clock(s.Seconds)).Append("</td><td class=\"n\">")
+             .Append(total > 0 ? Number(100 * s.Seconds / total, "0.0") + "%" : "").Append("</td><td class=\"n\">").Append(s.Words).Append("</td></tr>\n");
+        b.Append("</table>\n</section>\n");
+    }
+
+    private static void Headings(StringBuilder b, InterviewIndex index, NameLabel label, string id, string title)
+    {
+        var headings = index.Headings.Where(h => h.Label == label).ToList();
+        b.Append("<section id=\"").Append(id).Append("\">\n<h2>").Append(title).Append("</h2>\n");
+        if (headings.Count == 0) { b.Append("<p class=\"muted\">None found.</p>\n</section>\n"); return; }
+        b.Append("<table>\n<tr><th>Heading</th><th>Variants</th><th>Mentions</th><th>First</th><th>Speakers</th><th>Place</th><th>Confidence</th></tr>\n");
+        foreach (var h in headings)
+        {
+            b.Append("<tr><td><a class=\"heading\" href=\"#").Append(Esc(HeadingAnchor(h.Id))).Append("\">").Append(Said(h.Name)).Append("</a></td><td>")
+             .Append(string.Join(", ", h.Variants.Select(Said))).Append("</td><td class=\"n\">").Append(h.Mentions.Length).Append("</td><td>")
+             .Append(h.Mentions.IsEmpty ? "" : TimeLink(index.Mentions[h.Mentions[0]].Time.Start, index.Media)).Append("</td><td>")
+             .Append(string.Join(", ", h.Speakers.Select(Said))).Append("</td><td>").Append(Place(h)).Append("</td><td>")
+             .Append(Band(h.Confidence)).Append("</td></tr>\n");
+        }
+        b.Append("</table>\n");
+        foreach (var h in headings)
+        {
+            b.Append("<section class=\"heading\" id=\"").Append(Esc(HeadingAnchor(h.Id))).Append("\">\n<h3>").Append(Said(h.Name))
+             .Append(" <span class=\"muted\">").Append(h.Label).Append(", ").Append(h.Mentions.Length).Append(h.Mentions.Length == 1 ? " mention" : " mentions")
+             .Append("</span></h3>\n<ol class=\"mentions\">\n");
+            foreach (int i in h.Mentions) Mention(b, index, i);
+            b.Append("</ol>\n</section>\n");
+        }
+        b.Append("</section>\n");
+    }
+
+    private static void Mention(StringBuilder b, InterviewIndex index, int i)
+    {
+        var m = index.Mentions[i];
+        b.Append("<li class=\"mention\" id=\"m-").Append(i).Append("\">").Append(TimeLink(m.Time.Start, index.Media)).Append(' ');
+        if (index.Turns[m.Mention.Turn].Speaker is { } speaker) b.Append("<span class=\"speaker\">").Append(Said(speaker)).Append("</span> ");
+        b.Append(Context(index, m)).Append("</li>\n");
+    }
+
+    /// <summary>The sentence around a mention with the name marked, as one right-to-left-safe piece.</summary>
+    public static string Context(InterviewIndex index, IndexedMention m)
+    {
+        var c = MentionContext.Of(index, m);
+        return $"<span class=\"ctx\" dir=\"auto\">{Esc(c.Before)}<mark>{Esc(c.Name)}</mark>{Esc(c.After)}</span>";
+    }
+
+    private static string Place(Heading h)
+    {
+        if (h.Place is null) return h.Label == NameLabel.LOC ? "<span class=\"muted\">not in the gazetteer</span>" : "";
+        var p = h.Place;
+        string text = $"{Esc(p.Name)}, {Esc(p.Country)} <span class=\"muted\">({Numbers.Coordinate(p.Latitude)}, {Numbers.Coordinate(p.Longitude)}; " +
+                      $"{(p.HasGeonameId ? $"GeoNames {p.GeonameId}" : "country")})</span>";
+        if (!h.Alternatives.IsEmpty)
+            text += "<br><span class=\"muted\">or: " + string.Join("; ", h.Alternatives.Take(5).Select(a => $"{Esc(a.Name)}, {Esc(a.Country)}")) + "</span>";
+        return text;
+    }
+
+    private static void Review(StringBuilder b, InterviewIndex index)
+    {
+        b.Append("<section id=\"review\">\n<h2>For review</h2>\n<p>These mentions are held back from the index until a person decides " +
+                 "(review.html in the output folder writes the decisions file).</p>\n");
+        if (index.Review.IsEmpty) { b.Append("<p class=\"muted\">Nothing held back.</p>\n</section>\n"); return; }
+        b.Append("<table>\n<tr><th>Time</th><th>Speaker</th><th>Mention in context</th><th>Label</th><th>Reason</th></tr>\n");
+        foreach (var r in index.Review)
+        {
+            var m = index.Mentions[r.Mention];
+            b.Append("<tr id=\"m-").Append(r.Mention).Append("\"><td>").Append(TimeLink(m.Time.Start, index.Media)).Append("</td><td>")
+             .Append(Said(index.Turns[m.Mention.Turn].Speaker)).Append("</td><td>").Append(Context(index, m)).Append("</td><td>")
+             .Append(m.Mention.Label).Append("</td><td>").Append(Said(r.Reason)).Append("</td></tr>\n");
+        }
+        b.Append("</table>\n</section>\n");
+    }
+
+    private static void Worklist(StringBuilder b, InterviewIndex index)
+    {
+        b.Append("<section id=\"worklist\">\n<h2>Translators' worklist</h2>\n");
+        if (index.Worklist.IsEmpty) { b.Append("<p class=\"muted\">No stretch outside the main language was found.</p>\n</section>\n"); return; }
+        b.Append("<table>\n<tr><th>Start</th><th>End</th><th>Speaker</th><th>Language</th><th>Confidence</th><th>Text</th></tr>\n");
+        foreach (var item in index.Worklist)
+            b.Append("<tr><td>").Append(TimeLink(item.Time.Start, index.Media)).Append("</td><td><span class=\"time\">").Append(Clock(item.Time.End))
+             .Append("</span></td><td>").Append(Said(item.Speaker)).Append("</td><td>").Append(Esc(LanguageNames.WithCode(item.Language)))
+             .Append("</td><td>").Append(Band(item.Confidence)).Append("</td><td>").Append(Said(item.Text)).Append("</td></tr>\n");
+        b.Append("</table>\n</section>\n");
+    }
+
+    private static void Notes(StringBuilder b, InterviewIndex index)
+    {
+        if (index.Diagnostics.IsEmpty) return;
+        b.Append("<section id=\"notes\">\n<h2>Reading notes</h2>\n<ul>\n");
+        foreach (var d in index.Diagnostics) b.Append("<li>").Append(Said(d.ToString())).Append("</li>\n");
+        b.Append("</ul>\n</section>\n");
+    }
 }
