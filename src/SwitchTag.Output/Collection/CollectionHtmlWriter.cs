@@ -18,8 +18,9 @@ public sealed class CollectionHtmlWriter : ICollectionWriter
     /// <summary>Hides the rows whose text does not contain what is typed (any case) and says how many show.</summary>
     private const string FilterScript =
         "const box=document.getElementById('filter'),rows=[...document.querySelectorAll('tr.row')],shown=document.getElementById('shown');\n" +
-        "box.addEventListener('input',()=>{const q=box.value.trim().toLowerCase();let n=0;\n" +
-        "for(const r of rows){const on=!q||r.dataset.text.includes(q);r.hidden=!on;if(on)n++;}shown.textContent=n;});\n";
+        "function filter(){const q=box.value.trim().toLowerCase();let n=0;\n" +
+        "for(const r of rows){const on=!q||r.dataset.text.includes(q);r.hidden=!on;if(on)n++;}shown.textContent=n;}\n" +
+        "box.addEventListener('input',filter);filter(); // a browser may restore the box's text on going back\n";
 
     public void Write(IReadOnlyList<CollectionEntry> entries, Stream stream) => Utf8Text.Write(stream, Render(entries));
 

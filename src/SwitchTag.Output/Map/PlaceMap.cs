@@ -51,12 +51,18 @@ public static class PlaceMap
             svg.Append('Z');
         }
         svg.Append("\"/>\n");
+        var labels = new LabelPlacer(Width, height);
+        foreach (var p in places) labels.Reserve((p.Longitude - west) * cos * scale, (north - p.Latitude) * scale);
         foreach (var p in places)
         {
-            string x = X(p.Longitude), y = Y(p.Latitude);
+            double px = (p.Longitude - west) * cos * scale, py = (north - p.Latitude) * scale;
+            string x = px.ToString("0.#", CultureInfo.InvariantCulture), y = py.ToString("0.#", CultureInfo.InvariantCulture);
             svg.Append("<a href=\"").Append(HtmlText.Esc(p.Href)).Append("\"><circle class=\"place\" data-key=\"").Append(HtmlText.Esc(p.Key))
-               .Append("\" cx=\"").Append(x).Append("\" cy=\"").Append(y).Append("\" r=\"4.5\"><title>").Append(HtmlText.Esc(p.Label)).Append("</title></circle>")
-               .Append("<text x=\"").Append(x).Append("\" y=\"").Append(y).Append("\" dx=\"6\" dy=\"4\">").Append(HtmlText.Esc(p.Label)).Append("</text></a>\n");
+               .Append("\" cx=\"").Append(x).Append("\" cy=\"").Append(y).Append("\" r=\"4.5\"><title>").Append(HtmlText.Esc(p.Label)).Append("</title></circle>");
+            if (labels.Place(px, py, p.Label) is var (lx, ly, anchor))
+                svg.Append("<text x=\"").Append(lx.ToString("0.#", CultureInfo.InvariantCulture)).Append("\" y=\"").Append(ly.ToString("0.#", CultureInfo.InvariantCulture))
+                   .Append(anchor == "start" ? "" : "\" text-anchor=\"" + anchor).Append("\">").Append(HtmlText.Esc(p.Label)).Append("</text>");
+            svg.Append("</a>\n");
         }
         svg.Append("</svg>\n<p class=\"muted\">Outlines: Natural Earth 1:110m (public domain).</p>\n");
         return svg.ToString();
