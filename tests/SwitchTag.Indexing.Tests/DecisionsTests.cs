@@ -1,5 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Pipeline;
+using SwitchTag.Core.Time;
 using SwitchTag.Indexing.Decisions;
 using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output.IndexJson;
@@ -68,5 +70,55 @@ public class DecisionsTests
             "action,interview,label,name,turn,char,value\nexplode,,,X,,,\nrelabel-heading,,PER,X,,,PLANET\nreject-mention,,,X,1,2,\nrename-heading,,LOC,Paris,,,Paryż\n");
         Assert.Single(decisions);
         Assert.Equal([2, 3, 4], problems.Select(p => p.At.Line));
+    }
+
+    [Fact]
+    public void A_mention_decision_by_time_survives_renumbered_turns_where_one_by_turn_and_char_does_not()
+    {
+        var paris = Fixture.Run().Mentions.Single(m => m.Mention.Turn == 2 && m.Mention.Text == "Paris");
+        string seconds = paris.Time.Start.ToSecondsString();
+        var (decisions, problems) = DecisionsFile.Parse("d.csv",
+            $"action,interview,label,name,time,turn,char,value\r\nreject-mention,anna-nowak,,paris,{seconds},,,\r\nreject-mention,anna-nowak,,Paris,,2,{paris.Mention.CharStart},\r\n");
+        Assert.Empty(problems);
+
+        // The same interview with one cue more at its start: every turn number moves by one, no time moves.
+        var transcript = Fixture.Transcript();
+        var opening = transcript.Cues[0] with { Time = new TimeRange(new Timecode(0), new Timecode(900)), Speaker = "Archivist", SpeakerLabel = "Archivist", Text = "Recording begins." };
+        var shifted = transcript with { Cues = transcript.Cues.Insert(0, opening) };
+        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new IndexBuilder(Fixture.Lexicon(), decisions)).Run(shifted, "en");
+
+        Assert.DoesNotContain(index.Mentions, m => m.Mention.Text == "Paris" && m.Time.Start == paris.Time.Start);
+        Assert.Equal(1, index.Decisions[0].Applied);
+        Assert.Equal(0, index.Decisions[1].Applied);
+    }
+
+    [Theory]
+    [InlineData(-1500, 1)]
+    [InlineData(-1900, 1)]
+    [InlineData(-2500, 0)]
+    public void A_timed_mention_decision_matches_within_two_seconds(long offsetMs, int applied)
+    {
+        // The fixture names Paris again in the next turn, about a second later: only the closest one is meant.
+        var paris = Fixture.Run().Mentions.Single(m => m.Mention.Turn == 2 && m.Mention.Text == "Paris");
+        string seconds = (paris.Time.Start + offsetMs).ToSecondsString();
+        var (decisions, _) = DecisionsFile.Parse("d.csv", $"action,interview,label,name,time,value\nreject-mention,anna-nowak,,Paris,{seconds},\n");
+        var index = Fixture.Run(decisions);
+        Assert.Equal(applied, index.Decisions.Single().Applied);
+        Assert.Equal(applied == 0, index.Mentions.Any(m => m.Mention.Text == "Paris" && m.Time.Start == paris.Time.Start));
+        Assert.Equal(2 - applied, index.Mentions.Count(m => m.Mention.Text == "Paris"));
+    }
+
+    [Fact]
+    public void Every_decision_writes_a_row_that_reads_back_as_itself()
+    {
+        var (decisions, _) = DecisionsFile.Parse("d.csv", File + "reject-mention,anna-nowak,,Paris,19.25,,,\r\n");
+        string rewritten = "action,interview,label,name,time,turn,char,value\r\n" + string.Concat(decisions.Select(d =>
+        {
+            var f = d.Fields;
+            return string.Join(',', new[] { f.Action, f.Interview, f.Label, f.Name, f.Time, f.Turn, f.Char, f.Value }.Select(c => c ?? "")) + "\r\n";
+        }));
+        var (again, problems) = DecisionsFile.Parse("d.csv", rewritten);
+        Assert.Empty(problems);
+        Assert.Equal(decisions.Select(d => d.Fields), again.Select(d => d.Fields));
     }
 }

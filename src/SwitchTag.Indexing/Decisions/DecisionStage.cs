@@ -24,14 +24,15 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
         var counts = new int[Mine.Length];
         var kept = ImmutableArray.CreateBuilder<Mention>();
         var accepted = new HashSet<int>();
-        foreach (var m in mentions)
+        var times = mentions.Select(timeOf).ToArray();
+        var picked = Mine.Select(d => d is MentionDecision md ? md.Pick(mentions, times).ToHashSet() : null).ToArray();
+        for (int i = 0; i < mentions.Length; i++)
         {
-            var current = m;
-            var time = timeOf(m);
+            var current = mentions[i];
             bool decided = false, rejected = false;
             for (int d = 0; d < Mine.Length; d++)
             {
-                if (Mine[d] is not MentionDecision decision || !decision.Matches(m, time)) continue;
+                if (Mine[d] is not MentionDecision decision || !picked[d]!.Contains(i)) continue;
                 counts[d]++;
                 decided = true;
                 if (decision.Apply(current) is { } next) current = next; else rejected = true;

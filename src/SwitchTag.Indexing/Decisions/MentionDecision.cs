@@ -15,6 +15,14 @@ public abstract record MentionDecision(SourceLine At, string Action, string Inte
     public bool Matches(Mention m, TimeRange time) =>
         string.Equals(m.Text, Name, Target is MentionAtTime ? StringComparison.OrdinalIgnoreCase : StringComparison.Ordinal) && Target.Matches(m, time);
 
+    /// <summary>The mentions this decision means: every match of a turn and char; for a time only the
+    /// closest match (the earlier on a tie), since one name said twice can fall within the tolerance.</summary>
+    public IEnumerable<int> Pick(IReadOnlyList<Mention> mentions, IReadOnlyList<TimeRange> times)
+    {
+        var matches = Enumerable.Range(0, mentions.Count).Where(i => Matches(mentions[i], times[i]));
+        return Target is MentionAtTime at ? matches.OrderBy(i => Math.Abs(times[i].Start - at.Time)).ThenBy(i => i).Take(1) : matches;
+    }
+
     /// <summary>The mention after this decision, or null when it leaves the index.</summary>
     public abstract Mention? Apply(Mention mention);
 
