@@ -56,7 +56,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
     {
         var source = index.Transcript.Source;
         b.Append("<ul class=\"facts\">\n")
-         .Append("<li>Source: ").Append(Said(source.Path)).Append(" (").Append(source.Format.ToName()).Append(")</li>\n")
+         .Append("<li>Source: ").Append(Said(source.Path)).Append(" (").Append(source.Format.Name).Append(")</li>\n")
          .Append("<li>SHA-256: <code>").Append(Esc(source.Sha256)).Append("</code></li>\n")
          .Append("<li>Main language: ").Append(Esc(LanguageNames.WithCode(index.MainLanguage))).Append("</li>\n")
          .Append("<li>Duration: <span class=\"time\" title=\"").Append(index.Duration).Append("\">").Append(Clock(index.Duration)).Append("</span></li>\n")
