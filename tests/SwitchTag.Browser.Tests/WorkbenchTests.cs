@@ -32,6 +32,20 @@ public sealed class WorkbenchTests(DemoRun demo, Browser browser) : IClassFixtur
         // The time opens the recording there (W3C Media Fragments: #t=<seconds>).
         Assert.Matches(@"^\.\./media/kowalczyk-1998\.mp3#t=\d+(\.\d+)?$", await first.Locator("a.time").GetAttributeAsync("href"));
         Assert.Equal("auto", await first.Locator(".ctx").GetAttributeAsync("dir"));
+        // Confidences show as a band, the number in the tooltip.
+        foreach (var band in await page.Locator("span.band").AllAsync())
+        {
+            Assert.Contains(await band.TextContentAsync(), new[] { "high", "check" });
+            Assert.Matches(@"^confidence [01]\.\d\d$", await band.GetAttributeAsync("title"));
+        }
+    }
+
+    [Fact]
+    public void Every_demo_report_stays_under_a_megabyte()
+    {
+        var reports = Directory.GetFiles(demo.OutDir, "index.html", SearchOption.AllDirectories);
+        Assert.Equal(4, reports.Length);
+        foreach (var report in reports) Assert.InRange(new FileInfo(report).Length, 1, 1_000_000);
     }
 
     [Fact]
