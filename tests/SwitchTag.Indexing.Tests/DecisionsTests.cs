@@ -100,7 +100,7 @@ public class DecisionsTests
     {
         // The fixture names Paris again in the next turn, about a second later: only the closest one is meant.
         var paris = Fixture.Run().Mentions.Single(m => m.Mention.Turn == 2 && m.Mention.Text == "Paris");
-        string seconds = (paris.Time.Start + offsetMs).ToSecondsString();
+        string seconds = (paris.Time.Start + new Duration(offsetMs)).ToSecondsString();
         var (decisions, _) = DecisionsFile.Parse("d.csv", $"action,interview,label,name,time,value\nreject-mention,anna-nowak,,Paris,{seconds},\n");
         var index = Fixture.Run(decisions);
         Assert.Equal(applied, index.Decisions.Single().Applied);

@@ -20,7 +20,7 @@ public abstract record MentionDecision(SourceLine At, string Action, string Inte
     public IEnumerable<int> Pick(IReadOnlyList<Mention> mentions, IReadOnlyList<TimeRange> times)
     {
         var matches = Enumerable.Range(0, mentions.Count).Where(i => Matches(mentions[i], times[i]));
-        return Target is MentionAtTime at ? matches.OrderBy(i => Math.Abs(times[i].Start - at.Time)).ThenBy(i => i).Take(1) : matches;
+        return Target is MentionAtTime at ? matches.OrderBy(i => Math.Abs((times[i].Start - at.Time).Milliseconds)).ThenBy(i => i).Take(1) : matches;
     }
 
     /// <summary>The mention after this decision, or null when it leaves the index.</summary>

@@ -22,7 +22,7 @@ public sealed record MentionAtTime(Timecode Time) : MentionTarget
     /// characters at the 15 characters/second the time alignment assumes without word timings.</summary>
     public const long ToleranceMilliseconds = 2000;
 
-    public override bool Matches(Mention mention, TimeRange time) => Math.Abs(time.Start - Time) <= ToleranceMilliseconds;
+    public override bool Matches(Mention mention, TimeRange time) => Math.Abs((time.Start - Time).Milliseconds) <= ToleranceMilliseconds;
 
     public override (string? Time, string? Turn, string? Char) Cells => (Time.ToSecondsString(), null, null);
 

@@ -25,6 +25,8 @@ public static class HtmlText
 
     public static string Clock(double seconds) => Clock(Timecode.FromSeconds(seconds));
 
+    public static string Clock(Duration d) => Clock(new Timecode(d.Milliseconds));
+
     /// <summary>A time that opens the recording there when one is known (W3C Media Fragments <c>#t=</c>).</summary>
     public static string TimeLink(Timecode t, string? media)
     {
