@@ -1,0 +1,214 @@
+using System.Collections.Immutable;
+using System.Globalization;
+using Microsoft.Data.Sqlite;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Time;
+
+namespace SwitchTag.Store;
+
+/// <summary>The collection store: one SQLite file in the output folder holding every interview indexed
+/// into it across runs. Not thread-safe: one thread writes, in a fixed order (see STORE.md).</summary>
+public sealed class CollectionStore : IDisposable
+{
+    public const string DefaultFileName = "switchtag.sqlite";
+
+    private static readonly string[] Extensions = [".sqlite", ".sqlite3", ".db"];
+
+    private readonly SqliteConnection _connection;
+
+    private CollectionStore(string path, SqliteConnection connection)
+    {
+        FilePath = path;
+        _connection = connection;
+    }
+
+    public string FilePath { get; }
+
+    public static int SchemaVersion => StoreSchema.Version;
+
+    /// <summary>Opens the store in <paramref name="dir"/> (the one <c>*.sqlite</c>, <c>*.sqlite3</c> or <c>*.db</c>
+    /// file there), creating folder and <see cref="DefaultFileName"/> when there is none, and migrates it.</summary>
+    public static CollectionStore Open(string dir)
+    {
+        Directory.CreateDirectory(dir);
+        return OpenFile(FindFile(dir) ?? Path.Combine(dir, DefaultFileName));
+    }
+
+    /// <summary>The store file directly in <paramref name="dir"/>, or null when there is none.</summary>
+    public static string? FindFile(string dir)
+    {
+        if (!Directory.Exists(dir)) return null;
+        var found = Directory.EnumerateFiles(dir)
+            .Where(f => Extensions.Contains(Path.GetExtension(f), StringComparer.OrdinalIgnoreCase))
+            .Order(StringComparer.Ordinal).ToList();
+        string preferred = Path.Combine(dir, DefaultFileName);
+        return found.Contains(preferred) ? preferred : found.FirstOrDefault();
+    }
+
+    public static CollectionStore OpenFile(string path)
+    {
+        // No pooling: the file is closed when the store is disposed, so the folder can be copied or moved.
+        var connection = new SqliteConnection(new SqliteConnectionStringBuilder
+        {
+            DataSource = path,
+            Pooling = false,
+            ForeignKeys = true,
+        }.ToString());
+        connection.Open();
+        try
+        {
+            // A rollback journal, not WAL: the store stays one file between runs; a run killed
+            // mid-interview leaves a journal that the next open rolls back.
+            Execute(connection, "PRAGMA journal_mode=DELETE");
+            StoreSchema.Migrate(connection);
+        }
+        catch
+        {
+            connection.Dispose();
+            throw;
+        }
+        return new CollectionStore(path, connection);
+    }
+
+    public void Dispose() => _connection.Dispose();
+
+    /// <summary>Every interview in the store, by folder name.</summary>
+    public IReadOnlyList<StoredInterview> Interviews()
+    {
+        using var command = _connection.CreateCommand();
+        command.CommandText = "SELECT source_path, folder, name, sha256, model_versions FROM interviews ORDER BY folder";
+        using var reader = command.ExecuteReader();
+        var list = new List<StoredInterview>();
+        while (reader.Read()) list.Add(new StoredInterview(reader.GetString(0), reader.GetString(1), reader.GetString(2), reader.GetString(3), reader.GetString(4)));
+        return list;
+    }
+
+    public StoredInterview? Find(string sourcePath, IReadOnlyList<StoredInterview>? known = null)
+    {
+        string full = Path.GetFullPath(sourcePath);
+        return (known ?? Interviews()).FirstOrDefault(i => i.SourcePath == full);
+    }
+
+    /// <summary>Whether an interview can be left as it is: the store holds it from the same bytes
+    /// (<paramref name="sha256"/>) made by the same models and options (<paramref name="modelVersions"/>).</summary>
+    public bool ShouldSkip(string sourcePath, string sha256, string modelVersions) =>
+        Find(sourcePath) is { } stored && stored.Sha256 == sha256 && stored.ModelVersions == modelVersions;
+
+    /// <summary>Adds or replaces one interview, all rows in one transaction: a run killed during it
+    /// leaves the store as it was before. <paramref name="indexedAt"/> is kept for people only and is
+    /// the one value that differs between two runs over the same input.</summary>
+    public void Save(InterviewIndex index, string folder, string modelVersions, IReadOnlyList<StoredDecision> decisions, DateTimeOffset indexedAt)
+    {
+        string source = Path.GetFullPath(index.Transcript.Source.Path);
+        using var tx = _connection.BeginTransaction();
+        long? existing = ScalarOrNull(tx, "SELECT id FROM interviews WHERE source_path = $p", ("$p", source));
+        if (existing is { } old) DeleteRows(tx, old);
+        long id = existing ?? (ScalarOrNull(tx, "SELECT max(id) FROM interviews") ?? 0) + 1;
+        Execute(tx, "INSERT INTO interviews VALUES ($id, $p, $f, $n, $fmt, $sha, $mv, $lang, $dur, $at)",
+            ("$id", id), ("$p", source), ("$f", folder), ("$n", index.Transcript.Name), ("$fmt", index.Transcript.Source.Format.ToName()),
+            ("$sha", index.Transcript.Source.Sha256), ("$mv", modelVersions), ("$lang", index.MainLanguage),
+            ("$dur", index.Duration.Milliseconds), ("$at", indexedAt.UtcDateTime.ToString("yyyy-MM-ddTHH:mm:ssZ", CultureInfo.InvariantCulture)));
+        using (var rows = new InterviewRows(_connection, tx, id)) rows.Write(index, decisions);
+        tx.Commit();
+    }
+
+    /// <summary>Removes one interview and all its rows (one transaction); false when it is not stored.</summary>
+    public bool Remove(string sourcePath)
+    {
+        using var tx = _connection.BeginTransaction();
+        long? id = ScalarOrNull(tx, "SELECT id FROM interviews WHERE source_path = $p", ("$p", Path.GetFullPath(sourcePath)));
+        if (id is null) return false;
+        DeleteRows(tx, id.Value);
+        tx.Commit();
+        return true;
+    }
+
+    /// <summary>Every interview with its headings and their mention times, by folder name; headings in
+    /// each interview's own order.</summary>
+    public IReadOnlyList<CollectionInterview> Collection()
+    {
+        var times = new Dictionary<(long, string), ImmutableArray<Timecode>.Builder>();
+        using (var command = _connection.CreateCommand())
+        {
+            command.CommandText = "SELECT interview_id, heading, start_ms FROM mentions WHERE heading IS NOT NULL ORDER BY interview_id, heading, heading_rank";
+            using var reader = command.ExecuteReader();
+            while (reader.Read())
+            {
+                var key = (reader.GetInt64(0), reader.GetString(1));
+                if (!times.TryGetValue(key, out var list)) times[key] = list = ImmutableArray.CreateBuilder<Timecode>();
+                list.Add(new Timecode(reader.GetInt64(2)));
+            }
+        }
+        var headings = new Dictionary<long, ImmutableArray<CollectionHeadingUse>.Builder>();
+        using (var command = _connection.CreateCommand())
+        {
+            command.CommandText = "SELECT interview_id, heading, label, name, geoname_id, place_name, lat, lon, country, population FROM headings ORDER BY interview_id, position";
+            using var reader = command.ExecuteReader();
+            while (reader.Read())
+            {
+                long interview = reader.GetInt64(0);
+                string id = reader.GetString(1);
+                if (!headings.TryGetValue(interview, out var list)) headings[interview] = list = ImmutableArray.CreateBuilder<CollectionHeadingUse>();
+                list.Add(new CollectionHeadingUse(id, Enum.Parse<NameLabel>(reader.GetString(2)), reader.GetString(3), StoredPlace.Read(reader, 4),
+                    times.TryGetValue((interview, id), out var t) ? t.ToImmutable() : []));
+            }
+        }
+        var interviews = new List<CollectionInterview>();
+        using (var command = _connection.CreateCommand())
+        {
+            command.CommandText = "SELECT id, name, folder, main_language, duration_ms FROM interviews ORDER BY folder";
+            using var reader = command.ExecuteReader();
+            while (reader.Read())
+                interviews.Add(new CollectionInterview(reader.GetString(1), reader.GetString(2), reader.GetString(3), new Timecode(reader.GetInt64(4)),
+                    headings.TryGetValue(reader.GetInt64(0), out var h) ? h.ToImmutable() : []));
+        }
+        return interviews;
+    }
+
+    public IReadOnlyList<SearchHit> Search(SearchQuery query) => new StoreSearch(_connection).Run(query);
+
+    /// <summary>Row counts per table, for reports and tests.</summary>
+    public IReadOnlyDictionary<string, long> Counts()
+    {
+        var counts = new SortedDictionary<string, long>(StringComparer.Ordinal);
+        foreach (var table in DataTables.Append("interviews"))
+            counts[table] = ScalarOrNull(null, $"SELECT count(*) FROM {table}") ?? 0;
+        return counts;
+    }
+
+    internal static readonly string[] DataTables = ["search_rows", "decisions", "worklist", "mentions", "heading_variants", "headings", "language_spans", "cues", "turns"];
+
+    private void DeleteRows(SqliteTransaction tx, long id)
+    {
+        foreach (var table in DataTables) Execute(tx, $"DELETE FROM {table} WHERE interview_id = $id", ("$id", id));
+        Execute(tx, "DELETE FROM interviews WHERE id = $id", ("$id", id));
+    }
+
+    private void Execute(SqliteTransaction? tx, string sql, params (string Name, object? Value)[] parameters)
+    {
+        using var command = Command(tx, sql, parameters);
+        command.ExecuteNonQuery();
+    }
+
+    private long? ScalarOrNull(SqliteTransaction? tx, string sql, params (string Name, object? Value)[] parameters)
+    {
+        using var command = Command(tx, sql, parameters);
+        return command.ExecuteScalar() is long value ? value : null;
+    }
+
+    private SqliteCommand Command(SqliteTransaction? tx, string sql, (string Name, object? Value)[] parameters)
+    {
+        var command = _connection.CreateCommand();
+        command.Transaction = tx;
+        command.CommandText = sql;
+        foreach (var (name, value) in parameters) command.Parameters.AddWithValue(name, value ?? DBNull.Value);
+        return command;
+    }
+
+    private static void Execute(SqliteConnection connection, string sql)
+    {
+        using var command = connection.CreateCommand();
+        command.CommandText = sql;
+        command.ExecuteNonQuery();
+    }
+}
