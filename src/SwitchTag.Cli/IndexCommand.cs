@@ -19,9 +19,12 @@ public static class IndexCommand
         var names = new Option<string>("--names") { Description = "rules-only (authority list and gazetteer) or default (rules, then the name model).", DefaultValueFactory = _ => "default" };
         var authority = new Option<string?>("--authority") { Description = "Authority list CSV (label,name,variants)." };
         var decisions = new Option<string?>("--decisions") { Description = "Reviewers' decisions CSV (see SCHEMA.md)." };
+        var jobs = new Option<int>("--jobs", "-j") { Description = "Interviews indexed at once (default: all cores); outputs are the same for any number." };
+        var force = new Option<bool>("--force") { Description = "Redo interviews the collection store holds unchanged." };
+        var prune = new Option<bool>("--prune") { Description = "Remove from the collection the interviews whose source file is gone." };
         var command = new Command("index", "Index people, places and organisations and list the stretches to translate.")
         {
-            paths, output, format, main, names, authority, decisions,
+            paths, output, format, main, names, authority, decisions, jobs, force, prune,
         };
         command.SetAction(parse =>
         {
@@ -32,7 +35,12 @@ public static class IndexCommand
                 Console.Error.WriteLine($"switchtag index: {usage}");
                 return ExitCodes.Usage;
             }
-            return IndexRun.Execute(options, Console.Error);
+            if (parse.GetValue(jobs) < 0)
+            {
+                Console.Error.WriteLine("switchtag index: --jobs wants a positive number");
+                return ExitCodes.Usage;
+            }
+            return IndexRun.Execute(options with { Jobs = parse.GetValue(jobs), Force = parse.GetValue(force), Prune = parse.GetValue(prune) }, Console.Error);
         });
         return command;
     }
@@ -47,7 +55,10 @@ public sealed record IndexOptions(
     TaggingMode Names,
     string? AuthorityPath,
     ImmutableArray<Decision> Decisions,
-    ImmutableArray<Diagnostic> DecisionProblems)
+    ImmutableArray<Diagnostic> DecisionProblems,
+    int Jobs = 0,
+    bool Force = false,
+    bool Prune = false)
 {
     public static IndexOptions? From(string[] paths, string outDir, string? format, string? main, string names,
         string? authority, string? decisions, out string? usage)

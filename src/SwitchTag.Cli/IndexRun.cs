@@ -2,7 +2,6 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Formats;
 using SwitchTag.Indexing;
-using SwitchTag.Output;
 
 namespace SwitchTag.Cli;
 
@@ -27,48 +26,21 @@ public static class IndexRun
         }
         foreach (var note in stages.Notes) log.WriteLine(note);
 
-        var entries = new List<CollectionEntry>();
-        var outcomes = new List<DecisionOutcome>();
-        var folders = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
-        IndexProgress.Run(log, files, file =>
-        {
-            var read = TranscriptFile.Read(file, options.Format);
-            foreach (var d in read.Diagnostics) log.WriteLine(d);
-            if (read.Transcript is null) { rejected = true; return; }
-            try
-            {
-                var (index, applied) = stages.Run(read.Transcript, options.MainLanguage, options.Decisions);
-                string folder = UniqueFolder(index.Transcript.Name, folders);
-                InterviewOutputs.Write(index, Path.Combine(options.OutDir, folder));
-                entries.Add(CollectionEntry.From(index, folder));
-                outcomes.AddRange(applied);
-            }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-            {
-                log.WriteLine(new Diagnostic(new SourceLine(file, 0), Severity.Error, $"cannot write the outputs: {e.Message}"));
-                rejected = true;
-            }
-        });
-
+        CollectionRunResult run;
         try
         {
-            InterviewOutputs.WriteCollection(entries, options.OutDir);
+            run = CollectionRun.Execute(options, stages, files, log);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e) when (e is Microsoft.Data.Sqlite.SqliteException or InvalidDataException)
         {
-            log.WriteLine($"switchtag index: cannot write the collection index in {options.OutDir}: {e.Message}");
-            rejected = true;
+            log.WriteLine($"switchtag index: the collection store in {options.OutDir} cannot be used: {e.Message}");
+            return ExitCodes.InputsRejected;
         }
+        rejected |= run.Rejected;
+        var outcomes = run.Outcomes.ToList();
         ReportDecisions(options.Decisions, outcomes, log);
-        log.WriteLine($"switchtag index: {entries.Count} of {files.Count} interviews indexed into {options.OutDir}");
+        log.WriteLine($"switchtag index: {run.Indexed} of {files.Count} interviews indexed, {run.Skipped} unchanged, into {options.OutDir}");
         return rejected ? ExitCodes.InputsRejected : ExitCodes.Success;
-    }
-
-    private static string UniqueFolder(string name, HashSet<string> used)
-    {
-        string folder = name;
-        for (int k = 2; !used.Add(folder); k++) folder = $"{name}-{k}";
-        return folder;
     }
 
     private static void ReportDecisions(ImmutableArray<Decision> decisions, List<DecisionOutcome> outcomes, TextWriter log)

@@ -5,6 +5,7 @@ using SwitchTag.Cli;
 var root = new RootCommand("SwitchTag: index people, places and organisations in multilingual interview transcripts, offline.");
 root.Subcommands.Add(IndexCommand.Create());
 root.Subcommands.Add(LangIdCommand.Create());
+root.Subcommands.Add(SearchCommand.Create());
 root.Subcommands.Add(new Command("eval", "Score the shipped models against gold data.")
 {
     EvalNerCommand.Create(),

@@ -123,6 +123,18 @@ public sealed class CollectionStore : IDisposable
         return true;
     }
 
+    /// <summary>The reviewer decisions stored with one interview: decision text → times applied.</summary>
+    public IReadOnlyDictionary<string, int> Decisions(string sourcePath)
+    {
+        using var command = Command(null,
+            "SELECT d.decision, d.applied FROM decisions d JOIN interviews i ON i.id = d.interview_id WHERE i.source_path = $p ORDER BY d.position",
+            [("$p", Path.GetFullPath(sourcePath))]);
+        using var reader = command.ExecuteReader();
+        var applied = new Dictionary<string, int>(StringComparer.Ordinal);
+        while (reader.Read()) applied[reader.GetString(0)] = reader.GetInt32(1);
+        return applied;
+    }
+
     /// <summary>Every interview with its headings and their mention times, by folder name; headings in
     /// each interview's own order.</summary>
     public IReadOnlyList<CollectionInterview> Collection()
