@@ -93,14 +93,17 @@ public static class CollectionWriter
     public static string RenderMarkdown(IReadOnlyList<CollectionEntry> entries)
     {
         var md = new StringBuilder("# Collection index\n\n> ").Append(ReportMarkdownWriter.Caution).Append("\n\n");
-        md.Append("Interviews: ").Append(string.Join(", ", entries.Select(e => MarkdownText.Escape(e.Interview)))).Append("\n\n");
+        md.Append("Interviews: ").Append(string.Join(", ", entries.Select(Link))).Append("\n\n");
         var table = new MarkdownTable(md, "| Heading | Label | Place | Interview | Times |", "| --- | --- | --- | --- | --- |");
         foreach (var row in Rows(entries))
             foreach (var (entry, heading) in row.Uses)
                 table.Row().Append("| **").Append(MarkdownText.Escape(row.Name)).Append("** | ").Append(row.Label).Append(" | ")
                   .Append(row.Place is null ? "" : MarkdownText.Escape(row.Place.Country)).Append(" | ")
-                  .Append(MarkdownText.Escape(entry.Interview)).Append(" | ")
+                  .Append(Link(entry)).Append(" | ")
                   .Append(string.Join(", ", heading.Times.Select(t => t.ToString()))).Append(" |\n");
         return md.ToString();
     }
+
+    /// <summary>The interview's name linking its report by a path relative to the collection page.</summary>
+    private static string Link(CollectionEntry e) => $"[{MarkdownText.Escape(e.Interview)}]({Uri.EscapeDataString(e.Folder)}/index.html)";
 }

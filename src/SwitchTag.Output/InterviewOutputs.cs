@@ -1,4 +1,5 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Output.Tei;
 
 namespace SwitchTag.Output;
 
@@ -6,7 +7,7 @@ namespace SwitchTag.Output;
 public static class InterviewOutputs
 {
     public static readonly IReadOnlyList<string> FileNames =
-        ["index.json", "index.md", "index.html", "mentions.csv", "worklist.csv", "places.geojson", "annotated.vtt"];
+        ["index.json", "index.md", "index.html", "mentions.csv", "worklist.csv", "places.geojson", "annotated.vtt", "index.tei.xml"];
 
     public static void Write(InterviewIndex index, string folder)
     {
@@ -18,6 +19,7 @@ public static class InterviewOutputs
         AtomicFile.WriteText(Path.Combine(folder, "worklist.csv"), WorklistCsvWriter.Render(index));
         AtomicFile.Write(Path.Combine(folder, "places.geojson"), s => PlacesGeoJsonWriter.Write(index, s));
         AtomicFile.WriteText(Path.Combine(folder, "annotated.vtt"), AnnotatedVttWriter.Render(index));
+        AtomicFile.Write(Path.Combine(folder, "index.tei.xml"), s => TeiWriter.Write(index, s));
     }
 
     public static void WriteCollection(IReadOnlyList<CollectionEntry> entries, string outDir)
