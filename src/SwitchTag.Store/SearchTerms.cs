@@ -11,7 +11,8 @@ namespace SwitchTag.Store;
 /// (<see cref="NameFolding.SameName"/>), so the prefix's over-reach ("krakowski") is dropped.</summary>
 public static class SearchTerms
 {
-    /// <summary>The folded words of a text joined by one space: the <c>terms</c> column.</summary>
+    /// <summary>The folded words of a text joined by one space: the <c>terms</c> column. Splitting it
+    /// at each space gives the words of <see cref="NameWords.Split"/> in order, one for one.</summary>
     public static string Of(string text)
     {
         var sb = new StringBuilder(text.Length);
@@ -47,13 +48,19 @@ public static class SearchTerms
     public static List<string> QueryWords(string query) => NameWords.Split(query).Select(w => w.Folded).ToList();
 
     /// <summary>Whether the words of a stored text, from <paramref name="first"/> on, are the query's
-    /// words, each the same name or an inflected form of it (as the index groups mentions).</summary>
-    public static bool MeetsAt(IReadOnlyList<NameWord> words, int first, IReadOnlyList<string> queryWords, string textLanguage)
+    /// words, each the same name or an inflected form of it (as the index groups mentions).
+    /// <paramref name="meets"/> remembers each word's answer: a collection repeats its words often.</summary>
+    public static bool MeetsAt(IReadOnlyList<string> words, int first, IReadOnlyList<string> queryWords, string textLanguage,
+        Dictionary<(string, string, int), bool> meets)
     {
         if (first + queryWords.Count > words.Count) return false;
         for (int i = 0; i < queryWords.Count; i++)
-            if (!NameFolding.SameName(words[first + i].Folded, textLanguage, queryWords[i], "und"))
-                return false;
+        {
+            var key = (Word: words[first + i], textLanguage, i);
+            if (!meets.TryGetValue(key, out bool same))
+                meets[key] = same = NameFolding.SameName(key.Word, textLanguage, queryWords[i], "und");
+            if (!same) return false;
+        }
         return true;
     }
 

@@ -12,6 +12,7 @@ internal sealed class StoreSearch(SqliteConnection connection)
     private sealed record TurnInfo(string Folder, string? Speaker, string Text);
 
     private readonly Dictionary<(long, int), TurnInfo> _turns = [];
+    private readonly Dictionary<(string, string, int), bool> _meets = [];
 
     public IReadOnlyList<SearchHit> Run(SearchQuery query)
     {
@@ -20,14 +21,20 @@ internal sealed class StoreSearch(SqliteConnection connection)
 
         var headings = new Dictionary<(long Interview, string Heading), double?>();
         var textHits = new List<SearchHit>();
+        // Only a word the full-text match could have met is worth the full name comparison.
+        var firstPrefixes = words.Count > 0 ? SearchTerms.PrefixesOf(words[0]) : [];
         if (words.Count > 0)
             foreach (var row in Candidates(words))
             {
-                var rowWords = NameWords.Split(row.Text);
-                for (int i = 0; i < rowWords.Count; i++)
+                // The stored folded words decide; the text is split for offsets only when something matched.
+                var terms = row.Terms.Split(' ');
+                List<NameWord>? rowWords = null;
+                for (int i = 0; i < terms.Length; i++)
                 {
-                    if (!SearchTerms.MeetsAt(rowWords, i, words, row.Language ?? "und")) continue;
+                    if (!firstPrefixes.Any(p => terms[i].StartsWith(p, StringComparison.Ordinal))) continue;
+                    if (!SearchTerms.MeetsAt(terms, i, words, row.Language ?? "und", _meets)) continue;
                     if (row.Heading is not null) { headings[(row.Interview, row.Heading)] = null; break; }
+                    rowWords ??= NameWords.Split(row.Text);
                     int start = row.CharStart + rowWords[i].Start, end = row.CharStart + rowWords[i + words.Count - 1].End;
                     var turn = Turn(row.Interview, row.Turn);
                     textHits.Add(new SearchHit(turn.Folder, new TimeRange(new Timecode(row.StartMs), new Timecode(row.EndMs)), turn.Speaker, null,
@@ -47,9 +54,9 @@ internal sealed class StoreSearch(SqliteConnection connection)
         var hits = new List<SearchHit>();
         foreach (var ((interview, heading), distance) in headings)
             hits.AddRange(MentionHits(interview, heading, distance));
-        var named = hits.Select(h => (h.Interview, h.Turn, h.CharStart, h.CharEnd)).ToList();
+        var named = hits.ToLookup(h => (h.Interview, h.Turn));
         // A text hit inside a mention already listed says nothing more.
-        hits.AddRange(textHits.Where(t => !named.Any(n => n.Interview == t.Interview && n.Turn == t.Turn && n.CharStart < t.CharEnd && t.CharStart < n.CharEnd)));
+        hits.AddRange(textHits.Where(t => !named[(t.Interview, t.Turn)].Any(n => n.CharStart < t.CharEnd && t.CharStart < n.CharEnd)));
 
         string? speaker = query.Speaker is null ? null : NameFolding.FoldedWords(query.Speaker);
         return hits
@@ -61,21 +68,29 @@ internal sealed class StoreSearch(SqliteConnection connection)
             .ToList();
     }
 
-    private sealed record Row(long Interview, string? Heading, int Turn, int CharStart, string? Language, long StartMs, long EndMs, string Text);
+    private sealed record Row(long Interview, string? Heading, int Turn, int CharStart, string? Language, long StartMs, long EndMs, string Text, string Terms);
 
+    /// <summary>The rows the full-text index matches; for text rows the turn's folder, speaker and text
+    /// come along (one query, not one per hit).</summary>
     private List<Row> Candidates(IReadOnlyList<string> words)
     {
         using var command = connection.CreateCommand();
         command.CommandText =
-            "SELECT r.interview_id, r.heading, r.turn, r.char_start, r.language, r.start_ms, r.end_ms, r.text " +
-            "FROM search_fts JOIN search_rows r ON r.id = search_fts.rowid WHERE search_fts MATCH $q ORDER BY r.id";
+            "SELECT r.interview_id, r.heading, r.turn, r.char_start, r.language, r.start_ms, r.end_ms, r.text, i.folder, t.speaker, t.text, r.terms " +
+            "FROM search_fts JOIN search_rows r ON r.id = search_fts.rowid JOIN interviews i ON i.id = r.interview_id " +
+            "LEFT JOIN turns t ON t.interview_id = r.interview_id AND t.turn = r.turn WHERE search_fts MATCH $q ORDER BY r.id";
         command.Parameters.AddWithValue("$q", SearchTerms.MatchExpression(words));
         using var reader = command.ExecuteReader();
         var rows = new List<Row>();
         while (reader.Read())
-            rows.Add(new Row(reader.GetInt64(0), reader.IsDBNull(1) ? null : reader.GetString(1), reader.IsDBNull(2) ? -1 : reader.GetInt32(2),
+        {
+            var row = new Row(reader.GetInt64(0), reader.IsDBNull(1) ? null : reader.GetString(1), reader.IsDBNull(2) ? -1 : reader.GetInt32(2),
                 reader.IsDBNull(3) ? 0 : reader.GetInt32(3), reader.IsDBNull(4) ? null : reader.GetString(4),
-                reader.IsDBNull(5) ? 0 : reader.GetInt64(5), reader.IsDBNull(6) ? 0 : reader.GetInt64(6), reader.GetString(7)));
+                reader.IsDBNull(5) ? 0 : reader.GetInt64(5), reader.IsDBNull(6) ? 0 : reader.GetInt64(6), reader.GetString(7), reader.GetString(11));
+            if (row.Heading is null)
+                _turns.TryAdd((row.Interview, row.Turn), new TurnInfo(reader.GetString(8), reader.IsDBNull(9) ? null : reader.GetString(9), reader.GetString(10)));
+            rows.Add(row);
+        }
         return rows;
     }
 
@@ -93,7 +108,7 @@ internal sealed class StoreSearch(SqliteConnection connection)
         }
         var named = placeWords.Count == 0 ? [] : Candidates(placeWords)
             .Where(r => r.Heading is not null)
-            .Where(r => { var w = NameWords.Split(r.Text); return w.Count == placeWords.Count && SearchTerms.MeetsAt(w, 0, placeWords, "und"); })
+            .Where(r => { var w = r.Terms.Split(' '); return w.Length == placeWords.Count && SearchTerms.MeetsAt(w, 0, placeWords, "und", new()); })
             .Select(r => (r.Interview, r.Heading!)).ToHashSet();
         var centres = linked.Where(l => named.Contains((l.Interview, l.Heading))).Select(l => (l.Lat, l.Lon)).Distinct().ToList();
         var result = new Dictionary<(long, string), double?>();
@@ -111,8 +126,9 @@ internal sealed class StoreSearch(SqliteConnection connection)
         using var command = connection.CreateCommand();
         command.CommandText =
             "SELECT m.turn, m.char_start, m.char_end, m.start_ms, m.end_ms, m.text, m.label, m.language, h.name, " +
-            "h.geoname_id, h.place_name, h.lat, h.lon, h.country, h.population " +
+            "h.geoname_id, h.place_name, h.lat, h.lon, h.country, h.population, i.folder, t.speaker, t.text " +
             "FROM mentions m JOIN headings h ON h.interview_id = m.interview_id AND h.heading = m.heading " +
+            "JOIN interviews i ON i.id = m.interview_id JOIN turns t ON t.interview_id = m.interview_id AND t.turn = m.turn " +
             "WHERE m.interview_id = $i AND m.heading = $h ORDER BY m.heading_rank";
         command.Parameters.AddWithValue("$i", interview);
         command.Parameters.AddWithValue("$h", heading);
@@ -121,7 +137,7 @@ internal sealed class StoreSearch(SqliteConnection connection)
         while (reader.Read())
         {
             int turnIndex = reader.GetInt32(0), start = reader.GetInt32(1), end = reader.GetInt32(2);
-            var turn = Turn(interview, turnIndex);
+            var turn = new TurnInfo(reader.GetString(15), reader.IsDBNull(16) ? null : reader.GetString(16), reader.GetString(17));
             hits.Add(new SearchHit(turn.Folder, new TimeRange(new Timecode(reader.GetInt64(3)), new Timecode(reader.GetInt64(4))), turn.Speaker,
                 Enum.Parse<NameLabel>(reader.GetString(6)), Sentence.Around(turn.Text, start, end), reader.GetString(5), reader.GetString(7),
                 turnIndex, start, end, heading, reader.GetString(8), StoredPlace.Read(reader, 9), distance));
@@ -129,17 +145,5 @@ internal sealed class StoreSearch(SqliteConnection connection)
         return hits;
     }
 
-    private TurnInfo Turn(long interview, int turn)
-    {
-        if (_turns.TryGetValue((interview, turn), out var info)) return info;
-        using var command = connection.CreateCommand();
-        command.CommandText = "SELECT i.folder, t.speaker, t.text FROM turns t JOIN interviews i ON i.id = t.interview_id WHERE t.interview_id = $i AND t.turn = $t";
-        command.Parameters.AddWithValue("$i", interview);
-        command.Parameters.AddWithValue("$t", turn);
-        using var reader = command.ExecuteReader();
-        reader.Read();
-        info = new TurnInfo(reader.GetString(0), reader.IsDBNull(1) ? null : reader.GetString(1), reader.GetString(2));
-        _turns[(interview, turn)] = info;
-        return info;
-    }
+    private TurnInfo Turn(long interview, int turn) => _turns[(interview, turn)];
 }

@@ -1,0 +1,66 @@
+using System.Diagnostics;
+using System.Globalization;
+using SwitchTag.Cli;
+using SwitchTag.Core.Pipeline;
+using SwitchTag.Formats;
+using SwitchTag.Indexing;
+using SwitchTag.Store;
+using SwitchTag.Tagging;
+
+// The collection benchmark's phases, each its own process so each peak working set is its own:
+//   gen DEMO_DIR INTO N            write N synthetic interviews, print their word count
+//   index INTO OUT JOBS [NAMES]    one `switchtag index` run into OUT's store; seconds and peak memory
+//   search OUT QUERIES             latency of each query in the store (library call, store opened once)
+// Output is tab-separated "key<TAB>value" lines for scripts/bench-collection to put in a table.
+var inv = CultureInfo.InvariantCulture;
+switch (args.ElementAtOrDefault(0))
+{
+    case "gen":
+    {
+        var files = Synthetic.Write(args[1], args[2], int.Parse(args[3], inv));
+        long words = files.Sum(f => TurnBuilder.Build(TranscriptFile.Read(f).Transcript!).Sum(t => LanguageStatistics.CountWords(t.Text, 0, t.Text.Length)));
+        Console.WriteLine($"interviews\t{files.Count}");
+        Console.WriteLine($"words\t{words}");
+        return 0;
+    }
+    case "index":
+    {
+        var mode = args.ElementAtOrDefault(4) == "rules-only" ? TaggingMode.RulesOnly : TaggingMode.RulesThenModel;
+        var options = new IndexOptions([args[1]], args[2], null, null, mode, null, [], [], int.Parse(args[3], inv));
+        var log = new StringWriter();
+        var clock = Stopwatch.StartNew();
+        int code = IndexRun.Execute(options, log);
+        clock.Stop();
+        if (code != 0) Console.Error.Write(log);
+        Console.WriteLine(string.Create(inv, $"seconds\t{clock.Elapsed.TotalSeconds:0.00}"));
+        Console.WriteLine(string.Create(inv, $"peak_mb\t{Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024):0}"));
+        Console.WriteLine($"summary\t{log.ToString().Split('\n', StringSplitOptions.RemoveEmptyEntries).Last()}");
+        return code;
+    }
+    case "search":
+    {
+        var queries = File.ReadAllLines(args[2]).Where(l => l.Length > 0).ToList();
+        using var store = CollectionStore.Open(args[1]);
+        store.Search(new SearchQuery(queries[0]));
+        var times = new List<double>();
+        long hits = 0;
+        (string Query, double Ms) slowest = ("", 0);
+        foreach (var q in queries)
+        {
+            var clock = Stopwatch.StartNew();
+            hits += store.Search(new SearchQuery(q)).Count;
+            times.Add(clock.Elapsed.TotalMilliseconds);
+            if (times[^1] > slowest.Ms) slowest = (q, times[^1]);
+        }
+        times.Sort();
+        Console.WriteLine($"queries\t{times.Count}");
+        Console.WriteLine($"hits\t{hits}");
+        Console.WriteLine(string.Create(inv, $"median_ms\t{times[times.Count / 2]:0.0}"));
+        Console.WriteLine(string.Create(inv, $"p99_ms\t{times[(int)Math.Ceiling(0.99 * times.Count) - 1]:0.0}"));
+        Console.WriteLine(string.Create(inv, $"slowest\t{slowest.Query} ({slowest.Ms:0.0} ms)"));
+        return 0;
+    }
+    default:
+        Console.Error.WriteLine("usage: CollectionBench gen DEMO INTO N | index INTO OUT JOBS [rules-only] | search OUT QUERIES_FILE");
+        return 2;
+}
