@@ -48,8 +48,17 @@ public static class SearchCommand
                 Console.Error.WriteLine($"switchtag search: no collection store in {dir} (run 'switchtag index ... --out {dir}' first)");
                 return ExitCodes.InputsRejected;
             }
-            using var store = CollectionStore.Open(dir);
-            var hits = store.Search(new SearchQuery(text, only, parse.GetValue(language), parse.GetValue(speaker), radius));
+            IReadOnlyList<SearchHit> hits;
+            try
+            {
+                using var store = CollectionStore.Open(dir);
+                hits = store.Search(new SearchQuery(text, only, parse.GetValue(language), parse.GetValue(speaker), radius));
+            }
+            catch (Exception e) when (e is Microsoft.Data.Sqlite.SqliteException or InvalidDataException)
+            {
+                Console.Error.WriteLine($"switchtag search: the collection store in {dir} cannot be read: {e.Message}");
+                return ExitCodes.InputsRejected;
+            }
             bool asJson = parse.GetValue(json);
             foreach (var hit in hits) Console.Out.WriteLine(asJson ? hit.ToJson() : hit.ToString());
             if (!asJson) Console.Error.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{hits.Count} hits"));

@@ -67,7 +67,8 @@ public sealed record SearchHit(
         return System.Text.Encoding.UTF8.GetString(buffer.ToArray());
     }
 
-    /// <summary>The plain-text line: interview, time, speaker, label and the sentence.</summary>
+    /// <summary>The plain-text line: interview, time, speaker, label and heading (or "text"), and the
+    /// sentence on the same line.</summary>
     public override string ToString() => string.Create(CultureInfo.InvariantCulture,
-        $"{Interview}  {Time.Start}  {Speaker ?? "-"}  {(Label is { } l ? l + " " + Heading : "text")}{(DistanceKm is { } km ? $" ({km:0} km)" : "")}: {Text}");
+        $"{Interview}  {Time.Start}  {Speaker ?? "-"}  {(Label is { } l ? l + " " + Heading : "text")}{(DistanceKm is { } km ? $" ({km:0} km)" : "")}: {Text.ReplaceLineEndings(" ")}");
 }
