@@ -18,15 +18,20 @@ public sealed record CollectionRunResult(int Indexed, int Skipped, bool Rejected
 /// grow with the collection. The collection index is rebuilt from the store at the end.</summary>
 public static class CollectionRun
 {
-    private sealed record Planned(string File, string Folder, StoredInterview? Stored);
+    private sealed record Planned(string File, string Folder, StoredInterview? Stored, bool Unchanged);
 
     private sealed record Done(ImmutableArray<string> Log, bool Rejected, bool Skipped, InterviewIndex? Index, Planned Plan, ImmutableArray<DecisionOutcome> Outcomes);
 
-    public static CollectionRunResult Execute(IndexOptions options, IndexStages stages, IReadOnlyList<string> files, TextWriter log)
+    /// <summary>Runs the files; <paramref name="loadStages"/> is called only when some interview must be
+    /// indexed (an unchanged collection needs no model), and a null from it ends the run with null.</summary>
+    public static CollectionRunResult? Execute(IndexOptions options, Func<IndexStages?> loadStages, IReadOnlyList<string> files, TextWriter log)
     {
         using var store = CollectionStore.Open(options.OutDir);
         string fingerprint = ModelFingerprint.Of(options);
-        var plan = Plan(files, store.Interviews());
+        var plan = Plan(files, store.Interviews(), options, fingerprint);
+        IndexStages? loaded = null;
+        if (plan.Any(p => !p.Unchanged) && (loaded = loadStages()) is null) return null;
+        var stages = loaded!;
         int jobs = options.Jobs > 0 ? options.Jobs : Environment.ProcessorCount;
         var results = plan.Select(_ => new TaskCompletionSource<Done>(TaskCreationOptions.RunContinuationsAsynchronously)).ToArray();
         using var window = new SemaphoreSlim(2 * jobs);
@@ -39,7 +44,7 @@ public static class CollectionRun
                 window.Wait(cancel.Token);
                 int i = Interlocked.Increment(ref next);
                 if (i >= plan.Count) return;
-                try { results[i].SetResult(Work(plan[i], options, stages, fingerprint)); }
+                try { results[i].SetResult(Work(plan[i], options, stages)); }
                 catch (Exception e) { results[i].SetException(e); }
             }
         }, cancel.Token, TaskCreationOptions.LongRunning, TaskScheduler.Default)).ToArray();
@@ -94,8 +99,10 @@ public static class CollectionRun
     }
 
     /// <summary>Each distinct file with its folder: the one the store already gives its source, else
-    /// its name, numbered past any folder taken (in the store or earlier in this run).</summary>
-    private static List<Planned> Plan(IReadOnlyList<string> files, IReadOnlyList<StoredInterview> stored)
+    /// its name, numbered past any folder taken (in the store or earlier in this run); and whether it
+    /// is unchanged (same bytes, same fingerprint, outputs still there), found from the bytes' SHA-256
+    /// alone, without parsing.</summary>
+    private static List<Planned> Plan(IReadOnlyList<string> files, IReadOnlyList<StoredInterview> stored, IndexOptions options, string fingerprint)
     {
         var bySource = stored.ToDictionary(s => s.SourcePath, StringComparer.Ordinal);
         var used = new HashSet<string>(stored.Select(s => s.Folder), StringComparer.OrdinalIgnoreCase);
@@ -105,23 +112,40 @@ public static class CollectionRun
         {
             string full = Path.GetFullPath(file);
             if (!seen.Add(full)) continue;
-            if (bySource.TryGetValue(full, out var known)) { plan.Add(new Planned(file, known.Folder, known)); continue; }
+            if (bySource.TryGetValue(full, out var known))
+            {
+                bool unchanged = !options.Force && known.ModelVersions == fingerprint && Sha256Of(file) == known.Sha256
+                                 && File.Exists(Path.Combine(options.OutDir, known.Folder, "index.json"));
+                plan.Add(new Planned(file, known.Folder, known, unchanged));
+                continue;
+            }
             string name = Path.GetFileNameWithoutExtension(file), folder = name;
             for (int k = 2; !used.Add(folder); k++) folder = $"{name}-{k}";
-            plan.Add(new Planned(file, folder, null));
+            plan.Add(new Planned(file, folder, null, false));
         }
         return plan;
     }
 
-    private static Done Work(Planned plan, IndexOptions options, IndexStages stages, string fingerprint)
+    private static string? Sha256Of(string file)
     {
+        try
+        {
+            using var stream = File.OpenRead(file);
+            return Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(stream));
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            return null; // reading it again in the worker reports why
+        }
+    }
+
+    private static Done Work(Planned plan, IndexOptions options, IndexStages stages)
+    {
+        if (plan.Unchanged) return new Done([], false, true, null, plan, []);
         var read = TranscriptFile.Read(plan.File, options.Format);
         var log = read.Diagnostics.Select(d => d.ToString()).ToImmutableArray();
         if (read.Transcript is null) return new Done(log, true, false, null, plan, []);
         string folder = Path.Combine(options.OutDir, plan.Folder);
-        if (!options.Force && plan.Stored is { } s && s.Sha256 == read.Transcript.Source.Sha256 && s.ModelVersions == fingerprint
-            && File.Exists(Path.Combine(folder, "index.json")))
-            return new Done(log, false, true, null, plan, []);
         var (index, applied) = stages.Run(read.Transcript, options.MainLanguage, options.Decisions);
         try
         {

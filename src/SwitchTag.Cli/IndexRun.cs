@@ -18,23 +18,29 @@ public static class IndexRun
         bool rejected = problems.Count > 0;
         foreach (var p in problems) log.WriteLine(p);
 
-        var stages = IndexStages.Load(options.Names, options.AuthorityPath, out string? error);
-        if (stages is null)
+        string? error = null;
+        IndexStages? LoadStages()
         {
-            log.WriteLine($"switchtag index: {error}");
-            return ExitCodes.Usage;
+            var stages = IndexStages.Load(options.Names, options.AuthorityPath, out error);
+            if (stages is not null)
+                foreach (var note in stages.Notes) log.WriteLine(note);
+            return stages;
         }
-        foreach (var note in stages.Notes) log.WriteLine(note);
 
-        CollectionRunResult run;
+        CollectionRunResult? run;
         try
         {
-            run = CollectionRun.Execute(options, stages, files, log);
+            run = CollectionRun.Execute(options, LoadStages, files, log);
         }
         catch (Exception e) when (e is Microsoft.Data.Sqlite.SqliteException or InvalidDataException)
         {
             log.WriteLine($"switchtag index: the collection store in {options.OutDir} cannot be used: {e.Message}");
             return ExitCodes.InputsRejected;
+        }
+        if (run is null)
+        {
+            log.WriteLine($"switchtag index: {error}");
+            return ExitCodes.Usage;
         }
         rejected |= run.Rejected;
         var outcomes = run.Outcomes.ToList();

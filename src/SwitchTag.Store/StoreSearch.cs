@@ -28,13 +28,13 @@ internal sealed class StoreSearch(SqliteConnection connection)
             {
                 // The stored folded words decide; the text is split for offsets only when something matched.
                 var terms = row.Terms.Split(' ');
-                List<NameWord>? rowWords = null;
+                List<(int Start, int End)>? rowWords = null;
                 for (int i = 0; i < terms.Length; i++)
                 {
                     if (!firstPrefixes.Any(p => terms[i].StartsWith(p, StringComparison.Ordinal))) continue;
                     if (!SearchTerms.MeetsAt(terms, i, words, row.Language ?? "und", _meets)) continue;
                     if (row.Heading is not null) { headings[(row.Interview, row.Heading)] = null; break; }
-                    rowWords ??= NameWords.Split(row.Text);
+                    rowWords ??= NameWords.Bounds(row.Text);
                     int start = row.CharStart + rowWords[i].Start, end = row.CharStart + rowWords[i + words.Count - 1].End;
                     var turn = Turn(row.Interview, row.Turn);
                     textHits.Add(new SearchHit(turn.Folder, new TimeRange(new Timecode(row.StartMs), new Timecode(row.EndMs)), turn.Speaker, null,
@@ -51,9 +51,7 @@ internal sealed class StoreSearch(SqliteConnection connection)
             textHits.Clear();
         }
 
-        var hits = new List<SearchHit>();
-        foreach (var ((interview, heading), distance) in headings)
-            hits.AddRange(MentionHits(interview, heading, distance));
+        var hits = MentionHits(headings);
         var named = hits.ToLookup(h => (h.Interview, h.Turn));
         // A text hit inside a mention already listed says nothing more.
         hits.AddRange(textHits.Where(t => !named[(t.Interview, t.Turn)].Any(n => n.CharStart < t.CharEnd && t.CharStart < n.CharEnd)));
@@ -121,26 +119,29 @@ internal sealed class StoreSearch(SqliteConnection connection)
         return result;
     }
 
-    private IEnumerable<SearchHit> MentionHits(long interview, string heading, double? distance)
+    /// <summary>Every mention filed under the headings, in one query (the keys go in as a JSON array).</summary>
+    private List<SearchHit> MentionHits(Dictionary<(long Interview, string Heading), double?> headings)
     {
+        var hits = new List<SearchHit>();
+        if (headings.Count == 0) return hits;
         using var command = connection.CreateCommand();
         command.CommandText =
             "SELECT m.turn, m.char_start, m.char_end, m.start_ms, m.end_ms, m.text, m.label, m.language, h.name, " +
-            "h.geoname_id, h.place_name, h.lat, h.lon, h.country, h.population, i.folder, t.speaker, t.text " +
-            "FROM mentions m JOIN headings h ON h.interview_id = m.interview_id AND h.heading = m.heading " +
+            "h.geoname_id, h.place_name, h.lat, h.lon, h.country, h.population, i.folder, t.speaker, t.text, m.interview_id, m.heading " +
+            "FROM json_each($keys) k JOIN mentions m ON m.interview_id = k.value ->> 0 AND m.heading = k.value ->> 1 " +
+            "JOIN headings h ON h.interview_id = m.interview_id AND h.heading = m.heading " +
             "JOIN interviews i ON i.id = m.interview_id JOIN turns t ON t.interview_id = m.interview_id AND t.turn = m.turn " +
-            "WHERE m.interview_id = $i AND m.heading = $h ORDER BY m.heading_rank";
-        command.Parameters.AddWithValue("$i", interview);
-        command.Parameters.AddWithValue("$h", heading);
+            "ORDER BY m.interview_id, m.heading, m.heading_rank";
+        command.Parameters.AddWithValue("$keys", System.Text.Json.JsonSerializer.Serialize(headings.Keys.Select(k => new object[] { k.Interview, k.Heading })));
         using var reader = command.ExecuteReader();
-        var hits = new List<SearchHit>();
         while (reader.Read())
         {
             int turnIndex = reader.GetInt32(0), start = reader.GetInt32(1), end = reader.GetInt32(2);
-            var turn = new TurnInfo(reader.GetString(15), reader.IsDBNull(16) ? null : reader.GetString(16), reader.GetString(17));
-            hits.Add(new SearchHit(turn.Folder, new TimeRange(new Timecode(reader.GetInt64(3)), new Timecode(reader.GetInt64(4))), turn.Speaker,
-                Enum.Parse<NameLabel>(reader.GetString(6)), Sentence.Around(turn.Text, start, end), reader.GetString(5), reader.GetString(7),
-                turnIndex, start, end, heading, reader.GetString(8), StoredPlace.Read(reader, 9), distance));
+            string folder = reader.GetString(15), text = reader.GetString(17), heading = reader.GetString(19);
+            hits.Add(new SearchHit(folder, new TimeRange(new Timecode(reader.GetInt64(3)), new Timecode(reader.GetInt64(4))),
+                reader.IsDBNull(16) ? null : reader.GetString(16), Enum.Parse<NameLabel>(reader.GetString(6)), Sentence.Around(text, start, end),
+                reader.GetString(5), reader.GetString(7), turnIndex, start, end, heading, reader.GetString(8), StoredPlace.Read(reader, 9),
+                headings[(reader.GetInt64(18), heading)]));
         }
         return hits;
     }
