@@ -95,6 +95,7 @@ public sealed class WorkbenchTests(DemoRun demo, Browser browser) : IClassFixtur
         Assert.InRange(shown, 1, all - 1);
         foreach (var text in await visible.EvaluateAllAsync<string[]>("rs => rs.map(r => r.dataset.text)")) Assert.Contains("warsaw", text);
         Assert.Equal(shown.ToString(), await page.Locator("#shown").TextContentAsync());
+        await page.Locator("#filter").ScrollIntoViewIfNeededAsync();
         await page.ScreenshotAsync(new() { Path = Shot("collection.png") });
         // Each interview named links to its report, relatively, and the browser resolves it inside the run folder.
         var link = visible.First.Locator("a").First;

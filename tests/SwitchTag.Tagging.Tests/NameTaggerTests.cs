@@ -75,7 +75,7 @@ public class NameTaggerTests
     [InlineData("מיר זײַנען געקומען קיין ווילנע מיט משה ראָזענבערג.", "yi", "ווילנע")]
     public void ModelMentionsInCyrillicAndHebrewAreKept(string text, string language, string name)
     {
-        var mentions = new NameTagger(Models.Ner).Tag(0, text, [new LanguageSpan(0, text.Length, language, 1.0)]);
+        var mentions = NameTagger.Create(Models.Ner).Tag(0, text, [new LanguageSpan(0, text.Length, language, 1.0)]);
         Assert.Contains(mentions, m => m.Source == MentionSource.Model && m.Text.Contains(name));
     }
 }

@@ -2,6 +2,7 @@ using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Text;
 using SwitchTag.Output.Text;
+using SwitchTag.Core.Time;
 
 namespace SwitchTag.Output.AnnotatedVtt;
 
@@ -66,20 +67,26 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
     }
 
     // Tags go in at char positions of the cue text: at one position, closing tags, then the word
-    // timestamp, then opening tags, so tags nest properly.
+    // timestamp, then opening tags, so tags nest properly. Spans come in text order and do not
+    // overlap, so one pass over the cut points places them (a 10 MB cue may hold 100k spans).
     private static void AppendText(StringBuilder sb, Cue cue, List<(int Start, int End, string Language)> spans)
     {
         string text = cue.Text;
         var breaks = LineBreaks(text);
-        var times = cue.WordTimes.IsDefault ? [] : cue.WordTimes.Where(w => w.CharOffset >= 0 && w.CharOffset < text.Length).ToList();
-        var cuts = spans.SelectMany(s => new[] { s.Start, s.End }).Concat(times.Select(w => w.CharOffset)).Append(0).Append(text.Length)
+        var times = new Dictionary<int, Timecode>();
+        if (!cue.WordTimes.IsDefault)
+            foreach (var w in cue.WordTimes)
+                if (w.CharOffset >= 0 && w.CharOffset < text.Length) times.TryAdd(w.CharOffset, w.Time);
+        var ends = spans.Select(s => s.End).ToHashSet();
+        var cuts = spans.SelectMany(s => new[] { s.Start, s.End }).Concat(times.Keys).Append(0).Append(text.Length)
             .Distinct().Order().ToList();
+        int next = 0;
         for (int k = 0; k < cuts.Count; k++)
         {
             int at = cuts[k];
-            if (spans.Any(s => s.End == at)) sb.Append("</lang>");
-            foreach (var w in times.Where(w => w.CharOffset == at).Take(1)) sb.Append('<').Append(w.Time).Append('>');
-            foreach (var s in spans.Where(s => s.Start == at)) sb.Append("<lang ").Append(s.Language).Append('>');
+            if (ends.Contains(at)) sb.Append("</lang>");
+            if (times.TryGetValue(at, out var time)) sb.Append('<').Append(time).Append('>');
+            for (; next < spans.Count && spans[next].Start == at; next++) sb.Append("<lang ").Append(spans[next].Language).Append('>');
             if (k + 1 < cuts.Count) AppendEscaped(sb, text, at, cuts[k + 1], breaks);
         }
     }

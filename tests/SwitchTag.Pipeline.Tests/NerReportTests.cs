@@ -1,9 +1,10 @@
 using System.Text.Json;
-using SwitchTag.Cli;
+using SwitchTag.Pipeline;
 using SwitchTag.Tagging;
+using Xunit;
 using SwitchTag.Tests.Shared;
 
-namespace SwitchTag.Tagging.Tests;
+namespace SwitchTag.Pipeline.Tests;
 
 /// <summary>Per-source and per-language scores of <c>eval ner</c>. Expected counts follow
 /// conlleval's exact-chunk rules (CoNLL-2000 conlleval.pl, from memory), computed by hand for
@@ -90,7 +91,7 @@ public class NerReportTests
         var da = TestPaths.RequireData("ner/uner/Danish-DDT/da_ddt-ud-test.iob2");
         var sv = TestPaths.RequireData("ner/uner/Swedish-Talbanken/sv_talbanken-ud-test.iob2");
         var output = new StringWriter();
-        Assert.Equal(0, EvalNerCommand.Run([da, sv], json: true, output, new StringWriter()));
+        Assert.Equal(NameEvaluationResult.Scored, NameModelEvaluation.Run([da, sv], json: true, output, new StringWriter()));
         var both = JsonDocument.Parse(output.ToString()).RootElement;
         var sources = both.GetProperty("bySource");
         Assert.Equal(["Danish-DDT", "Swedish-Talbanken"], sources.EnumerateObject().Select(p => p.Name));
@@ -105,7 +106,7 @@ public class NerReportTests
     private static JsonElement Json(string path, bool lowercase)
     {
         var output = new StringWriter();
-        Assert.Equal(0, EvalNerCommand.Run([path], json: true, output, new StringWriter(), lowercase));
+        Assert.Equal(NameEvaluationResult.Scored, NameModelEvaluation.Run([path], json: true, output, new StringWriter(), lowercase: lowercase));
         return JsonDocument.Parse(output.ToString()).RootElement;
     }
 
