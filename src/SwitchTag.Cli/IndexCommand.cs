@@ -1,6 +1,7 @@
 using System.CommandLine;
 using SwitchTag.Output;
 using SwitchTag.Pipeline;
+using SwitchTag.Store;
 
 namespace SwitchTag.Cli;
 
@@ -11,7 +12,8 @@ public static class IndexCommand
     /// <summary>What <c>index --help</c> adds below the options.</summary>
     public static string Epilogue =>
         $"Writes DIR/<interview>/ {string.Join(" ", OutputWriters.Default.InterviewFileNames)}\n" +
-        $"and DIR/ {string.Join(" ", OutputWriters.Default.CollectionFileNames)}.\n\n" +
+        $"and DIR/ {string.Join(" ", OutputWriters.Default.CollectionFileNames)} {CollectionStore.DefaultFileName}\n" +
+        "(the collection store: every interview indexed into DIR across runs; unchanged ones are skipped).\n\n" +
         "Exit codes: 0 every input indexed; 1 some inputs rejected (each reported as file:line: error: reason,\nthe others still indexed); " +
         "2 usage error or a model that cannot be loaded.\n";
 
@@ -26,9 +28,12 @@ public static class IndexCommand
         var authority = new Option<string?>("--authority") { Description = "Authority list CSV (label,name,variants).", HelpName = "NAMES.csv" };
         var decisions = new Option<string?>("--decisions") { Description = "Reviewers' decisions CSV, as review.html exports it (see SCHEMA.md).", HelpName = "DECISIONS.csv" };
         var media = new Option<string?>("--media") { Description = "The recording, so each time in the report opens it at that second; {interview} stands for the interview's name.", HelpName = "URL" };
+        var jobs = new Option<int>("--jobs", "-j") { Description = "Interviews indexed at once (default: one per core); the outputs are the same for any number.", HelpName = "N" };
+        var force = new Option<bool>("--force") { Description = "Redo interviews the collection store holds unchanged." };
+        var prune = new Option<bool>("--prune") { Description = "Remove from the collection the interviews whose source file is gone." };
         var command = new Command("index", "Index people, places and organisations and list the stretches to translate.")
         {
-            paths, output, format, main, names, authority, decisions, media,
+            paths, output, format, main, names, authority, decisions, media, jobs, force, prune,
         };
         command.SetAction(parse =>
         {
@@ -39,6 +44,12 @@ public static class IndexCommand
                 Console.Error.WriteLine($"switchtag index: {usage}");
                 return ExitCodes.Usage;
             }
+            if (parse.GetValue(jobs) < 0)
+            {
+                Console.Error.WriteLine("switchtag index: --jobs wants a positive number");
+                return ExitCodes.Usage;
+            }
+            request = request.WithCollection(parse.GetValue(jobs), parse.GetValue(force), parse.GetValue(prune));
             return IndexRun.Execute(request, Console.Error, IndexProgress.Run) switch
             {
                 IndexRunResult.Indexed => ExitCodes.Success,

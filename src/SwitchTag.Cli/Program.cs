@@ -6,6 +6,7 @@ var root = new RootCommand("SwitchTag: index people, places and organisations in
 var index = IndexCommand.Create();
 root.Subcommands.Add(index);
 root.Subcommands.Add(LangIdCommand.Create());
+root.Subcommands.Add(SearchCommand.Create());
 root.Subcommands.Add(new Command("eval", "Score the shipped models against gold data.")
 {
     EvalNerCommand.Create(),

@@ -10,16 +10,21 @@ public readonly record struct NameWord(int Start, int End, string Folded);
 /// each and inflect word by word.</summary>
 public static class NameWords
 {
-    public static List<NameWord> Split(string text)
+    public static List<NameWord> Split(string text) =>
+        Bounds(text).Select(b => new NameWord(b.Start, b.End, NameFolding.Fold(text[b.Start..b.End]))).ToList();
+
+    /// <summary>Where the words of <see cref="Split"/> are, without folding them (cheaper when only
+    /// offsets are wanted).</summary>
+    public static List<(int Start, int End)> Bounds(string text)
     {
-        var words = new List<NameWord>();
+        var words = new List<(int, int)>();
         int i = 0;
         while (i < text.Length)
         {
             if (!IsWordChar(text, i)) { i++; continue; }
             int start = i;
             while (i < text.Length && IsWordChar(text, i)) i += char.IsSurrogatePair(text, i) ? 2 : 1;
-            words.Add(new NameWord(start, i, NameFolding.Fold(text[start..i])));
+            words.Add((start, i));
         }
         return words;
     }

@@ -30,7 +30,11 @@ public sealed class InterviewFolderName
         "LPT1", "LPT2", "LPT3", "LPT4", "LPT5", "LPT6", "LPT7", "LPT8", "LPT9",
     };
 
-    private readonly HashSet<string> taken = new(RunFileNames, StringComparer.OrdinalIgnoreCase);
+    private readonly HashSet<string> taken;
+
+    /// <summary>A run's names; <paramref name="alreadyTaken"/> are folders earlier runs gave (the collection store's).</summary>
+    public InterviewFolderName(IEnumerable<string>? alreadyTaken = null) =>
+        taken = new HashSet<string>(RunFileNames.Concat(alreadyTaken ?? []), StringComparer.OrdinalIgnoreCase);
 
     /// <summary>The folder for the next interview of the run.</summary>
     public string Next(string idOrName)

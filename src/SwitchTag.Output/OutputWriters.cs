@@ -6,6 +6,7 @@ using SwitchTag.Output.MentionsCsv;
 using SwitchTag.Output.PlacesGeoJson;
 using SwitchTag.Output.Report;
 using SwitchTag.Output.Review;
+using SwitchTag.Output.TeiXml;
 using SwitchTag.Output.WorklistCsv;
 
 namespace SwitchTag.Output;
@@ -26,6 +27,7 @@ public sealed class OutputWriters
         .Add(new WorklistCsvWriter())
         .Add(new PlacesGeoJsonWriter())
         .Add(new AnnotatedVttWriter())
+        .Add(new TeiXmlWriter())
         .Add(new CollectionJsonWriter())
         .Add(new CollectionHtmlWriter())
         .Add(new ReviewHtmlWriter());

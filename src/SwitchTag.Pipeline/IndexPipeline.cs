@@ -26,6 +26,7 @@ public sealed class IndexPipeline(
     public INameTagger Names => names;
     public IHeadingLexicon Lexicon => lexicon;
     public ImmutableArray<Decision> Decisions => decisions;
+    public OutputWriters Writers => writers;
 
     public ReadResult Read(string path) => TranscriptFile.Read(path, format, readers);
 

@@ -37,6 +37,12 @@ public sealed class IndexPipelineBuilder
 
     public IndexPipelineBuilder UseModels(ModelLocation location) { _models = location; return this; }
 
+    /// <summary>Where the shipped models are read from (part of a run's fingerprint).</summary>
+    public ModelLocation Models => _models;
+
+    /// <summary>The outputs registered so far.</summary>
+    public OutputWriters Writers => _writers ?? OutputWriters.Default;
+
     /// <summary>The shipped language model (models/langid.bin); gazetteer places and listed names
     /// count as language-neutral words in it.</summary>
     public IndexPipelineBuilder UseLanguageModel() { _languageModel = true; return this; }
@@ -144,7 +150,7 @@ public sealed class IndexPipelineBuilder
             tagger = new NameTagger(sources, _precedence);
         }
 
-        var pipeline = new IndexPipeline(_readers, segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer), _format, _mainLanguage, _decisions, _writers ?? OutputWriters.Default);
+        var pipeline = new IndexPipeline(_readers, segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer), _format, _mainLanguage, _decisions, Writers);
         return new PipelineBuild(pipeline, null, notes.ToImmutable());
     }
 }

@@ -17,7 +17,10 @@ public sealed record IndexRequest(
     string? AuthorityPath,
     ImmutableArray<Decision> Decisions,
     ImmutableArray<Diagnostic> DecisionProblems,
-    string? Media = null)
+    string? Media = null,
+    int Jobs = 0,
+    bool Force = false,
+    bool Prune = false)
 {
     /// <summary>The request, or null with <paramref name="usage"/> saying which value is wrong.</summary>
     public static IndexRequest? From(string[] paths, string outDir, string? format, string? main, string names,
@@ -53,6 +56,11 @@ public sealed record IndexRequest(
         if (File.Exists(outDir)) { usage = $"--out {outDir} is a file, not a folder"; return null; }
         return new IndexRequest([.. paths], outDir, forced, main, mode, authority, list, problems, string.IsNullOrWhiteSpace(media) ? null : media);
     }
+
+    /// <summary><see cref="Jobs"/>: interviews indexed at once, 0 for one per core; the outputs are the
+    /// same for any number. <see cref="Force"/> redoes interviews the store holds unchanged;
+    /// <see cref="Prune"/> removes from the collection the interviews whose source file is gone.</summary>
+    public IndexRequest WithCollection(int jobs, bool force, bool prune) => this with { Jobs = jobs, Force = force, Prune = prune };
 
     /// <summary>The recording of one interview: <see cref="Media"/> with <c>{interview}</c> replaced by its name.</summary>
     public string? MediaOf(string interview) => Media?.Replace("{interview}", Uri.EscapeDataString(interview), StringComparison.Ordinal);

@@ -3,6 +3,8 @@ using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Formats;
 using SwitchTag.Output;
+using SwitchTag.Pipeline.Collection;
+using SwitchTag.Store;
 
 namespace SwitchTag.Pipeline;
 
@@ -10,13 +12,21 @@ namespace SwitchTag.Pipeline;
 /// or the authority list could not be loaded).</summary>
 public enum IndexRunResult { Indexed, InputsRejected, NotStarted }
 
-/// <summary>One run over many files: reads every input, runs the pipeline, writes each interview's
-/// outputs into <c>OUT/&lt;interview&gt;/</c> and the collection index into OUT, and reports on
-/// <paramref name="log"/> rejected inputs (file:line and reason), notes, and each decision's outcome.</summary>
+/// <summary>One run over many files into the output folder's collection store (STORE.md): an
+/// interview whose bytes and <see cref="RunFingerprint"/> are unchanged is skipped (unless
+/// <see cref="IndexRequest.Force"/>); the others run on <see cref="IndexRequest.Jobs"/> workers, each
+/// writing its interview's folder. The store and the log are written by the calling thread alone, in
+/// input order, so files, store rows and log are the same whatever the number of workers; at most a
+/// few interviews wait to be stored, so memory does not grow with the collection. The collection
+/// outputs are then rebuilt from the store and cover every interview in it.</summary>
 public static class IndexRun
 {
-    /// <summary>Runs <paramref name="work"/> once per file; a caller may wrap it (a progress bar).</summary>
+    /// <summary>Runs <paramref name="work"/> once per file, in order; a caller may wrap it (a progress bar).</summary>
     public delegate void FileLoop(TextWriter log, IReadOnlyList<string> files, Action<string> work);
+
+    private sealed record Planned(string File, string Folder, StoredInterview? Stored, bool Unchanged);
+
+    private sealed record Done(Planned Plan, ImmutableArray<string> Log, bool Rejected, InterviewIndex? Index);
 
     public static IndexRunResult Execute(IndexRequest request, TextWriter log, FileLoop? loop = null, IndexPipelineBuilder? builder = null)
     {
@@ -26,61 +36,198 @@ public static class IndexRun
         bool rejected = problems.Count > 0;
         foreach (var p in problems) log.WriteLine(p);
 
-        var build = (builder ?? request.Builder()).Build();
-        if (build.Pipeline is not { } pipeline)
+        builder ??= request.Builder();
+        CollectionStore store;
+        try
         {
-            log.WriteLine($"switchtag index: {build.Error}");
-            return IndexRunResult.NotStarted;
+            store = CollectionStore.Open(request.OutDir);
         }
-        foreach (var note in build.Notes) log.WriteLine(note);
-
-        var entries = new List<CollectionEntry>();
-        var outcomes = new List<DecisionOutcome>();
-        var folders = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
-        (loop ?? Sequential)(log, files, file =>
+        catch (Exception e) when (e is Microsoft.Data.Sqlite.SqliteException or InvalidDataException or IOException or UnauthorizedAccessException)
         {
-            var read = pipeline.Read(file);
-            foreach (var d in read.Diagnostics) log.WriteLine(d);
-            if (read.Transcript is null) { rejected = true; return; }
+            log.WriteLine($"switchtag index: the collection store in {request.OutDir} cannot be used: {e.Message}");
+            return IndexRunResult.InputsRejected;
+        }
+        using (store)
+        {
+            string fingerprint = RunFingerprint.Of(request, builder.Models);
+            var plan = Plan(files, store.Interviews(), request, fingerprint);
+            IndexPipeline? pipeline = null;
+            if (plan.Any(p => !p.Unchanged))
+            {
+                // Models are loaded only when something must be indexed: an unchanged collection needs none.
+                var build = builder.Build();
+                if (build.Pipeline is null)
+                {
+                    log.WriteLine($"switchtag index: {build.Error}");
+                    return IndexRunResult.NotStarted;
+                }
+                foreach (var note in build.Notes) log.WriteLine(note);
+                pipeline = build.Pipeline;
+            }
+
+            var (indexed, skipped, failed, outcomes) = RunPlan(plan, request, pipeline, store, fingerprint, log, loop ?? Sequential);
+            rejected |= failed;
+            PruneOrReport(store, request, pipeline?.Writers ?? OutputWriters.Default, log);
             try
             {
-                var index = pipeline.Run(read.Transcript) with { Media = request.MediaOf(read.Transcript.Name) };
-                string folder = UniqueFolder(index.Transcript.Name, folders);
-                pipeline.Write(index, Path.Combine(request.OutDir, folder));
-                entries.Add(CollectionEntry.From(index, folder));
-                outcomes.AddRange(index.Decisions);
+                (pipeline?.Writers ?? builder.Writers).WriteCollection(StoreEntries.Of(store, request.Decisions), request.OutDir);
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException)
             {
-                log.WriteLine(new Diagnostic(new SourceLine(file, 0), Severity.Error, $"cannot write the outputs: {e.Message}"));
+                log.WriteLine($"switchtag index: cannot write the collection index in {request.OutDir}: {e.Message}");
                 rejected = true;
             }
-        });
+            ReportDecisions(request.Decisions, outcomes, log);
+            log.WriteLine($"switchtag index: {indexed} of {files.Count} interviews indexed, {skipped} unchanged, into {request.OutDir}");
+        }
+        return rejected ? IndexRunResult.InputsRejected : IndexRunResult.Indexed;
+    }
 
+    private static (int Indexed, int Skipped, bool Rejected, List<DecisionOutcome> Outcomes) RunPlan(List<Planned> plan, IndexRequest request,
+        IndexPipeline? pipeline, CollectionStore store, string fingerprint, TextWriter log, FileLoop loop)
+    {
+        int jobs = request.Jobs > 0 ? request.Jobs : Environment.ProcessorCount;
+        var results = plan.Select(_ => new TaskCompletionSource<Done>(TaskCreationOptions.RunContinuationsAsynchronously)).ToArray();
+        using var window = new SemaphoreSlim(2 * jobs);
+        int next = -1;
+        using var cancel = new CancellationTokenSource();
+        var workers = Enumerable.Range(0, jobs).Select(_ => Task.Factory.StartNew(() =>
+        {
+            while (true)
+            {
+                window.Wait(cancel.Token);
+                int i = Interlocked.Increment(ref next);
+                if (i >= plan.Count) return;
+                try { results[i].SetResult(Work(plan[i], request, pipeline)); }
+                catch (Exception e) { results[i].SetException(e); }
+            }
+        }, cancel.Token, TaskCreationOptions.LongRunning, TaskScheduler.Default)).ToArray();
+
+        int indexed = 0, skipped = 0, committed = 0;
+        bool rejected = false;
+        var outcomes = new List<DecisionOutcome>();
         try
         {
-            pipeline.WriteCollection(entries, request.OutDir);
+            loop(log, plan.Select(p => p.File).ToList(), _ =>
+            {
+                var done = results[committed].Task.GetAwaiter().GetResult();
+                results[committed] = null!;
+                committed++;
+                foreach (var line in done.Log) log.WriteLine(line);
+                rejected |= done.Rejected;
+                if (done.Plan.Unchanged)
+                {
+                    skipped++;
+                    log.WriteLine($"unchanged, skipped (--force redoes it): {done.Plan.File}");
+                    outcomes.AddRange(StoredOutcomes(store, done.Plan, request.Decisions));
+                }
+                else if (done.Index is { } index)
+                {
+                    store.Save(index, done.Plan.Folder, fingerprint,
+                        index.Decisions.Select(o => new StoredDecision(StoreEntries.DecisionKey(o.Decision), o.Applied)).ToList(), DateTimeOffset.UtcNow);
+                    indexed++;
+                    outcomes.AddRange(index.Decisions);
+                }
+                window.Release();
+            });
+        }
+        finally
+        {
+            cancel.Cancel();
+            try { Task.WaitAll(workers); }
+            catch (AggregateException e) when (e.InnerExceptions.All(x => x is OperationCanceledException)) { }
+        }
+        return (indexed, skipped, rejected, outcomes);
+    }
+
+    /// <summary>Each distinct file with its folder: the one the store already gives its source, else
+    /// a safe name (<see cref="InterviewFolderName"/>) past any folder taken in the store or earlier in
+    /// this run; and whether it is unchanged (same bytes, same fingerprint, outputs still there),
+    /// found from the bytes' SHA-256 alone, without parsing.</summary>
+    private static List<Planned> Plan(IReadOnlyList<string> files, IReadOnlyList<StoredInterview> stored, IndexRequest request, string fingerprint)
+    {
+        var bySource = stored.ToDictionary(s => s.SourcePath, StringComparer.Ordinal);
+        var folders = new InterviewFolderName(stored.Select(s => s.Folder));
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        var plan = new List<Planned>();
+        foreach (var file in files)
+        {
+            string full = Path.GetFullPath(file);
+            if (!seen.Add(full)) continue;
+            if (bySource.TryGetValue(full, out var known))
+            {
+                bool unchanged = !request.Force && known.ModelVersions == fingerprint && Sha256Of(file) == known.Sha256
+                                 && File.Exists(Path.Combine(request.OutDir, known.Folder, "index.json"));
+                plan.Add(new Planned(file, known.Folder, known, unchanged));
+                continue;
+            }
+            plan.Add(new Planned(file, folders.Next(Path.GetFileNameWithoutExtension(file)), null, false));
+        }
+        return plan;
+    }
+
+    private static string? Sha256Of(string file)
+    {
+        try
+        {
+            using var stream = File.OpenRead(file);
+            return Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(stream));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            log.WriteLine($"switchtag index: cannot write the collection index in {request.OutDir}: {e.Message}");
-            rejected = true;
+            return null; // reading it again in the worker reports why
         }
-        ReportDecisions(request.Decisions, outcomes, log);
-        log.WriteLine($"switchtag index: {entries.Count} of {files.Count} interviews indexed into {request.OutDir}");
-        return rejected ? IndexRunResult.InputsRejected : IndexRunResult.Indexed;
+    }
+
+    private static Done Work(Planned plan, IndexRequest request, IndexPipeline? pipeline)
+    {
+        if (plan.Unchanged) return new Done(plan, [], false, null);
+        var read = pipeline!.Read(plan.File);
+        var log = read.Diagnostics.Select(d => d.ToString()).ToImmutableArray();
+        if (read.Transcript is null) return new Done(plan, log, true, null);
+        var index = pipeline.Run(read.Transcript) with { Media = request.MediaOf(read.Transcript.Name) };
+        try
+        {
+            pipeline.Write(index, Path.Combine(request.OutDir, plan.Folder));
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            return new Done(plan, log.Add(new Diagnostic(new SourceLine(plan.File, 0), Severity.Error, $"cannot write the outputs: {e.Message}").ToString()), true, null);
+        }
+        return new Done(plan, log, false, index);
+    }
+
+    /// <summary>The decisions a skipped interview had applied when it was indexed, matched back to
+    /// this run's decisions by their text, so the decision report counts them.</summary>
+    private static IEnumerable<DecisionOutcome> StoredOutcomes(CollectionStore store, Planned plan, ImmutableArray<Decision> decisions)
+    {
+        var applied = store.Decisions(plan.File);
+        foreach (var d in decisions)
+            if (applied.TryGetValue(StoreEntries.DecisionKey(d), out int n))
+                yield return new DecisionOutcome(d, n);
+    }
+
+    private static void PruneOrReport(CollectionStore store, IndexRequest request, OutputWriters writers, TextWriter log)
+    {
+        foreach (var gone in store.Interviews().Where(i => !File.Exists(i.SourcePath)))
+        {
+            if (!request.Prune)
+            {
+                log.WriteLine($"source gone, kept in the collection (--prune removes it): {gone.SourcePath} ({gone.Folder})");
+                continue;
+            }
+            store.Remove(gone.SourcePath);
+            string folder = Path.Combine(request.OutDir, gone.Folder);
+            foreach (var name in writers.InterviewFileNames)
+                if (File.Exists(Path.Combine(folder, name))) File.Delete(Path.Combine(folder, name));
+            if (Directory.Exists(folder) && !Directory.EnumerateFileSystemEntries(folder).Any()) Directory.Delete(folder);
+            log.WriteLine($"source gone, pruned from the collection: {gone.SourcePath} ({gone.Folder})");
+        }
     }
 
     private static void Sequential(TextWriter log, IReadOnlyList<string> files, Action<string> work)
     {
         foreach (var f in files) work(f);
-    }
-
-    private static string UniqueFolder(string name, HashSet<string> used)
-    {
-        string folder = name;
-        for (int k = 2; !used.Add(folder); k++) folder = $"{name}-{k}";
-        return folder;
     }
 
     private static void ReportDecisions(ImmutableArray<Decision> decisions, List<DecisionOutcome> outcomes, TextWriter log)

@@ -10,7 +10,7 @@ public static class ToolOutputs
     /// <summary>The per-interview files the tool writes (SCHEMA.md); kept here because the readers
     /// must know them and the writers sit above the readers.</summary>
     public static readonly IReadOnlyList<string> FileNames =
-        ["index.json", "index.md", "index.html", "mentions.csv", "worklist.csv", "places.geojson", "annotated.vtt"];
+        ["index.json", "index.md", "index.html", "mentions.csv", "worklist.csv", "places.geojson", "annotated.vtt", "index.tei.xml"];
 
     /// <summary>The run-level files the tool writes into the output folder's root.</summary>
     public static readonly IReadOnlyList<string> CollectionFileNames = ["collection.json", "collection.html"];

@@ -1,0 +1,276 @@
+using System.Globalization;
+using System.Text;
+using System.Xml;
+using SwitchTag.Core.Documents;
+using SwitchTag.Output.Report;
+
+namespace SwitchTag.Output.TeiXml;
+
+/// <summary><c>index.tei.xml</c>: the interview as a TEI P5 transcription of speech (TEI Guidelines
+/// ch. 8): a header with the source and the caution, a timeline of the cue times, one <c>&lt;u&gt;</c> per
+/// turn pointing at its start and end, <c>&lt;anchor synch&gt;</c> where each later cue begins,
+/// <c>&lt;foreign xml:lang&gt;</c> around stretches outside the main language, <c>&lt;persName&gt;</c>,
+/// <c>&lt;placeName&gt;</c> and <c>&lt;orgName&gt;</c> around indexed mentions pointing at the heading in a
+/// <c>&lt;standOff&gt;</c> list (and at GeoNames for linked places). The turn text is written whole, so the
+/// text content of each <c>&lt;u&gt;</c> is the turn's text (characters XML 1.0 forbids become U+FFFD).</summary>
+public sealed class TeiXmlWriter : IInterviewWriter
+{
+    public string FileName => "index.tei.xml";
+
+    void IInterviewWriter.Write(InterviewIndex index, Stream stream) => Write(index, stream);
+
+    public const string Namespace = "http://www.tei-c.org/ns/1.0";
+    private const string XmlNs = "http://www.w3.org/XML/1998/namespace";
+
+    public static void Write(InterviewIndex index, Stream stream)
+    {
+        var settings = new XmlWriterSettings
+        {
+            Encoding = new UTF8Encoding(false),
+            Indent = true,
+            IndentChars = "  ",
+            NewLineChars = "\n",
+        };
+        using var w = XmlWriter.Create(stream, settings);
+        var ids = new TeiIds();
+        foreach (var turn in index.Turns)
+            if (turn.Speaker is not null) ids.Speaker(turn.Speaker);
+
+        w.WriteStartDocument();
+        w.WriteStartElement("TEI", Namespace);
+        w.WriteAttributeString("xml", "lang", XmlNs, "en");
+        Header(w, index, ids);
+        StandOff(w, index, ids);
+        w.WriteStartElement("text");
+        w.WriteAttributeString("xml", "lang", XmlNs, index.MainLanguage);
+        w.WriteStartElement("body");
+        Timeline(w, index);
+        foreach (var turn in index.Turns) Utterance(w, index, turn, ids);
+        w.WriteEndElement();
+        w.WriteEndElement();
+        w.WriteEndElement();
+        w.WriteEndDocument();
+    }
+
+    private static void Header(XmlWriter w, InterviewIndex index, TeiIds ids)
+    {
+        var source = index.Transcript.Source;
+        w.WriteStartElement("teiHeader");
+        w.WriteStartElement("fileDesc");
+        w.WriteStartElement("titleStmt");
+        w.WriteElementString("title", $"Interview index: {Clean(index.Transcript.Name)}");
+        w.WriteEndElement();
+        w.WriteStartElement("publicationStmt");
+        w.WriteElementString("p", "Machine draft made by SwitchTag; not published.");
+        w.WriteEndElement();
+        w.WriteStartElement("notesStmt");
+        w.WriteStartElement("note");
+        w.WriteAttributeString("type", "caution");
+        w.WriteString(ReportMarkdownWriter.Caution.Replace("**", "", StringComparison.Ordinal));
+        w.WriteEndElement();
+        w.WriteEndElement();
+        w.WriteStartElement("sourceDesc");
+        w.WriteStartElement("recordingStmt");
+        w.WriteStartElement("recording");
+        w.WriteAttributeString("type", "audio");
+        w.WriteAttributeString("dur", XmlConvert.ToString(TimeSpan.FromMilliseconds(index.Duration.Milliseconds)));
+        w.WriteEndElement();
+        w.WriteEndElement();
+        w.WriteStartElement("bibl");
+        w.WriteStartElement("idno");
+        w.WriteAttributeString("type", "path");
+        w.WriteString(Clean(source.Path));
+        w.WriteEndElement();
+        w.WriteStartElement("idno");
+        w.WriteAttributeString("type", "sha256");
+        w.WriteString(source.Sha256);
+        w.WriteEndElement();
+        w.WriteStartElement("note");
+        w.WriteAttributeString("type", "format");
+        w.WriteString(source.Format.Name);
+        w.WriteEndElement();
+        w.WriteEndElement();
+        w.WriteEndElement();
+        w.WriteEndElement();
+
+        w.WriteStartElement("profileDesc");
+        w.WriteStartElement("langUsage");
+        foreach (var language in index.Spans.SelectMany(s => s).Select(s => s.Value.Language).Append(index.MainLanguage)
+                     .Distinct(StringComparer.Ordinal).Order(StringComparer.Ordinal))
+        {
+            w.WriteStartElement("language");
+            w.WriteAttributeString("ident", language);
+            if (language == index.MainLanguage) w.WriteAttributeString("role", "main");
+            w.WriteEndElement();
+        }
+        w.WriteEndElement();
+        if (ids.Speakers.Any())
+        {
+            w.WriteStartElement("particDesc");
+            w.WriteStartElement("listPerson");
+            w.WriteAttributeString("type", "speakers");
+            foreach (var (speaker, id) in ids.Speakers)
+            {
+                w.WriteStartElement("person");
+                w.WriteAttributeString("xml", "id", XmlNs, id);
+                w.WriteElementString("persName", Clean(speaker));
+                w.WriteEndElement();
+            }
+            w.WriteEndElement();
+            w.WriteEndElement();
+        }
+        w.WriteEndElement();
+        w.WriteEndElement();
+    }
+
+    /// <summary>The index headings: every person, place and organisation with its name and variants.</summary>
+    private static void StandOff(XmlWriter w, InterviewIndex index, TeiIds ids)
+    {
+        if (index.Headings.IsEmpty) return;
+        w.WriteStartElement("standOff");
+        foreach (var (label, list, item, name) in new[]
+                 {
+                     (NameLabel.PER, "listPerson", "person", "persName"),
+                     (NameLabel.LOC, "listPlace", "place", "placeName"),
+                     (NameLabel.ORG, "listOrg", "org", "orgName"),
+                 })
+        {
+            var headings = index.Headings.Where(h => h.Label == label).ToList();
+            if (headings.Count == 0) continue;
+            w.WriteStartElement(list);
+            foreach (var h in headings)
+            {
+                w.WriteStartElement(item);
+                w.WriteAttributeString("xml", "id", XmlNs, ids.Heading(h.Id));
+                w.WriteElementString(name, Clean(h.Name));
+                foreach (var variant in h.Variants.Where(v => v != h.Name))
+                {
+                    w.WriteStartElement(name);
+                    w.WriteAttributeString("type", "variant");
+                    w.WriteString(Clean(variant));
+                    w.WriteEndElement();
+                }
+                if (h.Place is { } place)
+                {
+                    w.WriteStartElement("location");
+                    w.WriteElementString("geo", string.Create(CultureInfo.InvariantCulture, $"{place.Latitude} {place.Longitude}"));
+                    w.WriteEndElement();
+                    if (place.HasGeonameId)
+                    {
+                        w.WriteStartElement("idno");
+                        w.WriteAttributeString("type", "geonames");
+                        w.WriteString(place.GeonameId.ToString(CultureInfo.InvariantCulture));
+                        w.WriteEndElement();
+                    }
+                }
+                w.WriteEndElement();
+            }
+            w.WriteEndElement();
+        }
+        w.WriteEndElement();
+    }
+
+    /// <summary>Every cue start and end (which include every turn's), in ms from the recording's start.</summary>
+    private static void Timeline(XmlWriter w, InterviewIndex index)
+    {
+        w.WriteStartElement("timeline");
+        w.WriteAttributeString("unit", "s");
+        w.WriteAttributeString("origin", "#" + TeiIds.When(0));
+        var times = index.Transcript.Cues.SelectMany(c => new[] { c.Time.Start.Milliseconds, c.Time.End.Milliseconds })
+            .Concat(index.Turns.SelectMany(t => new[] { t.Time.Start.Milliseconds, t.Time.End.Milliseconds }))
+            .Append(0).Distinct().Order();
+        foreach (long ms in times)
+        {
+            w.WriteStartElement("when");
+            w.WriteAttributeString("xml", "id", XmlNs, TeiIds.When(ms));
+            if (ms != 0)
+            {
+                w.WriteAttributeString("interval", (ms / 1000m).ToString(CultureInfo.InvariantCulture));
+                w.WriteAttributeString("since", "#" + TeiIds.When(0));
+            }
+            w.WriteEndElement();
+        }
+        w.WriteEndElement();
+    }
+
+    private static void Utterance(XmlWriter w, InterviewIndex index, Turn turn, TeiIds ids)
+    {
+        w.WriteStartElement("u");
+        if (turn.Speaker is not null) w.WriteAttributeString("who", "#" + ids.Speaker(turn.Speaker));
+        w.WriteAttributeString("start", "#" + TeiIds.When(turn.Time.Start.Milliseconds));
+        w.WriteAttributeString("end", "#" + TeiIds.When(turn.Time.End.Milliseconds));
+        w.WriteAttributeString("n", turn.Index.ToString(CultureInfo.InvariantCulture));
+        // An empty string marks the content as mixed, so the indenting writer adds no whitespace inside.
+        w.WriteString("");
+        var anchors = turn.Cues.Skip(1).Select(c => (c.CharStart, Ms: index.Transcript.Cues[c.CueIndex].Time.Start.Milliseconds)).ToList();
+        new UtteranceContent(w, index, turn, anchors, ids).Write(0, turn.Text.Length, TeiInline.Layout(index, turn.Index));
+        w.WriteEndElement();
+    }
+
+    private sealed class UtteranceContent(XmlWriter w, InterviewIndex index, Turn turn, List<(int At, long Ms)> anchors, TeiIds ids)
+    {
+        public void Write(int from, int to, List<TeiInline.Element> inner)
+        {
+            int pos = from;
+            for (int k = 0; k < inner.Count;)
+            {
+                var e = inner[k];
+                Text(pos, e.Start);
+                int j = k + 1;
+                while (j < inner.Count && inner[j].Start >= e.Start && inner[j].End <= e.End) j++;
+                Open(e);
+                Write(e.Start, e.End, inner.GetRange(k + 1, j - k - 1));
+                w.WriteEndElement();
+                pos = e.End;
+                k = j;
+            }
+            Text(pos, to);
+        }
+
+        private void Open(TeiInline.Element e)
+        {
+            if (e.Kind == "foreign")
+            {
+                w.WriteStartElement("foreign");
+                w.WriteAttributeString("xml", "lang", XmlNs, e.Language);
+                return;
+            }
+            var (mention, _, headingId) = index.Mentions[e.Mention];
+            var heading = index.Headings.First(h => h.Id == headingId);
+            w.WriteStartElement(mention.Label switch { NameLabel.PER => "persName", NameLabel.LOC => "placeName", _ => "orgName" });
+            string reference = "#" + ids.Heading(heading.Id);
+            if (heading.Place is { HasGeonameId: true } place)
+                reference += " https://www.geonames.org/" + place.GeonameId.ToString(CultureInfo.InvariantCulture);
+            w.WriteAttributeString("ref", reference);
+        }
+
+        private void Text(int from, int to)
+        {
+            int pos = from;
+            foreach (var (at, ms) in anchors)
+            {
+                if (at < from || at >= to) continue;
+                if (at > pos) w.WriteString(Clean(turn.Text[pos..at]));
+                w.WriteStartElement("anchor");
+                w.WriteAttributeString("synch", "#" + TeiIds.When(ms));
+                w.WriteEndElement();
+                pos = at;
+            }
+            if (to > pos) w.WriteString(Clean(turn.Text[pos..to]));
+        }
+    }
+
+    /// <summary>The text with every character XML 1.0 does not allow replaced by U+FFFD (same length).</summary>
+    internal static string Clean(string text)
+    {
+        char[]? fixedText = null;
+        for (int i = 0; i < text.Length; i++)
+        {
+            if (char.IsSurrogatePair(text, i)) { i++; continue; }
+            if (XmlConvert.IsXmlChar(text[i])) continue;
+            fixedText ??= text.ToCharArray();
+            fixedText[i] = '\uFFFD';
+        }
+        return fixedText is null ? text : new string(fixedText);
+    }
+}
