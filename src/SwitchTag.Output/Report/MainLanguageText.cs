@@ -10,10 +10,10 @@ public static class MainLanguageText
     {
         null => null,
         "given" => "given with --main",
-        "narrator-talk" => "the narrators' talk time",
-        "interviewer-tie-break" => "the interviewer's talk, the narrators' two leading languages being close",
-        "all-talk" => "all talk (no speaker could be told apart as narrator)",
-        "largest-share" => "the most confident text",
+        "narrator-talk" => "from the narrators' talk time",
+        "interviewer-tie-break" => "from the interviewer's talk (the narrators' two leading languages were close)",
+        "all-talk" => "from all talk (no speaker could be told apart as narrator)",
+        "largest-share" => "from the most confident text",
         "none" => "no language evidence",
         var other => other,
     };

@@ -59,7 +59,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
          .Append("<li>Source: ").Append(Said(source.Path)).Append(" (").Append(source.Format.Name).Append(")</li>\n")
          .Append("<li>SHA-256: <code>").Append(Esc(source.Sha256)).Append("</code></li>\n")
          .Append("<li>Main language: ").Append(Esc(LanguageNames.WithCode(index.MainLanguage)))
-         .Append(MainLanguageText.Basis(index) is { } basis ? ", chosen by " + Esc(basis) : "").Append("</li>\n")
+         .Append(MainLanguageText.Basis(index) is { } basis ? ", " + Esc(basis) : "").Append("</li>\n")
          .Append("<li>Duration: <span class=\"time\" title=\"").Append(index.Duration).Append("\">").Append(Clock(index.Duration)).Append("</span></li>\n")
          .Append("<li>Turns: ").Append(index.Turns.Length).Append(", mentions indexed: ").Append(index.Mentions.Count(m => m.HeadingId is not null))
          .Append(", held for review: ").Append(index.Review.Length).Append("</li>\n")

@@ -28,7 +28,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
           .Append(" (").Append(index.Transcript.Source.Format.Name).Append(")\n");
         md.Append("- SHA-256: ").Append(index.Transcript.Source.Sha256).Append('\n');
         md.Append("- Main language: ").Append(MarkdownText.Escape(LanguageNames.WithCode(index.MainLanguage)));
-        if (MainLanguageText.Basis(index) is { } basis) md.Append(", chosen by ").Append(MarkdownText.Escape(basis));
+        if (MainLanguageText.Basis(index) is { } basis) md.Append(", ").Append(MarkdownText.Escape(basis));
         md.Append('\n');
         md.Append("- Duration: ").Append(index.Duration).Append('\n');
         md.Append("- Turns: ").Append(index.Turns.Length).Append(", mentions indexed: ")
