@@ -10,8 +10,9 @@ namespace SwitchTag.Indexing;
 /// <summary>The time and index stages: places mentions and language spans in time, applies the
 /// reviewers' decisions (their outcomes go on the index), groups headings, and builds the
 /// translators' worklist.</summary>
+/// <param name="checkLanguageBelow">worklist stretches below this confidence are marked for a person to check their language (0: none)</param>
 public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decision> decisions = default,
-    double reviewBelow = HeadingBuilder.DefaultReviewBelow) : IIndexBuilder
+    double reviewBelow = HeadingBuilder.DefaultReviewBelow, double checkLanguageBelow = 0) : IIndexBuilder
 {
     public InterviewIndex Build(Transcript transcript, ImmutableArray<Turn> turns, string mainLanguage,
         ImmutableArray<ImmutableArray<LanguageSpan>> spans, ImmutableArray<Mention> mentions)
@@ -45,7 +46,7 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         var timedSpans = safeSpans
             .Select((list, t) => list.Select(s => new Timed<LanguageSpan>(s, aligner.Align(turns[t], s.CharStart, s.CharEnd))).ToImmutableArray())
             .ToImmutableArray();
-        var worklist = WorklistBuilder.Build(turns, safeSpans, mainLanguage, aligner);
+        var worklist = WorklistBuilder.Build(turns, safeSpans, mainLanguage, aligner, checkLanguageBelow);
         var duration = (transcript.Cues.IsEmpty ? Timecode.Zero : transcript.Cues.Max(c => c.Time.End)) - Timecode.Zero;
 
         var foreign = safeSpans

@@ -6,14 +6,18 @@ using SwitchTag.Core.Text;
 namespace SwitchTag.Indexing;
 
 /// <summary>The translators' worklist: every stretch outside the main language (<c>und</c> excluded),
-/// consecutive spans of one language inside a turn merged into one item, surrounding spaces trimmed.</summary>
+/// consecutive spans of one language inside a turn merged, then cut at the turn's cue boundaries (a
+/// translator's stretch belongs to one cue and its times), surrounding spaces trimmed, and pieces
+/// without a word dropped. A stretch whose confidence is below <c>checkBelow</c> is marked
+/// <see cref="WorklistItem.Check"/>: its language should be checked, not claimed.</summary>
 public static class WorklistBuilder
 {
     public static ImmutableArray<WorklistItem> Build(
         ImmutableArray<Turn> turns,
         ImmutableArray<ImmutableArray<LanguageSpan>> spans,
         string mainLanguage,
-        TimeAligner aligner)
+        TimeAligner aligner,
+        double checkBelow = 0)
     {
         var items = ImmutableArray.CreateBuilder<WorklistItem>();
         for (int t = 0; t < turns.Length; t++)
@@ -26,21 +30,14 @@ public static class WorklistBuilder
                 var span = list[i];
                 if (!IsForeign(span.Language, mainLanguage)) { i++; continue; }
                 int j = i;
-                double weighted = span.Confidence * (span.CharEnd - span.CharStart);
-                while (j + 1 < list.Length && list[j + 1].Language == span.Language)
+                while (j + 1 < list.Length && list[j + 1].Language == span.Language) j++;
+                foreach (var (start, end) in CuePieces(turn, span.CharStart, list[j].CharEnd))
                 {
-                    j++;
-                    weighted += list[j].Confidence * (list[j].CharEnd - list[j].CharStart);
+                    double confidence = Math.Round(ConfidenceOver(list, i, j, start, end), 4);
+                    items.Add(new WorklistItem(
+                        aligner.Align(turn, start, end), turn.Speaker, span.Language, confidence,
+                        turn.Text[start..end], t, start, end, WordCount.Of(turn.Text, start, end), confidence < checkBelow));
                 }
-                int start = span.CharStart, end = list[j].CharEnd;
-                double confidence = end > start ? weighted / (end - start) : span.Confidence;
-                // Spans carry the spaces after their last word; a translator's stretch does not.
-                while (start < end && char.IsWhiteSpace(turn.Text[start])) start++;
-                while (end > start && char.IsWhiteSpace(turn.Text[end - 1])) end--;
-                if (end == start) { i = j + 1; continue; }
-                items.Add(new WorklistItem(
-                    aligner.Align(turn, start, end), turn.Speaker, span.Language, Math.Round(confidence, 4),
-                    turn.Text[start..end], t, start, end, WordCount.Of(turn.Text, start, end)));
                 i = j + 1;
             }
         }
@@ -49,4 +46,33 @@ public static class WorklistBuilder
 
     public static bool IsForeign(string language, string mainLanguage) =>
         language != MainLanguage.Undetermined && !string.Equals(language, mainLanguage, StringComparison.Ordinal);
+
+    /// <summary>[start, end) cut at the turn's cue boundaries, each piece trimmed of spaces (spans
+    /// carry the spaces after their last word), pieces holding no word left out.</summary>
+    private static IEnumerable<(int Start, int End)> CuePieces(Turn turn, int start, int end)
+    {
+        var cues = turn.Cues.IsDefaultOrEmpty ? [new TurnCue(-1, 0, turn.Text.Length)] : turn.Cues;
+        foreach (var cue in cues)
+        {
+            int s = Math.Max(start, cue.CharStart), e = Math.Min(end, cue.CharEnd);
+            while (s < e && char.IsWhiteSpace(turn.Text[s])) s++;
+            while (e > s && char.IsWhiteSpace(turn.Text[e - 1])) e--;
+            if (e > s && WordCount.Of(turn.Text, s, e) > 0) yield return (s, e);
+        }
+    }
+
+    /// <summary>The spans' confidences i..j averaged over their chars inside [start, end).</summary>
+    private static double ConfidenceOver(ImmutableArray<LanguageSpan> list, int i, int j, int start, int end)
+    {
+        double weighted = 0;
+        int chars = 0;
+        for (int k = i; k <= j; k++)
+        {
+            int overlap = Math.Min(end, list[k].CharEnd) - Math.Max(start, list[k].CharStart);
+            if (overlap <= 0) continue;
+            weighted += list[k].Confidence * overlap;
+            chars += overlap;
+        }
+        return chars > 0 ? weighted / chars : list[i].Confidence;
+    }
 }

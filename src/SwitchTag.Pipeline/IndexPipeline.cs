@@ -5,6 +5,7 @@ using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Stages;
 using SwitchTag.Formats;
 using SwitchTag.Indexing;
+using SwitchTag.LanguageId.Interview;
 using SwitchTag.Output;
 
 namespace SwitchTag.Pipeline;
@@ -32,7 +33,7 @@ public sealed class IndexPipeline(
 
     /// <summary>The finished index of one transcript; the decisions' outcomes are on it.</summary>
     public InterviewIndex Run(Transcript transcript) =>
-        new InterviewPipeline(languages, names, new IndexBuilder(lexicon, decisions)).Run(transcript, mainLanguage);
+        new InterviewPipeline(languages, names, new IndexBuilder(lexicon, decisions, checkLanguageBelow: StretchCalibration.CheckBelow)).Run(transcript, mainLanguage);
 
     /// <summary>Every per-interview output into <paramref name="folder"/>.</summary>
     public void Write(InterviewIndex index, string folder) => writers.WriteInterview(index, folder);

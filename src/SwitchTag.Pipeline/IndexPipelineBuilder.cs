@@ -83,7 +83,8 @@ public sealed class IndexPipelineBuilder
     /// <summary>Read every file as this format instead of detecting it; null detects.</summary>
     public IndexPipelineBuilder UseFormat(TranscriptFormat? format) { _format = format; return this; }
 
-    /// <summary>The interviews' main language; null detects it per interview.</summary>
+    /// <summary>The interviews' main language; null chooses it per interview (the language stage
+    /// decides). A code the language stage does not support makes <see cref="Build"/> fail.</summary>
     public IndexPipelineBuilder UseMainLanguage(string? code) { _mainLanguage = code; return this; }
 
     public IndexPipelineBuilder UseDecisions(ImmutableArray<Decision> decisions) { _decisions = decisions.IsDefault ? [] : decisions; return this; }
@@ -129,6 +130,8 @@ public sealed class IndexPipelineBuilder
             segmenter = ShippedModels.LoadLanguageModel(_models, names, out var error);
             if (segmenter is null) return PipelineBuild.Failed(error!.ToString());
         }
+        if (_mainLanguage is not null && !segmenter.Languages.Contains(_mainLanguage, StringComparer.Ordinal))
+            return PipelineBuild.Failed($"--main \"{_mainLanguage}\" is not a supported language code; switchtag langid --languages lists them");
 
         var tagger = _tagger;
         if (tagger is null)

@@ -66,7 +66,7 @@ public class CsvFormulaTests
         var index = Fixture.Run();
         index = index with { Worklist = [index.Worklist[0] with { Text = "- a dash opens this stretch" }, .. index.Worklist.Skip(1)] };
         var rows = Parse(WorklistCsvWriter.Render(index));
-        Assert.Equal("'- a dash opens this stretch", rows[1][8]);
-        Assert.Equal("- a dash opens this stretch", Csv.Restore(rows[1][8]));
+        Assert.Equal("'- a dash opens this stretch", rows[1][Array.IndexOf(WorklistCsvWriter.Header, "text")]);
+        Assert.Equal("- a dash opens this stretch", Csv.Restore(rows[1][Array.IndexOf(WorklistCsvWriter.Header, "text")]));
     }
 }

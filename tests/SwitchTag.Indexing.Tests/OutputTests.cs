@@ -86,8 +86,24 @@ public class OutputTests
         Assert.EndsWith("\r\n", csv); // RFC 4180 section 2.1: each record ends with CRLF
         var rows = ParseCsv(csv);
         Assert.Equal(index.Worklist.Length + 1, rows.Count);
-        Assert.Equal("a, \"quoted\"\r\nline", rows[1][8]);
+        Assert.Equal("a, \"quoted\"\r\nline", rows[1][Array.IndexOf(WorklistCsvWriter.Header, "text")]);
         Assert.All(rows, r => Assert.Equal(WorklistCsvWriter.Header.Length, r.Length));
+    }
+
+    [Fact]
+    public void Worklist_csv_names_each_language_and_marks_stretches_to_check()
+    {
+        var index = Fixture.Run();
+        index = index with { Worklist = [index.Worklist[0] with { Check = true }, .. index.Worklist.Skip(1)] };
+        var rows = ParseCsv(WorklistCsvWriter.Render(index));
+        int language = Array.IndexOf(WorklistCsvWriter.Header, "language");
+        int name = Array.IndexOf(WorklistCsvWriter.Header, "language_name");
+        int check = Array.IndexOf(WorklistCsvWriter.Header, "check");
+        Assert.Equal(language + 1, name);
+        // English names of ISO 639-1 pl and de as CLDR gives them (known from memory; CLDR en localenames).
+        var expected = new Dictionary<string, string> { ["pl"] = "Polish", ["de"] = "German" };
+        Assert.All(rows.Skip(1), r => Assert.Equal(expected[r[language]], r[name]));
+        Assert.Equal(["yes", .. Enumerable.Repeat("no", index.Worklist.Length - 1)], rows.Skip(1).Select(r => r[check]));
     }
 
     // Microsoft.VisualBasic.FileIO.TextFieldParser, the .NET runtime's CSV reader, as the outside check.

@@ -1,6 +1,7 @@
 using System.Text;
 using System.Text.Json;
 using System.Text.RegularExpressions;
+using SwitchTag.Core.Documents;
 using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output.IndexJson;
 using SwitchTag.Tests.Shared;
@@ -15,8 +16,15 @@ public class SchemaTests
     private static JsonDocument Index()
     {
         using var stream = new MemoryStream();
-        // With a recording given, so the optional media field is written too.
-        IndexJsonWriter.Write(Fixture.Run() with { Media = "../media/anna-nowak.mp3" }, stream);
+        // With a recording given, so the optional media field is written too, and with a language
+        // profile and a chosen (not given) main language, so their array elements are written.
+        IndexJsonWriter.Write(Fixture.Run() with
+        {
+            Media = "../media/anna-nowak.mp3",
+            LanguageProfile = [new LanguageFraction("en", 0.8), new LanguageFraction("pl", 0.2)],
+            MainLanguageDecision = new MainLanguageDecision("narrator-talk", "seconds",
+                [new LanguageFraction("en", 0.7), new LanguageFraction("pl", 0.3)], [new LanguageFraction("en", 1)], ["Anna Nowak"]),
+        }, stream);
         return JsonDocument.Parse(stream.ToArray());
     }
 

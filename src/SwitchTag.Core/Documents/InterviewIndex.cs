@@ -29,7 +29,8 @@ public sealed record Heading(
 /// <summary>A mention placed in time and filed under a heading (null while under review).</summary>
 public sealed record IndexedMention(Mention Mention, TimeRange Time, string? HeadingId);
 
-/// <summary>A stretch outside the interview's main language, for the translators.</summary>
+/// <summary>A stretch outside the interview's main language, for the translators. <see cref="Check"/>:
+/// its language is too uncertain to claim, so a person should check the language first.</summary>
 public sealed record WorklistItem(
     TimeRange Time,
     string? Speaker,
@@ -39,7 +40,8 @@ public sealed record WorklistItem(
     int Turn,
     int CharStart,
     int CharEnd,
-    int Words);
+    int Words,
+    bool Check = false);
 
 /// <summary>How much of the interview is in one language: seconds of recording and words.</summary>
 public sealed record LanguageShare(string Language, double Seconds, int Words);
@@ -70,4 +72,12 @@ public sealed record InterviewIndex(
     ImmutableArray<ReviewItem> Review,
     ImmutableArray<Diagnostic> Diagnostics,
     ImmutableArray<DecisionOutcome> Decisions,
-    string? Media = null);
+    string? Media = null)
+{
+    /// <summary>The languages the interview is spoken in with their shares of its words, largest
+    /// first; empty when the language stage finds no profile.</summary>
+    public ImmutableArray<LanguageFraction> LanguageProfile { get; init; } = [];
+
+    /// <summary>How <see cref="MainLanguage"/> was chosen; null when not recorded.</summary>
+    public MainLanguageDecision? MainLanguageDecision { get; init; }
+}

@@ -4,18 +4,23 @@ using SwitchTag.Core.Stages;
 
 namespace SwitchTag.Core.Pipeline;
 
-/// <summary>Chains the stages in one direction: turns, language spans, names, index.</summary>
+/// <summary>Chains the stages in one direction: turns, the interview's languages (all turns at once,
+/// so short turns are judged with the whole interview's evidence), names, index.</summary>
 public sealed class InterviewPipeline(ILanguageSegmenter languages, INameTagger names, IIndexBuilder index)
 {
     public InterviewIndex Run(Transcript transcript, string? mainLanguage = null)
     {
         var turns = TurnBuilder.Build(transcript);
-        string main = mainLanguage ?? MainLanguage.Detect(languages, turns);
-        var spans = turns.Select(t => languages.Segment(t.Text, main)).ToImmutableArray();
+        var result = languages.SegmentInterview(turns, mainLanguage);
+        var spans = result.Spans;
         var mentions = ImmutableArray.CreateBuilder<Mention>();
         for (int t = 0; t < turns.Length; t++)
             mentions.AddRange(names.Tag(t, turns[t].Text, spans[t]));
-        return index.Build(transcript, turns, main, spans, mentions.ToImmutable());
+        return index.Build(transcript, turns, result.MainLanguage, spans, mentions.ToImmutable()) with
+        {
+            LanguageProfile = result.Profile,
+            MainLanguageDecision = result.MainBasis,
+        };
     }
 }
 

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Pipeline;
 
 namespace SwitchTag.Core.Stages;
 
@@ -16,6 +17,18 @@ public interface ILanguageSegmenter
     /// <summary>Spans covering the words of <paramref name="text"/>, offsets into it; the main
     /// language is the prior the segmentation leans towards.</summary>
     ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage);
+
+    /// <summary>All turns of one interview at once, and its main language (<paramref name="mainLanguage"/>
+    /// when given). This default segments turn by turn around the language with most confident
+    /// characters and knows no profile; a stage that can judge the interview as a whole overrides it.</summary>
+    InterviewLanguageResult SegmentInterview(ImmutableArray<Turn> turns, string? mainLanguage)
+    {
+        string main = mainLanguage ?? MainLanguage.Detect(this, turns);
+        var spans = turns.Select(t => Segment(t.Text, main)).ToImmutableArray();
+        var basis = mainLanguage is not null ? MainLanguageDecision.Given
+            : new MainLanguageDecision(main == MainLanguage.Undetermined ? "none" : "largest-share", "characters", [], [], []);
+        return new InterviewLanguageResult([], spans, main, basis);
+    }
 }
 
 /// <summary>Words that are names in every language (gazetteer places, authority-list names), so a

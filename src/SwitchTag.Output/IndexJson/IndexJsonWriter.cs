@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using SwitchTag.Core.Documents;
@@ -34,6 +35,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
         w.WriteString("sha256", index.Transcript.Source.Sha256);
         w.WriteEndObject();
         w.WriteString("mainLanguage", index.MainLanguage);
+        w.WriteString("mainLanguageBasis", index.MainLanguageDecision?.Basis);
         Seconds(w, "duration", index.Duration);
         if (index.Media is not null) w.WriteString("media", index.Media);
 
@@ -48,6 +50,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
         }
         w.WriteEndArray();
 
+        WriteLanguageChoice(w, index);
         WriteTurns(w, index);
         WriteMentions(w, index);
         WriteHeadings(w, index);
@@ -75,6 +78,34 @@ public sealed class IndexJsonWriter : IInterviewWriter
         }
         w.WriteEndArray();
         w.WriteEndObject();
+    }
+
+    private static void WriteLanguageChoice(Utf8JsonWriter w, InterviewIndex index)
+    {
+        Fractions(w, "languageProfile", index.LanguageProfile);
+        if (index.MainLanguageDecision is not { } d) { w.WriteNull("mainLanguageChoice"); return; }
+        w.WriteStartObject("mainLanguageChoice");
+        w.WriteString("basis", d.Basis);
+        w.WriteString("unit", d.Unit);
+        w.WriteStartArray("narrators");
+        foreach (var n in d.Narrators) w.WriteStringValue(n);
+        w.WriteEndArray();
+        Fractions(w, "narratorShares", d.NarratorShares);
+        Fractions(w, "interviewerShares", d.InterviewerShares);
+        w.WriteEndObject();
+    }
+
+    private static void Fractions(Utf8JsonWriter w, string name, ImmutableArray<LanguageFraction> fractions)
+    {
+        w.WriteStartArray(name);
+        foreach (var f in fractions.IsDefault ? [] : fractions)
+        {
+            w.WriteStartObject();
+            w.WriteString("language", f.Language);
+            w.WriteNumber("share", f.Share);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
     }
 
     private static void WriteTurns(Utf8JsonWriter w, InterviewIndex index)
@@ -203,6 +234,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteNumber("charStart", item.CharStart);
             w.WriteNumber("charEnd", item.CharEnd);
             w.WriteNumber("words", item.Words);
+            w.WriteBoolean("check", item.Check);
             w.WriteEndObject();
         }
         w.WriteEndArray();

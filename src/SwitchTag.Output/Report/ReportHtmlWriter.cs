@@ -58,7 +58,8 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         b.Append("<ul class=\"facts\">\n")
          .Append("<li>Source: ").Append(Said(source.Path)).Append(" (").Append(source.Format.Name).Append(")</li>\n")
          .Append("<li>SHA-256: <code>").Append(Esc(source.Sha256)).Append("</code></li>\n")
-         .Append("<li>Main language: ").Append(Esc(LanguageNames.WithCode(index.MainLanguage))).Append("</li>\n")
+         .Append("<li>Main language: ").Append(Esc(LanguageNames.WithCode(index.MainLanguage)))
+         .Append(MainLanguageText.Basis(index) is { } basis ? ", " + Esc(basis) : "").Append("</li>\n")
          .Append("<li>Duration: <span class=\"time\" title=\"").Append(index.Duration).Append("\">").Append(Clock(index.Duration)).Append("</span></li>\n")
          .Append("<li>Turns: ").Append(index.Turns.Length).Append(", mentions indexed: ").Append(index.Mentions.Count(m => m.HeadingId is not null))
          .Append(", held for review: ").Append(index.Review.Length).Append("</li>\n")
@@ -75,7 +76,8 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         foreach (var (label, id, title) in Sections)
             b.Append("<li><a href=\"#").Append(id).Append("\">").Append(title).Append("</a> (").Append(index.Headings.Count(h => h.Label == label)).Append(")</li>\n");
         b.Append("<li><a href=\"#review\">For review</a> (").Append(index.Review.Length).Append(")</li>\n")
-         .Append("<li><a href=\"#worklist\">Translators' worklist</a> (").Append(index.Worklist.Length).Append(")</li>\n");
+         .Append("<li><a href=\"#worklist\">Translators' worklist</a> (").Append(index.Worklist.Count(w => !w.Check)).Append(")</li>\n")
+         .Append("<li><a href=\"#check-language\">Check the language</a> (").Append(index.Worklist.Count(w => w.Check)).Append(")</li>\n");
         if (!index.Diagnostics.IsEmpty) b.Append("<li><a href=\"#notes\">Reading notes</a> (").Append(index.Diagnostics.Length).Append(")</li>\n");
         b.Append("</ol>\n</nav>\n");
     }
@@ -162,13 +164,22 @@ public sealed class ReportHtmlWriter : IInterviewWriter
     private static void Worklist(StringBuilder b, InterviewIndex index)
     {
         b.Append("<section id=\"worklist\">\n<h2>Translators' worklist</h2>\n");
-        if (index.Worklist.IsEmpty) { b.Append("<p class=\"muted\">No stretch outside the main language was found.</p>\n</section>\n"); return; }
+        WorklistTable(b, index, index.Worklist.Where(w => !w.Check).ToList(), "No stretch outside the main language was found.");
+        b.Append("</section>\n<section id=\"check-language\">\n<h2>Check the language</h2>\n")
+         .Append("<p class=\"muted\">Stretches whose language is too uncertain to claim: check the language before translating.</p>\n");
+        WorklistTable(b, index, index.Worklist.Where(w => w.Check).ToList(), "None.");
+        b.Append("</section>\n");
+    }
+
+    private static void WorklistTable(StringBuilder b, InterviewIndex index, List<WorklistItem> items, string empty)
+    {
+        if (items.Count == 0) { b.Append("<p class=\"muted\">").Append(empty).Append("</p>\n"); return; }
         b.Append("<table>\n<tr><th>Start</th><th>End</th><th>Speaker</th><th>Language</th><th>Confidence</th><th>Text</th></tr>\n");
-        foreach (var item in index.Worklist)
+        foreach (var item in items)
             b.Append("<tr><td>").Append(TimeLink(item.Time.Start, index.Media)).Append("</td><td><span class=\"time\">").Append(Clock(item.Time.End))
              .Append("</span></td><td>").Append(Said(item.Speaker)).Append("</td><td>").Append(Esc(LanguageNames.WithCode(item.Language)))
              .Append("</td><td>").Append(Band(item.Confidence)).Append("</td><td>").Append(Said(item.Text)).Append("</td></tr>\n");
-        b.Append("</table>\n</section>\n");
+        b.Append("</table>\n");
     }
 
     private static void Notes(StringBuilder b, InterviewIndex index)

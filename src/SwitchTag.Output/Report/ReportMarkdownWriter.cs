@@ -1,5 +1,6 @@
 using System.Text;
 using SwitchTag.Core.Documents;
+using SwitchTag.Output.Html;
 using SwitchTag.Output.Text;
 
 namespace SwitchTag.Output.Report;
@@ -26,7 +27,9 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         md.Append("- Source: ").Append(MarkdownText.Escape(index.Transcript.Source.Path))
           .Append(" (").Append(index.Transcript.Source.Format.Name).Append(")\n");
         md.Append("- SHA-256: ").Append(index.Transcript.Source.Sha256).Append('\n');
-        md.Append("- Main language: ").Append(MarkdownText.Escape(index.MainLanguage)).Append('\n');
+        md.Append("- Main language: ").Append(MarkdownText.Escape(LanguageNames.WithCode(index.MainLanguage)));
+        if (MainLanguageText.Basis(index) is { } basis) md.Append(", ").Append(MarkdownText.Escape(basis));
+        md.Append('\n');
         md.Append("- Duration: ").Append(index.Duration).Append('\n');
         md.Append("- Turns: ").Append(index.Turns.Length).Append(", mentions indexed: ")
           .Append(index.Mentions.Count(m => m.HeadingId is not null)).Append(", held for review: ").Append(index.Review.Length).Append("\n\n");
@@ -100,11 +103,18 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
     private static void Worklist(StringBuilder md, InterviewIndex index)
     {
         md.Append("## Translators' worklist\n\n");
-        if (index.Worklist.IsEmpty) { md.Append("No stretch outside the main language was found.\n\n"); return; }
+        WorklistTable(md, index.Worklist.Where(w => !w.Check).ToList(), "No stretch outside the main language was found.");
+        md.Append("## Check the language\n\nStretches whose language is too uncertain to claim: check the language before translating.\n\n");
+        WorklistTable(md, index.Worklist.Where(w => w.Check).ToList(), "None.");
+    }
+
+    private static void WorklistTable(StringBuilder md, List<WorklistItem> items, string empty)
+    {
+        if (items.Count == 0) { md.Append(empty).Append("\n\n"); return; }
         var table = new MarkdownTable(md, "| Start | End | Speaker | Language | Confidence | Text |", "| --- | --- | --- | --- | ---: | --- |");
-        foreach (var item in index.Worklist)
+        foreach (var item in items)
             table.Row().Append("| ").Append(item.Time.Start).Append(" | ").Append(item.Time.End).Append(" | ")
-              .Append(MarkdownText.Escape(item.Speaker)).Append(" | ").Append(MarkdownText.Escape(item.Language)).Append(" | ")
+              .Append(MarkdownText.Escape(item.Speaker)).Append(" | ").Append(MarkdownText.Escape(LanguageNames.WithCode(item.Language))).Append(" | ")
               .Append(Numbers.Confidence(item.Confidence)).Append(" | ").Append(MarkdownText.Escape(item.Text)).Append(" |\n");
         md.Append('\n');
     }
