@@ -18,8 +18,8 @@ public static class Interviews
         long shift = one.Cues[^1].Time.End.Milliseconds + 1000;
         var cues = Enumerable.Range(0, repeats).SelectMany(r => one.Cues.Select(c => c with
         {
-            Time = new TimeRange(c.Time.Start + r * shift, c.Time.End + r * shift),
-            WordTimes = c.WordTimes.Select(w => w with { Time = w.Time + r * shift }).ToImmutableArray(),
+            Time = new TimeRange(c.Time.Start + new Duration(r * shift), c.Time.End + new Duration(r * shift)),
+            WordTimes = c.WordTimes.Select(w => w with { Time = w.Time + new Duration(r * shift) }).ToImmutableArray(),
         })).ToImmutableArray();
         var transcript = one with { Source = one.Source with { Path = "fixture/large.vtt" }, Cues = cues };
         return new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new SwitchTag.Indexing.IndexBuilder(Fixture.Lexicon(), default)).Run(transcript, "en");

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
+using SwitchTag.Core.Time;
 using SwitchTag.Output;
 using SwitchTag.Output.Report;
 using SwitchTag.Store;
@@ -17,7 +18,7 @@ public static class StoreEntries
     {
         var byText = new Dictionary<string, Decision>(StringComparer.Ordinal);
         foreach (var d in decisions) byText.TryAdd(DecisionKey(d), d);
-        return store.Collection().Select(i => new CollectionEntry(i.Name, i.Folder, i.MainLanguage, i.Duration,
+        return store.Collection().Select(i => new CollectionEntry(i.Name, i.Folder, i.MainLanguage, i.Duration - Timecode.Zero,
             i.Headings.Select(h => new CollectionHeading(h.Id, h.Label, h.Name, h.Place, h.Times, h.Variants)).ToImmutableArray(),
             i.Mentions.Select(m =>
             {
