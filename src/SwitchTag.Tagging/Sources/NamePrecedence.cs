@@ -3,13 +3,16 @@ using SwitchTag.Core.Documents;
 
 namespace SwitchTag.Tagging.Sources;
 
-/// <summary>Which proposal stands where name sources overlap. Sources are ranked; a proposal is
-/// dropped when it overlaps a standing proposal of a higher-ranked source (never split, shortened or
-/// relabelled), and stands otherwise. Protected sources rank above every other: a span from an
-/// archive's own list is never overwritten by a model or a gazetteer, whatever is inserted later.
-/// <see cref="Default"/>: authority list (protected), then the model (it has seen the context:
-/// "Jordan Peterson" is a person, not the country), then the gazetteer. A new source takes its place
-/// with <see cref="InsertBefore"/> or <see cref="InsertAfter"/>.</summary>
+/// <summary>The name cascade: which proposal stands where name sources overlap. Sources are ranked;
+/// a proposal is dropped when it overlaps a standing proposal of a higher-ranked source (never split,
+/// shortened or relabelled), and stands otherwise. Protected sources rank above every other: a span
+/// from an archive's own list is never overwritten, whatever is inserted later.
+/// <see cref="Default"/>, highest first: the authority list (protected); person cues (a titled or
+/// kin-marked name is a person: "Mr. Roth" is never Roth, DE); place evidence (a gazetteer place after
+/// a locative preposition, with a case ending, or a multi-word name matched whole: "w Tarnowie" is never
+/// a person); the model (it has seen the context: "Jordan Peterson" is a person, not the country); the
+/// gazetteer without evidence. A new source takes its place with <see cref="InsertBefore"/> or
+/// <see cref="InsertAfter"/>.</summary>
 public sealed class NamePrecedence
 {
     private readonly ImmutableArray<MentionSource> _order;
@@ -26,7 +29,7 @@ public sealed class NamePrecedence
     }
 
     public static NamePrecedence Default { get; } =
-        new([MentionSource.Authority, MentionSource.Model, MentionSource.Gazetteer], [MentionSource.Authority]);
+        new([MentionSource.Authority, MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, MentionSource.Gazetteer], [MentionSource.Authority]);
 
     /// <summary>Highest rank first.</summary>
     public ImmutableArray<MentionSource> Order => _order;
