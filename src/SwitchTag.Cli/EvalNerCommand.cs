@@ -3,8 +3,9 @@ using SwitchTag.Pipeline;
 
 namespace SwitchTag.Cli;
 
-/// <summary><c>switchtag eval ner --gold FILE... [--json]</c>: scores the shipped name model on
-/// pre-tokenised gold files (<see cref="NameModelEvaluation"/>).</summary>
+/// <summary><c>switchtag eval ner --gold FILE... [--json | --per-as-loc]</c>: scores the shipped name model on
+/// pre-tokenised gold files (<see cref="NameModelEvaluation"/>), or counts persons tagged as places
+/// (<see cref="PersonAsPlaceEvaluation"/>).</summary>
 public static class EvalNerCommand
 {
     public static Command Create()
@@ -16,8 +17,14 @@ public static class EvalNerCommand
             AllowMultipleArgumentsPerToken = true,
         };
         var json = new Option<bool>("--json") { Description = "Print {\"micro\", \"PER\", \"LOC\", \"ORG\"} precision/recall/f1 as JSON" };
-        var command = new Command("ner", "Score the name tagger on gold files (exact span match, conlleval rules).") { gold, json };
-        command.SetAction(parse => NameModelEvaluation.Run(parse.GetValue(gold) ?? [], parse.GetValue(json), Console.Out, Console.Error) switch
+        var personAsPlace = new Option<bool>("--per-as-loc")
+        {
+            Description = "Instead of scores, count gold person tokens tagged inside a place, by the shipped name cascade and by the plain model-over-gazetteer order",
+        };
+        var command = new Command("ner", "Score the name tagger on gold files (exact span match, conlleval rules).") { gold, json, personAsPlace };
+        command.SetAction(parse => (parse.GetValue(personAsPlace)
+            ? PersonAsPlaceEvaluation.Run(parse.GetValue(gold) ?? [], Console.Out, Console.Error)
+            : NameModelEvaluation.Run(parse.GetValue(gold) ?? [], parse.GetValue(json), Console.Out, Console.Error)) switch
         {
             NameEvaluationResult.Scored => ExitCodes.Success,
             NameEvaluationResult.NoInput => ExitCodes.Usage,
