@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
 """Renders the evaluation interviews of interviews.py into transcripts-eval/ (WebVTT, SRT, timestamped
-text, Markdown) and their gold into tests/SwitchTag.Indexing.Tests/EvalGold/, checking that every gold
+text, Markdown) and their gold into tests/SwitchTag.Pipeline.Tests/EvalGold/, checking that every gold
 surface and worklist text occurs in the plain talk. Deterministic; run once when the set was frozen."""
 import json
 import os

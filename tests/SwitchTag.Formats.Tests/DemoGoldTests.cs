@@ -5,7 +5,7 @@ using Xunit;
 
 namespace SwitchTag.Formats.Tests;
 
-/// <summary>The demo interviews' hand-made gold (tests/SwitchTag.Indexing.Tests/Gold, written from the
+/// <summary>The demo interviews' hand-made gold (tests/SwitchTag.Pipeline.Tests/Gold, written from the
 /// files by another engineer, independently of these readers) quotes names and foreign stretches "exactly
 /// as in the plain cue text": each must be found in the turn texts the readers produce.</summary>
 public class DemoGoldTests
@@ -13,7 +13,7 @@ public class DemoGoldTests
     [Fact]
     public void Gold_surfaces_and_worklist_texts_occur_in_the_plain_text()
     {
-        var goldDir = Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Indexing.Tests", "Gold");
+        var goldDir = Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Pipeline.Tests", "Gold");
         foreach (var t in DemoTranscripts.ReadAll())
         {
             var goldPath = Path.Combine(goldDir, t.Name + ".gold.json");

@@ -3,7 +3,7 @@ using System.Text.RegularExpressions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
 
-namespace SwitchTag.Indexing.Tests;
+namespace SwitchTag.Pipeline.Tests;
 
 /// <summary>One gold heading: label, heading name, every surface as it occurs in the talk, and for
 /// places the GeoNames id (null when the place has no city entry; absent in the demo gold) and country.</summary>

@@ -1,5 +1,4 @@
 using System.Text.Json;
-using SwitchTag.Cli;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Formats;
@@ -9,17 +8,18 @@ using SwitchTag.Tests.Shared;
 using Xunit;
 using Xunit.Abstractions;
 
-namespace SwitchTag.Indexing.Tests;
+namespace SwitchTag.Pipeline.Tests;
 
 /// <summary>The frozen evaluation interviews (transcripts-eval/, gold in EvalGold/*.gold.json), never
 /// tuned on. Asserted: each file reads, and its gold agrees with the talk and with GeoNames. Printed, not
 /// asserted: how the pipeline scores against the gold (the targets are measured by scripts/eval-index).</summary>
 public class EvalSetTests(ITestOutputHelper output)
 {
-    private static readonly string GoldDir = Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Indexing.Tests", "EvalGold");
+    private static readonly string GoldDir = Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Pipeline.Tests", "EvalGold");
 
-    private static readonly Lazy<IndexStages> Stages = new(() =>
-        IndexStages.Load(TaggingMode.RulesThenModel, null, out var error) ?? throw new InvalidOperationException(error));
+    private static readonly Lazy<IndexPipeline> Pipeline = new(() =>
+        new IndexPipelineBuilder().UseShippedModels(TaggingMode.RulesThenModel).Build() is { Pipeline: { } p } ? p
+            : throw new InvalidOperationException("the shipped models could not be loaded"));
 
     public static TheoryData<string> Interviews() =>
         new(Directory.GetFiles(GoldDir, "*.gold.json").Select(Path.GetFileName).Order(StringComparer.Ordinal)!);
@@ -71,7 +71,7 @@ public class EvalSetTests(ITestOutputHelper output)
     {
         using var gold = JsonDocument.Parse(File.ReadAllText(Path.Combine(GoldDir, goldFile)));
         var transcript = Read(gold.RootElement);
-        var (index, _) = Stages.Value.Run(transcript, null, []);
+        var index = Pipeline.Value.Run(transcript);
         var score = GoldScore.Of(GoldEntry.ReadAll(gold.RootElement), index);
         foreach (var line in score.Lines) output.WriteLine(line);
         output.WriteLine(score.Summary(gold.RootElement.GetProperty("interview").GetString()!));
