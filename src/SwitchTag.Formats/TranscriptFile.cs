@@ -2,12 +2,8 @@ using System.Collections.Immutable;
 using System.Security.Cryptography;
 using System.Text;
 using SwitchTag.Core.Documents;
-using SwitchTag.Formats.Markdown;
 using SwitchTag.Formats.Reading;
-using SwitchTag.Formats.Srt;
 using SwitchTag.Formats.Text;
-using SwitchTag.Formats.Timestamped;
-using SwitchTag.Formats.WebVtt;
 
 namespace SwitchTag.Formats;
 
@@ -18,11 +14,12 @@ public static class TranscriptFile
     /// <summary>File line used for problems with a path as a whole (missing, unreadable).</summary>
     public const int WholeFile = 0;
 
-    public static IReadOnlyList<string> KnownExtensions { get; } = [".vtt", ".srt", ".txt", ".md", ".markdown"];
+    /// <summary>The extensions of the default readers, which a folder walk picks up.</summary>
+    public static IReadOnlyList<string> KnownExtensions => TranscriptReaders.Default.Extensions;
 
     /// <summary>Reads bytes, decodes them (UTF-8, or UTF-16 with a BOM), detects the format from the
     /// content (unless <paramref name="forced"/>) and parses.</summary>
-    public static ReadResult Read(string path, TranscriptFormat? forced = null)
+    public static ReadResult Read(string path, TranscriptFormat? forced = null, TranscriptReaders? readers = null)
     {
         byte[] bytes;
         try
@@ -36,15 +33,15 @@ public static class TranscriptFile
         if (bytes.Length == 0) return Rejected(path, 1, "file is empty");
         var decoded = TextDecoding.Decode(bytes);
         if (decoded.Text is null) return Rejected(path, decoded.ErrorLine, decoded.Error!);
-        return ParseCore(path, decoded.Text, forced, Convert.ToHexStringLower(SHA256.HashData(bytes)));
+        return ParseCore(path, decoded.Text, forced, Convert.ToHexStringLower(SHA256.HashData(bytes)), readers ?? TranscriptReaders.Default);
     }
 
     /// <summary>Parses text already in memory; the recorded SHA-256 is of its UTF-8 encoding.</summary>
-    public static ReadResult Parse(string path, string text, TranscriptFormat? forced = null)
+    public static ReadResult Parse(string path, string text, TranscriptFormat? forced = null, TranscriptReaders? readers = null)
     {
         text ??= "";
         if (text.Length > 0 && text[0] == '\uFEFF') text = text[1..];
-        return ParseCore(path, text, forced, Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text))));
+        return ParseCore(path, text, forced, Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text))), readers ?? TranscriptReaders.Default);
     }
 
     /// <summary>Files to read: folders are walked recursively for <see cref="KnownExtensions"/>, in
@@ -94,12 +91,12 @@ public static class TranscriptFile
     public static bool IsFolderNote(string path) =>
         Path.GetFileNameWithoutExtension(path).ToUpperInvariant() is "README" or "LICENSE" or "LICENCE" or "CHANGELOG" or "CONTRIBUTING" or "SOURCES" or "NOTICE";
 
-    private static ReadResult ParseCore(string path, string text, TranscriptFormat? forced, string sha256)
+    private static ReadResult ParseCore(string path, string text, TranscriptFormat? forced, string sha256, TranscriptReaders readers)
     {
         var diagnostics = new Diagnostics(path);
         try
         {
-            return ParseChecked(path, text, forced, sha256, diagnostics);
+            return ParseChecked(path, text, forced, sha256, readers, diagnostics);
         }
         catch (Exception e) when (e is not OutOfMemoryException)
         {
@@ -109,7 +106,7 @@ public static class TranscriptFile
         }
     }
 
-    private static ReadResult ParseChecked(string path, string text, TranscriptFormat? forced, string sha256, Diagnostics diagnostics)
+    private static ReadResult ParseChecked(string path, string text, TranscriptFormat? forced, string sha256, TranscriptReaders readers, Diagnostics diagnostics)
     {
         if (text.AsSpan().IsWhiteSpace())
         {
@@ -124,42 +121,30 @@ public static class TranscriptFile
         }
 
         string extension = Path.GetExtension(path);
-        var format = forced ?? FormatDetector.Detect(text, extension);
-        if (format is null)
+        var reader = forced is { } f ? readers.Find(f) : readers.Detect(text, extension);
+        if (reader is null)
         {
-            diagnostics.Error(1, "unknown format: no WEBVTT header, no SubRip timing line (\"00:00:01,000 --> 00:00:02,000\") and no line opening with a timestamp in the first lines");
+            diagnostics.Error(1, forced is null
+                ? "unknown format: no WEBVTT header, no SubRip timing line (\"00:00:01,000 --> 00:00:02,000\") and no line opening with a timestamp in the first lines"
+                : $"no reader for the format {forced}");
             return new ReadResult(null, diagnostics.ToImmutable());
         }
-        if (forced is null && ExtensionFormat(extension) is { } expected && expected != format)
-            diagnostics.Warn(1, $"content reads as {format.Value.ToName()} although the extension {extension} suggests {expected.ToName()}; read as {format.Value.ToName()}"
-                + (expected == TranscriptFormat.WebVtt ? " (no WEBVTT header line)" : ""));
+        var format = reader.Format;
+        if (forced is null && readers.ClaimedBy(extension) is { } expected && expected != reader)
+            diagnostics.Warn(1, $"content reads as {format} although the extension {extension} suggests {expected.Format}; read as {format}"
+                + (expected.MissingSignature is { } missing ? $" ({missing})" : ""));
 
-        var src = new SourceText(path, text);
-        var cues = format.Value switch
-        {
-            TranscriptFormat.WebVtt => WebVttReader.Read(src, diagnostics),
-            TranscriptFormat.Srt => SrtReader.Read(src, diagnostics),
-            TranscriptFormat.Text => TimestampedTextReader.Read(src, diagnostics),
-            _ => MarkdownReader.Read(src, diagnostics),
-        };
+        var cues = reader.Read(new SourceText(path, text), diagnostics);
         if (cues is { IsEmpty: true })
         {
-            diagnostics.Error(1, $"no cues found (read as {format.Value.ToName()})");
+            diagnostics.Error(1, $"no cues found (read as {format})");
             cues = null;
         }
         if (cues is null) return new ReadResult(null, diagnostics.ToImmutable());
         var all = diagnostics.ToImmutable();
-        var transcript = new Transcript(new SourceInfo(path, format.Value, sha256), text, cues.Value, all);
+        var transcript = new Transcript(new SourceInfo(path, format, sha256), text, cues.Value, all);
         return new ReadResult(transcript, all);
     }
-
-    private static TranscriptFormat? ExtensionFormat(string extension) => extension.ToLowerInvariant() switch
-    {
-        ".vtt" => TranscriptFormat.WebVtt,
-        ".srt" => TranscriptFormat.Srt,
-        ".md" or ".markdown" => TranscriptFormat.Markdown,
-        _ => null,
-    };
 
     private static ReadResult Rejected(string path, int line, string message) =>
         new(null, [new Diagnostic(new SourceLine(path, line), Severity.Error, message)]);

@@ -46,7 +46,7 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
             .Select((list, t) => list.Select(s => new Timed<LanguageSpan>(s, aligner.Align(turns[t], s.CharStart, s.CharEnd))).ToImmutableArray())
             .ToImmutableArray();
         var worklist = WorklistBuilder.Build(turns, safeSpans, mainLanguage, aligner);
-        var duration = transcript.Cues.IsEmpty ? Timecode.Zero : transcript.Cues.Max(c => c.Time.End);
+        var duration = (transcript.Cues.IsEmpty ? Timecode.Zero : transcript.Cues.Max(c => c.Time.End)) - Timecode.Zero;
 
         var foreign = safeSpans
             .SelectMany((list, t) => list.Where(s => WorklistBuilder.IsForeign(s.Language, mainLanguage)).Select(s => new ForeignSpan(t, s.CharStart, s.CharEnd, s.Language)))

@@ -19,7 +19,7 @@ public static class LanguageStatistics
             foreach (var timed in spans[t])
             {
                 var span = timed.Value;
-                seconds[span.Language] = seconds.GetValueOrDefault(span.Language) + timed.Time.DurationMilliseconds;
+                seconds[span.Language] = seconds.GetValueOrDefault(span.Language) + timed.Time.Duration.Milliseconds;
                 words[span.Language] = words.GetValueOrDefault(span.Language) + WordCount.Of(turns[t].Text, span.CharStart, span.CharEnd);
             }
         }

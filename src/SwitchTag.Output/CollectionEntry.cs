@@ -5,7 +5,7 @@ using SwitchTag.Core.Time;
 namespace SwitchTag.Output;
 
 /// <summary>What the collection index keeps of one interview (small, so a long run holds little).</summary>
-public sealed record CollectionEntry(string Interview, string Folder, string MainLanguage, Timecode Duration, ImmutableArray<CollectionHeading> Headings)
+public sealed record CollectionEntry(string Interview, string Folder, string MainLanguage, Duration Duration, ImmutableArray<CollectionHeading> Headings)
 {
     public static CollectionEntry From(InterviewIndex index, string folder) => new(
         index.Transcript.Name, folder, index.MainLanguage, index.Duration,

@@ -13,6 +13,7 @@ namespace SwitchTag.Pipeline;
 /// times, headings, worklist and the reviewers' decisions on it, and writes the outputs. Built by
 /// <see cref="IndexPipelineBuilder"/>; holds no per-interview state, so one instance serves a run.</summary>
 public sealed class IndexPipeline(
+    TranscriptReaders readers,
     ILanguageSegmenter languages,
     INameTagger names,
     IHeadingLexicon lexicon,
@@ -26,7 +27,7 @@ public sealed class IndexPipeline(
     public IHeadingLexicon Lexicon => lexicon;
     public ImmutableArray<Decision> Decisions => decisions;
 
-    public ReadResult Read(string path) => TranscriptFile.Read(path, format);
+    public ReadResult Read(string path) => TranscriptFile.Read(path, format, readers);
 
     /// <summary>The finished index of one transcript; the decisions' outcomes are on it.</summary>
     public InterviewIndex Run(Transcript transcript) =>

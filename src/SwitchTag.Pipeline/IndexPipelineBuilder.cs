@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
+using SwitchTag.Formats;
 using SwitchTag.Indexing;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
@@ -35,6 +36,7 @@ public sealed class IndexPipelineBuilder
     private OutputWriters? _writers;
     private readonly List<INameSource> _nameSources = [];
     private NamePrecedence? _precedence;
+    private TranscriptReaders _readers = TranscriptReaders.Default;
 
     public IndexPipelineBuilder UseModels(ModelLocation location) { _models = location; return this; }
 
@@ -75,6 +77,9 @@ public sealed class IndexPipelineBuilder
     public IndexPipelineBuilder UseTagger(INameTagger tagger) { _tagger = tagger; return this; }
 
     public IndexPipelineBuilder UseHeadingLexicon(IHeadingLexicon lexicon) { _lexicon = lexicon; return this; }
+
+    /// <summary>Exactly these readers instead of the shipped ones.</summary>
+    public IndexPipelineBuilder UseReaders(TranscriptReaders readers) { _readers = readers; return this; }
 
     /// <summary>Read every file as this format instead of detecting it; null detects.</summary>
     public IndexPipelineBuilder UseFormat(TranscriptFormat? format) { _format = format; return this; }
@@ -149,7 +154,7 @@ public sealed class IndexPipelineBuilder
             tagger = new NameTagger(sources, _precedence, NameTagger.ShippedVetoes(gazetteer, lists));
         }
 
-        var pipeline = new IndexPipeline(segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer, lists), _format, _mainLanguage, _decisions, _writers ?? OutputWriters.Default);
+        var pipeline = new IndexPipeline(_readers, segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer, lists), _format, _mainLanguage, _decisions, _writers ?? OutputWriters.Default);
         return new PipelineBuild(pipeline, null, notes.ToImmutable());
     }
 }

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
+using SwitchTag.Formats;
 using SwitchTag.Indexing.Decisions;
 using SwitchTag.Tagging;
 
@@ -25,8 +26,8 @@ public sealed record IndexRequest(
         TranscriptFormat? forced = null;
         if (format is not null)
         {
-            if (!TranscriptFormatNames.TryParse(format, out var f)) { usage = $"unknown --format \"{format}\" (webvtt, srt, text or markdown)"; return null; }
-            forced = f;
+            if (TranscriptReaders.Default.Find(format) is not { } reader) { usage = $"unknown --format \"{format}\" ({TranscriptReaders.Default.NameList})"; return null; }
+            forced = reader.Format;
         }
         TaggingMode mode;
         switch (names)

@@ -17,7 +17,7 @@ public class DemoGoldTests
         foreach (var t in DemoTranscripts.ReadAll())
         {
             var goldPath = Path.Combine(goldDir, t.Name + ".gold.json");
-            if (!File.Exists(goldPath)) continue;
+            Assert.True(File.Exists(goldPath), $"{t.Name}: no gold file {goldPath}; every demo interview has one");
             string text = string.Join("\n", TurnBuilder.Build(t).Select(x => x.Text));
             using var gold = JsonDocument.Parse(File.ReadAllText(goldPath));
             var quotes = new List<string>();

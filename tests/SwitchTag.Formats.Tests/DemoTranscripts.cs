@@ -4,18 +4,27 @@ using Xunit;
 
 namespace SwitchTag.Formats.Tests;
 
-/// <summary>The invented demo interviews in transcripts-demo/, whatever is there when the tests run.</summary>
+/// <summary>The invented demo interviews in transcripts-demo/. A missing folder, an empty one or a
+/// rejected file fails the test that asked, with a plain message, rather than leaving it nothing to check.</summary>
 public static class DemoTranscripts
 {
     public static string Folder => Path.Combine(TestPaths.RepoRoot, "transcripts-demo");
 
     public static List<string> Files()
     {
+        Assert.True(Directory.Exists(Folder), $"the demo folder {Folder} is missing");
         var problems = new List<Diagnostic>();
-        return Directory.Exists(Folder) ? [.. TranscriptFile.Expand([Folder], problems)] : [];
+        List<string> files = [.. TranscriptFile.Expand([Folder], problems)];
+        Assert.True(files.Count > 0, $"no transcripts in {Folder}");
+        return files;
     }
 
-    public static IEnumerable<Transcript> ReadAll() => Files().Select(f => TranscriptFile.Read(f).Transcript).OfType<Transcript>();
+    public static List<Transcript> ReadAll() => Files().Select(f =>
+    {
+        var read = TranscriptFile.Read(f);
+        Assert.True(read.Transcript is not null, $"{f}: the demo transcript was rejected: {string.Join("; ", read.Diagnostics)}");
+        return read.Transcript!;
+    }).ToList();
 }
 
 public class DemoTranscriptTests

@@ -1,3 +1,4 @@
+using SwitchTag.Core.Text;
 using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;

@@ -43,11 +43,6 @@ public class InvariantTests
             Assert.True(cue.RawStart == 0 || t.OriginalText[cue.RawStart - 1] is '\n' or '\r', $"{cue.At}: raw start not at a line start");
             Assert.True(cue.Time.End >= cue.Time.Start);
             foreach (var w in cue.WordTimes) Assert.InRange(w.CharOffset, 0, cue.Text.Length);
-            foreach (var h in cue.LanguageHints)
-            {
-                Assert.InRange(h.CharStart, 0, cue.Text.Length);
-                Assert.InRange(h.CharEnd, h.CharStart, cue.Text.Length);
-            }
             Assert.Equal(SpeakerLabels.Normalise(cue.SpeakerLabel), cue.Speaker);
         }
     }

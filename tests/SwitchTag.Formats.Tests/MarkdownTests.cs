@@ -16,11 +16,9 @@ public class MarkdownTests
         Assert.Equal(4, t.Cues.Length);
         Assert.Equal("Where were you born?", t.Cues[0].Text);
         Assert.Equal("Interviewer", t.Cues[0].Speaker);
-        Assert.Equal("Childhood", t.Cues[0].Section);
         Assert.Equal("In Sevilla, near the\nriver, Guadalquivir.\nA second paragraph of Maria & her brother.", t.Cues[1].Text);
         Assert.Equal("Maria", t.Cues[1].Speaker);
         Assert.Equal(new TimeRange(Timecode.FromSeconds(4), Timecode.FromSeconds(20)), t.Cues[1].Time);
-        Assert.Equal("Emigration", t.Cues[2].Section);
         Assert.Equal("When did you leave?", t.Cues[2].Text);
         Assert.Equal("In 1936.", t.Cues[3].Text);
         Assert.Equal([5, 7, 14, 15], t.Cues.Select(c => c.At.Line));

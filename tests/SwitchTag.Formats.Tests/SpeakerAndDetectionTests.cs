@@ -23,21 +23,21 @@ public class SpeakerAndDetectionTests
         Assert.Equal(expected, SpeakerLabels.Normalise(raw));
 
     [Theory]
-    [InlineData("WEBVTT\n\n00:01.000 --> 00:02.000\nx", ".txt", TranscriptFormat.WebVtt)]
-    [InlineData("\n\nWEBVTT\tcaptions", null, TranscriptFormat.WebVtt)]
-    [InlineData("1\n00:00:01,000 --> 00:00:02,000\nx", ".vtt", TranscriptFormat.Srt)]
-    [InlineData("[00:00:01] A: x", ".md", TranscriptFormat.Markdown)]
-    [InlineData("[00:00:01] A: x", ".txt", TranscriptFormat.Text)]
-    [InlineData("[00:00:01] A: x", null, TranscriptFormat.Text)]
-    [InlineData("# Title\n\n[00:00:01] A: x", ".txt", TranscriptFormat.Markdown)]
-    [InlineData("- **00:00:01** A: x", null, TranscriptFormat.Markdown)]
-    [InlineData("WEBVTTX\n00:01.000 --> 00:02.000", null, TranscriptFormat.Srt)]
-    [InlineData("[00:00:04] MIRIAM: on the second of October,\n1987. Mister Lindner, thank you.", ".txt", TranscriptFormat.Text)]
-    [InlineData("[00:00:04] MIRIAM: we left\n- and then we came back", ".txt", TranscriptFormat.Text)]
+    [InlineData("WEBVTT\n\n00:01.000 --> 00:02.000\nx", ".txt", "webvtt")]
+    [InlineData("\n\nWEBVTT\tcaptions", null, "webvtt")]
+    [InlineData("1\n00:00:01,000 --> 00:00:02,000\nx", ".vtt", "srt")]
+    [InlineData("[00:00:01] A: x", ".md", "markdown")]
+    [InlineData("[00:00:01] A: x", ".txt", "text")]
+    [InlineData("[00:00:01] A: x", null, "text")]
+    [InlineData("# Title\n\n[00:00:01] A: x", ".txt", "markdown")]
+    [InlineData("- **00:00:01** A: x", null, "markdown")]
+    [InlineData("WEBVTTX\n00:01.000 --> 00:02.000", null, "srt")]
+    [InlineData("[00:00:04] MIRIAM: on the second of October,\n1987. Mister Lindner, thank you.", ".txt", "text")]
+    [InlineData("[00:00:04] MIRIAM: we left\n- and then we came back", ".txt", "text")]
     [InlineData("hello", ".vtt", null)]
     [InlineData("", ".vtt", null)]
-    public void Format_comes_from_content_with_the_extension_as_a_hint(string text, string? extension, TranscriptFormat? expected) =>
-        Assert.Equal(expected, FormatDetector.Detect(text, extension));
+    public void Format_comes_from_content_with_the_extension_as_a_hint(string text, string? extension, string? expected) =>
+        Assert.Equal(expected, TranscriptReaders.Default.Detect(text, extension)?.Format.Name);
 
     [Fact]
     public void Forced_format_overrides_detection()

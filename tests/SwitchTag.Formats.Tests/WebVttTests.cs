@@ -1,3 +1,4 @@
+using SwitchTag.Core.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
 using Xunit;
@@ -111,9 +112,6 @@ public class WebVttTests
         Assert.Equal("line:90% align:center", a.Settings);
         Assert.Equal("Anna Nowak", a.SpeakerLabel);
         Assert.Equal("I was born in Krakowie, you know,\nnear the river & the <castle>\u00A0hill.", a.Text);
-        var hint = Assert.Single(a.LanguageHints);
-        Assert.Equal("pl", hint.Language);
-        Assert.Equal("Krakowie", a.Text[hint.CharStart..hint.CharEnd]);
 
         var b = t.Cues[1];
         // Ruby text is kept in parentheses after its base (FORMATS.md).
@@ -123,12 +121,12 @@ public class WebVttTests
     }
 
     [Fact]
-    public void Lang_span_left_open_runs_to_the_end_of_the_cue()
+    public void Lang_span_left_open_is_closed_at_the_end_of_the_cue()
     {
         // (W3C WebVTT cue text parsing, from memory: open spans are closed at the end of the cue)
-        var t = Reads.Accepted("lang.vtt", "WEBVTT\n\n00:01.000 --> 00:02.000\nSo I said <lang de>Guten Tag\nund tschüss");
-        var hint = Assert.Single(t.Cues[0].LanguageHints);
-        Assert.Equal("Guten Tag\nund tschüss", t.Cues[0].Text[hint.CharStart..hint.CharEnd]);
+        var result = TranscriptFile.Parse("lang.vtt", "WEBVTT\n\n00:01.000 --> 00:02.000\nSo I said <lang de>Guten Tag\nund tschüss");
+        Assert.Equal("So I said Guten Tag\nund tschüss", Assert.Single(result.Transcript!.Cues).Text);
+        Assert.Empty(result.Diagnostics);
     }
 
     [Fact]

@@ -63,7 +63,7 @@ public sealed record ReviewItem(int Mention, string Reason);
 public sealed record InterviewIndex(
     Transcript Transcript,
     string MainLanguage,
-    Timecode Duration,
+    Duration Duration,
     ImmutableArray<Turn> Turns,
     ImmutableArray<ImmutableArray<Timed<LanguageSpan>>> Spans,
     ImmutableArray<LanguageShare> Languages,

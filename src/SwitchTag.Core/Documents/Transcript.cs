@@ -3,31 +3,16 @@ using SwitchTag.Core.Time;
 
 namespace SwitchTag.Core.Documents;
 
-public enum TranscriptFormat { WebVtt, Srt, Text, Markdown }
-
-public static class TranscriptFormatNames
+/// <summary>A transcript format by the name index.json (<c>source.format</c>) and <c>--format</c> use.
+/// The readers of SwitchTag.Formats bring their own values, so this is no closed list.</summary>
+public readonly record struct TranscriptFormat(string Name)
 {
-    /// <summary>The names used in index.json (<c>source.format</c>) and by <c>--format</c>.</summary>
-    public static string ToName(this TranscriptFormat format) => format switch
-    {
-        TranscriptFormat.WebVtt => "webvtt",
-        TranscriptFormat.Srt => "srt",
-        TranscriptFormat.Text => "text",
-        TranscriptFormat.Markdown => "markdown",
-        _ => throw new ArgumentOutOfRangeException(nameof(format)),
-    };
+    public static readonly TranscriptFormat WebVtt = new("webvtt");
+    public static readonly TranscriptFormat Srt = new("srt");
+    public static readonly TranscriptFormat Text = new("text");
+    public static readonly TranscriptFormat Markdown = new("markdown");
 
-    public static bool TryParse(string name, out TranscriptFormat format)
-    {
-        switch (name.Trim().ToLowerInvariant())
-        {
-            case "webvtt" or "vtt": format = TranscriptFormat.WebVtt; return true;
-            case "srt": format = TranscriptFormat.Srt; return true;
-            case "text" or "txt": format = TranscriptFormat.Text; return true;
-            case "markdown" or "md": format = TranscriptFormat.Markdown; return true;
-            default: format = default; return false;
-        }
-    }
+    public override string ToString() => Name;
 }
 
 /// <summary>Where a piece of input came from: file and 1-based line.</summary>
@@ -50,27 +35,21 @@ public sealed record SourceInfo(string Path, TranscriptFormat Format, string Sha
 /// <paramref name="CharOffset"/> points into the cue's plain <see cref="Cue.Text"/>.</summary>
 public sealed record WordTime(int CharOffset, Timecode Time);
 
-/// <summary>A stretch the file itself marks as a language (WebVTT <c>&lt;lang xx&gt;</c>), offsets into <see cref="Cue.Text"/>.</summary>
-public sealed record LanguageHint(int CharStart, int CharEnd, string Language);
-
 /// <summary>One timed unit of the transcript.</summary>
 /// <param name="Speaker">Normalised speaker label (case, spacing and trailing colon folded), or null.</param>
 /// <param name="SpeakerLabel">The label exactly as written in the file, or null.</param>
 /// <param name="Text">Plain text: markup removed, character references decoded, lines joined by '\n'.</param>
 /// <param name="RawStart">Char offset of the cue's first line in <see cref="Transcript.OriginalText"/>.</param>
 /// <param name="RawEnd">Char offset just past the cue's last line in <see cref="Transcript.OriginalText"/>.</param>
-/// <param name="Section">The heading the cue sits under (Markdown), or null.</param>
 public sealed record Cue(
     TimeRange Time,
     string? Speaker,
     string? SpeakerLabel,
     string Text,
     ImmutableArray<WordTime> WordTimes,
-    ImmutableArray<LanguageHint> LanguageHints,
     SourceLine At,
     int RawStart,
     int RawEnd,
-    string? Section = null,
     string? Identifier = null,
     string? Settings = null);
 

@@ -22,21 +22,14 @@ public readonly record struct Timecode(long Milliseconds) : IComparable<Timecode
     public static bool operator >(Timecode a, Timecode b) => a.Milliseconds > b.Milliseconds;
     public static bool operator <=(Timecode a, Timecode b) => a.Milliseconds <= b.Milliseconds;
     public static bool operator >=(Timecode a, Timecode b) => a.Milliseconds >= b.Milliseconds;
-    public static Timecode operator +(Timecode a, long milliseconds) => new(a.Milliseconds + milliseconds);
-    public static long operator -(Timecode a, Timecode b) => a.Milliseconds - b.Milliseconds;
+    public static Timecode operator +(Timecode a, Duration d) => new(a.Milliseconds + d.Milliseconds);
+    public static Duration operator -(Timecode a, Timecode b) => new(a.Milliseconds - b.Milliseconds);
 
     public static Timecode Max(Timecode a, Timecode b) => a >= b ? a : b;
     public static Timecode Min(Timecode a, Timecode b) => a <= b ? a : b;
 
     /// <summary>Human-facing form <c>HH:MM:SS.mmm</c> (hours grow past 99 if they must).</summary>
-    public override string ToString()
-    {
-        long ms = Milliseconds;
-        string sign = ms < 0 ? "-" : "";
-        ms = Math.Abs(ms);
-        return string.Create(CultureInfo.InvariantCulture,
-            $"{sign}{ms / 3_600_000:00}:{ms / 60_000 % 60:00}:{ms / 1000 % 60:00}.{ms % 1000:000}");
-    }
+    public override string ToString() => Clock.Format(Milliseconds);
 
     /// <summary>Seconds with millisecond precision in invariant culture, for JSON and CSV.</summary>
     public string ToSecondsString() => TotalSeconds.ToString("0.###", CultureInfo.InvariantCulture);

@@ -14,11 +14,24 @@ namespace SwitchTag.Formats.Markdown;
 /// and inline HTML give their text; a link's destination is dropped) and fed line by line to the
 /// <see cref="EntryCollector"/>, so the typed-transcript conventions apply. Headings become section
 /// markers. Code blocks are read as plain lines; HTML blocks are reported.</summary>
-internal static class MarkdownReader
+public sealed class MarkdownReader : ITranscriptReader
 {
     private static readonly MarkdownPipeline Pipeline = new MarkdownPipelineBuilder().UsePreciseSourceLocation().Build();
 
-    public static ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
+    public TranscriptFormat Format => TranscriptFormat.Markdown;
+    public IReadOnlyList<string> Aliases { get; } = ["md"];
+    public IReadOnlyList<string> Extensions { get; } = [".md", ".markdown"];
+    public bool ClaimsExtensions => true;
+    public string? MissingSignature => null;
+
+    /// <summary>Lines opening with a timestamp, marked as Markdown or in a .md file.</summary>
+    public bool Detects(string text, string extension)
+    {
+        var scan = EntryScan.Of(text);
+        return scan.Entries && EntryScan.IsMarkdown(scan, extension);
+    }
+
+    public ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
     {
         var document = Markdig.Markdown.Parse(src.Text, Pipeline);
         var collector = new EntryCollector(src, diagnostics);

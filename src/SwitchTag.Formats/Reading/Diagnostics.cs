@@ -4,7 +4,7 @@ using SwitchTag.Core.Documents;
 namespace SwitchTag.Formats.Reading;
 
 /// <summary>Collects the diagnostics of one read, each tied to a line of the file.</summary>
-internal sealed class Diagnostics(string path)
+public sealed class Diagnostics(string path)
 {
     /// <summary>Quoted input is cut here so one enormous line cannot swamp a report; the file:line
     /// still leads to the whole text.</summary>

@@ -3,14 +3,14 @@ using SwitchTag.Core.Documents;
 namespace SwitchTag.Formats.Reading;
 
 /// <summary>One line of the input: 1-based number and its char range without the line terminator.</summary>
-internal readonly record struct TextLine(int Number, int Start, int End)
+public readonly record struct TextLine(int Number, int Start, int End)
 {
     public int Length => End - Start;
 }
 
 /// <summary>The decoded text of one file split into lines (CRLF, CR and LF all end a line), so every
 /// reader can name a file:line and keep offsets into the original text.</summary>
-internal sealed class SourceText
+public sealed class SourceText
 {
     private readonly TextLine[] lines;
 

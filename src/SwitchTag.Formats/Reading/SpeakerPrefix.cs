@@ -1,4 +1,6 @@
+using System.Collections.Frozen;
 using System.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Formats.Reading;
 
@@ -11,11 +13,9 @@ internal static class SpeakerPrefix
     private const int MaxWords = 4;
     private const int MaxLength = 40;
 
-    private static readonly HashSet<string>.AlternateLookup<ReadOnlySpan<char>> Particles = new HashSet<string>(StringComparer.Ordinal)
-    {
-        "de", "del", "della", "der", "den", "di", "da", "do", "dos", "das", "du", "la", "le",
-        "van", "von", "ter", "ten", "bin", "ibn", "al", "el", "y", "e", "i", "zu",
-    }.GetAlternateLookup<ReadOnlySpan<char>>();
+    /// <summary>Name particles of every language profile (SwitchTag.Core/Languages/*/particles.txt).</summary>
+    private static readonly FrozenSet<string>.AlternateLookup<ReadOnlySpan<char>> Particles =
+        LanguageProfiles.Default.NameParticles.GetAlternateLookup<ReadOnlySpan<char>>();
 
     /// <param name="line">The line, leading whitespace allowed.</param>
     /// <param name="labelStart">Where the label starts in <paramref name="line"/>.</param>

@@ -10,9 +10,32 @@ namespace SwitchTag.Formats.Srt;
 /// <summary>Reads SubRip: blocks of a counter line, a <c>HH:MM:SS,mmm --> HH:MM:SS,mmm</c> timing line and
 /// text lines, separated by blank lines. A missing counter is accepted; a counter followed by a timing
 /// line starts a new cue even without the blank line before it. Formatting tags are stripped.</summary>
-internal static class SrtReader
+public sealed class SrtReader : ITranscriptReader
 {
-    public static ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
+    public TranscriptFormat Format => TranscriptFormat.Srt;
+    public IReadOnlyList<string> Aliases { get; } = [];
+    public IReadOnlyList<string> Extensions { get; } = [".srt"];
+    public bool ClaimsExtensions => true;
+    public string? MissingSignature => null;
+
+    /// <summary>A SubRip (or WebVTT) timing line among the first lines.</summary>
+    public bool Detects(string text, string extension)
+    {
+        var lines = new LineScanner(DetectionWindow.Body(text));
+        for (int n = 0; n < DetectionWindow.Lines && lines.Next(out var line); n++)
+            if (line.Contains("-->", StringComparison.Ordinal) && IsTimingLine(line)) return true;
+        return false;
+    }
+
+    private static bool IsTimingLine(ReadOnlySpan<char> line)
+    {
+        int p = 0;
+        while (p < line.Length && char.IsWhiteSpace(line[p])) p++;
+        int q = p;
+        return Timestamps.TrySrt(line, ref p, out _) || Timestamps.TryWebVtt(line, ref q, out _);
+    }
+
+    public ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
     {
         var cues = new List<Cue>();
         string? label = null;
@@ -49,7 +72,7 @@ internal static class SrtReader
                 label = plain[ls..le];
                 plain = plain[ts..];
             }
-            cues.Add(new Cue(range, SpeakerLabels.Normalise(label), label, plain, [], [],
+            cues.Add(new Cue(range, SpeakerLabels.Normalise(label), label, plain, [],
                 src.At(src[blockStart].Number), src[blockStart].Start, src[i - 1].End,
                 Identifier: timing > blockStart ? src.Str(src[blockStart]).Trim() : null, Settings: settings));
         }

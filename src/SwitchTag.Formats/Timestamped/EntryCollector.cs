@@ -16,12 +16,11 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
 {
     private sealed record EntryLine(int Line, string Text);
 
-    private sealed class Entry(Timecode start, Timecode? end, int line, string? section)
+    private sealed class Entry(Timecode start, Timecode? end, int line)
     {
         public Timecode Start { get; } = start;
         public Timecode? End { get; } = end;
         public int Line { get; } = line;
-        public string? Section { get; } = section;
         public List<EntryLine> Lines { get; } = [];
     }
 
@@ -44,7 +43,7 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
         if (EntryStamp.TryMatch(text, out var stamp))
         {
             FlushUnplaced();
-            open = new Entry(stamp.Start, stamp.End, line, section);
+            open = new Entry(stamp.Start, stamp.End, line);
             entries.Add(open);
             var rest = text[stamp.TextStart..].Trim();
             if (!rest.IsEmpty) open.Lines.Add(new EntryLine(line, rest.ToString()));
@@ -107,8 +106,8 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
                 text.Append(l.Text);
             }
             int firstLine = p == 0 ? entry.Line : lines[0].Line;
-            cues.Add(new Cue(time, SpeakerLabels.Normalise(partLabel), partLabel, text.ToString(), [], [],
-                src.At(firstLine), src[firstLine - 1].Start, src[lines[^1].Line - 1].End, Section: entry.Section));
+            cues.Add(new Cue(time, SpeakerLabels.Normalise(partLabel), partLabel, text.ToString(), [],
+                src.At(firstLine), src[firstLine - 1].Start, src[lines[^1].Line - 1].End));
         }
         return label;
     }

@@ -12,5 +12,5 @@ internal static class SpeakingRate
     public static long EstimateMilliseconds(int characters) =>
         Math.Max(MinimumMilliseconds, characters * 1000L / CharactersPerSecond);
 
-    public static Timecode EstimateEnd(Timecode start, int characters) => start + EstimateMilliseconds(characters);
+    public static Timecode EstimateEnd(Timecode start, int characters) => start + new Duration(EstimateMilliseconds(characters));
 }

@@ -11,8 +11,7 @@ namespace SwitchTag.Formats.WebVtt;
 internal sealed record CueText(
     string Plain,
     string? Voice,
-    ImmutableArray<WordTime> WordTimes,
-    ImmutableArray<LanguageHint> LanguageHints);
+    ImmutableArray<WordTime> WordTimes);
 
 /// <summary>Parses WebVTT cue text (W3C WebVTT, "cue text parsing rules"): <c>&lt;c&gt; &lt;i&gt; &lt;b&gt;
 /// &lt;u&gt; &lt;ruby&gt; &lt;rt&gt; &lt;v&gt; &lt;lang&gt;</c> spans with classes, inline timestamps and
@@ -26,8 +25,8 @@ internal static class CueTextParser
     {
         var plain = new StringBuilder(raw.Length);
         var words = ImmutableArray.CreateBuilder<WordTime>();
-        var hints = ImmutableArray.CreateBuilder<LanguageHint>();
-        var langs = new Stack<(string Language, int Start)>();
+        // Open <lang> tags: their language is not kept (the segmenter decides), only their nesting.
+        int openLangs = 0;
         string? voice = null;
         int voices = 0;
         bool noCloseAhead = false;
@@ -71,11 +70,8 @@ internal static class CueTextParser
             if (tag.Length > 0 && tag[0] == '/')
             {
                 var name = tag[1..].Trim();
-                if (name.SequenceEqual("lang") && langs.Count > 0)
-                {
-                    var (language, start) = langs.Pop();
-                    hints.Add(new LanguageHint(start, plain.Length, language));
-                }
+                if (name.SequenceEqual("lang") && openLangs > 0)
+                    openLangs--;
                 else if (name.SequenceEqual("rt"))
                     plain.Append(')');
                 continue;
@@ -85,7 +81,7 @@ internal static class CueTextParser
                 int p = 0;
                 if (Timestamps.TryWebVtt(tag, ref p, out Timecode at) && p == tag.Length)
                 {
-                    if (!cueTime.Contains(at))
+                    if (at < cueTime.Start || at > cueTime.End)
                         diagnostics.Warn(tagLine, $"inline timestamp <{tag}> lies outside the cue ({cueTime}); kept");
                     words.Add(new WordTime(plain.Length, at));
                 }
@@ -111,7 +107,7 @@ internal static class CueTextParser
                         diagnostics.Warn(tagLine, $"cue has more than one voice (\"{voice}\", \"{annotation}\"); its speaker is the first");
                     break;
                 case "lang":
-                    langs.Push((annotation, plain.Length));
+                    openLangs++;
                     break;
                 case "rt":
                     plain.Append('(');
@@ -124,13 +120,7 @@ internal static class CueTextParser
                     break;
             }
         }
-        while (langs.Count > 0)
-        {
-            var (language, start) = langs.Pop();
-            hints.Add(new LanguageHint(start, plain.Length, language));
-        }
-        hints.Sort((a, b) => a.CharStart != b.CharStart ? a.CharStart.CompareTo(b.CharStart) : b.CharEnd.CompareTo(a.CharEnd));
-        return new CueText(plain.ToString(), voice, words.ToImmutable(), [.. hints.Where(h => h.Language.Length > 0 && h.CharEnd > h.CharStart)]);
+        return new CueText(plain.ToString(), voice, words.ToImmutable());
     }
 
     private static string Decode(ReadOnlySpan<char> s)

@@ -9,9 +9,27 @@ namespace SwitchTag.Formats.WebVtt;
 /// header lines up to the first blank line, then blocks separated by blank lines. A block whose first
 /// or second line holds "-->" is a cue (the line before the timing line is its identifier); NOTE,
 /// STYLE and REGION blocks are skipped; any other block is reported, its text quoted.</summary>
-internal static class WebVttReader
+public sealed class WebVttReader : ITranscriptReader
 {
-    public static ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
+    public TranscriptFormat Format => TranscriptFormat.WebVtt;
+    public IReadOnlyList<string> Aliases { get; } = ["vtt"];
+    public IReadOnlyList<string> Extensions { get; } = [".vtt"];
+    public bool ClaimsExtensions => true;
+    public string? MissingSignature => "no WEBVTT header line";
+
+    /// <summary>The first non-blank line is the WEBVTT signature.</summary>
+    public bool Detects(string text, string extension)
+    {
+        var lines = new LineScanner(DetectionWindow.Body(text));
+        while (lines.Next(out var line))
+        {
+            if (line.IsWhiteSpace()) continue;
+            return line.StartsWith("WEBVTT", StringComparison.Ordinal) && (line.Length == 6 || line[6] is ' ' or '\t');
+        }
+        return false;
+    }
+
+    public ImmutableArray<Cue>? Read(SourceText src, Diagnostics diagnostics)
     {
         int signature = 0;
         while (signature < src.LineCount && SourceText.IsBlank(src.Span(src[signature]))) signature++;
@@ -66,7 +84,7 @@ internal static class WebVttReader
         var text = CueTextParser.Parse(raw, range, firstText, diagnostics);
         string? identifier = timing > blockStart ? src.Str(src[blockStart]) : null;
         int rawEnd = src[blockEnd - 1].End;
-        cues.Add(new Cue(range, text.Voice, text.Voice, text.Plain, text.WordTimes, text.LanguageHints,
+        cues.Add(new Cue(range, text.Voice, text.Voice, text.Plain, text.WordTimes,
             src.At(src[blockStart].Number), src[blockStart].Start, rawEnd, Identifier: identifier, Settings: settings));
     }
 
@@ -135,9 +153,6 @@ internal static class WebVttReader
                 SpeakerLabel = label,
                 Text = text,
                 WordTimes = [.. cue.WordTimes.Select(w => w with { CharOffset = Math.Max(0, w.CharOffset - shift) })],
-                LanguageHints = [.. cue.LanguageHints
-                    .Select(h => h with { CharStart = Math.Max(0, h.CharStart - shift), CharEnd = Math.Max(0, h.CharEnd - shift) })
-                    .Where(h => h.CharEnd > h.CharStart)],
             };
         }
     }

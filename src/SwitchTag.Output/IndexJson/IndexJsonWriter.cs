@@ -30,7 +30,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
         w.WriteString("interview", index.Transcript.Name);
         w.WriteStartObject("source");
         w.WriteString("path", index.Transcript.Source.Path);
-        w.WriteString("format", index.Transcript.Source.Format.ToName());
+        w.WriteString("format", index.Transcript.Source.Format.Name);
         w.WriteString("sha256", index.Transcript.Source.Sha256);
         w.WriteEndObject();
         w.WriteString("mainLanguage", index.MainLanguage);
@@ -211,4 +211,6 @@ public sealed class IndexJsonWriter : IInterviewWriter
     }
 
     public static void Seconds(Utf8JsonWriter w, string name, Timecode t) => w.WriteNumber(name, t.Milliseconds / 1000m);
+
+    public static void Seconds(Utf8JsonWriter w, string name, Duration d) => w.WriteNumber(name, d.Milliseconds / 1000m);
 }

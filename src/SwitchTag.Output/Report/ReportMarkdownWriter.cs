@@ -24,7 +24,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         md.Append("# Interview index: ").Append(name).Append("\n\n");
         md.Append("> ").Append(Caution).Append("\n\n");
         md.Append("- Source: ").Append(MarkdownText.Escape(index.Transcript.Source.Path))
-          .Append(" (").Append(index.Transcript.Source.Format.ToName()).Append(")\n");
+          .Append(" (").Append(index.Transcript.Source.Format.Name).Append(")\n");
         md.Append("- SHA-256: ").Append(index.Transcript.Source.Sha256).Append('\n');
         md.Append("- Main language: ").Append(MarkdownText.Escape(index.MainLanguage)).Append('\n');
         md.Append("- Duration: ").Append(index.Duration).Append('\n');

@@ -12,7 +12,7 @@ if (args.Length > 0)
     foreach (var file in TranscriptFile.Expand(args, problems))
     {
         var result = TranscriptFile.Read(file);
-        Console.WriteLine($"{file}: {(result.Transcript is null ? "rejected" : $"{result.Transcript.Source.Format.ToName()}, {result.Transcript.Cues.Length} cues")}, {result.Diagnostics.Length} diagnostics");
+        Console.WriteLine($"{file}: {(result.Transcript is null ? "rejected" : $"{result.Transcript.Source.Format.Name}, {result.Transcript.Cues.Length} cues")}, {result.Diagnostics.Length} diagnostics");
         foreach (var d in result.Diagnostics) Console.WriteLine("  " + d);
     }
     foreach (var p in problems) Console.WriteLine(p);

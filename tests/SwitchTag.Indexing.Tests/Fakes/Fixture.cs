@@ -57,6 +57,6 @@ public static class Fixture
 
     private static Cue Cue(long start, long end, string speaker, string text, int line, (int Offset, long Ms)[]? words = null) => new(
         new TimeRange(new Timecode(start), new Timecode(end)), speaker, speaker, text,
-        (words ?? []).Select(w => new WordTime(w.Offset, new Timecode(w.Ms))).ToImmutableArray(), [],
+        (words ?? []).Select(w => new WordTime(w.Offset, new Timecode(w.Ms))).ToImmutableArray(),
         new SourceLine("fixture/anna-nowak.vtt", line), 0, 0);
 }

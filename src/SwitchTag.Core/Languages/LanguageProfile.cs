@@ -1,0 +1,30 @@
+using System.Collections.Immutable;
+
+namespace SwitchTag.Core.Languages;
+
+/// <summary>What the stages know about one language, read from its folder under Languages/:
+/// <c>aliases.txt</c> (other ISO 639 codes), <c>stopwords.txt</c> (capitalised words that are rarely
+/// names), <c>titles.txt</c> (words before a person's name), <c>particles.txt</c> (lower-case words
+/// inside names) and <c>stemming.txt</c> (case endings). Every file is optional.</summary>
+public sealed record LanguageProfile(
+    string Code,
+    ImmutableArray<string> Aliases,
+    ImmutableArray<string> StopWords,
+    ImmutableArray<string> Titles,
+    ImmutableArray<string> NameParticles,
+    StemmingData? Stemming);
+
+/// <summary>A language's case endings as <c>stemming.txt</c> writes them (<c>key: values</c> lines):
+/// <c>endings</c> a name may carry in running text, <c>nominative</c> endings of a dictionary form,
+/// <c>replace</c> sound changes undone on a stem (<c>from&gt;to</c>), then named
+/// <c>alternations</c>, a <c>normalise</c> step and an <c>allows</c> test, all three implemented in
+/// SwitchTag.Lexicon's StemOperations; <c>fallback-rank</c> orders the rules tried for a text of
+/// unknown language.</summary>
+public sealed record StemmingData(
+    ImmutableArray<string> Endings,
+    ImmutableArray<string> Nominative,
+    ImmutableArray<(string From, string To)> Replacements,
+    ImmutableArray<string> Alternations,
+    string? Normalise,
+    string? Allows,
+    int FallbackRank);

@@ -1,0 +1,66 @@
+using System.Collections.Frozen;
+using System.Collections.Immutable;
+using System.Reflection;
+
+namespace SwitchTag.Core.Languages;
+
+/// <summary>The registry of language profiles: every Languages/&lt;code&gt;/ folder embedded in this
+/// assembly. A new language is a new folder; nothing else changes.</summary>
+public sealed class LanguageProfiles
+{
+    private readonly FrozenDictionary<string, LanguageProfile> _byCode;
+
+    private LanguageProfiles(ImmutableArray<LanguageProfile> all)
+    {
+        All = all;
+        var byCode = new Dictionary<string, LanguageProfile>(StringComparer.Ordinal);
+        foreach (var p in all)
+            foreach (var code in p.Aliases.Prepend(p.Code))
+                if (!byCode.TryAdd(code, p)) throw new InvalidDataException($"language code {code} is claimed by two profiles");
+        _byCode = byCode.ToFrozenDictionary(StringComparer.Ordinal);
+        StopWords = all.SelectMany(p => p.StopWords.Concat(p.Titles)).ToFrozenSet(StringComparer.Ordinal);
+        NameParticles = all.SelectMany(p => p.NameParticles).ToFrozenSet(StringComparer.Ordinal);
+    }
+
+    public static LanguageProfiles Default { get; } = FromResources(typeof(LanguageProfiles).Assembly);
+
+    /// <summary>Every profile, ordered by code.</summary>
+    public ImmutableArray<LanguageProfile> All { get; }
+
+    /// <summary>Stop words and titles of every language (folded): a name source cannot tell which
+    /// language a capitalised word is in before it knows it is a name.</summary>
+    public FrozenSet<string> StopWords { get; }
+
+    /// <summary>Name particles of every language.</summary>
+    public FrozenSet<string> NameParticles { get; }
+
+    /// <summary>The profile of an ISO 639-1 or 639-3 code or alias (case and region suffix ignored: "pl-PL"), or null.</summary>
+    public LanguageProfile? For(string? language)
+    {
+        if (string.IsNullOrWhiteSpace(language)) return null;
+        var code = language.Trim();
+        int dash = code.IndexOfAny(['-', '_']);
+        if (dash > 0) code = code[..dash];
+        return _byCode.GetValueOrDefault(code.ToLowerInvariant());
+    }
+
+    public static LanguageProfiles FromResources(Assembly assembly)
+    {
+        const string prefix = "Languages/";
+        var files = assembly.GetManifestResourceNames()
+            .Where(n => n.StartsWith(prefix, StringComparison.Ordinal) && n.Count(c => c == '/') == 2)
+            .GroupBy(n => n.Split('/')[1], StringComparer.Ordinal);
+        var profiles = files.OrderBy(g => g.Key, StringComparer.Ordinal).Select(g =>
+        {
+            string Read(string name)
+            {
+                using var stream = assembly.GetManifestResourceStream($"{prefix}{g.Key}/{name}");
+                if (stream is null) return "";
+                using var reader = new StreamReader(stream);
+                return reader.ReadToEnd();
+            }
+            return ProfileText.Parse(g.Key, Read("aliases.txt"), Read("stopwords.txt"), Read("titles.txt"), Read("particles.txt"), Read("stemming.txt"));
+        });
+        return new LanguageProfiles([.. profiles]);
+    }
+}
