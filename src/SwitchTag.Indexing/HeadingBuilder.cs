@@ -5,8 +5,12 @@ using SwitchTag.Core.Time;
 namespace SwitchTag.Indexing;
 
 /// <summary>Headings found for one interview: the headings, the heading id of every mention (null
-/// when held for review) and the review items.</summary>
-public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableArray<string?> HeadingOf, ImmutableArray<ReviewItem> Review);
+/// when held for review) and the review items; <see cref="Mentions"/>, when set, are the mentions
+/// with the labels the interview-wide vote gave them (<see cref="LabelVote"/>).</summary>
+public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableArray<string?> HeadingOf, ImmutableArray<ReviewItem> Review)
+{
+    public ImmutableArray<Mention> Mentions { get; init; }
+}
 
 /// <summary>Groups mentions under headings.
 /// Places: each LOC mention's gazetteer candidates (alternate names in all languages) are resolved by
@@ -46,22 +50,26 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         {
             var m = mentions[i];
             keys[i] = lexicon.Key(m.Text, m.Language);
-            places[i] = m.Label == NameLabel.ORG ? [] : CachedPlaces(placeCache, m.Text, m.Language);
+            places[i] = CachedPlaces(placeCache, m.Text, m.Language);
         }
+
+        var lowerWords = LowerCaseWords(turns);
+        mentions = LabelVote.Apply(mentions, keys, places, lexicon, lowerWords);
+        for (int i = 0; i < n; i++)
+            if (mentions[i].Label == NameLabel.ORG) places[i] = [];
 
         var review = ImmutableArray.CreateBuilder<ReviewItem>();
         var held = new bool[n];
         var labelsOfSurface = new Dictionary<string, HashSet<NameLabel>>(StringComparer.Ordinal);
         for (int i = 0; i < n; i++)
         {
-            if (!labelsOfSurface.TryGetValue(mentions[i].Text, out var set)) labelsOfSurface[mentions[i].Text] = set = [];
+            if (!labelsOfSurface.TryGetValue(keys[i], out var set)) labelsOfSurface[keys[i]] = set = [];
             set.Add(mentions[i].Label);
         }
-        var lowerWords = LowerCaseWords(turns);
         for (int i = 0; i < n; i++)
         {
             if (accepted?.Contains(i) == true) continue;
-            var reason = ReviewReason(mentions[i], keys[i], places[i], labelsOfSurface[mentions[i].Text], lowerWords);
+            var reason = ReviewReason(mentions[i], keys[i], places[i], labelsOfSurface[keys[i]], lowerWords);
             if (reason is null) continue;
             held[i] = true;
             review.Add(new ReviewItem(i, reason));
@@ -75,14 +83,19 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var headingOf = new string?[n];
         var headings = new List<Heading>();
         var usedIds = new HashSet<string>(StringComparer.Ordinal);
+        var idOf = new Dictionary<Group, string>();
         foreach (var g in groups)
         {
             var heading = ToHeading(g, mentions, times, turns, places, usedIds);
             foreach (int i in heading.Mentions) headingOf[i] = heading.Id;
+            idOf[g] = heading.Id;
             headings.Add(heading);
         }
+        for (int k = 0; k < groups.Count; k++)
+            if (groups[k].Possible.Count > 0)
+                headings[k] = headings[k] with { PossiblySame = [.. groups[k].Possible.Select(g => idOf[g]).Order(StringComparer.Ordinal)] };
         var ordered = HeadingOrder.Sort(headings);
-        return new HeadingResult(ordered, [.. headingOf], review.ToImmutable());
+        return new HeadingResult(ordered, [.. headingOf], review.ToImmutable()) { Mentions = mentions };
     }
 
     private ImmutableArray<PlaceLink> CachedPlaces(Dictionary<(string, string), ImmutableArray<PlaceLink>> cache, string text, string language)
@@ -115,9 +128,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, HashSet<NameLabel> labelsOfSurface,
         HashSet<string> lowerWords)
     {
-        if (labelsOfSurface.Contains(NameLabel.PER) && labelsOfSurface.Contains(NameLabel.LOC) && m.Label != NameLabel.ORG)
-            return "the same name is tagged both PER and LOC in this interview";
-        if (m.Label == NameLabel.PER && places.FirstOrDefault(p => p.Population >= CompetingPlacePopulation && lexicon.Key(p.Name, m.Language) == key) is { } place)
+        if (labelsOfSurface.Contains(NameLabel.PER) && labelsOfSurface.Contains(NameLabel.LOC) && m.Label != NameLabel.ORG
+            && m.Source != MentionSource.Cue && m.Source != MentionSource.PlaceEvidence)
+            return "the same name is tagged both PER and LOC in this interview, and the evidence is even";
+        if (m.Label == NameLabel.PER && m.Source != MentionSource.Cue && places.FirstOrDefault(p => p.Population >= CompetingPlacePopulation && lexicon.Key(p.Name, m.Language) == key) is { } place)
             return $"tagged PER, but \"{m.Text}\" is also the name of a place ({place.Name}, {place.Country})";
         if (m.Source == MentionSource.Model && m.Text.FirstOrDefault(char.IsLetter) is var first && char.IsLower(first))
             return "the model tagged a name that does not start with a capital letter";
@@ -135,6 +149,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         public string Key { get; } = key;
         public PlaceLink? Place { get; set; }
         public List<int> Members { get; } = [];
+        public HashSet<Group> Possible { get; } = [];
     }
 
     /// <summary>A candidate's score: log10 of its population (size is the prior), plus 1 when the name
@@ -191,32 +206,62 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         }
     }
 
+    /// <summary>Persons, merged only on certain evidence. A full name (two or more words) joins a
+    /// heading whose surname has its spelling key (Szwarc / Schwarz, Feigl / Feigel) and whose given
+    /// name is the same, a diminutive of the same full name (Hanka / Hanna) or a listed equivalent
+    /// (Stanisław / Stanley: with the same surname, two pieces of evidence). A one-word name joins the
+    /// one full-name heading having it as first or last word, else the one whose given name it is a
+    /// diminutive of (Irenko / Irena Kowalczyk); one-word names that are diminutives of each other
+    /// join (Ilona / Ilonka). A one-word name that is only a listed equivalent of another heading's
+    /// given name (Stanisław beside Stanley Kowalczyk) is not merged: both headings name each other
+    /// as "possibly the same person".</summary>
     private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups)
     {
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
+        var full = new List<(Group Group, string First, string Last, string Language, string Surname)>();
         var single = new List<int>();
-        // Name-part evidence: the folded first and last word of each multi-word heading.
-        var owners = new Dictionary<string, HashSet<Group>>(StringComparer.Ordinal);
         for (int i = 0; i < mentions.Length; i++)
         {
             if (held[i] || mentions[i].Label != NameLabel.PER) continue;
-            var words = Words(mentions[i].Text);
+            var m = mentions[i];
+            var words = Words(m.Text);
             if (words.Length < 2) { single.Add(i); continue; }
-            string first = lexicon.Key(words[0], mentions[i].Language), last = lexicon.Key(words[^1], mentions[i].Language);
-            var group = Add(byKey, groups, NameLabel.PER, first + " " + last, i);
-            foreach (var part in new[] { first, last })
-            {
-                if (!owners.TryGetValue(part, out var set)) owners[part] = set = [];
-                set.Add(group);
-            }
+            string first = words[0], last = words[^1], surname = lexicon.SurnameKey(last, m.Language);
+            var known = full.FirstOrDefault(f => f.Surname == surname
+                && (lexicon.SameGivenName(f.First, f.Language, first, m.Language) || lexicon.EquivalentGivenNames(f.First, first)));
+            if (known.Group is not null) { known.Group.Members.Add(i); continue; }
+            var group = Add(byKey, groups, NameLabel.PER, lexicon.Key(first, m.Language) + " " + lexicon.Key(last, m.Language), i);
+            if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname));
         }
-        var lone = new Dictionary<string, Group>(StringComparer.Ordinal);
+
+        var lone = new List<(Group Group, string Name, string Language)>();
+        var loneByKey = new Dictionary<string, Group>(StringComparer.Ordinal);
         foreach (int i in single)
         {
-            if (owners.TryGetValue(keys[i], out var set) && set.Count == 1)
-                set.First().Members.Add(i);
-            else
-                Add(lone, groups, NameLabel.PER, keys[i], i);
+            var m = mentions[i];
+            var owners = full.Where(f => lexicon.Key(f.First, f.Language) == keys[i] || lexicon.Key(f.Last, f.Language) == keys[i]
+                || f.Surname == lexicon.SurnameKey(m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
+            if (owners.Count == 0)
+                owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
+            if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
+            if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)) is { Group: not null } kin)
+            {
+                kin.Group.Members.Add(i);
+                continue;
+            }
+            var group = Add(loneByKey, groups, NameLabel.PER, keys[i], i);
+            if (group.Members.Count == 1) lone.Add((group, m.Text, m.Language));
+        }
+
+        foreach (var l in lone)
+        {
+            var probable = full.Where(f => lexicon.EquivalentGivenNames(f.First, l.Name)).Select(f => f.Group)
+                .Concat(lone.Where(o => o.Group != l.Group && lexicon.EquivalentGivenNames(o.Name, l.Name)).Select(o => o.Group));
+            foreach (var other in probable)
+            {
+                l.Group.Possible.Add(other);
+                other.Possible.Add(l.Group);
+            }
         }
     }
 

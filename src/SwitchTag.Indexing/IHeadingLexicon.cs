@@ -4,12 +4,27 @@ using SwitchTag.Core.Documents;
 namespace SwitchTag.Indexing;
 
 /// <summary>What heading building needs from the lexicon: a grouping key that folds spelling
-/// variants, diacritics and inflections, and the gazetteer places a name can mean (alternate names in
-/// every language included). Kept as an interface so grouping is testable without the shipped files.</summary>
+/// variants, diacritics and inflections, the gazetteer places a name can mean (alternate names in
+/// every language included), and how given names and surnames relate. Kept as an interface so
+/// grouping is testable without the shipped files; the name-list members default to "nothing known".</summary>
 public interface IHeadingLexicon
 {
     string Key(string name, string language);
 
     /// <summary>Every gazetteer place the name may denote; empty when the gazetteer does not know it.</summary>
     ImmutableArray<PlaceLink> Places(string name, string language);
+
+    /// <summary>Whether a word is a listed first name of some language.</summary>
+    bool IsFirstName(string word) => false;
+
+    /// <summary>A surname's spelling key: equal for Szwarc and Schwarz, Feigl and Feigel.</summary>
+    string SurnameKey(string word, string language) => Key(word, language);
+
+    /// <summary>Whether two given names are one (equal keys), or diminutives of one full name (Irena /
+    /// Irenko, Hanna / Hanka): certain evidence for a merge within one interview.</summary>
+    bool SameGivenName(string a, string languageA, string b, string languageB) => Key(a, languageA) == Key(b, languageB);
+
+    /// <summary>Whether two given names are listed cross-language equivalents (Stanisław / Stanley):
+    /// probable, not certain.</summary>
+    bool EquivalentGivenNames(string a, string b) => false;
 }

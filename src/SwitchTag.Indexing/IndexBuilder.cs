@@ -36,7 +36,7 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         var (decided, accepted, mentionOutcomes) = decisionStage.ApplyToMentions(ordered, m => aligner.Align(turns[m.Turn], m.CharStart, m.CharEnd));
         var times = decided.Select(m => aligner.Align(turns[m.Turn], m.CharStart, m.CharEnd)).ToImmutableArray();
         var grouped = new HeadingBuilder(lexicon, reviewBelow).Build(decided, times, turns, accepted);
-        var (finalMentions, finalTimes, headings, headingOutcomes) = decisionStage.ApplyToHeadings(decided, times, grouped);
+        var (finalMentions, finalTimes, headings, headingOutcomes) = decisionStage.ApplyToHeadings(grouped.Mentions.IsDefault ? decided : grouped.Mentions, times, grouped);
         var outcomes = mentionOutcomes.Zip(headingOutcomes, (m, h) => m with { Applied = m.Applied + h.Applied }).ToImmutableArray();
 
         var indexed = finalMentions.Select((m, i) => new IndexedMention(m, finalTimes[i], headings.HeadingOf[i])).ToImmutableArray();

@@ -1,6 +1,6 @@
 namespace SwitchTag.Lexicon;
 
-internal static class TextPosition
+public static class TextPosition
 {
     /// <summary>Whether a word at <paramref name="start"/> opens a sentence: nothing but spaces,
     /// quotes, brackets and bracketed remarks ("[pause]") between it and the text start or a

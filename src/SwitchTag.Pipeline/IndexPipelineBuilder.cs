@@ -5,13 +5,16 @@ using SwitchTag.Core.Stages;
 using SwitchTag.Formats;
 using SwitchTag.Indexing;
 using SwitchTag.Lexicon;
+using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Output;
 using SwitchTag.Pipeline.Models;
 using SwitchTag.Tagging;
 using SwitchTag.Tagging.Sources;
 using SwitchTag.Tagging.Sources.Authority;
+using SwitchTag.Tagging.Sources.Cues;
 using SwitchTag.Tagging.Sources.Gazetteer;
 using SwitchTag.Tagging.Sources.Model;
+using SwitchTag.Tagging.Sources.PlaceEvidence;
 
 namespace SwitchTag.Pipeline;
 
@@ -22,7 +25,7 @@ namespace SwitchTag.Pipeline;
 public sealed class IndexPipelineBuilder
 {
     private ModelLocation _models = ModelLocation.Default;
-    private bool _languageModel, _gazetteer, _nameModel;
+    private bool _languageModel, _gazetteer, _nameModel, _nameLists;
     private string? _authorityPath;
     private ILanguageSegmenter? _segmenter;
     private INameTagger? _tagger;
@@ -50,6 +53,10 @@ public sealed class IndexPipelineBuilder
     /// <summary>The shipped gazetteer: place names for tagging and place links for headings.</summary>
     public IndexPipelineBuilder UseGazetteer() { _gazetteer = true; return this; }
 
+    /// <summary>The shipped name lists (models/lexicon): person cues, words that are never places,
+    /// locative prepositions and person name variants for the name cascade and person grouping.</summary>
+    public IndexPipelineBuilder UseNameLists() { _nameLists = true; return this; }
+
     /// <summary>An archive's authority list (CSV label,name,variants); null registers nothing.</summary>
     public IndexPipelineBuilder UseAuthorityList(string? path) { _authorityPath = path; return this; }
 
@@ -57,11 +64,11 @@ public sealed class IndexPipelineBuilder
     /// the rules only and says so in a note.</summary>
     public IndexPipelineBuilder UseNameModel() { _nameModel = true; return this; }
 
-    /// <summary>Every shipped stage: language model, gazetteer and, for
+    /// <summary>Every shipped stage: language model, gazetteer, name lists and, for
     /// <see cref="TaggingMode.RulesThenModel"/>, the name model.</summary>
     public IndexPipelineBuilder UseShippedModels(TaggingMode names)
     {
-        UseLanguageModel().UseGazetteer();
+        UseLanguageModel().UseGazetteer().UseNameLists();
         return names == TaggingMode.RulesThenModel ? UseNameModel() : this;
     }
 
@@ -112,6 +119,8 @@ public sealed class IndexPipelineBuilder
             notes.AddRange(gazetteer.Problems.Select(p => p with { Severity = Severity.Warning, Message = p.Message + "; places get no coordinates" }));
         }
 
+        var lists = _nameLists ? NameListSet.Load(_models.PathOf(NameListSet.FolderName)) : NameListSet.Empty;
+
         AuthorityList? authority = null;
         if (_authorityPath is not null)
         {
@@ -147,13 +156,14 @@ public sealed class IndexPipelineBuilder
             }
             var sources = new NameSources()
                 .Add(new AuthorityListSource(authority ?? AuthorityList.Empty))
-                .Add(new GazetteerSource(gazetteer));
+                .Add(new PersonCueSource(lists.Cues, lists.NotPlaces, gazetteer))
+                .Add(new GazetteerSource(gazetteer, new PlaceContext(gazetteer, lists.Prepositions, lists.Cues)));
             if (model is not null) sources.Add(new NameModelSource(model));
             foreach (var source in _nameSources) sources.Add(source);
-            tagger = new NameTagger(sources, _precedence);
+            tagger = new NameTagger(sources, _precedence, NameTagger.ShippedVetoes(gazetteer, lists));
         }
 
-        var pipeline = new IndexPipeline(_readers, segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer), _format, _mainLanguage, _decisions, Writers);
+        var pipeline = new IndexPipeline(_readers, segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer, lists), _format, _mainLanguage, _decisions, Writers);
         return new PipelineBuild(pipeline, null, notes.ToImmutable());
     }
 }

@@ -2,42 +2,60 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Lexicon;
+using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Tagging.Sources;
 using SwitchTag.Tagging.Sources.Authority;
+using SwitchTag.Tagging.Sources.Cues;
 using SwitchTag.Tagging.Sources.Gazetteer;
 using SwitchTag.Tagging.Sources.Model;
+using SwitchTag.Tagging.Sources.PlaceEvidence;
+using SwitchTag.Tagging.Sources.Vetoes;
 
 namespace SwitchTag.Tagging;
 
-/// <summary>The tag stage: every registered name source proposes mentions for the turn, and the
-/// precedence policy decides which stand (<see cref="NamePrecedence"/>).</summary>
-public sealed class NameTagger(NameSources sources, NamePrecedence? precedence = null) : INameTagger
+/// <summary>The tag stage: every registered name source proposes mentions for the turn, the
+/// precedence policy decides which stand (<see cref="NamePrecedence"/>), and the vetoes drop standing
+/// mentions that name nothing (<see cref="IMentionVeto"/>; never the authority list's or a cue's).</summary>
+public sealed class NameTagger(NameSources sources, NamePrecedence? precedence = null, IReadOnlyList<IMentionVeto>? vetoes = null) : INameTagger
 {
     private readonly NamePrecedence _precedence = Checked(sources, precedence ?? NamePrecedence.Default);
+    private readonly IReadOnlyList<IMentionVeto> _vetoes = vetoes ?? [];
 
-    /// <summary>The shipped sources: the authority list and gazetteer, and in
+    /// <summary>The shipped cascade: the authority list, person cues, the gazetteer (with place
+    /// evidence) and the vetoes of <paramref name="lists"/>, and in
     /// <see cref="TaggingMode.RulesThenModel"/> the model when there is one.</summary>
     public static NameTagger Create(NerModel? model = null, AuthorityList? authority = null, Lexicon.Gazetteer? gazetteer = null,
-        TaggingMode mode = TaggingMode.RulesThenModel)
+        TaggingMode mode = TaggingMode.RulesThenModel, NameListSet? lists = null)
     {
+        gazetteer ??= Lexicon.Gazetteer.Empty;
+        lists ??= NameListSet.Empty;
         var sources = new NameSources()
             .Add(new AuthorityListSource(authority ?? AuthorityList.Empty))
-            .Add(new GazetteerSource(gazetteer ?? Lexicon.Gazetteer.Empty));
+            .Add(new PersonCueSource(lists.Cues, lists.NotPlaces, gazetteer))
+            .Add(new GazetteerSource(gazetteer, new PlaceContext(gazetteer, lists.Prepositions, lists.Cues)));
         if (mode == TaggingMode.RulesThenModel && model is not null) sources.Add(new NameModelSource(model));
-        return new NameTagger(sources);
+        return new NameTagger(sources, null, ShippedVetoes(gazetteer, lists));
     }
+
+    /// <summary>The vetoes of the shipped cascade: words that are never names, and ordinary words
+    /// the model calls places at a sentence start.</summary>
+    public static IReadOnlyList<IMentionVeto> ShippedVetoes(Lexicon.Gazetteer gazetteer, NameListSet lists) =>
+        [new NotPlaceWordVeto(lists.NotPlaces), new OrdinaryWordVeto(gazetteer, lists.Prepositions)];
 
     public ImmutableArray<Mention> Tag(int turnIndex, string turnText, ImmutableArray<LanguageSpan> spans)
     {
         if (string.IsNullOrEmpty(turnText)) return [];
         if (spans.IsDefault) spans = [];
-        return _precedence.Resolve(sources.SelectMany(s => s.Find(turnIndex, turnText, spans)));
+        var standing = _precedence.Resolve(sources.SelectMany(s => s.Find(turnIndex, turnText, spans)));
+        if (_vetoes.Count == 0) return standing;
+        return [.. standing.Where(m => m.Source == MentionSource.Authority || m.Source == MentionSource.Cue || !_vetoes.Any(v => v.Vetoes(m, turnText)))];
     }
 
     private static NamePrecedence Checked(NameSources sources, NamePrecedence precedence)
     {
         foreach (var s in sources)
-            if (!precedence.Ranks(s.Source)) throw new ArgumentException($"name source {s.Source} has no place in the precedence");
+            foreach (var proposed in s.Proposes)
+                if (!precedence.Ranks(proposed)) throw new ArgumentException($"name source {proposed} has no place in the precedence");
         return precedence;
     }
 }

@@ -4,8 +4,8 @@ using SwitchTag.Tagging.Sources;
 namespace SwitchTag.Tagging.Tests;
 
 /// <summary>The precedence policy on its own: which of overlapping proposals stands. The spans are
-/// invented offsets; what they check is the rule stated in issue 8 (an archive's list is never
-/// overwritten; the model wins over the gazetteer; a new source slots in by its rank).</summary>
+/// invented offsets; what they check is the rule stated in issues 8 and 10 (an archive's list is never
+/// overwritten; cues, then place evidence, then the model, then the gazetteer; a new source slots in by its rank).</summary>
 public class NamePrecedenceTests
 {
     private static Mention M(int start, int end, MentionSource source, NameLabel label = NameLabel.LOC) =>
@@ -41,12 +41,27 @@ public class NamePrecedenceTests
     [Fact]
     public void AnInsertedSourceRanksWhereItIsPutAndNeverAboveAProtectedOne()
     {
-        var cues = new MentionSource("person-cues");
+        var cues = new MentionSource("late-cues");
         var policy = NamePrecedence.Default.InsertAfter(MentionSource.Model, cues).InsertBefore(MentionSource.Authority, new MentionSource("early"));
-        Assert.Equal([MentionSource.Authority, new MentionSource("early"), MentionSource.Model, cues, MentionSource.Gazetteer], policy.Order.ToArray());
+        Assert.Equal([MentionSource.Authority, new MentionSource("early"), MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, cues, MentionSource.Gazetteer],
+            policy.Order.ToArray());
         var cue = M(0, 10, cues, NameLabel.PER);
         Assert.Equal([cue], policy.Resolve([M(0, 6, MentionSource.Gazetteer), cue]).ToArray());
         Assert.Equal([M(0, 6, MentionSource.Model)], policy.Resolve([M(0, 6, MentionSource.Model), cue]).ToArray());
+    }
+
+    /// <summary>The cascade of issue 10: a titled or kin-marked name is a person whatever the model or
+    /// gazetteer say ("Mr. Roth" is not Roth, DE); place evidence beats a model organisation or a bare
+    /// gazetteer match, but gives way to a person the model found over it.</summary>
+    [Fact]
+    public void CuesBeatPlacesAndPlaceEvidenceGivesWayOnlyToAModelPerson()
+    {
+        var cue = M(4, 8, MentionSource.Cue, NameLabel.PER);
+        Assert.Equal([cue], NamePrecedence.Default.Resolve([M(4, 8, MentionSource.PlaceEvidence), M(0, 8, MentionSource.Model), cue]).ToArray());
+        var place = M(3, 10, MentionSource.PlaceEvidence);
+        Assert.Equal([place], NamePrecedence.Default.Resolve([M(3, 10, MentionSource.Model, NameLabel.ORG), M(3, 10, MentionSource.Gazetteer), place]).ToArray());
+        var person = M(3, 10, MentionSource.Model, NameLabel.PER);
+        Assert.Equal([person], NamePrecedence.Default.Resolve([place, person]).ToArray());
     }
 
     [Fact]

@@ -17,6 +17,13 @@ public readonly record struct MentionSource(string Name)
     public static readonly MentionSource Authority = new("authority");
     public static readonly MentionSource Gazetteer = new("gazetteer");
 
+    /// <summary>A person cue: a title or kinship word before the name, or a listed first name in it.</summary>
+    public static readonly MentionSource Cue = new("cue");
+
+    /// <summary>A gazetteer place with context that supports a place (a locative preposition, a
+    /// case ending on a town, a multi-word name matched whole).</summary>
+    public static readonly MentionSource PlaceEvidence = new("place-evidence");
+
     public override string ToString() => Name;
 }
 

@@ -24,7 +24,12 @@ public sealed record Heading(
     ImmutableArray<int> Mentions,
     ImmutableArray<string> Speakers,
     double Confidence,
-    MentionSource Source);
+    MentionSource Source)
+{
+    /// <summary>Ids of person headings that are probably the same person (a cross-language equivalent
+    /// or a spelling fold without other evidence), shown to the reviewer, never merged silently.</summary>
+    public ImmutableArray<string> PossiblySame { get; init; } = [];
+}
 
 /// <summary>A mention placed in time and filed under a heading (null while under review).</summary>
 public sealed record IndexedMention(Mention Mention, TimeRange Time, string? HeadingId);

@@ -200,6 +200,9 @@ public sealed class IndexJsonWriter : IInterviewWriter
             foreach (var s in h.Speakers) w.WriteStringValue(s);
             w.WriteEndArray();
             w.WriteNumber("confidence", h.Confidence);
+            w.WriteStartArray("possiblySame");
+            foreach (var id in h.PossiblySame) w.WriteStringValue(id);
+            w.WriteEndArray();
             w.WriteString("source", h.Source.Name);
             w.WriteEndObject();
         }

@@ -10,6 +10,10 @@ public interface INameSource
 {
     MentionSource Source { get; }
 
+    /// <summary>Every source value its proposals carry, each needing a rank in the precedence; a
+    /// source that splits its proposals by evidence (the gazetteer: place evidence or not) lists both.</summary>
+    ImmutableArray<MentionSource> Proposes => [Source];
+
     /// <summary>Mentions in <paramref name="turnText"/> (offsets into it) of turn <paramref name="turn"/>,
     /// each with the language of the span it starts in.</summary>
     ImmutableArray<Mention> Find(int turn, string turnText, ImmutableArray<LanguageSpan> spans);

@@ -3,20 +3,36 @@ using SwitchTag.Core.Documents;
 
 namespace SwitchTag.Tagging.Sources;
 
-/// <summary>Which proposal stands where name sources overlap. Sources are ranked; a proposal is
-/// dropped when it overlaps a standing proposal of a higher-ranked source (never split, shortened or
-/// relabelled), and stands otherwise. Protected sources rank above every other: a span from an
-/// archive's own list is never overwritten by a model or a gazetteer, whatever is inserted later.
-/// <see cref="Default"/>: authority list (protected), then the model (it has seen the context:
-/// "Jordan Peterson" is a person, not the country), then the gazetteer. A new source takes its place
-/// with <see cref="InsertBefore"/> or <see cref="InsertAfter"/>.</summary>
+/// <summary>The name cascade: which proposal stands where name sources overlap. Sources are ranked;
+/// a proposal is dropped when it overlaps a standing proposal of a higher-ranked source (never split,
+/// shortened or relabelled), and stands otherwise. Protected sources rank above every other: a span
+/// from an archive's own list is never overwritten, whatever is inserted later.
+/// <see cref="Default"/>, highest first: the authority list (protected); person cues (a titled or
+/// kin-marked name is a person: "Mr. Roth" is never Roth, DE); place evidence (a gazetteer place after
+/// a locative preposition, with a case ending, or a multi-word name matched whole: "w Tarnowie" is never
+/// a person); the model (it has seen the context: "Jordan Peterson" is a person, not the country); the
+/// gazetteer without evidence. A new source takes its place with <see cref="InsertBefore"/> or
+/// <see cref="InsertAfter"/>.
+/// The one exception the policy makes (<see cref="Yields"/>): place evidence gives way to a person the
+/// model found over it. A preposition or case ending puts a name in a place far less surely than a
+/// model reading the whole sentence puts it in a person ("do Petra", "z Kováčom"); on the shared NER
+/// test splits, without this exception, place evidence turned more gold persons into places than it
+/// saved. Inflected places the model calls persons are then joined to their place by the
+/// interview-wide label vote of the index stage.</summary>
 public sealed class NamePrecedence
 {
     private readonly ImmutableArray<MentionSource> _order;
     private readonly ImmutableHashSet<MentionSource> _protected;
 
-    public NamePrecedence(IEnumerable<MentionSource> order, IEnumerable<MentionSource> protectedSources)
+    /// <summary>A proposal of <paramref name="Source"/> is withdrawn where a proposal of
+    /// <paramref name="To"/> labelled <paramref name="Label"/> overlaps it, whatever their ranks.</summary>
+    public sealed record Yield(MentionSource Source, MentionSource To, NameLabel Label);
+
+    public ImmutableArray<Yield> Yields { get; }
+
+    public NamePrecedence(IEnumerable<MentionSource> order, IEnumerable<MentionSource> protectedSources, IEnumerable<Yield>? yields = null)
     {
+        Yields = yields?.ToImmutableArray() ?? [];
         _protected = protectedSources.ToImmutableHashSet();
         var all = order.ToList();
         foreach (var p in _protected)
@@ -26,7 +42,8 @@ public sealed class NamePrecedence
     }
 
     public static NamePrecedence Default { get; } =
-        new([MentionSource.Authority, MentionSource.Model, MentionSource.Gazetteer], [MentionSource.Authority]);
+        new([MentionSource.Authority, MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, MentionSource.Gazetteer], [MentionSource.Authority],
+            [new Yield(MentionSource.PlaceEvidence, MentionSource.Model, NameLabel.PER)]);
 
     /// <summary>Highest rank first.</summary>
     public ImmutableArray<MentionSource> Order => _order;
@@ -43,6 +60,10 @@ public sealed class NamePrecedence
     public ImmutableArray<Mention> Resolve(IEnumerable<Mention> proposals)
     {
         var all = proposals.Where(m => m.CharEnd > m.CharStart && m.CharStart >= 0).ToList();
+        if (all.Count == 0) return [];
+        if (!Yields.IsEmpty)
+            all = all.Where(p => !Yields.Any(y => y.Source == p.Source && !IsProtected(p.Source)
+                && all.Any(q => q.Source == y.To && q.Label == y.Label && q.CharStart < p.CharEnd && p.CharStart < q.CharEnd))).ToList();
         if (all.Count == 0) return [];
         // One flag per char held by a higher rank: each proposal is checked over its own chars only,
         // so one long speaker turn with many names stays linear, not quadratic.
@@ -70,6 +91,6 @@ public sealed class NamePrecedence
     {
         int at = _order.IndexOf(existing);
         if (at < 0) throw new ArgumentException($"{existing} has no place in the precedence");
-        return new NamePrecedence(_order.Insert(at + offset, added), _protected);
+        return new NamePrecedence(_order.Insert(at + offset, added), _protected, Yields);
     }
 }

@@ -1,0 +1,139 @@
+using System.Collections.Frozen;
+using System.Text;
+
+namespace SwitchTag.Lexicon.NameLists;
+
+/// <summary>How one person's names relate across an interview: a spelling key that romanises
+/// Cyrillic, Greek and Hebrew-script Yiddish and folds the usual surname spellings (Szwarc / Schwarz,
+/// Feigl / Feigel, Иосиф / Iosif), diminutives and nicknames of given names (hypocoristics), and
+/// cross-language equivalents (Stanisław / Stanley). Lists: models/lexicon/Transliteration,
+/// Languages/*/hypocoristics.tsv and name-equivalents.tsv, all written by hand (models/namelists.md).</summary>
+public sealed class NameVariants
+{
+    private readonly (string From, string To)[] _letters;
+    private readonly (string From, string To, bool AtEnd)[] _folds;
+    private readonly FrozenDictionary<string, FrozenSet<string>> _fullNamesOf;
+    private readonly FrozenDictionary<string, FrozenSet<int>> _groupsOf;
+
+    private NameVariants((string, string)[] letters, (string, string, bool)[] folds,
+        FrozenDictionary<string, FrozenSet<string>> fullNamesOf, FrozenDictionary<string, FrozenSet<int>> groupsOf)
+    {
+        _letters = letters;
+        _folds = folds;
+        _fullNamesOf = fullNamesOf;
+        _groupsOf = groupsOf;
+    }
+
+    public static NameVariants Empty { get; } = new([], [], FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty);
+
+    /// <summary>The spelling key of one name word: romanised (first spelling of each table), folded,
+    /// spelling folds applied in order, doubled letters collapsed.</summary>
+    public string Key(string word)
+    {
+        var text = NameFolding.Fold(word);
+        if (_letters.Length > 0 && text.Any(c => c > 0x24F)) text = Romanise(text);
+        foreach (var (from, to, atEnd) in _folds)
+            text = atEnd ? (text.EndsWith(from, StringComparison.Ordinal) ? text[..^from.Length] + to : text) : text.Replace(from, to, StringComparison.Ordinal);
+        var sb = new StringBuilder(text.Length);
+        foreach (char c in text)
+            if (sb.Length == 0 || sb[^1] != c) sb.Append(c);
+        return sb.ToString();
+    }
+
+    /// <summary>The full given names (as keys) a form is a diminutive or nickname of; a full name
+    /// maps to itself. Empty when the lists do not know the form.</summary>
+    public IReadOnlySet<string> FullNames(string word) =>
+        _fullNamesOf.TryGetValue(Key(word), out var set) ? set : FrozenSet<string>.Empty;
+
+    /// <summary>Whether two given names are diminutives of one full name, or one of the other.</summary>
+    public bool SameGivenName(string a, string b)
+    {
+        var ka = Key(a);
+        var kb = Key(b);
+        if (ka == kb) return true;
+        var fa = FullNames(a);
+        var fb = FullNames(b);
+        return fa.Contains(kb) || fb.Contains(ka) || fa.Overlaps(fb);
+    }
+
+    /// <summary>Whether two given names are listed as cross-language equivalents (directly, or
+    /// through the full names of diminutives): a probable link, not a proof.</summary>
+    public bool Equivalent(string a, string b)
+    {
+        var ga = Groups(a);
+        return ga.Count > 0 && Groups(b).Overlaps(ga);
+    }
+
+    private HashSet<int> Groups(string word)
+    {
+        var set = new HashSet<int>();
+        foreach (var key in FullNames(word).Append(Key(word)))
+            if (_groupsOf.TryGetValue(key, out var groups)) set.UnionWith(groups);
+        return set;
+    }
+
+    private string Romanise(string text)
+    {
+        var sb = new StringBuilder(text.Length);
+        for (int i = 0; i < text.Length;)
+        {
+            var hit = _letters.FirstOrDefault(l => string.CompareOrdinal(text, i, l.From, 0, l.From.Length) == 0);
+            if (hit.From is null) { sb.Append(text[i]); i++; continue; }
+            sb.Append(hit.To);
+            i += hit.From.Length;
+        }
+        return sb.ToString();
+    }
+
+    internal static NameVariants Load(string lexiconDir)
+    {
+        var table = Path.Combine(lexiconDir, "Transliteration");
+        // Longest letters first, so digraphs (ου, וו) win over their first letter.
+        var letters = new[] { "cyrillic-latin.tsv", "greek-latin.tsv", "yiddish-latin.tsv" }
+            .SelectMany(f => LexiconTsv.Rows(Path.Combine(table, f)))
+            .Where(r => r.Length > 1 && LexiconTsv.Alternatives(r[1]).Length > 0)
+            .Select(r => (From: NameFolding.Fold(r[0]), To: LexiconTsv.Alternatives(r[1])[0]))
+            .Where(l => l.From.Length > 0)
+            .DistinctBy(l => l.From)
+            .OrderByDescending(l => l.From.Length)
+            .ToArray();
+        var folds = LexiconTsv.Rows(Path.Combine(table, "spelling-folds.tsv"))
+            .Where(r => r.Length > 1)
+            .Select(r => r[0].EndsWith('$') ? (r[0][..^1], r[1], true) : (r[0], r[1], false))
+            .ToArray();
+        var partial = new NameVariants(letters, folds, FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty);
+
+        var fullNamesOf = new Dictionary<string, HashSet<string>>(StringComparer.Ordinal);
+        // Each form also under its stem in its language, so a case form stemmed the same way meets it
+        // (Polish vocative "Irenko" and "Irenka" share the stem "irenk").
+        foreach (var (language, folder) in LexiconTsv.Languages(lexiconDir))
+            foreach (var row in LexiconTsv.Rows(Path.Combine(folder, "hypocoristics.tsv")).Where(r => r.Length > 1))
+            {
+                var full = partial.Key(row[0]);
+                foreach (var form in LexiconTsv.Alternatives(row[1]).Append(row[0]))
+                    foreach (var key in new[] { partial.Key(form), partial.Key(NameFolding.Stem(form, language)) })
+                    {
+                        if (!fullNamesOf.TryGetValue(key, out var set)) fullNamesOf[key] = set = [];
+                        set.Add(full);
+                    }
+            }
+
+        var groupsOf = new Dictionary<string, HashSet<int>>(StringComparer.Ordinal);
+        int group = 0;
+        foreach (var row in LexiconTsv.Rows(Path.Combine(lexiconDir, "name-equivalents.tsv")))
+        {
+            foreach (var cell in row)
+            {
+                int colon = cell.IndexOf(':');
+                var key = partial.Key(colon >= 0 ? cell[(colon + 1)..] : cell);
+                if (key.Length == 0) continue;
+                if (!groupsOf.TryGetValue(key, out var set)) groupsOf[key] = set = [];
+                set.Add(group);
+            }
+            group++;
+        }
+        return new NameVariants(letters, folds,
+            fullNamesOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(StringComparer.Ordinal), StringComparer.Ordinal),
+            groupsOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(), StringComparer.Ordinal));
+    }
+}

@@ -1,0 +1,51 @@
+using System.Collections.Frozen;
+
+namespace SwitchTag.Lexicon.NameLists;
+
+/// <summary>What marks a capitalised word as a person's name: a title or honorific before it ("Pan",
+/// "Herr", "Reb", "Mrs."), a kinship word before it ("ciocia", "uncle", "tante"), or a listed first
+/// name beside it. Every language's lists at once: a narrator switching languages keeps the titles
+/// of the other language ("Mister Hnatyuk" in Ukrainian talk). First names are folded. Markers are matched as written (French "Me" is a title, English "me" is not), or with the first
+/// letter lowered at a sentence start; <see cref="Abbreviations"/> are the titles listed with a dot.</summary>
+public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kinship, FrozenSet<string> FirstNames, FrozenSet<string> Abbreviations)
+{
+    public static PersonCues Empty { get; } = new(FrozenSet<string>.Empty, FrozenSet<string>.Empty, FrozenSet<string>.Empty, FrozenSet<string>.Empty);
+
+    /// <summary>Whether a word, as written, marks the next name as a person.</summary>
+    public bool IsMarker(string word) =>
+        Titles.Contains(word) || Kinship.Contains(word)
+        || (word.Length > 0 && char.IsUpper(word[0]) && (Titles.Contains(Lowered(word)) || Kinship.Contains(Lowered(word))));
+
+    /// <summary>Whether the word is a title listed with a dot ("Mr.", "Dr."), so "Mr. Roth" is one name.</summary>
+    public bool IsAbbreviation(string word) => Abbreviations.Contains(word) || Abbreviations.Contains(Lowered(word));
+
+    private static string Lowered(string word) => char.ToLowerInvariant(word[0]) + word[1..];
+
+    public bool IsFirstName(string folded) => FirstNames.Contains(folded);
+
+    internal static PersonCues Load(string lexiconDir)
+    {
+        var titles = new HashSet<string>(StringComparer.Ordinal);
+        var kinship = new HashSet<string>(StringComparer.Ordinal);
+        var first = new HashSet<string>(StringComparer.Ordinal);
+        var abbreviations = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var (_, folder) in LexiconTsv.Languages(lexiconDir))
+        {
+            var titleForms = Forms(Path.Combine(folder, "titles.tsv")).ToList();
+            titles.UnionWith(titleForms.Select(f => f.TrimEnd('.')));
+            abbreviations.UnionWith(titleForms.Where(f => f.EndsWith('.')).Select(f => f.TrimEnd('.')));
+            kinship.UnionWith(Forms(Path.Combine(folder, "kinship.tsv")));
+            first.UnionWith(Forms(Path.Combine(folder, "first-names.tsv")).Select(NameFolding.Fold));
+        }
+        return new PersonCues(Frozen(titles), Frozen(kinship), Frozen(first), Frozen(abbreviations));
+    }
+
+    private static FrozenSet<string> Frozen(HashSet<string> set) => set.Where(s => s.Length > 0).ToFrozenSet(StringComparer.Ordinal);
+
+    /// <summary>The first cell of every row as written, one word only (the name splitter's words, so
+    /// "o." and prefixes written with a hyphen, "παπα-", are left out).</summary>
+    private static IEnumerable<string> Forms(string path) =>
+        LexiconTsv.Rows(path)
+            .Select(r => r[0].Trim())
+            .Where(f => f.Length > 0 && NameWords.Split(f) is [var w] && w.Start == 0 && (w.End == f.Length || f[w.End..] == "."));
+}

@@ -1,0 +1,86 @@
+using System.Collections.Immutable;
+using System.Text.RegularExpressions;
+using SwitchTag.Core.Documents;
+using SwitchTag.Lexicon;
+using SwitchTag.Lexicon.NameLists;
+using SwitchTag.Pipeline.Models;
+using SwitchTag.Tagging;
+using SwitchTag.Tagging.Sources;
+using SwitchTag.Tagging.Sources.Authority;
+using SwitchTag.Tagging.Sources.Gazetteer;
+using SwitchTag.Tagging.Sources.Model;
+
+namespace SwitchTag.Pipeline;
+
+/// <summary><c>switchtag eval ner --per-as-loc</c>: on gold files, how many gold person tokens the
+/// tag stage puts inside a place mention, the one error the index must never make. Counted for the
+/// shipped cascade and, beside it, for the plain order it replaced (model over gazetteer, no cues,
+/// no place evidence, no vetoes). Each sentence is one turn in the language its file name gives
+/// (pl_pdb-ud-test.iob2, multileg-lt-test.tsv), else <c>und</c>.</summary>
+public static partial class PersonAsPlaceEvaluation
+{
+    public static NameEvaluationResult Run(IReadOnlyList<string> goldFiles, TextWriter output, TextWriter error, ModelLocation? models = null)
+    {
+        if (goldFiles.Count == 0)
+        {
+            error.WriteLine("switchtag eval ner: give at least one --gold FILE");
+            return NameEvaluationResult.NoInput;
+        }
+        var at = models ?? ModelLocation.Default;
+        var model = ShippedModels.LoadNameModel(at, out var loadError);
+        if (model is null)
+        {
+            error.WriteLine($"switchtag eval ner: {loadError}");
+            return NameEvaluationResult.ModelNotLoaded;
+        }
+        var gazetteer = ShippedModels.LoadGazetteer(at);
+        var lists = NameListSet.Load(at.PathOf(NameListSet.FolderName));
+        var cascade = NameTagger.Create(model, null, gazetteer, TaggingMode.RulesThenModel, lists);
+        var plain = new NameTagger(new NameSources()
+                .Add(new AuthorityListSource(AuthorityList.Empty)).Add(new GazetteerSource(gazetteer)).Add(new NameModelSource(model)),
+            new NamePrecedence([MentionSource.Authority, MentionSource.Model, MentionSource.Gazetteer], [MentionSource.Authority]));
+
+        output.WriteLine($"{"file",-40} {"language",8} {"gold PER tokens",16} {"as LOC, plain",14} {"as LOC, cascade",16}");
+        int rejected = 0;
+        long persons = 0, plainTotal = 0, cascadeTotal = 0;
+        foreach (var file in goldFiles)
+        {
+            var problems = new List<string>();
+            if (!File.Exists(file)) { error.WriteLine($"switchtag eval ner: {file}: no such file"); rejected++; continue; }
+            var sentences = GoldReader.Read(file, problems);
+            foreach (var p in problems) error.WriteLine($"switchtag eval ner: {p}");
+            string language = LanguageOf(file);
+            long gold = 0, plainHits = 0, cascadeHits = 0;
+            foreach (var s in sentences)
+            {
+                var starts = new int[s.Words.Count];
+                for (int k = 1; k < starts.Length; k++) starts[k] = starts[k - 1] + s.Words[k - 1].Length + 1;
+                var text = string.Join(' ', s.Words);
+                if (text.Length == 0) continue;
+                ImmutableArray<LanguageSpan> spans = [new LanguageSpan(0, text.Length, language, 1)];
+                var plainPlaces = Places(plain.Tag(0, text, spans));
+                var cascadePlaces = Places(cascade.Tag(0, text, spans));
+                for (int k = 0; k < s.Words.Count; k++)
+                {
+                    if (!s.Tags[k].EndsWith("-PER", StringComparison.Ordinal)) continue;
+                    gold++;
+                    int start = starts[k], end = start + s.Words[k].Length;
+                    if (plainPlaces.Any(m => m.CharStart <= start && end <= m.CharEnd)) plainHits++;
+                    if (cascadePlaces.Any(m => m.CharStart <= start && end <= m.CharEnd)) cascadeHits++;
+                }
+            }
+            persons += gold; plainTotal += plainHits; cascadeTotal += cascadeHits;
+            output.WriteLine($"{Path.GetFileName(file),-40} {language,8} {gold,16} {plainHits,14} {cascadeHits,16}");
+        }
+        output.WriteLine($"{"all",-40} {"",8} {persons,16} {plainTotal,14} {cascadeTotal,16}");
+        return rejected > 0 ? NameEvaluationResult.SomeInputsRejected : NameEvaluationResult.Scored;
+    }
+
+    private static List<Mention> Places(ImmutableArray<Mention> mentions) => mentions.Where(m => m.Label == NameLabel.LOC).ToList();
+
+    private static string LanguageOf(string file) =>
+        FileLanguage().Match(Path.GetFileName(file)) is { Success: true } m ? m.Groups[1].Value : "und";
+
+    [GeneratedRegex(@"(?:^|[-_])([a-z]{2})(?:[-_.]|$)")]
+    private static partial Regex FileLanguage();
+}

@@ -1,0 +1,71 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Lexicon;
+using SwitchTag.Lexicon.NameLists;
+
+namespace SwitchTag.Tagging.Sources.Cues;
+
+/// <summary>Persons marked by a title or a kinship word right before their name ("Mr. Roth", "pani
+/// Hanka", "uncle Kurt", "Reb Yosl"): the capitalised words after the marker (up to three, joined by
+/// spaces or hyphens) are a person, whatever a gazetteer or model says of them. The marker itself is
+/// left out of the span, so "Mister Hnatyuk" joins the heading of Mykola Hnatyuk. A marker that
+/// starts a multi-word place name ("Prince Edward Island", "General Santos") is no marker.</summary>
+public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Lexicon.Gazetteer gazetteer) : INameSource
+{
+    private const int MaxNameWords = 3;
+
+    public MentionSource Source => MentionSource.Cue;
+
+    public ImmutableArray<Mention> Find(int turn, string turnText, ImmutableArray<LanguageSpan> spans)
+    {
+        if (string.IsNullOrEmpty(turnText)) return [];
+        if (spans.IsDefault) spans = [];
+        var words = NameWords.Split(turnText);
+        var found = ImmutableArray.CreateBuilder<Mention>();
+        ImmutableArray<Mention>? places = null;
+        for (int i = 0; i + 1 < words.Count; i++)
+        {
+            if (!cues.IsMarker(WordAt(turnText, words[i]))) continue;
+            int first = i + 1;
+            while (first < words.Count && cues.IsMarker(WordAt(turnText, words[first])) && Joined(turnText, words[first - 1], words[first], Abbreviation(turnText, words[first - 1]))) first++;
+            if (first >= words.Count || !Joined(turnText, words[first - 1], words[first], Abbreviation(turnText, words[first - 1])) || !IsNameWord(turnText, words[first])) continue;
+            int last = first;
+            while (last + 1 < words.Count && last + 1 - first < MaxNameWords && Joined(turnText, words[last], words[last + 1], allowDot: false)
+                   && IsNameWord(turnText, words[last + 1]) && !cues.IsMarker(WordAt(turnText, words[last + 1])))
+                last++;
+            places ??= RuleMatching.Find(turn, turnText, spans, gazetteer.Find);
+            int markerStart = words[i].Start;
+            if (places.Value.Any(p => p.CharStart <= markerStart && markerStart < p.CharEnd && p.CharEnd > words[i].End)) continue;
+            if (first == last && InflectedTown(words[first], turnText, spans)) continue;
+            int start = words[first].Start, end = words[last].End;
+            found.Add(new Mention(turn, start, end, turnText[start..end], NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
+            i = last;
+        }
+        return found.ToImmutable();
+    }
+
+    private bool IsNameWord(string text, NameWord word) =>
+        char.IsUpper(text[word.Start]) && word.End - word.Start > 1 && !notPlaces.Words.Contains(word.Folded);
+
+    /// <summary>A title short enough to be an abbreviation ("Mr.", "Dr.", "ks."): only then may a dot
+    /// stand between marker and name; after "my brother." a new sentence begins.</summary>
+    private bool Abbreviation(string text, NameWord marker) => cues.IsAbbreviation(WordAt(text, marker));
+
+    private static string WordAt(string text, NameWord word) => text[word.Start..word.End];
+
+    /// <summary>A case form of a town ("nagyapám Debrecenbe költözött": my grandfather moved to
+    /// Debrecen): the kinship word there is the subject, not a mark on the name.</summary>
+    private bool InflectedTown(NameWord word, string text, ImmutableArray<LanguageSpan> spans)
+    {
+        var candidates = gazetteer.Candidates(WordAt(text, word), SpanLanguage.At(spans, word.Start));
+        return candidates.Count > 0 && candidates.All(c => c.Kind == MatchKind.Inflected)
+            && candidates[0].Place.Population >= Lexicon.Gazetteer.VillagePopulation;
+    }
+
+    /// <summary>One space or hyphen between the words; after an abbreviated title also "Mr. Roth".</summary>
+    private static bool Joined(string text, NameWord left, NameWord right, bool allowDot)
+    {
+        var gap = text.AsSpan(left.End, right.Start - left.End);
+        return gap is " " or "-" or "\u00A0" || (allowDot && gap is ". ");
+    }
+}

@@ -1,0 +1,32 @@
+using SwitchTag.Core.Documents;
+using SwitchTag.Lexicon;
+using SwitchTag.Lexicon.NameLists;
+
+namespace SwitchTag.Tagging.Sources.PlaceEvidence;
+
+/// <summary>Whether a gazetteer match's context says "place": a multi-word name matched whole ("New
+/// Jersey", "Nowy Sącz"), a name right after a locative preposition ("w Tarnowie", "nach Wien"), or a
+/// case ending on a town ("Krakowie": a form the gazetteer reaches only by inflection, of a place of
+/// <see cref="TownPopulation"/> people or more). A one-word listed first name naming no city of
+/// <see cref="CityPopulation"/> is never supported by its context alone: Polish "z Hanką" is "with
+/// Hanka", not "from Hanko" (but "to Milan" is Milano); nor is a word with a capitalised word right
+/// after it ("do Jana Kowalskiego": a person's full name after the preposition).</summary>
+public sealed class PlaceContext(Lexicon.Gazetteer gazetteer, PlacePrepositions prepositions, PersonCues cues)
+{
+    public const long TownPopulation = 50_000;
+    public const long CityPopulation = 100_000;
+
+    public bool Supports(Mention m, string turnText)
+    {
+        if (m.Text.Any(char.IsWhiteSpace)) return true;
+        var candidates = gazetteer.Candidates(m.Text, m.Language);
+        long largest = candidates.Count == 0 ? 0 : candidates[0].Place.Population;
+        if (largest < CityPopulation && (cues.IsFirstName(NameFolding.Fold(m.Text)) || cues.IsFirstName(NameFolding.Stem(m.Text, m.Language)))) return false;
+        if (FollowedByCapitalised(turnText, m.CharEnd)) return false;
+        if (prepositions.Precedes(turnText, m.CharStart)) return true;
+        return candidates.Count > 0 && candidates.All(c => c.Kind == MatchKind.Inflected) && largest >= TownPopulation;
+    }
+
+    private static bool FollowedByCapitalised(string text, int end) =>
+        end + 1 < text.Length && text[end] == ' ' && char.IsUpper(text[end + 1]);
+}
