@@ -23,7 +23,7 @@ public static class IndexCommand
         UnknownOptions.RejectIn(paths);
         var output = new Option<string>("--out", "-o") { Description = "Output folder (created if missing).", Required = true, HelpName = "DIR" };
         var format = new Option<string?>("--format") { Description = "Force the input format instead of detecting it.", HelpName = "webvtt|srt|text|markdown" };
-        var main = new Option<string?>("--main") { Description = "The interviews' main language, an ISO 639 code such as en; detected when absent.", HelpName = "CODE" };
+        var main = new Option<string?>("--main") { Description = "The interviews' main language, an ISO 639 code such as en (switchtag langid --languages lists them); chosen from the narrators' talk when absent.", HelpName = "CODE" };
         var names = new Option<string>("--names") { Description = "rules-only (authority list and gazetteer) or default (rules, then the name model).", DefaultValueFactory = _ => "default", HelpName = "default|rules-only" };
         var authority = new Option<string?>("--authority") { Description = "Authority list CSV (label,name,variants).", HelpName = "NAMES.csv" };
         var decisions = new Option<string?>("--decisions") { Description = "Reviewers' decisions CSV, as review.html exports it (see SCHEMA.md).", HelpName = "DECISIONS.csv" };
