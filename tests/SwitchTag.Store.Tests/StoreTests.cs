@@ -1,3 +1,4 @@
+using SwitchTag.Core.Time;
 using System.Text.Json;
 using Microsoft.Data.Sqlite;
 using SwitchTag.Core.Documents;
@@ -52,7 +53,7 @@ public class StoreTests
         var stored = Assert.Single(store.Collection());
         Assert.Equal(expected.Interview, stored.Name);
         Assert.Equal(expected.Folder, stored.Folder);
-        Assert.Equal(expected.Duration, stored.Duration);
+        Assert.Equal(expected.Duration, stored.Duration - Timecode.Zero);
         Assert.Equal(expected.Headings.Select(h => (h.Id, h.Label, h.Name, h.Place, string.Join(",", h.Times))),
             stored.Headings.Select(h => (h.Id, h.Label, h.Name, h.Place, string.Join(",", h.Times))));
         Assert.Equal(2, store.Decisions(index.Transcript.Source.Path)["reject x"]);
