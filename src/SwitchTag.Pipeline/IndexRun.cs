@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Formats;
+using SwitchTag.Formats.Files;
 using SwitchTag.Output;
 using SwitchTag.Pipeline.Collection;
 using SwitchTag.Store;
@@ -32,8 +33,12 @@ public static class IndexRun
     {
         foreach (var p in request.DecisionProblems) log.WriteLine(p);
         var problems = new List<Diagnostic>();
-        var files = TranscriptFile.Expand(request.Paths, problems).ToList();
-        bool rejected = problems.Count > 0;
+        // The output folder is never read as input, even when it lies inside an input folder.
+        string outReal = RealPath.Resolve(request.OutDir, out _) ?? Path.GetFullPath(request.OutDir);
+        var files = InputWalker.Find(request.Paths, problems, (request.SkipFolders.IsDefault ? [] : request.SkipFolders).Append(outReal))
+            .Select(f => f.Path).ToList();
+        // A decisions row that could not be read is a rejected input: the run says so and exits 1.
+        bool rejected = problems.Count > 0 || request.DecisionProblems.Any(p => p.Severity == Severity.Error);
         foreach (var p in problems) log.WriteLine(p);
 
         builder ??= request.Builder();
@@ -62,6 +67,7 @@ public static class IndexRun
                     return IndexRunResult.NotStarted;
                 }
                 foreach (var note in build.Notes) log.WriteLine(note);
+                rejected |= build.Notes.Any(n => n.Severity == Severity.Error); // a refused authority-list row
                 pipeline = build.Pipeline;
             }
 
