@@ -108,4 +108,29 @@ public class OutputSafetyRunTests : IDisposable
         Assert.Contains($"{authority}:2: error: \"I\" is a stop word", log);
         Assert.Contains($"{authority}:3: error: \"The\" is a stop word", log);
     }
+
+    [Fact]
+    public void An_interviews_outputs_are_replaced_as_a_set_and_leftovers_are_swept_and_stale_folders_reported()
+    {
+        // Issue 11 item 7: after a kill, index.json was new while the other files were old, and hidden
+        // .tmp files stayed for good. Here: what a killed run leaves is planted by hand.
+        string file = Input(Path.Combine("in", "kowalczyk-1998.vtt"));
+        string outDir = Path.Combine(_dir, "out");
+        var request = new IndexRequest([file], outDir, null, "en", TaggingMode.RulesOnly, null, [], []);
+        Assert.Equal(IndexRunResult.Indexed, Run(request).Result);
+        string folder = Path.Combine(outDir, "kowalczyk-1998");
+        File.WriteAllText(Path.Combine(folder, "marker"), "from the earlier set");
+        Directory.CreateDirectory(Path.Combine(outDir, ".switchtag-new-kowalczyk-1998.0123"));
+        File.WriteAllText(Path.Combine(outDir, ".collection.json.99.abc.tmp"), "half");
+        Directory.CreateDirectory(Path.Combine(outDir, "older-run"));
+        File.WriteAllText(Path.Combine(outDir, "older-run", "index.json"), "{}");
+
+        var (result, log) = Run(request with { Force = true });
+        Assert.Equal(IndexRunResult.Indexed, result);
+        Assert.False(File.Exists(Path.Combine(folder, "marker"))); // the folder was replaced whole
+        Assert.True(File.Exists(Path.Combine(folder, "index.json")));
+        Assert.Contains("removed what an interrupted run left", log);
+        Assert.Empty(Directory.GetFileSystemEntries(outDir, ".*"));
+        Assert.Contains($"stale folder, no interview of the collection writes it (delete it if it is not needed): {Path.Combine(outDir, "older-run")}", log);
+    }
 }
