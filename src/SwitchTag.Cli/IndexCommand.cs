@@ -30,15 +30,16 @@ public static class IndexCommand
         var media = new Option<string?>("--media") { Description = "The recording, so each time in the report opens it at that second; {interview} stands for the interview's name.", HelpName = "URL" };
         var jobs = new Option<int>("--jobs", "-j") { Description = "Interviews indexed at once (default: one per core); the outputs are the same for any number.", HelpName = "N" };
         var force = new Option<bool>("--force") { Description = "Redo interviews the collection store holds unchanged." };
+        var allowInside = new Option<bool>("--allow-out-inside-input") { Description = "Write into an --out that is an input folder or lies inside one (it is then never read as input)." };
         var prune = new Option<bool>("--prune") { Description = "Remove from the collection the interviews whose source file is gone." };
         var command = new Command("index", "Index people, places and organisations and list the stretches to translate.")
         {
-            paths, output, format, main, names, authority, decisions, media, jobs, force, prune,
+            paths, output, format, main, names, authority, decisions, media, jobs, force, prune, allowInside,
         };
         command.SetAction(parse =>
         {
             var request = IndexRequest.From(parse.GetValue(paths) ?? [], parse.GetValue(output)!, parse.GetValue(format), parse.GetValue(main),
-                parse.GetValue(names)!, parse.GetValue(authority), parse.GetValue(decisions), out string? usage, parse.GetValue(media));
+                parse.GetValue(names)!, parse.GetValue(authority), parse.GetValue(decisions), out string? usage, parse.GetValue(media), parse.GetValue(allowInside));
             if (request is null)
             {
                 Console.Error.WriteLine($"switchtag index: {usage}");

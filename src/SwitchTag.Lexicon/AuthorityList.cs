@@ -63,6 +63,12 @@ public sealed class AuthorityList : INameLexicon
             if (r == 0)
                 problems.Add(new Diagnostic(at, Severity.Warning, "no header row label,name,variants; reading the first row as data"));
             if (ParseRow(record, at, problems) is not { } entry) continue;
+            // A one-word form that is a stop word or a single letter ("I", "The") would tag ordinary words as names everywhere.
+            if (entry.Variants.Prepend(entry.Name).FirstOrDefault(IsStopWord) is { } stop)
+            {
+                problems.Add(new Diagnostic(at, Severity.Error, $"\"{stop}\" is a stop word (a single letter, or a function word or title of a language profile); the row is refused"));
+                continue;
+            }
             foreach (var form in entry.Variants.Prepend(entry.Name))
             {
                 var key = NameFolding.FoldedWords(form);
@@ -77,6 +83,12 @@ public sealed class AuthorityList : INameLexicon
             entries.Add(entry);
         }
         return (new AuthorityList(entries.ToImmutable()), [.. problems.OrderBy(p => p.At.Line)]);
+    }
+
+    private static bool IsStopWord(string form)
+    {
+        string folded = NameFolding.Fold(form.Trim());
+        return !folded.Contains(' ') && (folded.Length < 2 || GazetteerStopWords.Words.Contains(folded));
     }
 
     /// <summary>Names of the list in <paramref name="text"/>, longest first and non-overlapping,

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Formats;
+using SwitchTag.Formats.Files;
 using SwitchTag.Indexing.Decisions;
 using SwitchTag.Tagging;
 
@@ -20,11 +21,12 @@ public sealed record IndexRequest(
     string? Media = null,
     int Jobs = 0,
     bool Force = false,
-    bool Prune = false)
+    bool Prune = false,
+    ImmutableArray<string> SkipFolders = default)
 {
     /// <summary>The request, or null with <paramref name="usage"/> saying which value is wrong.</summary>
     public static IndexRequest? From(string[] paths, string outDir, string? format, string? main, string names,
-        string? authority, string? decisions, out string? usage, string? media = null)
+        string? authority, string? decisions, out string? usage, string? media = null, bool allowOutInsideInput = false)
     {
         usage = null;
         TranscriptFormat? forced = null;
@@ -52,9 +54,21 @@ public sealed record IndexRequest(
         {
             if (!File.Exists(decisions)) { usage = $"--decisions: no such file {decisions}"; return null; }
             (list, problems) = DecisionsFile.Read(decisions);
+            if (list.IsEmpty && problems.Any(p => p.Severity == Severity.Error))
+            {
+                usage = "--decisions: nothing in the file can be applied:" + string.Concat(problems.Select(p => Environment.NewLine + p));
+                return null;
+            }
         }
         if (File.Exists(outDir)) { usage = $"--out {outDir} is a file, not a folder"; return null; }
-        return new IndexRequest([.. paths], outDir, forced, main, mode, authority, list, problems, string.IsNullOrWhiteSpace(media) ? null : media);
+        var conflicts = OutputSafety.Check(outDir, paths);
+        if (!conflicts.IsEmpty && !allowOutInsideInput)
+        {
+            usage = string.Join(Environment.NewLine, conflicts) + " (--allow-out-inside-input writes there anyway and never reads the output folder as input)";
+            return null;
+        }
+        return new IndexRequest([.. paths], outDir, forced, main, mode, authority, list, problems, string.IsNullOrWhiteSpace(media) ? null : media,
+            SkipFolders: [.. conflicts.Select(c => c.Output).Distinct()]);
     }
 
     /// <summary><see cref="Jobs"/>: interviews indexed at once, 0 for one per core; the outputs are the

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Formats;
+using SwitchTag.Formats.Files;
 using SwitchTag.Output;
 using SwitchTag.Pipeline.Collection;
 using SwitchTag.Store;
@@ -32,8 +33,12 @@ public static class IndexRun
     {
         foreach (var p in request.DecisionProblems) log.WriteLine(p);
         var problems = new List<Diagnostic>();
-        var files = TranscriptFile.Expand(request.Paths, problems).ToList();
-        bool rejected = problems.Count > 0;
+        // The output folder is never read as input, even when it lies inside an input folder.
+        string outReal = RealPath.Resolve(request.OutDir, out _) ?? Path.GetFullPath(request.OutDir);
+        var files = InputWalker.Find(request.Paths, problems, (request.SkipFolders.IsDefault ? [] : request.SkipFolders).Append(outReal))
+            .Select(f => f.Path).ToList();
+        // A decisions row that could not be read is a rejected input: the run says so and exits 1.
+        bool rejected = problems.Count > 0 || request.DecisionProblems.Any(p => p.Severity == Severity.Error);
         foreach (var p in problems) log.WriteLine(p);
 
         builder ??= request.Builder();
@@ -47,6 +52,8 @@ public static class IndexRun
             log.WriteLine($"switchtag index: the collection store in {request.OutDir} cannot be used: {e.Message}");
             return IndexRunResult.InputsRejected;
         }
+        foreach (var swept in FolderSwap.Sweep(request.OutDir)) log.WriteLine($"removed what an interrupted run left: {swept}");
+        using var swap = new FolderSwap();
         using (store)
         {
             string fingerprint = RunFingerprint.Of(request, builder.Models);
@@ -62,10 +69,12 @@ public static class IndexRun
                     return IndexRunResult.NotStarted;
                 }
                 foreach (var note in build.Notes) log.WriteLine(note);
+                rejected |= build.Notes.Any(n => n.Severity == Severity.Error); // a refused authority-list row
                 pipeline = build.Pipeline;
             }
 
-            var (indexed, skipped, failed, outcomes) = RunPlan(plan, request, pipeline, store, fingerprint, log, loop ?? Sequential);
+            var (indexed, skipped, failed, outcomes) = RunPlan(plan, request, pipeline, swap, store, fingerprint, log, loop ?? Sequential);
+            ReportStale(request.OutDir, store, pipeline?.Writers ?? builder.Writers, log);
             rejected |= failed;
             PruneOrReport(store, request, pipeline?.Writers ?? OutputWriters.Default, log);
             try
@@ -84,7 +93,7 @@ public static class IndexRun
     }
 
     private static (int Indexed, int Skipped, bool Rejected, List<DecisionOutcome> Outcomes) RunPlan(List<Planned> plan, IndexRequest request,
-        IndexPipeline? pipeline, CollectionStore store, string fingerprint, TextWriter log, FileLoop loop)
+        IndexPipeline? pipeline, FolderSwap swap, CollectionStore store, string fingerprint, TextWriter log, FileLoop loop)
     {
         int jobs = request.Jobs > 0 ? request.Jobs : Environment.ProcessorCount;
         var results = plan.Select(_ => new TaskCompletionSource<Done>(TaskCreationOptions.RunContinuationsAsynchronously)).ToArray();
@@ -98,7 +107,7 @@ public static class IndexRun
                 window.Wait(cancel.Token);
                 int i = Interlocked.Increment(ref next);
                 if (i >= plan.Count) return;
-                try { results[i].SetResult(Work(plan[i], request, pipeline)); }
+                try { results[i].SetResult(Work(plan[i], request, pipeline, swap)); }
                 catch (Exception e) { results[i].SetException(e); }
             }
         }, cancel.Token, TaskCreationOptions.LongRunning, TaskScheduler.Default)).ToArray();
@@ -179,7 +188,7 @@ public static class IndexRun
         }
     }
 
-    private static Done Work(Planned plan, IndexRequest request, IndexPipeline? pipeline)
+    private static Done Work(Planned plan, IndexRequest request, IndexPipeline? pipeline, FolderSwap swap)
     {
         if (plan.Unchanged) return new Done(plan, [], false, null);
         var read = pipeline!.Read(plan.File);
@@ -188,7 +197,7 @@ public static class IndexRun
         var index = pipeline.Run(read.Transcript) with { Media = request.MediaOf(read.Transcript.Name) };
         try
         {
-            pipeline.Write(index, Path.Combine(request.OutDir, plan.Folder));
+            swap.Replace(Path.Combine(request.OutDir, plan.Folder), folder => pipeline.Write(index, folder));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -222,6 +231,19 @@ public static class IndexRun
                 if (File.Exists(Path.Combine(folder, name))) File.Delete(Path.Combine(folder, name));
             if (Directory.Exists(folder) && !Directory.EnumerateFileSystemEntries(folder).Any()) Directory.Delete(folder);
             log.WriteLine($"source gone, pruned from the collection: {gone.SourcePath} ({gone.Folder})");
+        }
+    }
+
+    /// <summary>Reports folders of OUT that hold this tool's outputs but no interview of the store
+    /// (left by an earlier run before the store, or by hand); they are not deleted.</summary>
+    private static void ReportStale(string outDir, CollectionStore store, OutputWriters writers, TextWriter log)
+    {
+        var known = store.Interviews().Select(i => i.Folder).ToHashSet(StringComparer.OrdinalIgnoreCase);
+        foreach (var dir in Directory.EnumerateDirectories(outDir).Order(StringComparer.Ordinal))
+        {
+            string name = Path.GetFileName(dir);
+            if (!name.StartsWith('.') && !known.Contains(name) && writers.InterviewFileNames.Any(f => File.Exists(Path.Combine(dir, f))))
+                log.WriteLine($"stale folder, no interview of the collection writes it (delete it if it is not needed): {dir}");
         }
     }
 

@@ -1,0 +1,92 @@
+using System.Collections.Concurrent;
+using System.Runtime.InteropServices;
+
+namespace SwitchTag.Pipeline.Collection;
+
+/// <summary>Replaces an interview's outputs as one set: every file is written into a fresh hidden
+/// folder beside the target (<c>.switchtag-new-*</c>), then the old folder is renamed aside
+/// (<c>.switchtag-old-*</c>), the new one renamed into place and the old one deleted. A reader sees
+/// the old set or the new one, never a mix. Hidden folders and <see cref="Output.AtomicFile"/> temp
+/// files left by a killed run are swept at the next run's start (<see cref="Sweep"/>); on SIGINT or
+/// SIGTERM the folders of this run are removed before the process ends.</summary>
+public sealed class FolderSwap : IDisposable
+{
+    private const string NewPrefix = ".switchtag-new-", OldPrefix = ".switchtag-old-";
+
+    private readonly ConcurrentDictionary<string, byte> _pending = new(StringComparer.Ordinal);
+    private readonly PosixSignalRegistration[] _signals;
+
+    public FolderSwap() =>
+        _signals = [PosixSignalRegistration.Create(PosixSignal.SIGINT, _ => RemovePending()), PosixSignalRegistration.Create(PosixSignal.SIGTERM, _ => RemovePending())];
+
+    public void Dispose()
+    {
+        foreach (var s in _signals) s.Dispose();
+    }
+
+    /// <summary>Calls <paramref name="write"/> with a fresh folder, then puts that folder at <paramref name="target"/>.</summary>
+    public void Replace(string target, Action<string> write)
+    {
+        string parent = Path.GetDirectoryName(Path.GetFullPath(target))!, name = Path.GetFileName(target);
+        Directory.CreateDirectory(parent);
+        string fresh = Path.Combine(parent, $"{NewPrefix}{name}.{Guid.NewGuid():N}");
+        _pending[fresh] = 0;
+        try
+        {
+            write(fresh);
+            string? old = null;
+            if (Directory.Exists(target))
+            {
+                old = Path.Combine(parent, $"{OldPrefix}{name}.{Guid.NewGuid():N}");
+                _pending[old] = 0;
+                Directory.Move(target, old);
+            }
+            Directory.Move(fresh, target);
+            _pending.TryRemove(fresh, out _);
+            if (old is not null)
+            {
+                Directory.Delete(old, recursive: true);
+                _pending.TryRemove(old, out _);
+            }
+        }
+        finally
+        {
+            if (Directory.Exists(fresh)) Directory.Delete(fresh, recursive: true);
+            _pending.TryRemove(fresh, out _);
+        }
+    }
+
+    /// <summary>Removes what an interrupted run left in <paramref name="outDir"/>: hidden swap folders
+    /// (an old set whose new one never arrived is put back) and temp files beside the collection files.
+    /// Returns the paths removed, for the log.</summary>
+    public static List<string> Sweep(string outDir)
+    {
+        var removed = new List<string>();
+        if (!Directory.Exists(outDir)) return removed;
+        foreach (var dir in Directory.EnumerateDirectories(outDir, ".switchtag-*").Order(StringComparer.Ordinal).ToList())
+        {
+            string name = Path.GetFileName(dir);
+            if (name.StartsWith(OldPrefix, StringComparison.Ordinal))
+            {
+                string target = Path.Combine(outDir, name[OldPrefix.Length..name.LastIndexOf('.')]);
+                if (!Directory.Exists(target)) { Directory.Move(dir, target); continue; }
+            }
+            else if (!name.StartsWith(NewPrefix, StringComparison.Ordinal)) continue;
+            Directory.Delete(dir, recursive: true);
+            removed.Add(dir);
+        }
+        foreach (var file in Directory.EnumerateFiles(outDir, ".*.tmp").ToList())
+        {
+            File.Delete(file);
+            removed.Add(file);
+        }
+        return removed;
+    }
+
+    private void RemovePending()
+    {
+        foreach (var path in _pending.Keys)
+            try { if (Directory.Exists(path)) Directory.Delete(path, recursive: true); }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException) { }
+    }
+}
