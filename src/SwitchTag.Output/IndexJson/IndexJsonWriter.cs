@@ -133,6 +133,20 @@ public sealed class IndexJsonWriter : IInterviewWriter
                 w.WriteEndObject();
             }
             w.WriteEndArray();
+            // The cues the turn was made of, so a user sees exactly what was read and from which line.
+            w.WriteStartArray("cues");
+            foreach (var part in turn.Cues)
+            {
+                var cue = index.Transcript.Cues[part.CueIndex];
+                w.WriteStartObject();
+                Seconds(w, "start", cue.Time.Start);
+                Seconds(w, "end", cue.Time.End);
+                w.WriteNumber("charStart", part.CharStart);
+                w.WriteNumber("charEnd", part.CharEnd);
+                w.WriteNumber("line", cue.At.Line);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
             w.WriteEndObject();
         }
         w.WriteEndArray();
