@@ -1,4 +1,3 @@
-using Microsoft.VisualBasic.FileIO;
 using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output;
 using SwitchTag.Output.Text;
@@ -16,20 +15,11 @@ public class CsvFormulaTests
     private static readonly string[] Hostile =
         ["=HYPERLINK(\"http://x\",\"y\")", "+1+2", "-3", "@SUM(A1)", "\tx", "\r=1", "'=still text", "''@", "plain", "'tis", "a=b", ""];
 
-    private static List<string[]> Parse(string text)
-    {
-        using var parser = new TextFieldParser(new StringReader(text)) { HasFieldsEnclosedInQuotes = true, TrimWhiteSpace = false };
-        parser.SetDelimiters(",");
-        var rows = new List<string[]>();
-        while (!parser.EndOfData) rows.Add(parser.ReadFields()!);
-        return rows;
-    }
-
     [Fact]
     public void Formula_cells_get_an_apostrophe_and_quotes_and_parse_back_to_the_original()
     {
         string csv = new Csv().Row(Hostile).ToString();
-        var cells = Assert.Single(Parse(csv));
+        var cells = Assert.Single(CsvText.Parse(csv));
         Assert.Equal(Hostile.Length, cells.Length);
         for (int i = 0; i < Hostile.Length; i++)
         {
@@ -53,7 +43,7 @@ public class CsvFormulaTests
             Turns = [.. index.Turns.Select(t => t == turn ? t with { Speaker = "=cmd|' /C calc'!A0" } : t)],
             Mentions = [index.Mentions[0] with { Mention = index.Mentions[0].Mention with { Text = "@Kraków" } }, .. index.Mentions.Skip(1)],
         };
-        var rows = Parse(MentionsCsvWriter.Render(index));
+        var rows = CsvText.Parse(MentionsCsvWriter.Render(index));
         Assert.Equal("'=cmd|' /C calc'!A0", rows[1][4]);
         Assert.Equal("'@Kraków", rows[1][5]);
         Assert.Equal("=cmd|' /C calc'!A0", Csv.Restore(rows[1][4]));
@@ -65,7 +55,7 @@ public class CsvFormulaTests
     {
         var index = Fixture.Run();
         index = index with { Worklist = [index.Worklist[0] with { Text = "- a dash opens this stretch" }, .. index.Worklist.Skip(1)] };
-        var rows = Parse(WorklistCsvWriter.Render(index));
+        var rows = CsvText.Parse(WorklistCsvWriter.Render(index));
         Assert.Equal("'- a dash opens this stretch", rows[1][Array.IndexOf(WorklistCsvWriter.Header, "text")]);
         Assert.Equal("- a dash opens this stretch", Csv.Restore(rows[1][Array.IndexOf(WorklistCsvWriter.Header, "text")]));
     }

@@ -1,6 +1,5 @@
 using System.Text;
 using System.Text.Json;
-using Microsoft.VisualBasic.FileIO;
 using SwitchTag.Core.Documents;
 using SwitchTag.Formats;
 using SwitchTag.Indexing.Tests.Fakes;
@@ -62,7 +61,7 @@ public class OutputTests
     public void Mentions_csv_parses_back_with_an_independent_rfc4180_reader()
     {
         var index = Fixture.Run();
-        var rows = ParseCsv(MentionsCsvWriter.Render(index));
+        var rows = CsvText.Parse(MentionsCsvWriter.Render(index));
         Assert.Equal(MentionsCsvWriter.Header, rows[0]);
         Assert.Equal(index.Mentions.Length, rows.Count - 1);
         for (int i = 0; i < index.Mentions.Length; i++)
@@ -84,7 +83,7 @@ public class OutputTests
         };
         string csv = WorklistCsvWriter.Render(index);
         Assert.EndsWith("\r\n", csv); // RFC 4180 section 2.1: each record ends with CRLF
-        var rows = ParseCsv(csv);
+        var rows = CsvText.Parse(csv);
         Assert.Equal(index.Worklist.Length + 1, rows.Count);
         Assert.Equal("a, \"quoted\"\r\nline", rows[1][Array.IndexOf(WorklistCsvWriter.Header, "text")]);
         Assert.All(rows, r => Assert.Equal(WorklistCsvWriter.Header.Length, r.Length));
@@ -95,7 +94,7 @@ public class OutputTests
     {
         var index = Fixture.Run();
         index = index with { Worklist = [index.Worklist[0] with { Check = true }, .. index.Worklist.Skip(1)] };
-        var rows = ParseCsv(WorklistCsvWriter.Render(index));
+        var rows = CsvText.Parse(WorklistCsvWriter.Render(index));
         int language = Array.IndexOf(WorklistCsvWriter.Header, "language");
         int name = Array.IndexOf(WorklistCsvWriter.Header, "language_name");
         int check = Array.IndexOf(WorklistCsvWriter.Header, "check");
@@ -104,16 +103,6 @@ public class OutputTests
         var expected = new Dictionary<string, string> { ["pl"] = "Polish", ["de"] = "German" };
         Assert.All(rows.Skip(1), r => Assert.Equal(expected[r[language]], r[name]));
         Assert.Equal(["yes", .. Enumerable.Repeat("no", index.Worklist.Length - 1)], rows.Skip(1).Select(r => r[check]));
-    }
-
-    // Microsoft.VisualBasic.FileIO.TextFieldParser, the .NET runtime's CSV reader, as the outside check.
-    private static List<string[]> ParseCsv(string text)
-    {
-        using var parser = new TextFieldParser(new StringReader(text)) { HasFieldsEnclosedInQuotes = true, TrimWhiteSpace = false };
-        parser.SetDelimiters(",");
-        var rows = new List<string[]>();
-        while (!parser.EndOfData) rows.Add(parser.ReadFields()!);
-        return rows;
     }
 
     [Fact]
