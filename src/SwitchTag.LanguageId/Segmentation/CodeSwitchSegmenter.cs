@@ -109,8 +109,10 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
     }
 
     /// <summary>Scores every word of <paramref name="text"/> that carries evidence. With a
-    /// <paramref name="cache"/> (normalised form to scores) each distinct word is scored once, and
-    /// ordinary words share one emission array (never written after it is made).</summary>
+    /// <paramref name="cache"/> (normalised form to scores) each distinct word is scored once, and its
+    /// occurrences share one emission array per weight (never written after it is made): a word's
+    /// weight is 1 or <see cref="ModelParameters.NameWeight"/> (0 carries no evidence), fixed for one
+    /// call, so a turn of millions of words holds one array per distinct word, not per word.</summary>
     private TurnEvidence CollectEvidence(string text, ModelParameters parameters, Dictionary<string, ScoredWord>? cache)
     {
         var evidence = new TurnEvidence(Tokenizer.Tokenize(text));
@@ -142,15 +144,17 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             evidence.TokenIndex.Add(t);
             evidence.Scores.Add(scored.Scores);
             evidence.Weights.Add(weight);
-            evidence.Emissions.Add(weight == 1 && neutralIn.Length == 0
-                ? scored.PlainEmission ??= Emission(scored.Scores, 1, [], parameters)
-                : Emission(scored.Scores, weight, neutralIn, parameters));
+            evidence.Emissions.Add(lookup is null
+                ? Emission(scored.Scores, weight, neutralIn, parameters)
+                : weight == 1 ? scored.PlainEmission ??= Emission(scored.Scores, 1, neutralIn, parameters)
+                : scored.NameEmission ??= Emission(scored.Scores, weight, neutralIn, parameters));
         }
         return evidence;
     }
 
     /// <summary>A word's raw log-likelihoods per class (empty when no feature was known), the
-    /// languages it is a filler or loanword in, and, once needed, its emission as an ordinary word.</summary>
+    /// languages it is a filler or loanword in, and, once needed, its emission as an ordinary word
+    /// and as a name-like one.</summary>
     private sealed class ScoredWord(float[] scores, string[] neutralIn)
     {
         public float[] Scores { get; } = scores;
@@ -158,6 +162,8 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         public string[] NeutralIn { get; } = neutralIn;
 
         public float[]? PlainEmission { get; set; }
+
+        public float[]? NameEmission { get; set; }
     }
 
     /// <summary>The decoder's per-class score of one word: tempered log-likelihood relative to the
@@ -185,7 +191,8 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         int classes = _model.ClassCount, n = evidence.Count;
         var current = new float[classes];
         var next = new float[classes];
-        var switched = new bool[n * classes];
+        // One bit per word and class: a turn of millions of words keeps its back-pointers small.
+        var switched = new ulong[((long)n * classes + 63) >> 6];
         var switchedFrom = new int[n];
         for (int c = 0; c < classes; c++) current[c] = priors.Start[c] + evidence.Emissions[0][c] + priors.Bonus[c];
         for (int w = 1; w < n; w++)
@@ -197,7 +204,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             {
                 float switchFrom = current[bestPrev] - priors.Enter[c];
                 bool sw = c != bestPrev && switchFrom > current[c];
-                switched[w * classes + c] = sw;
+                if (sw) Set(switched, (long)w * classes + c);
                 next[c] = (sw ? switchFrom : current[c]) + e[c] + priors.Bonus[c];
             }
             (current, next) = (next, current);
@@ -207,10 +214,14 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         for (int w = n - 1; w >= 0; w--)
         {
             labels[w] = state;
-            if (switched[w * classes + state]) state = switchedFrom[w];
+            if (IsSet(switched, (long)w * classes + state)) state = switchedFrom[w];
         }
         return labels;
     }
+
+    private static void Set(ulong[] bits, long i) => bits[i >> 6] |= 1UL << (int)(i & 63);
+
+    private static bool IsSet(ulong[] bits, long i) => (bits[i >> 6] & (1UL << (int)(i & 63))) != 0;
 
     /// <summary>At most one ordinary word of evidence (or only names) between words of another
     /// language in the same script is a loanword, a cognate or a name ("voyage?", "Kurt. [pause] Kurt"),
