@@ -25,9 +25,12 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// Organisations group by folded key.
 /// Held for review instead: mentions below the confidence floor, PER mentions that are the own name
 /// of a place of 100,000 people or more, surfaces tagged both PER and LOC in the interview, model mentions whose first letter is
-/// lower case (names in cased scripts are capitalised; uncased scripts are never caught), and one-word
+/// lower case (names in cased scripts are capitalised; uncased scripts are never caught), one-word
 /// model mentions the interview also writes in lower case as an ordinary word (unless a place
-/// mention the gazetteer knows: "o porto" beside Porto).</summary>
+/// mention the gazetteer knows: "o porto" beside Porto) and one-word bare gazetteer matches it so
+/// writes (no context and no model backs them: "Coats from the morning" beside "sewing coats"), and
+/// places whose every gazetteer candidate is accented otherwise (<see cref="Respelling"/>: "Perón" is
+/// not Péron, FR) or is a village named so only in one of its other names (<see cref="VillagePopulation"/>).</summary>
 public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow = HeadingBuilder.DefaultReviewBelow)
 {
     public const double DefaultReviewBelow = 0.5;
@@ -35,6 +38,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// <summary>A person's name competes with a place only when it is the own name of a place this
     /// large: small towns named like given names (Hanna, Alberta) would otherwise hold back every person.</summary>
     public const long CompetingPlacePopulation = 100_000;
+
+    /// <summary>A place smaller than this, reached only through one of its other names (not its own)
+    /// by a one-word Latin-script name with no place evidence, is too weak a link to index unreviewed
+    /// ("against Perón" is not Leones, AR, once called Perón). The gazetteer's village size.</summary>
+    public const long VillagePopulation = 15_000;
 
     public HeadingResult Build(
         ImmutableArray<Mention> mentions,
@@ -45,12 +53,15 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         int n = mentions.Length;
         var keys = new string[n];
         var places = new ImmutableArray<PlaceLink>[n];
+        var respelled = new PlaceLink?[n];
         var placeCache = new Dictionary<(string, string), ImmutableArray<PlaceLink>>();
         for (int i = 0; i < n; i++)
         {
             var m = mentions[i];
             keys[i] = lexicon.Key(m.Text, m.Language);
-            places[i] = CachedPlaces(placeCache, m.Text, m.Language);
+            var found = CachedPlaces(placeCache, m.Text, m.Language);
+            places[i] = found.RemoveAll(p => Respelling.MarksConflict(m.Text, p.Name));
+            if (places[i].IsEmpty && !found.IsEmpty) respelled[i] = found[0];
         }
 
         var lowerWords = LowerCaseWords(turns);
@@ -69,7 +80,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         for (int i = 0; i < n; i++)
         {
             if (accepted?.Contains(i) == true) continue;
-            var reason = ReviewReason(mentions[i], keys[i], places[i], labelsOfSurface[keys[i]], lowerWords);
+            var reason = ReviewReason(mentions[i], keys[i], places[i], respelled[i], labelsOfSurface[keys[i]], lowerWords);
             if (reason is null) continue;
             held[i] = true;
             review.Add(new ReviewItem(i, reason));
@@ -125,9 +136,15 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         return words;
     }
 
-    private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, HashSet<NameLabel> labelsOfSurface,
+    private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, PlaceLink? respelled, HashSet<NameLabel> labelsOfSurface,
         HashSet<string> lowerWords)
     {
+        bool open = m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer;
+        if (open && m.Label == NameLabel.LOC && respelled is not null)
+            return $"\"{m.Text}\" is accented otherwise than the only places of that name ({respelled.Name}, {respelled.Country}): another name, perhaps a person's";
+        if (open && m.Label == NameLabel.LOC && !places.IsEmpty && !m.Text.Any(char.IsWhiteSpace) && m.Text.All(c => !char.IsLetter(c) || c < '\u0250')
+            && places.All(p => p.Population < VillagePopulation && Key(p.Name, m.Language) != key))
+            return $"\"{m.Text}\" is only another name of a village ({places[0].Name}, {places[0].Country}), and the sentence does not say it is a place";
         if (labelsOfSurface.Contains(NameLabel.PER) && labelsOfSurface.Contains(NameLabel.LOC) && m.Label != NameLabel.ORG
             && m.Source != MentionSource.Cue && m.Source != MentionSource.PlaceEvidence)
             return "the same name is tagged both PER and LOC in this interview, and the evidence is even";
@@ -135,7 +152,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return $"tagged PER, but \"{m.Text}\" is also the name of a place ({place.Name}, {place.Country})";
         if (m.Source == MentionSource.Model && m.Text.FirstOrDefault(char.IsLetter) is var first && char.IsLower(first))
             return "the model tagged a name that does not start with a capital letter";
-        if (m.Source == MentionSource.Model && (m.Label != NameLabel.LOC || places.IsEmpty) && !m.Text.Any(char.IsWhiteSpace) && m.Text.Length > 0 && char.IsUpper(m.Text[0])
+        if ((m.Source == MentionSource.Model && (m.Label != NameLabel.LOC || places.IsEmpty) || m.Source == MentionSource.Gazetteer)
+            && !m.Text.Any(char.IsWhiteSpace) && m.Text.Length > 0 && char.IsUpper(m.Text[0])
             && lowerWords.Contains(m.Text.ToLowerInvariant()))
             return $"\"{m.Text}\" is also used as an ordinary word in this interview (\"{m.Text.ToLowerInvariant()}\")";
         if (m.Confidence < reviewBelow)

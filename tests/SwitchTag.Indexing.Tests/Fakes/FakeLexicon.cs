@@ -7,9 +7,13 @@ using SwitchTag.Indexing;
 namespace SwitchTag.Indexing.Tests.Fakes;
 
 /// <summary>A lexicon with a fixed place list (keyed by folded name or key) and a crude fold (lower case, marks removed, one Polish
-/// case ending stripped), so heading tests do not move when the real lexicon changes.</summary>
-public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places) : IHeadingLexicon
+/// case ending stripped), so heading tests do not move when the real lexicon changes; <paramref name="diminutives"/> maps a
+/// diminutive to its full given name.</summary>
+public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places, IReadOnlyDictionary<string, string>? diminutives = null) : IHeadingLexicon
 {
+    public bool SameGivenName(string a, string languageA, string b, string languageB) =>
+        Key(a, languageA) == Key(b, languageB) || diminutives?.GetValueOrDefault(b) == a || diminutives?.GetValueOrDefault(a) == b;
+
     public string Key(string name, string language) =>
         string.Join(' ', Fold(name).Split(' ', StringSplitOptions.RemoveEmptyEntries).Select(Stem));
 
