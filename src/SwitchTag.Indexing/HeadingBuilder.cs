@@ -22,6 +22,10 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// (a middle name may come and go); a one-word name joins a multi-word heading only when exactly one
 /// such heading has it as its first or last word (so "Kowalczyk" stays apart when two Kowalczyks are
 /// named); other one-word names group by folded key.
+/// A camp, ghetto or historical region or state the name lists know (<see cref="IHeadingLexicon.Listed"/>)
+/// keeps the name said as its heading: a camp is shown at its town ("Auschwitz", at Oświęcim, PL); a
+/// historical region or state is not linked to a modern place of the name (<see cref="Historical"/>),
+/// which stays among the alternatives for the reviewer.
 /// Organisations group by folded key.
 /// Held for review instead: mentions below the confidence floor, PER mentions that are the own name
 /// of a place of 100,000 people or more, surfaces tagged both PER and LOC in the interview, model mentions whose first letter is
@@ -166,6 +170,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         public NameLabel Label { get; } = label;
         public string Key { get; } = key;
         public PlaceLink? Place { get; set; }
+
+        /// <summary>A camp or historical place: the heading keeps the name said, the place is where it lies.</summary>
+        public bool KeepsSpokenName { get; init; }
         public List<int> Members { get; } = [];
         public HashSet<Group> Possible { get; } = [];
     }
@@ -182,19 +189,34 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
     private void GroupPlaces(ImmutableArray<Mention> mentions, string[] keys, ImmutableArray<PlaceLink>[] places, bool[] held, List<Group> groups)
     {
+        var listed = new ListedPlace?[mentions.Length];
+        for (int i = 0; i < mentions.Length; i++)
+            if (!held[i] && mentions[i].Label == NameLabel.LOC) listed[i] = lexicon.Listed(mentions[i].Text, mentions[i].Language);
+
         var evidence = new Dictionary<string, int>(StringComparer.Ordinal);
         for (int i = 0; i < mentions.Length; i++)
-            if (!held[i] && mentions[i].Label == NameLabel.LOC && places[i].Length == 1)
+            if (!held[i] && mentions[i].Label == NameLabel.LOC && listed[i] is null && places[i].Length == 1)
                 evidence[places[i][0].Country] = evidence.GetValueOrDefault(places[i][0].Country) + 1;
 
         int evidenceTotal = evidence.Values.Sum();
         var byPlace = new Dictionary<long, Group>();
+        var bySpoken = new Dictionary<string, Group>(StringComparer.Ordinal);
         var unlinked = new List<int>();
         for (int i = 0; i < mentions.Length; i++)
         {
             if (held[i] || mentions[i].Label != NameLabel.LOC) continue;
-            if (places[i].IsEmpty) { unlinked.Add(i); continue; }
             var m = mentions[i];
+            if (listed[i] is { } spoken && (spoken.IsSite || Historical(spoken, m, places[i], evidence)))
+            {
+                if (!bySpoken.TryGetValue(spoken.Name, out var own))
+                {
+                    bySpoken[spoken.Name] = own = new Group(NameLabel.LOC, keys[i]) { Place = spoken.At, KeepsSpokenName = true };
+                    groups.Add(own);
+                }
+                own.Members.Add(i);
+                continue;
+            }
+            if (places[i].IsEmpty) { unlinked.Add(i); continue; }
             var chosen = places[i]
                 .OrderByDescending(p => PlaceScore(p, Key(m.Text, m.Language) == Key(p.Name, m.Language), evidence, evidenceTotal))
                 .ThenBy(p => p.GeonameId)
@@ -222,6 +244,20 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
             group.Members.Add(i);
         }
+    }
+
+    /// <summary>Whether a listed historical region or state is meant rather than a modern place of the
+    /// name. A modern country of the name gives way only to a historical state, and only when the
+    /// interview's other places lie in a country holding it (Palestine beside Haifa is the Mandate, not
+    /// the State of Palestine; Polish "Czechy" stays Czechia, though Bohemia is also so called). A town
+    /// gives way when its own name is not the name said (Galicia is not Galich, RU), or when the other
+    /// places lie in a country holding the region. Otherwise the modern place stands (Galicia in a
+    /// Spanish story).</summary>
+    private bool Historical(ListedPlace spoken, Mention m, ImmutableArray<PlaceLink> places, Dictionary<string, int> evidence)
+    {
+        bool inCountry = spoken.Countries.Any(evidence.ContainsKey);
+        if (places.Any(p => p.GeonameId < 0)) return spoken.Kind == "state" && inCountry;
+        return inCountry || places.All(p => Key(p.Name, m.Language) != Key(m.Text, m.Language));
     }
 
     /// <summary>Persons, merged only on certain evidence. A full name (two or more words) joins a
@@ -309,11 +345,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     {
         var members = g.Members.OrderBy(i => times[i].Start).ThenBy(i => i).ToImmutableArray();
         var variants = members.Select(i => mentions[i].Text).Distinct(StringComparer.Ordinal).ToImmutableArray();
-        string name = g.Place?.Name ?? DisplayName(g.Label, members, mentions);
-        var alternatives = g.Place is null
-            ? ImmutableArray<PlaceLink>.Empty
-            : members.SelectMany(i => places[i]).Where(p => p.GeonameId != g.Place.GeonameId)
-                .DistinctBy(p => p.GeonameId).OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId).ToImmutableArray();
+        string name = g.KeepsSpokenName || g.Place is null ? DisplayName(g.Label, members, mentions) : g.Place.Name;
+        var alternatives = members.SelectMany(i => places[i]).Where(p => p.GeonameId != g.Place?.GeonameId)
+            .DistinctBy(p => p.GeonameId).OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId).ToImmutableArray();
         var speakers = members.Select(i => turns[mentions[i].Turn].Speaker).OfType<string>().Distinct(StringComparer.Ordinal).ToImmutableArray();
         double confidence = Math.Round(members.Average(i => mentions[i].Confidence), 4);
         var source = members.Any(i => mentions[i].Source == MentionSource.Authority) ? MentionSource.Authority

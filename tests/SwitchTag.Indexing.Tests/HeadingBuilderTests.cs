@@ -148,4 +148,44 @@ public class HeadingBuilderTests
         var riga = Build(GeoNamesFixture.Lexicon(), ("Rīga", NameLabel.LOC, "lv"));
         Assert.Equal(456172, Assert.Single(riga.Headings).Place!.GeonameId);
     }
+
+    [Fact]
+    public void A_camp_keeps_its_spoken_name_and_is_shown_at_its_town()
+    {
+        // GeoNames cities15000 row 3089658 (Oświęcim, PL); Auschwitz lay beside it (known from memory).
+        var lexicon = GeoNamesFixture.Lexicon();
+        var oswiecim = lexicon.Places("Oświęcim", "pl").Single(p => p.Country == "PL");
+        Assert.Equal(3089658, oswiecim.GeonameId);
+        var camps = new FakeLexicon(GeoNamesFixture.Places, listed: new Dictionary<string, ListedPlace>
+        {
+            ["Auschwitz"] = new("Auschwitz", "camp", true, oswiecim, ["PL"]),
+        });
+        var result = Build(camps, ("Auschwitz", NameLabel.LOC, "en"), ("Oświęcim", NameLabel.LOC, "pl"), ("Auschwitz", NameLabel.LOC, "de"));
+        Assert.Equal(2, result.Headings.Length);
+        var camp = result.Headings.Single(h => h.Name == "Auschwitz");
+        Assert.Equal(3089658, camp.Place!.GeonameId);
+        Assert.Equal(2, camp.Mentions.Length);
+        Assert.Equal(3089658, result.Headings.Single(h => h.Name == "Oświęcim").Place!.GeonameId);
+    }
+
+    [Fact]
+    public void A_historical_state_is_not_linked_to_the_modern_state_of_its_name_beside_places_of_its_land()
+    {
+        // GeoNames cities15000 row 294801 (Haifa, IL); Mandatory Palestine covered today's IL and PS (known from memory).
+        var state = new PlaceLink(-275, "State of Palestine", 31.9, 35.2, "PS", 4_000_000);
+        var places = new Dictionary<string, ImmutableArray<PlaceLink>>(GeoNamesFixture.Places.ToDictionary()) { ["palestine"] = [state] };
+        var lexicon = new FakeLexicon(places, listed: new Dictionary<string, ListedPlace>
+        {
+            ["Palestine"] = new("Palestine (Mandate)", "state", false, null, ["IL", "PS"]),
+        });
+        var story = Build(lexicon, ("Palestine", NameLabel.LOC, "en"), ("Haifa", NameLabel.LOC, "en"));
+        var palestine = story.Headings.Single(h => h.Variants.Contains("Palestine"));
+        Assert.Equal("Palestine", palestine.Name);
+        Assert.Null(palestine.Place);
+        Assert.Equal(-275, Assert.Single(palestine.Alternatives).GeonameId);
+
+        // With nothing else in the land, the modern state stands.
+        var alone = Build(lexicon, ("Palestine", NameLabel.LOC, "en"), ("Paris", NameLabel.LOC, "en"), ("Lyon", NameLabel.LOC, "en"));
+        Assert.Equal(-275, alone.Headings.Single(h => h.Variants.Contains("Palestine")).Place!.GeonameId);
+    }
 }

@@ -8,9 +8,12 @@ namespace SwitchTag.Indexing.Tests.Fakes;
 
 /// <summary>A lexicon with a fixed place list (keyed by folded name or key) and a crude fold (lower case, marks removed, one Polish
 /// case ending stripped), so heading tests do not move when the real lexicon changes; <paramref name="diminutives"/> maps a
-/// diminutive to its full given name.</summary>
-public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places, IReadOnlyDictionary<string, string>? diminutives = null) : IHeadingLexicon
+/// diminutive to its full given name, <paramref name="listed"/> the camps and historical places by the name said.</summary>
+public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places, IReadOnlyDictionary<string, string>? diminutives = null,
+    IReadOnlyDictionary<string, ListedPlace>? listed = null) : IHeadingLexicon
 {
+    public ListedPlace? Listed(string name, string language) => listed?.GetValueOrDefault(name);
+
     public bool SameGivenName(string a, string languageA, string b, string languageB) =>
         Key(a, languageA) == Key(b, languageB) || diminutives?.GetValueOrDefault(b) == a || diminutives?.GetValueOrDefault(a) == b;
 
