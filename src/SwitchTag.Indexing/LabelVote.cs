@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing;
 
@@ -34,7 +35,7 @@ internal static class LabelVote
         }
 
         var nameParts = new HashSet<string>(StringComparer.Ordinal);
-        var givenNames = new List<(string Name, string Language)>();
+        var givenNames = new List<(string Name, LanguageCode Language)>();
         foreach (var m in result)
         {
             if (m.Label != NameLabel.PER) continue;
@@ -67,7 +68,7 @@ internal static class LabelVote
     /// <summary>The given name, a case form of it or a listed diminutive or nickname of the given name
     /// of a person named in full in the interview ("Pina" beside "Giuseppina Russo", "Chico" beside "Francisco Ruiz"): the interview ties
     /// the word to that person, whatever small place bears it.</summary>
-    private static bool IsDiminutiveOf(IHeadingLexicon lexicon, Mention m, (string Name, string Language) given) =>
+    private static bool IsDiminutiveOf(IHeadingLexicon lexicon, Mention m, (string Name, LanguageCode Language) given) =>
         lexicon.SameGivenName(given.Name, given.Language, m.Text, m.Language);
 
     /// <summary>Whether a later stage may change the mention's label.</summary>

@@ -3,6 +3,7 @@ using System.Globalization;
 using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Indexing;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
 
@@ -12,16 +13,16 @@ namespace SwitchTag.Indexing.Tests.Fakes;
 public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places, IReadOnlyDictionary<string, string>? diminutives = null,
     IReadOnlyDictionary<string, ListedPlace>? listed = null) : IHeadingLexicon
 {
-    public ListedPlace? Listed(string name, string language) => listed?.GetValueOrDefault(name);
+    public ListedPlace? Listed(string name, LanguageCode language) => listed?.GetValueOrDefault(name);
 
-    public bool SameGivenName(string a, string languageA, string b, string languageB) =>
+    public bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
         Key(a, languageA) == Key(b, languageB) || diminutives?.GetValueOrDefault(b) == a || diminutives?.GetValueOrDefault(a) == b;
 
-    public string Key(string name, string language) =>
+    public string Key(string name, LanguageCode language) =>
         string.Join(' ', Fold(name).Split(' ', StringSplitOptions.RemoveEmptyEntries).Select(Stem));
 
     /// <summary>By folded name, else by key (so an inflected form finds its nominative).</summary>
-    public ImmutableArray<PlaceLink> Places(string name, string language) =>
+    public ImmutableArray<PlaceLink> Places(string name, LanguageCode language) =>
         places.TryGetValue(Fold(name), out var found) || places.TryGetValue(Key(name, language), out found) ? found : [];
 
     public static string Fold(string text)
