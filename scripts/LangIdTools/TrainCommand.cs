@@ -4,11 +4,11 @@ namespace LangIdTools;
 
 public static class TrainCommand
 {
-    public static int Run(string dataRoot, string outPath, string? langpackRoot = null)
+    public static int Run(string dataRoot, string outPath)
     {
-        var corpus = LidCorpus.Load(dataRoot, langpackRoot);
+        var corpus = LidCorpus.Load(dataRoot);
         foreach (var g in corpus.GroupBy(l => l.Class).OrderBy(g => g.Key, StringComparer.Ordinal))
-            Console.WriteLine($"{g.Key,-8} train {g.Count(l => l.Split == Split.Training),6}  calibration {g.Count(l => l.Split == Split.Calibration),5}  evaluation {g.Count(l => l.Split == Split.Evaluation),5}  training chars {g.Where(l => l.Split == Split.Training).Sum(l => (long)l.Text.Length),9:N0}  from langpacks {g.Count(l => l.Source.StartsWith("langpack/", StringComparison.Ordinal)),5}");
+            Console.WriteLine($"{g.Key,-8} train {g.Count(l => l.Split == Split.Training),6}  calibration {g.Count(l => l.Split == Split.Calibration),5}  evaluation {g.Count(l => l.Split == Split.Evaluation),5}");
         var trained = ModelTrainer.Train(corpus, new TrainingOptions(), Console.Out);
         using (var file = File.Create(outPath)) trained.Write(file);
         Console.WriteLine($"wrote {outPath} ({new FileInfo(outPath).Length:N0} bytes)");

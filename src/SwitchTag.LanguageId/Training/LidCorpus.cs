@@ -9,9 +9,7 @@ public sealed record CorpusLine(string Class, string Code, string Text, string S
 /// <summary>Reads the training text from the shared data folder (see ../shared/data/README.md):
 /// lid/&lt;code&gt;.txt (Universal Dependencies sentences), the <c># text = </c> lines of the Universal NER
 /// train files (da, sv, hr, sr, sk, pt, zh), NerKor sentences for Hungarian, and Serbian Cyrillic
-/// made from the Serbian Latin lines; with a langpack folder, also the interface strings of the
-/// browser language packs in it (<c>&lt;code&gt;/*.xpi</c>, fetched by scripts/fetch-langid-text) for
-/// languages whose treebank text is thin. Deterministic: sources and files in ordinal order.</summary>
+/// made from the Serbian Latin lines. Deterministic: sources and files in ordinal order.</summary>
 public static class LidCorpus
 {
     private static readonly (string Code, string Folder)[] UnerTrain =
@@ -24,7 +22,7 @@ public static class LidCorpus
     /// line with the other languages and training within its time budget.</summary>
     private const int NerKorKeepOneIn = 4;
 
-    public static List<CorpusLine> Load(string dataRoot, string? langpackRoot = null)
+    public static List<CorpusLine> Load(string dataRoot)
     {
         var lines = new List<CorpusLine>();
         var lid = Path.Combine(dataRoot, "lid");
@@ -47,44 +45,7 @@ public static class LidCorpus
             foreach (var sentence in NerKorSentences(nerkor))
                 if (Fnv(sentence) % NerKorKeepOneIn == 0)
                     Add(lines, "hu", sentence, "ner/nerkor");
-        if (langpackRoot is not null && Directory.Exists(langpackRoot)) AddLangpacks(lines, langpackRoot);
         return Deduplicate(lines);
-    }
-
-    public const string LangpackSourcePrefix = "langpack/";
-
-    /// <summary>Folder of the English pack whose strings are the untranslated source text.</summary>
-    public const string SourceLanguagePacks = "source-en";
-
-    /// <summary>A langpack string becomes a training line when it is running text (at least
-    /// <see cref="LangpackMinWords"/> words) and is not also a string of the English pack: packs keep
-    /// untranslated English strings, which would teach the language English.</summary>
-    public const int LangpackMinWords = 4;
-
-    private static void AddLangpacks(List<CorpusLine> lines, string root)
-    {
-        var source = Directory.Exists(Path.Combine(root, SourceLanguagePacks))
-            ? Directory.GetFiles(Path.Combine(root, SourceLanguagePacks), "*.xpi").SelectMany(LangpackText.Read).ToHashSet(StringComparer.Ordinal)
-            : [];
-        foreach (var dir in Directory.GetDirectories(root).Order(StringComparer.Ordinal))
-        {
-            var code = Path.GetFileName(dir);
-            if (code is SourceLanguagePacks or "debs") continue;
-            foreach (var xpi in Directory.GetFiles(dir, "*.xpi").Order(StringComparer.Ordinal))
-                foreach (var text in LangpackText.Read(xpi))
-                    if (!source.Contains(text) && text.Split(' ').Count(w => w.Any(char.IsLetter)) >= LangpackMinWords)
-                        AddTrainingOnly(lines, code, text, LangpackSourcePrefix + Path.GetFileName(xpi));
-        }
-    }
-
-    /// <summary>Extra text only ever trains: its lines that the hash puts in the calibration or
-    /// evaluation split are left out, so both held-out sets stay the treebank lines they were and
-    /// scores before and after adding it compare on the same texts.</summary>
-    private static void AddTrainingOnly(List<CorpusLine> lines, string code, string raw, string source)
-    {
-        var text = raw.Trim();
-        if (text.Length < 3 || HoldOut.Of(text) != Split.Training) return;
-        lines.Add(new CorpusLine(code, code, text, source, Split.Training));
     }
 
     private static void Add(List<CorpusLine> lines, string code, string raw, string source)

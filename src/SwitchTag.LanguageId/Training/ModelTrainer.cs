@@ -8,7 +8,7 @@ namespace SwitchTag.LanguageId.Training;
 
 /// <summary>Training settings. Alpha is the additive-smoothing pseudo-count; a feature is kept for
 /// a language when seen at least MinCount times there (1 for thin languages, whose every n-gram is
-/// precious; thin by the size of its treebank text, extra text aside).</summary>
+/// precious).</summary>
 public sealed record TrainingOptions(
     Smoothing Smoothing = Smoothing.WittenBell,
     double Alpha = 0.5,
@@ -56,8 +56,7 @@ public static class ModelTrainer
         {
             if (line.Split != Split.Training) continue;
             int c = classIndex[line.Class];
-            // Extra text does not make a language's treebank text less thin: its every n-gram stays precious.
-            if (!line.Source.StartsWith(LidCorpus.LangpackSourcePrefix, StringComparison.Ordinal)) chars[c] += line.Text.Length;
+            chars[c] += line.Text.Length;
             tokens.Clear();
             Tokenizer.Tokenize(line.Text, tokens);
             var sink = new CountSink(counts[c], kindOf, totals, c);
