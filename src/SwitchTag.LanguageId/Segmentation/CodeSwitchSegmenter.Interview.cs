@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.LanguageId.Interview;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Segmentation;
 
@@ -48,11 +49,11 @@ public sealed partial class CodeSwitchSegmenter
         {
             string text = turns[t] ?? "";
             var ev = evidence[t];
-            if (text.Length == 0) { spans.Add([]); guesses.Add(new LanguageGuess(Undetermined, 0)); continue; }
+            if (text.Length == 0) { spans.Add([]); guesses.Add(new LanguageGuess(LanguageCode.Undetermined, 0)); continue; }
             if (ev.Count == 0)
             {
-                spans.Add([new LanguageSpan(0, text.Length, Undetermined, 0)]);
-                guesses.Add(new LanguageGuess(Undetermined, 0));
+                spans.Add([new LanguageSpan(0, text.Length, LanguageCode.Undetermined, 0)]);
+                guesses.Add(new LanguageGuess(LanguageCode.Undetermined, 0));
                 continue;
             }
             if (!startPriors.TryGetValue(previousCode, out var start))
@@ -61,11 +62,11 @@ public sealed partial class CodeSwitchSegmenter
             // A lone name ("Irena Kowalczyk.") is no switch even into a language of the interview.
             MergeShortIslands(text, ev, labels, p.MinIslandWeight, (code, namesOnly) => namesOnly || !profile.Contains(_codes[code]));
             if (p.KeepKnownWords) MergeKnownWords(text, ev, labels);
-            spans.Add(Calibrate(BuildSpans(text, ev, labels, logPrior), ev, profile, p));
             var posterior = CodePosterior(ev, 0, ev.Count, logPrior);
+            spans.Add(Calibrate(BuildSpans(text, ev, labels, logPrior, posterior), ev, profile, p));
             int best = ArgMax(posterior);
             double confidence = p.Calibration.Apply(posterior[best], WordsIn(ev, 0, text.Length), ShareOf(profile, _codes[best], p));
-            guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(confidence, 4)));
+            guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(LanguageCode.Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(confidence, 4)));
             previousCode = _codeOfClass[labels[^1]];
         }
         return new InterviewSegmentation(profile, guesses.MoveToImmutable(), spans.MoveToImmutable());
@@ -99,7 +100,7 @@ public sealed partial class CodeSwitchSegmenter
 
     /// <summary>A language's share of the interview as the calibration sees it (outside the profile:
     /// <see cref="InterviewParameters.OutsideShare"/>).</summary>
-    public static double ShareOf(InterviewLanguages profile, string language, InterviewParameters p) =>
+    public static double ShareOf(InterviewLanguages profile, LanguageCode language, InterviewParameters p) =>
         profile.Spoken.FirstOrDefault(s => s.Language == language)?.Share ?? p.OutsideShare;
 
     /// <summary>A one-word island whose word the surrounding language also uses as a word of its own
@@ -150,15 +151,17 @@ public sealed partial class CodeSwitchSegmenter
             turns.Add((ev.TotalWeight, kept, kept.Select(c => sum[c]).ToArray()));
         }
         var share = Enumerable.Repeat(1.0 / classes, classes).ToArray();
+        var logShare = new double[classes];
         var next = new double[classes];
         var post = new double[classes];
         for (int it = 0; it < ProfileIterations && turns.Count > 0; it++)
         {
             Array.Fill(next, ProfileSmoothing);
+            for (int c = 0; c < classes; c++) logShare[c] = Math.Log(share[c]);
             foreach (var (weight, kept, score) in turns)
             {
                 double max = double.NegativeInfinity;
-                for (int k = 0; k < kept.Length; k++) max = Math.Max(max, post[k] = Math.Log(share[kept[k]]) + score[k]);
+                for (int k = 0; k < kept.Length; k++) max = Math.Max(max, post[k] = logShare[kept[k]] + score[k]);
                 double total = 0;
                 for (int k = 0; k < kept.Length; k++) total += post[k] = Math.Exp(post[k] - max);
                 for (int k = 0; k < kept.Length; k++) next[kept[k]] += weight * post[k] / total;
@@ -183,7 +186,7 @@ public sealed partial class CodeSwitchSegmenter
         var byCode = new double[_codes.Length];
         for (int c = 0; c < classShare.Length; c++) byCode[_codeOfClass[c]] += classShare[c];
         var shares = Enumerable.Range(0, _codes.Length).Where(i => byCode[i] >= ReportedShare)
-            .OrderByDescending(i => byCode[i]).ThenBy(i => _codes[i], StringComparer.Ordinal)
+            .OrderByDescending(i => byCode[i]).ThenBy(i => _codes[i])
             .Select(i => new SpokenLanguage(_codes[i], Math.Round(byCode[i], 4))).ToImmutableArray();
         return new InterviewLanguages(shares.Where(s => s.Share >= p.MinShare).ToImmutableArray(), shares);
     }

@@ -1,4 +1,5 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.TeiXml;
 
@@ -8,7 +9,7 @@ namespace SwitchTag.Output.TeiXml;
 /// Offsets are into the turn's text.</summary>
 internal static class TeiInline
 {
-    public sealed record Element(int Start, int End, string Kind, string? Language, int Mention);
+    public sealed record Element(int Start, int End, string Kind, LanguageCode? Language, int Mention);
 
     /// <param name="mentions">the indices into <c>index.Mentions</c> of this turn's mentions, in index order</param>
     public static List<Element> Layout(InterviewIndex index, int turn, IEnumerable<int> mentions)
@@ -31,7 +32,7 @@ internal static class TeiInline
         var foreign = new List<Element>();
         foreach (var (span, _) in index.Spans[turn])
         {
-            if (span.Language == index.MainLanguage || span.Language == "und") continue;
+            if (span.Language == index.MainLanguage || span.Language.IsUndetermined) continue;
             var pieces = new List<(int Start, int End)> { (span.CharStart, span.CharEnd) };
             // Only the names overlapping the span can cut it; they cut in the order they were laid.
             foreach (var n in Overlapping(names, byStart, span.CharStart, span.CharEnd))
