@@ -92,7 +92,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
     {
         if (string.IsNullOrEmpty(text)) return [];
         var evidence = CollectEvidence(text, parameters, null);
-        if (evidence.Count == 0) return [new LanguageSpan(0, text.Length, LanguageCode.Undetermined, 0)];
+        if (evidence.Count == 0) return [new LanguageSpan(new CharSpan(0, text.Length), LanguageCode.Undetermined, 0)];
         int classes = _model.ClassCount;
         var start = new float[classes];
         var enter = new float[classes];
@@ -278,7 +278,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             int end = w < evidence.Count ? tokens[evidence.TokenIndex[w]].Start : text.Length;
             int code = _codeOfClass[labels[runFirst]];
             var posterior = CodePosterior(evidence, runFirst, w, logPrior);
-            spans.Add(new LanguageSpan(runStart, end, _codes[code], Math.Round(posterior[code], 4)));
+            spans.Add(new LanguageSpan(new CharSpan(runStart, end), _codes[code], Math.Round(posterior[code], 4)));
             runStart = end;
             runFirst = w;
         }
