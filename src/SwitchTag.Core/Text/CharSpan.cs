@@ -23,12 +23,6 @@ public readonly record struct CharSpan
 
     public bool Contains(int offset) => offset >= Start && offset < End;
 
-    /// <summary>True when the spans share at least one char; an empty span overlaps nothing.</summary>
-    public bool Overlaps(CharSpan other) => Start < other.End && other.Start < End;
-
-    /// <summary>The chars of <paramref name="text"/> this span covers.</summary>
-    public string Of(string text) => text[Start..End];
-
     public void Deconstruct(out int start, out int end) => (start, end) = (Start, End);
 
     public override string ToString() => $"[{Start}, {End})";

@@ -22,7 +22,7 @@ public sealed class FakeTagger(IReadOnlyList<(string Surface, NameLabel Label, d
                 bool word = (at == 0 || !char.IsLetter(turnText[at - 1])) && (end == turnText.Length || !char.IsLetter(turnText[end]));
                 if (!word || taken.AsSpan(at, surface.Length).Contains(true)) continue;
                 taken.AsSpan(at, surface.Length).Fill(true);
-                var language = spans.FirstOrDefault(s => s.CharStart <= at && at < s.CharEnd)?.Language ?? LanguageCode.Undetermined;
+                var language = spans.FirstOrDefault(s => s.Chars.Contains(at))?.Language ?? LanguageCode.Undetermined;
                 found.Add(new Mention(turnIndex, new CharSpan(at, end), surface, label, language, confidence, MentionSource.Model));
             }
         }
