@@ -37,7 +37,7 @@ public static class WorklistBuilder
                     double confidence = Math.Round(ConfidenceOver(list, i, j, start, end), 4);
                     items.Add(new WorklistItem(
                         aligner.Align(turn, start, end), turn.Speaker, span.Language, confidence,
-                        turn.Text[start..end], t, start, end, WordCount.Of(turn.Text, start, end), confidence < checkBelow));
+                        turn.Text[start..end], t, new CharSpan(start, end), WordCount.Of(turn.Text, start, end), confidence < checkBelow));
                 }
                 i = j + 1;
             }
@@ -54,7 +54,7 @@ public static class WorklistBuilder
     /// of cues with many foreign stretches costs no scan of all its cues per stretch.</summary>
     private static IEnumerable<(int Start, int End)> CuePieces(Turn turn, int start, int end)
     {
-        var cues = turn.Cues.IsDefaultOrEmpty ? [new TurnCue(-1, 0, turn.Text.Length)] : turn.Cues;
+        var cues = turn.Cues.IsDefaultOrEmpty ? [new TurnCue(-1, new CharSpan(0, turn.Text.Length))] : turn.Cues;
         // The first cue ending after start; cues before it cannot overlap [start, end).
         int lo = 0, hi = cues.Length;
         while (lo < hi)
