@@ -1,3 +1,4 @@
+using SwitchTag.Core.Text;
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;

@@ -1,3 +1,4 @@
+using SwitchTag.Core.Text;
 using System.Collections.Frozen;
 
 namespace SwitchTag.Lexicon.NameLists;

@@ -1,3 +1,4 @@
+using SwitchTag.Core.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;

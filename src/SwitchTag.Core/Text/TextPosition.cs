@@ -1,4 +1,4 @@
-namespace SwitchTag.Lexicon;
+namespace SwitchTag.Core.Text;
 
 public static class TextPosition
 {
