@@ -197,8 +197,8 @@ public class HeadingBuilderTests
         const string text = "Mia madre diceva sempre: la madre mia. Santa Maria";
         int santa = text.IndexOf("Santa", StringComparison.Ordinal);
         var mentions = ImmutableArray.Create(
-            new Mention(0, 0, 9, "Mia madre", NameLabel.LOC, "it", 0.9, MentionSource.Model),
-            new Mention(0, santa, santa + 11, "Santa Maria", NameLabel.LOC, "it", 0.9, MentionSource.Model));
+            new Mention(0, new CharSpan(0, 9), "Mia madre", NameLabel.LOC, "it", 0.9, MentionSource.Model),
+            new Mention(0, new CharSpan(santa, santa + 11), "Santa Maria", NameLabel.LOC, "it", 0.9, MentionSource.Model));
         var times = ImmutableArray.Create(new TimeRange(Timecode.Zero, new Timecode(500)), new TimeRange(new Timecode(1000), new Timecode(1500)));
         var turn = new Turn(0, "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);
         var result = new HeadingBuilder(Fixture.Lexicon()).Build(mentions, times, [turn]);
