@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing;
 
@@ -9,22 +10,33 @@ namespace SwitchTag.Indexing;
 /// grouping is testable without the shipped files; the name-list members default to "nothing known".</summary>
 public interface IHeadingLexicon
 {
-    string Key(string name, string language);
+    string Key(string name, LanguageCode language);
 
     /// <summary>Every gazetteer place the name may denote; empty when the gazetteer does not know it.</summary>
-    ImmutableArray<PlaceLink> Places(string name, string language);
+    ImmutableArray<PlaceLink> Places(string name, LanguageCode language);
+
+    /// <summary>The camp, ghetto, historical region or state the whole name denotes, whose own name a
+    /// gazetteer link would replace; null when the name is none.</summary>
+    ListedPlace? Listed(string name, LanguageCode language) => null;
 
     /// <summary>Whether a word is a listed first name of some language.</summary>
     bool IsFirstName(string word) => false;
 
     /// <summary>A surname's spelling key: equal for Szwarc and Schwarz, Feigl and Feigel.</summary>
-    string SurnameKey(string word, string language) => Key(word, language);
+    string SurnameKey(string word, LanguageCode language) => Key(word, language);
 
     /// <summary>Whether two given names are one (equal keys), or diminutives of one full name (Irena /
     /// Irenko, Hanna / Hanka): certain evidence for a merge within one interview.</summary>
-    bool SameGivenName(string a, string languageA, string b, string languageB) => Key(a, languageA) == Key(b, languageB);
+    bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) => Key(a, languageA) == Key(b, languageB);
 
     /// <summary>Whether two given names are listed cross-language equivalents (Stanisław / Stanley):
     /// probable, not certain.</summary>
     bool EquivalentGivenNames(string a, string b) => false;
 }
+
+/// <summary>A place known by the name said, which a gazetteer link would rename: a site (camp, ghetto,
+/// killing site) shown at the town it lies at or beside (<paramref name="At"/>, null when the gazetteer
+/// lacks it), or a historical region or state (<paramref name="At"/> null) with the modern countries
+/// holding it.</summary>
+public sealed record ListedPlace(string Name, string Kind, bool IsSite, PlaceLink? At, ImmutableArray<string> Countries);
+

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing;
 
@@ -15,7 +16,7 @@ public static class WorklistBuilder
     public static ImmutableArray<WorklistItem> Build(
         ImmutableArray<Turn> turns,
         ImmutableArray<ImmutableArray<LanguageSpan>> spans,
-        string mainLanguage,
+        LanguageCode mainLanguage,
         TimeAligner aligner,
         double checkBelow = 0)
     {
@@ -36,7 +37,7 @@ public static class WorklistBuilder
                     double confidence = Math.Round(ConfidenceOver(list, i, j, start, end), 4);
                     items.Add(new WorklistItem(
                         aligner.Align(turn, start, end), turn.Speaker, span.Language, confidence,
-                        turn.Text[start..end], t, start, end, WordCount.Of(turn.Text, start, end), confidence < checkBelow));
+                        turn.Text[start..end], t, new CharSpan(start, end), WordCount.Of(turn.Text, start, end), confidence < checkBelow));
                 }
                 i = j + 1;
             }
@@ -44,14 +45,14 @@ public static class WorklistBuilder
         return items.ToImmutable();
     }
 
-    public static bool IsForeign(string language, string mainLanguage) =>
-        language != MainLanguage.Undetermined && !string.Equals(language, mainLanguage, StringComparison.Ordinal);
+    public static bool IsForeign(LanguageCode language, LanguageCode mainLanguage) =>
+        !language.IsUndetermined && language != mainLanguage;
 
     /// <summary>[start, end) cut at the turn's cue boundaries, each piece trimmed of spaces (spans
     /// carry the spaces after their last word), pieces holding no word left out.</summary>
     private static IEnumerable<(int Start, int End)> CuePieces(Turn turn, int start, int end)
     {
-        var cues = turn.Cues.IsDefaultOrEmpty ? [new TurnCue(-1, 0, turn.Text.Length)] : turn.Cues;
+        var cues = turn.Cues.IsDefaultOrEmpty ? [new TurnCue(-1, new CharSpan(0, turn.Text.Length))] : turn.Cues;
         foreach (var cue in cues)
         {
             int s = Math.Max(start, cue.CharStart), e = Math.Min(end, cue.CharEnd);

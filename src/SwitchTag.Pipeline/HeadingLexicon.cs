@@ -3,28 +3,40 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Indexing;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Pipeline;
 
 /// <summary>The lexicon seen by heading building: the lexicon's own grouping key (fold and per-language
 /// stem), its gazetteer lookup (folded, inflected and other-language names) and the name lists'
-/// first names, surname keys, diminutives and equivalents.</summary>
+/// first names, surname keys, diminutives and equivalents, and the camps and historical regions whose
+/// spoken names a link would replace (a camp's town from the gazetteer, else the list's own centre).</summary>
 public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = null) : IHeadingLexicon
 {
     private readonly NameListSet _lists = lists ?? NameListSet.Empty;
 
-    public string Key(string name, string language) => NameFolding.Key(name, language);
+    public string Key(string name, LanguageCode language) => NameFolding.Key(name, language);
 
-    public ImmutableArray<PlaceLink> Places(string name, string language) =>
+    public ImmutableArray<PlaceLink> Places(string name, LanguageCode language) =>
         gazetteer.Lookup(name, language)
             .Select(p => new PlaceLink(p.GeonameId, p.Name, p.Latitude, p.Longitude, p.Country, p.Population))
             .ToImmutableArray();
 
+    public ListedPlace? Listed(string name, LanguageCode language)
+    {
+        if (_lists.Places.Find(name) is not { } listed) return null;
+        var at = listed.At is null ? null
+            : gazetteer.Lookup(listed.At, LanguageCode.Undetermined).Where(p => p.Country == listed.Countries[0] && Key(p.Name, LanguageCode.Undetermined) == Key(listed.At, LanguageCode.Undetermined))
+                .Select(p => new PlaceLink(p.GeonameId, p.Name, p.Latitude, p.Longitude, p.Country, p.Population)).FirstOrDefault()
+              ?? new PlaceLink(0, listed.At, listed.Latitude, listed.Longitude, listed.Countries[0], 0);
+        return new ListedPlace(listed.Name, listed.Kind, listed.IsSite, at, listed.Countries);
+    }
+
     public bool IsFirstName(string word) => _lists.Cues.IsFirstName(NameFolding.Fold(word));
 
-    public string SurnameKey(string word, string language) => _lists.Variants.Key(NameFolding.Stem(word, language));
+    public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));
 
-    public bool SameGivenName(string a, string languageA, string b, string languageB) =>
+    public bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
         _lists.Variants.SameGivenName(a, b)
         || _lists.Variants.SameGivenName(NameFolding.Stem(a, languageA), NameFolding.Stem(b, languageB))
         || Key(a, languageA) == Key(b, languageB);

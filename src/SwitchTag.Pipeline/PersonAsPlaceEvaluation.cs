@@ -9,6 +9,8 @@ using SwitchTag.Tagging.Sources;
 using SwitchTag.Tagging.Sources.Authority;
 using SwitchTag.Tagging.Sources.Gazetteer;
 using SwitchTag.Tagging.Sources.Model;
+using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Pipeline;
 
@@ -49,7 +51,7 @@ public static partial class PersonAsPlaceEvaluation
             if (!File.Exists(file)) { error.WriteLine($"switchtag eval ner: {file}: no such file"); rejected++; continue; }
             var sentences = GoldReader.Read(file, problems);
             foreach (var p in problems) error.WriteLine($"switchtag eval ner: {p}");
-            string language = LanguageOf(file);
+            LanguageCode language = LanguageOf(file);
             long gold = 0, plainHits = 0, cascadeHits = 0;
             foreach (var s in sentences)
             {
@@ -57,7 +59,7 @@ public static partial class PersonAsPlaceEvaluation
                 for (int k = 1; k < starts.Length; k++) starts[k] = starts[k - 1] + s.Words[k - 1].Length + 1;
                 var text = string.Join(' ', s.Words);
                 if (text.Length == 0) continue;
-                ImmutableArray<LanguageSpan> spans = [new LanguageSpan(0, text.Length, language, 1)];
+                ImmutableArray<LanguageSpan> spans = [new LanguageSpan(new CharSpan(0, text.Length), language, 1)];
                 var plainPlaces = Places(plain.Tag(0, text, spans));
                 var cascadePlaces = Places(cascade.Tag(0, text, spans));
                 for (int k = 0; k < s.Words.Count; k++)
@@ -78,8 +80,8 @@ public static partial class PersonAsPlaceEvaluation
 
     private static List<Mention> Places(ImmutableArray<Mention> mentions) => mentions.Where(m => m.Label == NameLabel.LOC).ToList();
 
-    private static string LanguageOf(string file) =>
-        FileLanguage().Match(Path.GetFileName(file)) is { Success: true } m ? m.Groups[1].Value : "und";
+    private static LanguageCode LanguageOf(string file) =>
+        FileLanguage().Match(Path.GetFileName(file)) is { Success: true } m ? new LanguageCode(m.Groups[1].Value) : LanguageCode.Undetermined;
 
     [GeneratedRegex(@"(?:^|[-_])([a-z]{2})(?:[-_.]|$)")]
     private static partial Regex FileLanguage();

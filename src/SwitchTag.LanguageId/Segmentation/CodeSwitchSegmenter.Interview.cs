@@ -2,6 +2,8 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.LanguageId.Interview;
+using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.LanguageId.Segmentation;
 
@@ -21,7 +23,8 @@ public sealed partial class CodeSwitchSegmenter
     /// switching into a language (every language outside the profile gets
     /// <see cref="InterviewParameters.OutsideShare"/>: a third language needs strong evidence, but
     /// gets through when it has it), and with the previous turn's last language mixed into the
-    /// starting prior, so "no." or "sí." follows the conversation.</summary>
+    /// starting prior, so "no." or "sí." follows the conversation. A language that the decoded
+    /// words put at MinShare or more joins the profile, and the turns are decoded once more.</summary>
     public InterviewSegmentation SegmentInterview(IReadOnlyList<string> turns, InterviewParameters? parameters = null)
     {
         var p = parameters ?? InterviewParameters.Default;
@@ -32,6 +35,33 @@ public sealed partial class CodeSwitchSegmenter
 
         var classShare = EstimateShares(evidence);
         var profile = ProfileOf(classShare, p);
+        var decoded = DecodeTurns(turns, evidence, classShare, profile, p);
+        // Turn-level shares give a language spoken only inside turns of another (a narrator's Polish
+        // phrases in English answers) nothing; when the decoded words put such a language at MinShare
+        // or more, it joins the profile with its share of the decoded words and the turns are
+        // decoded again within it.
+        double total = decoded.Words.Sum();
+        if (total == 0) return decoded.Result;
+        var joined = (double[])classShare.Clone();
+        bool grew = false;
+        for (int c = 0; c < joined.Length; c++)
+        {
+            var code = _model.ClassCodes[c];
+            if (profile.Contains(code) || decoded.Words[c] / total < p.MinShare) continue;
+            joined[c] = decoded.Words[c] / total;
+            grew = true;
+        }
+        if (!grew) return decoded.Result;
+        double sum = joined.Sum();
+        for (int c = 0; c < joined.Length; c++) joined[c] /= sum;
+        return DecodeTurns(turns, evidence, joined, ProfileOf(joined, p), p).Result;
+    }
+
+    /// <summary>The second pass: each turn decoded within <paramref name="profile"/>; also the decoded
+    /// word weight per class, over all turns.</summary>
+    private (InterviewSegmentation Result, double[] Words) DecodeTurns(IReadOnlyList<string> turns, TurnEvidence[] evidence,
+        double[] classShare, InterviewLanguages profile, InterviewParameters p)
+    {
         int classes = _model.ClassCount;
         var logPrior = new float[classes];
         for (int c = 0; c < classes; c++)
@@ -40,6 +70,7 @@ public sealed partial class CodeSwitchSegmenter
         var enter = new float[classes];
         for (int c = 0; c < classes; c++) enter[c] = p.SwitchCost - p.EnterWeight * logPrior[c];
         var noBonus = new float[classes];
+        var words = new double[classes];
         var guesses = ImmutableArray.CreateBuilder<LanguageGuess>(turns.Count);
         var spans = ImmutableArray.CreateBuilder<ImmutableArray<LanguageSpan>>(turns.Count);
         int previousCode = -1;
@@ -48,11 +79,11 @@ public sealed partial class CodeSwitchSegmenter
         {
             string text = turns[t] ?? "";
             var ev = evidence[t];
-            if (text.Length == 0) { spans.Add([]); guesses.Add(new LanguageGuess(Undetermined, 0)); continue; }
+            if (text.Length == 0) { spans.Add([]); guesses.Add(new LanguageGuess(LanguageCode.Undetermined, 0)); continue; }
             if (ev.Count == 0)
             {
-                spans.Add([new LanguageSpan(0, text.Length, Undetermined, 0)]);
-                guesses.Add(new LanguageGuess(Undetermined, 0));
+                spans.Add([new LanguageSpan(new CharSpan(0, text.Length), LanguageCode.Undetermined, 0)]);
+                guesses.Add(new LanguageGuess(LanguageCode.Undetermined, 0));
                 continue;
             }
             if (!startPriors.TryGetValue(previousCode, out var start))
@@ -61,14 +92,15 @@ public sealed partial class CodeSwitchSegmenter
             // A lone name ("Irena Kowalczyk.") is no switch even into a language of the interview.
             MergeShortIslands(text, ev, labels, p.MinIslandWeight, (code, namesOnly) => namesOnly || !profile.Contains(_codes[code]));
             if (p.KeepKnownWords) MergeKnownWords(text, ev, labels);
-            spans.Add(Calibrate(BuildSpans(text, ev, labels, logPrior), ev, profile, p));
+            for (int w = 0; w < labels.Length; w++) words[labels[w]] += ev.Weights[w];
             var posterior = CodePosterior(ev, 0, ev.Count, logPrior);
+            spans.Add(Calibrate(BuildSpans(text, ev, labels, logPrior, posterior), ev, profile, p));
             int best = ArgMax(posterior);
             double confidence = p.Calibration.Apply(posterior[best], WordsIn(ev, 0, text.Length), ShareOf(profile, _codes[best], p));
-            guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(confidence, 4)));
+            guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(LanguageCode.Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(confidence, 4)));
             previousCode = _codeOfClass[labels[^1]];
         }
-        return new InterviewSegmentation(profile, guesses.MoveToImmutable(), spans.MoveToImmutable());
+        return (new InterviewSegmentation(profile, guesses.MoveToImmutable(), spans.MoveToImmutable()), words);
     }
 
     private static ImmutableArray<LanguageSpan> Calibrate(ImmutableArray<LanguageSpan> spans, TurnEvidence evidence,
@@ -86,7 +118,7 @@ public sealed partial class CodeSwitchSegmenter
 
     /// <summary>A language's share of the interview as the calibration sees it (outside the profile:
     /// <see cref="InterviewParameters.OutsideShare"/>).</summary>
-    public static double ShareOf(InterviewLanguages profile, string language, InterviewParameters p) =>
+    public static double ShareOf(InterviewLanguages profile, LanguageCode language, InterviewParameters p) =>
         profile.Spoken.FirstOrDefault(s => s.Language == language)?.Share ?? p.OutsideShare;
 
     /// <summary>A one-word island whose word the surrounding language also uses as a word of its own
@@ -137,15 +169,17 @@ public sealed partial class CodeSwitchSegmenter
             turns.Add((ev.TotalWeight, kept, kept.Select(c => sum[c]).ToArray()));
         }
         var share = Enumerable.Repeat(1.0 / classes, classes).ToArray();
+        var logShare = new double[classes];
         var next = new double[classes];
         var post = new double[classes];
         for (int it = 0; it < ProfileIterations && turns.Count > 0; it++)
         {
             Array.Fill(next, ProfileSmoothing);
+            for (int c = 0; c < classes; c++) logShare[c] = Math.Log(share[c]);
             foreach (var (weight, kept, score) in turns)
             {
                 double max = double.NegativeInfinity;
-                for (int k = 0; k < kept.Length; k++) max = Math.Max(max, post[k] = Math.Log(share[kept[k]]) + score[k]);
+                for (int k = 0; k < kept.Length; k++) max = Math.Max(max, post[k] = logShare[kept[k]] + score[k]);
                 double total = 0;
                 for (int k = 0; k < kept.Length; k++) total += post[k] = Math.Exp(post[k] - max);
                 for (int k = 0; k < kept.Length; k++) next[kept[k]] += weight * post[k] / total;
@@ -170,7 +204,7 @@ public sealed partial class CodeSwitchSegmenter
         var byCode = new double[_codes.Length];
         for (int c = 0; c < classShare.Length; c++) byCode[_codeOfClass[c]] += classShare[c];
         var shares = Enumerable.Range(0, _codes.Length).Where(i => byCode[i] >= ReportedShare)
-            .OrderByDescending(i => byCode[i]).ThenBy(i => _codes[i], StringComparer.Ordinal)
+            .OrderByDescending(i => byCode[i]).ThenBy(i => _codes[i])
             .Select(i => new SpokenLanguage(_codes[i], Math.Round(byCode[i], 4))).ToImmutableArray();
         return new InterviewLanguages(shares.Where(s => s.Share >= p.MinShare).ToImmutableArray(), shares);
     }

@@ -5,6 +5,7 @@ using SwitchTag.Core.Text;
 using SwitchTag.LanguageId.Model;
 using SwitchTag.LanguageId.Profiles;
 using SwitchTag.LanguageId.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Segmentation;
 
@@ -18,8 +19,6 @@ namespace SwitchTag.LanguageId.Segmentation;
 /// <see cref="SegmentInterview"/> decides each turn within the languages of the whole interview.</summary>
 public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 {
-    public const string Undetermined = "und";
-
     /// <summary>Below this probability a stretch is reported as und.</summary>
     public const float MinConfidence = 0.2f;
 
@@ -28,7 +27,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 
     private readonly NgramLanguageModel _model;
     private readonly INameLexicon? _names;
-    private readonly string[] _codes;
+    private readonly LanguageCode[] _codes;
     private readonly int[] _codeOfClass;
     private readonly NeutralWords _neutral;
 
@@ -37,8 +36,8 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         _model = model;
         _names = names;
         _neutral = neutral ?? NeutralWords.Default;
-        _codes = model.ClassCodes.Distinct().Order(StringComparer.Ordinal).ToArray();
-        _codeOfClass = model.ClassCodes.Select(c => Array.IndexOf(_codes, c)).ToArray();
+        _codes = model.ClassCodes.Distinct().Order(StringComparer.Ordinal).Select(c => new LanguageCode(c)).ToArray();
+        _codeOfClass = model.ClassCodes.Select(c => Array.IndexOf(_codes, new LanguageCode(c))).ToArray();
         Languages = _codes;
     }
 
@@ -47,7 +46,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 
     public NgramLanguageModel Model => _model;
 
-    public IReadOnlyList<string> Languages { get; }
+    public IReadOnlyList<LanguageCode> Languages { get; }
 
     /// <summary>Words that look like names (capitalised mid-sentence, all capitals, or known to the
     /// lexicon) are left out when at least two other words remain, so "born in Szczebrzeszyn" stays
@@ -71,7 +70,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         if (words < 2 && names > 0)
         {
             if (words == 0 && names == 1 && _names is not null && _names.IsKnownName(text[tokens[lastName].Start..tokens[lastName].End]))
-                return new LanguageGuess(Undetermined, 0);
+                return new LanguageGuess(LanguageCode.Undetermined, 0);
             acc.Clear();
             foreach (var token in tokens)
             {
@@ -80,20 +79,20 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
                 _model.AddWord(buffer[..len], acc);
             }
         }
-        if (acc.FeatureHits == 0) return new LanguageGuess(Undetermined, 0);
+        if (acc.FeatureHits == 0) return new LanguageGuess(LanguageCode.Undetermined, 0);
         var (code, p) = Best(acc);
-        return p < MinConfidence ? new LanguageGuess(Undetermined, 0) : new LanguageGuess(_codes[code], p);
+        return p < MinConfidence ? new LanguageGuess(LanguageCode.Undetermined, 0) : new LanguageGuess(_codes[code], p);
     }
 
-    public ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage) =>
+    public ImmutableArray<LanguageSpan> Segment(string text, LanguageCode mainLanguage) =>
         Segment(text, mainLanguage, _model.Parameters);
 
     /// <summary>Segment with explicit decoder parameters (the trainer uses this to fit them).</summary>
-    public ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage, ModelParameters parameters)
+    public ImmutableArray<LanguageSpan> Segment(string text, LanguageCode mainLanguage, ModelParameters parameters)
     {
         if (string.IsNullOrEmpty(text)) return [];
         var evidence = CollectEvidence(text, parameters, null);
-        if (evidence.Count == 0) return [new LanguageSpan(0, text.Length, Undetermined, 0)];
+        if (evidence.Count == 0) return [new LanguageSpan(new CharSpan(0, text.Length), LanguageCode.Undetermined, 0)];
         int classes = _model.ClassCount;
         var start = new float[classes];
         var enter = new float[classes];
@@ -110,7 +109,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 
     /// <summary>Scores every word of <paramref name="text"/> that carries evidence. With a
     /// <paramref name="cache"/> (normalised form to scores) each distinct word is scored once, and
-    /// ordinary words share one emission array (never written after it is made).</summary>
+    /// its occurrences share its emission arrays (never written after they are made).</summary>
     private TurnEvidence CollectEvidence(string text, ModelParameters parameters, Dictionary<string, ScoredWord>? cache)
     {
         var evidence = new TurnEvidence(Tokenizer.Tokenize(text));
@@ -142,15 +141,18 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             evidence.TokenIndex.Add(t);
             evidence.Scores.Add(scored.Scores);
             evidence.Weights.Add(weight);
-            evidence.Emissions.Add(weight == 1 && neutralIn.Length == 0
-                ? scored.PlainEmission ??= Emission(scored.Scores, 1, [], parameters)
-                : Emission(scored.Scores, weight, neutralIn, parameters));
+            evidence.Emissions.Add(lookup is null
+                ? Emission(scored.Scores, weight, neutralIn, parameters)
+                : weight == 1 ? scored.PlainEmission ??= Emission(scored.Scores, 1, neutralIn, parameters)
+                : scored.NameEmission ??= Emission(scored.Scores, weight, neutralIn, parameters));
         }
         return evidence;
     }
 
     /// <summary>A word's raw log-likelihoods per class (empty when no feature was known), the
-    /// languages it is a filler or loanword in, and, once needed, its emission as an ordinary word.</summary>
+    /// languages it is a filler or loanword in, and, once needed, its emission as an ordinary word
+    /// and as a name-like one (a word's weight is 1 or the name weight, and its filler languages
+    /// are its own, so these two are all it can have).</summary>
     private sealed class ScoredWord(float[] scores, string[] neutralIn)
     {
         public float[] Scores { get; } = scores;
@@ -158,6 +160,8 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         public string[] NeutralIn { get; } = neutralIn;
 
         public float[]? PlainEmission { get; set; }
+
+        public float[]? NameEmission { get; set; }
     }
 
     /// <summary>The decoder's per-class score of one word: tempered log-likelihood relative to the
@@ -265,8 +269,9 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 
     /// <summary>One span per run of words in one language. A span's confidence is its language's
     /// posterior over the span's words (weighted log-likelihoods, tempered), with
-    /// <paramref name="logPrior"/> per class when given.</summary>
-    private ImmutableArray<LanguageSpan> BuildSpans(string text, TurnEvidence evidence, int[] labels, float[]? logPrior)
+    /// <paramref name="logPrior"/> per class when given; <paramref name="wholeTurn"/>, when given, is
+    /// that posterior over all the turn's words, already computed by the caller.</summary>
+    private ImmutableArray<LanguageSpan> BuildSpans(string text, TurnEvidence evidence, int[] labels, float[]? logPrior, float[]? wholeTurn = null)
     {
         var tokens = evidence.Tokens;
         var spans = ImmutableArray.CreateBuilder<LanguageSpan>();
@@ -278,8 +283,8 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             // runs stay with the earlier language and the spans cover the text without gaps.
             int end = w < evidence.Count ? tokens[evidence.TokenIndex[w]].Start : text.Length;
             int code = _codeOfClass[labels[runFirst]];
-            var posterior = CodePosterior(evidence, runFirst, w, logPrior);
-            spans.Add(new LanguageSpan(runStart, end, _codes[code], Math.Round(posterior[code], 4)));
+            var posterior = runFirst == 0 && w == evidence.Count && wholeTurn is not null ? wholeTurn : CodePosterior(evidence, runFirst, w, logPrior);
+            spans.Add(new LanguageSpan(new CharSpan(runStart, end), _codes[code], Math.Round(posterior[code], 4)));
             runStart = end;
             runFirst = w;
         }
@@ -316,32 +321,12 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         if (_names is not null && _names.IsKnownName(word)) return 0;
         if (word.Length < 2 || !char.IsUpper(word[0])) return 1;
         if (IsAllUpper(word)) return p.NameWeight;
-        return IsSentenceStart(text, token.Start) ? 1 : p.NameWeight;
+        return TextPosition.IsSentenceStart(text, token.Start) ? 1 : p.NameWeight;
     }
 
     private static bool IsAllUpper(ReadOnlySpan<char> word)
     {
         foreach (char c in word) if (char.IsLower(c)) return false;
-        return true;
-    }
-
-    /// <summary>True at the text start or after sentence-final punctuation (skipping spaces, quotes,
-    /// brackets and transcriber tags), where capitals say nothing about names.</summary>
-    private static bool IsSentenceStart(ReadOnlySpan<char> text, int start)
-    {
-        for (int i = start - 1; i >= 0; i--)
-        {
-            char c = text[i];
-            if (char.IsWhiteSpace(c) || c is '"' or '\'' or '\u201C' or '\u201D' or '\u2018' or '\u2019' or '(' or '\u00AB' or '\u201E' or '-' or '\u2014') continue;
-            if (c == ']')
-            {
-                int open = text[..i].LastIndexOf('[');
-                if (open < 0) return false;
-                i = open;
-                continue;
-            }
-            return c is '.' or '!' or '?' or '\u2026' or ':' or ';';
-        }
         return true;
     }
 

@@ -3,18 +3,26 @@ using System.Globalization;
 using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Indexing;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
 
 /// <summary>A lexicon with a fixed place list (keyed by folded name or key) and a crude fold (lower case, marks removed, one Polish
-/// case ending stripped), so heading tests do not move when the real lexicon changes.</summary>
-public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places) : IHeadingLexicon
+/// case ending stripped), so heading tests do not move when the real lexicon changes; <paramref name="diminutives"/> maps a
+/// diminutive to its full given name, <paramref name="listed"/> the camps and historical places by the name said.</summary>
+public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places, IReadOnlyDictionary<string, string>? diminutives = null,
+    IReadOnlyDictionary<string, ListedPlace>? listed = null) : IHeadingLexicon
 {
-    public string Key(string name, string language) =>
+    public ListedPlace? Listed(string name, LanguageCode language) => listed?.GetValueOrDefault(name);
+
+    public bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
+        Key(a, languageA) == Key(b, languageB) || diminutives?.GetValueOrDefault(b) == a || diminutives?.GetValueOrDefault(a) == b;
+
+    public string Key(string name, LanguageCode language) =>
         string.Join(' ', Fold(name).Split(' ', StringSplitOptions.RemoveEmptyEntries).Select(Stem));
 
     /// <summary>By folded name, else by key (so an inflected form finds its nominative).</summary>
-    public ImmutableArray<PlaceLink> Places(string name, string language) =>
+    public ImmutableArray<PlaceLink> Places(string name, LanguageCode language) =>
         places.TryGetValue(Fold(name), out var found) || places.TryGetValue(Key(name, language), out found) ? found : [];
 
     public static string Fold(string text)

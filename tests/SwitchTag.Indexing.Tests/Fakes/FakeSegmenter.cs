@@ -1,6 +1,8 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
+using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
 
@@ -9,11 +11,11 @@ namespace SwitchTag.Indexing.Tests.Fakes;
 /// between words of one language belong to the span.</summary>
 public sealed class FakeSegmenter(IReadOnlyDictionary<string, string> words, string main = "en") : ILanguageSegmenter
 {
-    public IReadOnlyList<string> Languages => ["en", "pl", "de"];
+    public IReadOnlyList<LanguageCode> Languages => [new("en"), new("pl"), new("de")];
 
     public LanguageGuess Identify(ReadOnlySpan<char> text) => new(main, 0.9);
 
-    public ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage)
+    public ImmutableArray<LanguageSpan> Segment(string text, LanguageCode mainLanguage)
     {
         var spans = ImmutableArray.CreateBuilder<LanguageSpan>();
         int i = 0;
@@ -24,11 +26,11 @@ public sealed class FakeSegmenter(IReadOnlyDictionary<string, string> words, str
             int start = i;
             while (i < text.Length && !char.IsWhiteSpace(text[i])) i++;
             string word = text[start..i].Trim(',', '.', '!', '?', ':', ';');
-            string language = words.GetValueOrDefault(word.ToLowerInvariant(), mainLanguage);
+            LanguageCode language = words.TryGetValue(word.ToLowerInvariant(), out var listed) ? new(listed) : mainLanguage;
             if (spans.Count > 0 && spans[^1].Language == language)
-                spans[^1] = spans[^1] with { CharEnd = i };
+                spans[^1] = spans[^1] with { Chars = new CharSpan(spans[^1].CharStart, i) };
             else
-                spans.Add(new LanguageSpan(start, i, language, language == mainLanguage ? 0.95 : 0.8));
+                spans.Add(new LanguageSpan(new CharSpan(start, i), language, language == mainLanguage ? 0.95 : 0.8));
         }
         return spans.ToImmutable();
     }
