@@ -51,12 +51,21 @@ public static class IndexCommand
                 return ExitCodes.Usage;
             }
             request = request.WithCollection(parse.GetValue(jobs), parse.GetValue(force), parse.GetValue(prune));
-            return IndexRun.Execute(request, Console.Error, IndexProgress.Run) switch
+            try
             {
-                IndexRunResult.Indexed => ExitCodes.Success,
-                IndexRunResult.InputsRejected => ExitCodes.InputsRejected,
-                _ => ExitCodes.Usage,
-            };
+                return IndexRun.Execute(request, Console.Error, IndexProgress.Run) switch
+                {
+                    IndexRunResult.Indexed => ExitCodes.Success,
+                    IndexRunResult.InputsRejected => ExitCodes.InputsRejected,
+                    _ => ExitCodes.Usage,
+                };
+            }
+            catch (Exception e) when (WriteGate.Stopped && e is OperationCanceledException or AggregateException)
+            {
+                // SIGINT/SIGTERM: the signal ends the process; say what was kept instead of a stack trace.
+                Console.Error.WriteLine("switchtag index: stopped by a signal; interviews finished before it are kept, nothing half-written is left");
+                return ExitCodes.InputsRejected;
+            }
         });
         return command;
     }

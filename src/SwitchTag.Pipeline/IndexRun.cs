@@ -43,7 +43,7 @@ public static class IndexRun
         CollectionStore store;
         try
         {
-            store = CollectionStore.Open(request.OutDir);
+            store = WriteGate.Step(() => CollectionStore.Open(request.OutDir));
         }
         catch (Exception e) when (e is Microsoft.Data.Sqlite.SqliteException or InvalidDataException or IOException or UnauthorizedAccessException)
         {
@@ -138,8 +138,9 @@ public static class IndexRun
                 }
                 else if (done.Index is { } index)
                 {
-                    store.Save(index, done.Plan.Folder, fingerprint,
-                        index.Decisions.Select(o => new StoredDecision(StoreEntries.DecisionKey(o.Decision), o.Applied)).ToList(), DateTimeOffset.UtcNow);
+                    // One step, so a signal lets the transaction commit rather than leave a hot journal.
+                    WriteGate.Step(() => store.Save(index, done.Plan.Folder, fingerprint,
+                        index.Decisions.Select(o => new StoredDecision(StoreEntries.DecisionKey(o.Decision), o.Applied)).ToList(), DateTimeOffset.UtcNow));
                     indexed++;
                     outcomes.AddRange(index.Decisions);
                 }
@@ -238,11 +239,14 @@ public static class IndexRun
                 log.WriteLine($"source gone, kept in the collection (--prune removes it): {gone.SourcePath} ({gone.Folder})");
                 continue;
             }
-            store.Remove(gone.SourcePath);
             string folder = Path.Combine(request.OutDir, gone.Folder);
-            foreach (var name in writers.InterviewFileNames)
-                if (File.Exists(Path.Combine(folder, name))) File.Delete(Path.Combine(folder, name));
-            if (Directory.Exists(folder) && !Directory.EnumerateFileSystemEntries(folder).Any()) Directory.Delete(folder);
+            WriteGate.Step(() =>
+            {
+                store.Remove(gone.SourcePath);
+                foreach (var name in writers.InterviewFileNames)
+                    if (File.Exists(Path.Combine(folder, name))) File.Delete(Path.Combine(folder, name));
+                if (Directory.Exists(folder) && !Directory.EnumerateFileSystemEntries(folder).Any()) Directory.Delete(folder);
+            });
             log.WriteLine($"source gone, pruned from the collection: {gone.SourcePath} ({gone.Folder})");
         }
     }
