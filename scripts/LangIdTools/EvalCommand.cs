@@ -19,7 +19,7 @@ public static class EvalCommand
         var ours = CodeSwitchSegmenter.Load(modelPath);
         Console.WriteLine($"Model {modelPath}: {new FileInfo(modelPath).Length / 1048576.0:F2} MB, loaded in {clock.ElapsedMilliseconds} ms, {ours.Model.FeatureCount:N0} features, {ours.Languages.Count} languages.");
         clock.Restart();
-        var lingua = new LinguaReference(ours.Languages);
+        var lingua = new LinguaReference(ours.Languages.Select(l => l.Code));
         Console.WriteLine($"Lingua 2.0.0 restricted to the {lingua.Codes.Count} languages both support (built in {clock.ElapsedMilliseconds} ms): {string.Join(" ", lingua.Codes.Order())}.");
         Console.WriteLine();
 

@@ -92,7 +92,7 @@ public static class SpeechEvalCommand
                 {
                     int n = texts[t][span.CharStart..span.CharEnd].Split(' ', StringSplitOptions.RemoveEmptyEntries).Length;
                     words += n;
-                    if (span.Language is not ("en" or "es" or "und")) leftPair += n;
+                    if (span.Language.Code is not ("en" or "es" or "und")) leftPair += n;
                 }
             }
         }

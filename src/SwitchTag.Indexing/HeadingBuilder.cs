@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing;
 
@@ -45,7 +46,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         int n = mentions.Length;
         var keys = new string[n];
         var places = new ImmutableArray<PlaceLink>[n];
-        var placeCache = new Dictionary<(string, string), ImmutableArray<PlaceLink>>();
+        var placeCache = new Dictionary<(string, LanguageCode), ImmutableArray<PlaceLink>>();
         for (int i = 0; i < n; i++)
         {
             var m = mentions[i];
@@ -98,7 +99,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         return new HeadingResult(ordered, [.. headingOf], review.ToImmutable()) { Mentions = mentions };
     }
 
-    private ImmutableArray<PlaceLink> CachedPlaces(Dictionary<(string, string), ImmutableArray<PlaceLink>> cache, string text, string language)
+    private ImmutableArray<PlaceLink> CachedPlaces(Dictionary<(string, LanguageCode), ImmutableArray<PlaceLink>> cache, string text, LanguageCode language)
     {
         if (!cache.TryGetValue((text, language), out var found))
             cache[(text, language)] = found = lexicon.Places(text, language);
@@ -160,7 +161,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         Math.Log10(Math.Max(1, p.Population)) + (ownName ? 1 : 0) +
         (evidenceTotal == 0 ? 0 : 3.0 * evidence.GetValueOrDefault(p.Country) / evidenceTotal);
 
-    private string Key(string name, string language) => lexicon.Key(name, language);
+    private string Key(string name, LanguageCode language) => lexicon.Key(name, language);
 
     private void GroupPlaces(ImmutableArray<Mention> mentions, string[] keys, ImmutableArray<PlaceLink>[] places, bool[] held, List<Group> groups)
     {
@@ -218,7 +219,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups)
     {
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
-        var full = new List<(Group Group, string First, string Last, string Language, string Surname)>();
+        var full = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname)>();
         var single = new List<int>();
         for (int i = 0; i < mentions.Length; i++)
         {
@@ -234,7 +235,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname));
         }
 
-        var lone = new List<(Group Group, string Name, string Language)>();
+        var lone = new List<(Group Group, string Name, LanguageCode Language)>();
         var loneByKey = new Dictionary<string, Group>(StringComparer.Ordinal);
         foreach (int i in single)
         {

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing;
 
@@ -9,20 +10,20 @@ namespace SwitchTag.Indexing;
 /// grouping is testable without the shipped files; the name-list members default to "nothing known".</summary>
 public interface IHeadingLexicon
 {
-    string Key(string name, string language);
+    string Key(string name, LanguageCode language);
 
     /// <summary>Every gazetteer place the name may denote; empty when the gazetteer does not know it.</summary>
-    ImmutableArray<PlaceLink> Places(string name, string language);
+    ImmutableArray<PlaceLink> Places(string name, LanguageCode language);
 
     /// <summary>Whether a word is a listed first name of some language.</summary>
     bool IsFirstName(string word) => false;
 
     /// <summary>A surname's spelling key: equal for Szwarc and Schwarz, Feigl and Feigel.</summary>
-    string SurnameKey(string word, string language) => Key(word, language);
+    string SurnameKey(string word, LanguageCode language) => Key(word, language);
 
     /// <summary>Whether two given names are one (equal keys), or diminutives of one full name (Irena /
     /// Irenko, Hanna / Hanka): certain evidence for a merge within one interview.</summary>
-    bool SameGivenName(string a, string languageA, string b, string languageB) => Key(a, languageA) == Key(b, languageB);
+    bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) => Key(a, languageA) == Key(b, languageB);
 
     /// <summary>Whether two given names are listed cross-language equivalents (Stanisław / Stanley):
     /// probable, not certain.</summary>

@@ -4,6 +4,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing.Decisions;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing;
 
@@ -14,7 +15,7 @@ namespace SwitchTag.Indexing;
 public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decision> decisions = default,
     double reviewBelow = HeadingBuilder.DefaultReviewBelow, double checkLanguageBelow = 0) : IIndexBuilder
 {
-    public InterviewIndex Build(Transcript transcript, ImmutableArray<Turn> turns, string mainLanguage,
+    public InterviewIndex Build(Transcript transcript, ImmutableArray<Turn> turns, LanguageCode mainLanguage,
         ImmutableArray<ImmutableArray<LanguageSpan>> spans, ImmutableArray<Mention> mentions)
     {
         var diagnostics = ImmutableArray.CreateBuilder<Diagnostic>();

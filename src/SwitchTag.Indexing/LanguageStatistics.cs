@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing;
 
@@ -12,8 +13,8 @@ public static class LanguageStatistics
     public static ImmutableArray<LanguageShare> Compute(
         ImmutableArray<Turn> turns, ImmutableArray<ImmutableArray<Timed<LanguageSpan>>> spans)
     {
-        var seconds = new Dictionary<string, long>(StringComparer.Ordinal);
-        var words = new Dictionary<string, int>(StringComparer.Ordinal);
+        var seconds = new Dictionary<LanguageCode, long>();
+        var words = new Dictionary<LanguageCode, int>();
         for (int t = 0; t < turns.Length && t < spans.Length; t++)
         {
             foreach (var timed in spans[t])
@@ -25,7 +26,7 @@ public static class LanguageStatistics
         }
         return seconds.Keys
             .Select(l => new LanguageShare(l, new Timecode(seconds[l]).TotalSeconds, words[l]))
-            .OrderByDescending(s => s.Seconds).ThenBy(s => s.Language, StringComparer.Ordinal)
+            .OrderByDescending(s => s.Seconds).ThenBy(s => s.Language)
             .ToImmutableArray();
     }
 }

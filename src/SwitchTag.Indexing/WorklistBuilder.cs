@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing;
 
@@ -15,7 +16,7 @@ public static class WorklistBuilder
     public static ImmutableArray<WorklistItem> Build(
         ImmutableArray<Turn> turns,
         ImmutableArray<ImmutableArray<LanguageSpan>> spans,
-        string mainLanguage,
+        LanguageCode mainLanguage,
         TimeAligner aligner,
         double checkBelow = 0)
     {
@@ -44,8 +45,8 @@ public static class WorklistBuilder
         return items.ToImmutable();
     }
 
-    public static bool IsForeign(string language, string mainLanguage) =>
-        language != MainLanguage.Undetermined && !string.Equals(language, mainLanguage, StringComparison.Ordinal);
+    public static bool IsForeign(LanguageCode language, LanguageCode mainLanguage) =>
+        !language.IsUndetermined && language != mainLanguage;
 
     /// <summary>[start, end) cut at the turn's cue boundaries, each piece trimmed of spaces (spans
     /// carry the spaces after their last word), pieces holding no word left out.</summary>

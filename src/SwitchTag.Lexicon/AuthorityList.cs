@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Lexicon;
 
@@ -95,7 +96,7 @@ public sealed class AuthorityList : INameLexicon
     /// in text order. Words inflect by the rules of <paramref name="language"/>; for a language
     /// without rules (en, und) folded equality is tried first and every rule only where that finds
     /// nothing. A one-word entry needs a capitalised word, so "Rose" does not match "rose".</summary>
-    public ImmutableArray<NameMatch> Find(string text, string language)
+    public ImmutableArray<NameMatch> Find(string text, LanguageCode language)
     {
         ArgumentNullException.ThrowIfNull(text);
         if (Entries.IsEmpty || text.Length == 0) return [];

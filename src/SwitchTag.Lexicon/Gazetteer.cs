@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Lexicon;
 
@@ -87,12 +88,12 @@ public sealed class Gazetteer : INameLexicon
     /// <summary>Every place one of whose names is <paramref name="name"/> exactly, folded, or as an
     /// inflected form under the rules of <paramref name="language"/> (for a language without rules,
     /// every rule is tried when folded spelling finds nothing). Most populous first.</summary>
-    public IReadOnlyList<GazetteerPlace> Lookup(string name, string language) =>
+    public IReadOnlyList<GazetteerPlace> Lookup(string name, LanguageCode language) =>
         Candidates(name, language).Select(c => c.Place).ToList();
 
     /// <summary>As <see cref="Lookup"/>, with how each place was met: folded matches before
     /// inflected ones would be the reviewer's ranking; this list keeps population order.</summary>
-    public IReadOnlyList<GazetteerCandidate> Candidates(string name, string language)
+    public IReadOnlyList<GazetteerCandidate> Candidates(string name, LanguageCode language)
     {
         if (string.IsNullOrWhiteSpace(name) || _places.Length == 0) return [];
         var words = NameWords.Split(name);
@@ -117,7 +118,7 @@ public sealed class Gazetteer : INameLexicon
     /// capitalised for another reason (<see cref="NameCaution"/>), and a common lower-case word is
     /// skipped at the start of a sentence, or anywhere if it names only villages (&lt; 15,000 people).
     /// Inflection follows <paramref name="language"/> only; no fallback across rules here.</summary>
-    public ImmutableArray<NameMatch> Find(string text, string language)
+    public ImmutableArray<NameMatch> Find(string text, LanguageCode language)
     {
         ArgumentNullException.ThrowIfNull(text);
         if (_places.Length == 0 || text.Length == 0) return [];

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Lexicon;
 
@@ -33,7 +34,7 @@ public static class NameFolding
     /// <summary>Strips one case ending of <paramref name="language"/> (ISO 639-1 or 639-3) from the folded word,
     /// keeping a stem of at least <see cref="StemRules.MinStem"/> letters. Languages without a rule
     /// return the word unchanged.</summary>
-    public static string Stem(string word, string language)
+    public static string Stem(string word, LanguageCode language)
     {
         ArgumentNullException.ThrowIfNull(word);
         var folded = Fold(word);
@@ -42,7 +43,7 @@ public static class NameFolding
 
     /// <summary>Grouping key for a whole name: folded, split into words, every word stemmed,
     /// joined by one space. "Krakowie" and "Kraków" share the key "krakow" in Polish.</summary>
-    public static string Key(string name, string language)
+    public static string Key(string name, LanguageCode language)
     {
         ArgumentNullException.ThrowIfNull(name);
         var words = NameWords.Split(Fold(name));
@@ -53,7 +54,7 @@ public static class NameFolding
     /// form of <paramref name="name"/> (a dictionary form): word by word, one of the form's stems is
     /// the name word or its nominative stem. A language without rules of its own (en, fr, und...)
     /// tries folded equality, then each rule in turn as a fallback (longer stems, no sound changes).</summary>
-    public static bool IsInflectionOf(string form, string name, string language)
+    public static bool IsInflectionOf(string form, string name, LanguageCode language)
     {
         ArgumentNullException.ThrowIfNull(form);
         ArgumentNullException.ThrowIfNull(name);
@@ -68,7 +69,7 @@ public static class NameFolding
 
     /// <summary>Whether two mentions, each in its own language, can be the same name: equal keys, or
     /// either an inflected form of the other ("Anny" in Polish and "Anna" in English).</summary>
-    public static bool SameName(string a, string languageA, string b, string languageB) =>
+    public static bool SameName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
         Key(a, languageA) == Key(b, languageB)
         || IsInflectionOf(a, b, languageA)
         || IsInflectionOf(b, a, languageB);

@@ -1,3 +1,5 @@
+using SwitchTag.Core.Languages;
+
 namespace SwitchTag.Lexicon;
 
 /// <summary>Case endings of one language, written folded (no diacritics), and the sound changes
@@ -20,7 +22,7 @@ public sealed class StemRule
     private readonly Func<string, string, bool> _allows;
 
     public StemRule(
-        string language,
+        LanguageCode language,
         IEnumerable<string> endings,
         IEnumerable<string> nominativeEndings,
         Func<string, IEnumerable<string>>? alternations = null,
@@ -35,7 +37,7 @@ public sealed class StemRule
         _allows = allows ?? ((_, _) => true);
     }
 
-    public string Language { get; }
+    public LanguageCode Language { get; }
 
     public IReadOnlyList<string> Endings => _endings;
 

@@ -19,12 +19,15 @@ public static class StemRules
 
     private static readonly FrozenDictionary<string, StemRule> ByCode = Rules
         .SelectMany(r => r.Profile.Aliases.Prepend(r.Profile.Code).Select(code => (code, r.Rule)))
-        .ToFrozenDictionary(x => x.code, x => x.Rule, StringComparer.Ordinal);
+        .ToFrozenDictionary(x => x.code.Code, x => x.Rule, StringComparer.Ordinal);
 
     /// <summary>Every distinct rule, for the fallback used when a text's language is unknown.</summary>
     public static IReadOnlyList<StemRule> All { get; } = [.. Rules.Select(r => r.Rule)];
 
-    /// <summary>The rule for an ISO 639-1 or 639-3 code (region suffix ignored: "pl-PL"), or null.</summary>
+    /// <summary>The rule for a code or alias, or null.</summary>
+    public static StemRule? For(LanguageCode language) => ByCode.GetValueOrDefault(language.Code);
+
+    /// <summary>The rule for an ISO 639-1 or 639-3 code as people write it (region suffix ignored: "pl-PL"), or null.</summary>
     public static StemRule? For(string? language)
     {
         if (string.IsNullOrWhiteSpace(language)) return null;
@@ -34,7 +37,7 @@ public static class StemRules
         return ByCode.GetValueOrDefault(code.ToLowerInvariant());
     }
 
-    private static StemRule Build(string code, StemmingData data)
+    private static StemRule Build(LanguageCode code, StemmingData data)
     {
         var named = data.Alternations.Select(n => StemOperations.Alternations.TryGetValue(n, out var f) ? f
             : throw new InvalidDataException($"Languages/{code}/stemming.txt: no stem alternation named {n}")).ToArray();

@@ -3,12 +3,13 @@ using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
 using SwitchTag.Output.Report;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output;
 
 /// <summary>What the collection pages keep of one interview: its headings, and for the review page its
 /// mentions with their sentences and the decisions already applied to it (small beside the index).</summary>
-public sealed record CollectionEntry(string Interview, string Folder, string MainLanguage, Duration Duration, ImmutableArray<CollectionHeading> Headings,
+public sealed record CollectionEntry(string Interview, string Folder, LanguageCode MainLanguage, Duration Duration, ImmutableArray<CollectionHeading> Headings,
     ImmutableArray<CollectionMention> Mentions = default, ImmutableArray<Decision> Decisions = default)
 {
     public static CollectionEntry From(InterviewIndex index, string folder)

@@ -3,6 +3,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Indexing;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Pipeline;
 
@@ -13,18 +14,18 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 {
     private readonly NameListSet _lists = lists ?? NameListSet.Empty;
 
-    public string Key(string name, string language) => NameFolding.Key(name, language);
+    public string Key(string name, LanguageCode language) => NameFolding.Key(name, language);
 
-    public ImmutableArray<PlaceLink> Places(string name, string language) =>
+    public ImmutableArray<PlaceLink> Places(string name, LanguageCode language) =>
         gazetteer.Lookup(name, language)
             .Select(p => new PlaceLink(p.GeonameId, p.Name, p.Latitude, p.Longitude, p.Country, p.Population))
             .ToImmutableArray();
 
     public bool IsFirstName(string word) => _lists.Cues.IsFirstName(NameFolding.Fold(word));
 
-    public string SurnameKey(string word, string language) => _lists.Variants.Key(NameFolding.Stem(word, language));
+    public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));
 
-    public bool SameGivenName(string a, string languageA, string b, string languageB) =>
+    public bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
         _lists.Variants.SameGivenName(a, b)
         || _lists.Variants.SameGivenName(NameFolding.Stem(a, languageA), NameFolding.Stem(b, languageB))
         || Key(a, languageA) == Key(b, languageB);

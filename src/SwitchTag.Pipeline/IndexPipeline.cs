@@ -7,6 +7,7 @@ using SwitchTag.Formats;
 using SwitchTag.Indexing;
 using SwitchTag.LanguageId.Interview;
 using SwitchTag.Output;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Pipeline;
 
@@ -19,7 +20,7 @@ public sealed class IndexPipeline(
     INameTagger names,
     IHeadingLexicon lexicon,
     TranscriptFormat? format,
-    string? mainLanguage,
+    LanguageCode? mainLanguage,
     ImmutableArray<Decision> decisions,
     OutputWriters writers)
 {

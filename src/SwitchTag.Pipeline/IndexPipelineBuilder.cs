@@ -15,6 +15,7 @@ using SwitchTag.Tagging.Sources.Cues;
 using SwitchTag.Tagging.Sources.Gazetteer;
 using SwitchTag.Tagging.Sources.Model;
 using SwitchTag.Tagging.Sources.PlaceEvidence;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Pipeline;
 
@@ -139,8 +140,13 @@ public sealed class IndexPipelineBuilder
             segmenter = ShippedModels.LoadLanguageModel(_models, names, out var error);
             if (segmenter is null) return PipelineBuild.Failed(error!.ToString());
         }
-        if (_mainLanguage is not null && !segmenter.Languages.Contains(_mainLanguage, StringComparer.Ordinal))
-            return PipelineBuild.Failed($"--main \"{_mainLanguage}\" is not a supported language code; switchtag langid --languages lists them");
+        LanguageCode? main = null;
+        if (_mainLanguage is not null)
+        {
+            if (!segmenter.Languages.Any(l => l == _mainLanguage))
+                return PipelineBuild.Failed($"--main \"{_mainLanguage}\" is not a supported language code; switchtag langid --languages lists them");
+            main = new LanguageCode(_mainLanguage);
+        }
 
         var tagger = _tagger;
         if (tagger is null)
@@ -163,7 +169,7 @@ public sealed class IndexPipelineBuilder
             tagger = new NameTagger(sources, _precedence, NameTagger.ShippedVetoes(gazetteer, lists));
         }
 
-        var pipeline = new IndexPipeline(_readers, segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer, lists), _format, _mainLanguage, _decisions, Writers);
+        var pipeline = new IndexPipeline(_readers, segmenter, tagger, _lexicon ?? new HeadingLexicon(gazetteer, lists), _format, main, _decisions, Writers);
         return new PipelineBuild(pipeline, null, notes.ToImmutable());
     }
 }

@@ -15,7 +15,7 @@ public static class LanguageIdEvaluation
 
     public static Result Evaluate(ILanguageSegmenter segmenter, string folder)
     {
-        var supported = segmenter.Languages.ToHashSet(StringComparer.Ordinal);
+        var supported = segmenter.Languages.Select(l => l.Code).ToHashSet(StringComparer.Ordinal);
         var scores = new SortedDictionary<string, LanguageScore>(StringComparer.Ordinal);
         var skipped = new List<string>();
         foreach (var file in Directory.GetFiles(folder, "*.txt").Order(StringComparer.Ordinal))

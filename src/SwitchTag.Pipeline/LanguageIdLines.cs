@@ -29,7 +29,7 @@ public static class LanguageIdLines
             using (var w = new Utf8JsonWriter(buffer))
             {
                 w.WriteStartObject();
-                w.WriteString("language", guess.Language);
+                w.WriteString("language", guess.Language.Code);
                 w.WriteNumber("confidence", Math.Round(guess.Confidence, 4));
                 w.WriteStartArray("spans");
                 foreach (var s in spans)
@@ -37,7 +37,7 @@ public static class LanguageIdLines
                     w.WriteStartObject();
                     w.WriteNumber("start", s.CharStart);
                     w.WriteNumber("end", s.CharEnd);
-                    w.WriteString("language", s.Language);
+                    w.WriteString("language", s.Language.Code);
                     w.WriteEndObject();
                 }
                 w.WriteEndArray();

@@ -9,6 +9,7 @@ using SwitchTag.Tagging.Sources;
 using SwitchTag.Tagging.Sources.Authority;
 using SwitchTag.Tagging.Sources.Gazetteer;
 using SwitchTag.Tagging.Sources.Model;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Pipeline;
 
@@ -49,7 +50,7 @@ public static partial class PersonAsPlaceEvaluation
             if (!File.Exists(file)) { error.WriteLine($"switchtag eval ner: {file}: no such file"); rejected++; continue; }
             var sentences = GoldReader.Read(file, problems);
             foreach (var p in problems) error.WriteLine($"switchtag eval ner: {p}");
-            string language = LanguageOf(file);
+            LanguageCode language = LanguageOf(file);
             long gold = 0, plainHits = 0, cascadeHits = 0;
             foreach (var s in sentences)
             {
@@ -78,8 +79,8 @@ public static partial class PersonAsPlaceEvaluation
 
     private static List<Mention> Places(ImmutableArray<Mention> mentions) => mentions.Where(m => m.Label == NameLabel.LOC).ToList();
 
-    private static string LanguageOf(string file) =>
-        FileLanguage().Match(Path.GetFileName(file)) is { Success: true } m ? m.Groups[1].Value : "und";
+    private static LanguageCode LanguageOf(string file) =>
+        FileLanguage().Match(Path.GetFileName(file)) is { Success: true } m ? new LanguageCode(m.Groups[1].Value) : LanguageCode.Undetermined;
 
     [GeneratedRegex(@"(?:^|[-_])([a-z]{2})(?:[-_.]|$)")]
     private static partial Regex FileLanguage();

@@ -3,6 +3,7 @@ using System.Globalization;
 using Microsoft.Data.Sqlite;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Store;
 
@@ -106,7 +107,7 @@ public sealed class CollectionStore : IDisposable
         long id = existing ?? (ScalarOrNull(tx, "SELECT max(id) FROM interviews") ?? 0) + 1;
         Execute(tx, "INSERT INTO interviews VALUES ($id, $p, $f, $n, $fmt, $sha, $mv, $lang, $dur, $at)",
             ("$id", id), ("$p", source), ("$f", folder), ("$n", index.Transcript.Id), ("$fmt", index.Transcript.Source.Format.Name),
-            ("$sha", index.Transcript.Source.Sha256), ("$mv", modelVersions), ("$lang", index.MainLanguage),
+            ("$sha", index.Transcript.Source.Sha256), ("$mv", modelVersions), ("$lang", index.MainLanguage.Code),
             ("$dur", index.Duration.Milliseconds), ("$at", indexedAt.UtcDateTime.ToString("yyyy-MM-ddTHH:mm:ssZ", CultureInfo.InvariantCulture)));
         using (var rows = new InterviewRows(_connection, tx, id)) rows.Write(index, decisions);
         tx.Commit();
@@ -164,7 +165,7 @@ public sealed class CollectionStore : IDisposable
             int turn = r.GetInt32(1);
             if (!turnText.TryGetValue((interview, turn), out var text)) turnText[(interview, turn)] = text = r.GetString(13);
             var mention = new Mention(turn, r.GetInt32(2), r.GetInt32(3), r.GetString(5), Enum.Parse<NameLabel>(r.GetString(6)),
-                r.GetString(7), r.GetDouble(8), new MentionSource(r.GetString(9)));
+                new LanguageCode(r.GetString(7)), r.GetDouble(8), new MentionSource(r.GetString(9)));
             Add(mentions, interview, new StoredMention(new Timecode(r.GetInt64(4)), mention, r.IsDBNull(12) ? null : r.GetString(12),
                 r.IsDBNull(10) ? null : r.GetString(10), r.IsDBNull(11) ? null : r.GetString(11), text));
         });
@@ -174,7 +175,7 @@ public sealed class CollectionStore : IDisposable
         Each("SELECT id, name, folder, main_language, duration_ms FROM interviews ORDER BY folder", r =>
         {
             long id = r.GetInt64(0);
-            interviews.Add(new CollectionInterview(r.GetString(1), r.GetString(2), r.GetString(3), new Timecode(r.GetInt64(4)),
+            interviews.Add(new CollectionInterview(r.GetString(1), r.GetString(2), new LanguageCode(r.GetString(3)), new Timecode(r.GetInt64(4)),
                 headings.TryGetValue(id, out var h) ? h.ToImmutable() : [],
                 mentions.TryGetValue(id, out var m) ? m.ToImmutable() : [],
                 decisions.TryGetValue(id, out var d) ? d.ToImmutable() : []));

@@ -48,7 +48,7 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
             for (int n = 0; n < index.Spans[t].Length; n++)
             {
                 var (s, time) = index.Spans[t][n];
-                Run(span, t, n, s.CharStart, s.CharEnd, time.Start.Milliseconds, time.End.Milliseconds, s.Language, s.Confidence);
+                Run(span, t, n, s.CharStart, s.CharEnd, time.Start.Milliseconds, time.End.Milliseconds, s.Language.Code, s.Confidence);
             }
     }
 
@@ -79,7 +79,7 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
         {
             var (m, time, headingId) = index.Mentions[i];
             Run(mention, i, m.Turn, m.CharStart, m.CharEnd, time.Start.Milliseconds, time.End.Milliseconds, m.Text, m.Label.ToString(),
-                m.Language, m.Confidence, m.Source.Name, headingId, rank.TryGetValue(i, out int r) ? r : null, reasons.GetValueOrDefault(i));
+                m.Language.Code, m.Confidence, m.Source.Name, headingId, rank.TryGetValue(i, out int r) ? r : null, reasons.GetValueOrDefault(i));
         }
     }
 
@@ -89,7 +89,7 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
         for (int n = 0; n < index.Worklist.Length; n++)
         {
             var w = index.Worklist[n];
-            Run(item, n, w.Turn, w.CharStart, w.CharEnd, w.Time.Start.Milliseconds, w.Time.End.Milliseconds, w.Speaker, w.Language, w.Confidence, w.Text);
+            Run(item, n, w.Turn, w.CharStart, w.CharEnd, w.Time.Start.Milliseconds, w.Time.End.Milliseconds, w.Speaker, w.Language.Code, w.Confidence, w.Text);
         }
     }
 
@@ -113,7 +113,7 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
                     string piece = turn.Text[from..to];
                     string terms = SearchTerms.Of(piece);
                     if (terms.Length == 0) continue;
-                    Run(row, "text", null, turn.Index, from, to, span.Language, cueTime.Start.Milliseconds, cueTime.End.Milliseconds, piece, terms);
+                    Run(row, "text", null, turn.Index, from, to, span.Language.Code, cueTime.Start.Milliseconds, cueTime.End.Milliseconds, piece, terms);
                 }
             }
     }

@@ -3,6 +3,7 @@ using System.Text.Encodings.Web;
 using System.Text.Json;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Store;
 
@@ -20,7 +21,7 @@ public sealed record SearchHit(
     NameLabel? Label,
     string Text,
     string Match,
-    string Language,
+    LanguageCode Language,
     int Turn,
     int CharStart,
     int CharEnd,
@@ -45,7 +46,7 @@ public sealed record SearchHit(
             if (Label is { } label) w.WriteString("label", label.ToString()); else w.WriteNull("label");
             w.WriteString("text", Text);
             w.WriteString("match", Match);
-            w.WriteString("language", Language);
+            w.WriteString("language", Language.Code);
             w.WriteNumber("turn", Turn);
             w.WriteNumber("charStart", CharStart);
             w.WriteNumber("charEnd", CharEnd);

@@ -1,5 +1,6 @@
 using System.Text;
 using SwitchTag.Lexicon;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Store;
 
@@ -50,15 +51,15 @@ public static class SearchTerms
     /// <summary>Whether the words of a stored text, from <paramref name="first"/> on, are the query's
     /// words, each the same name or an inflected form of it (as the index groups mentions).
     /// <paramref name="meets"/> remembers each word's answer: a collection repeats its words often.</summary>
-    public static bool MeetsAt(IReadOnlyList<string> words, int first, IReadOnlyList<string> queryWords, string textLanguage,
-        Dictionary<(string, string, int), bool> meets)
+    public static bool MeetsAt(IReadOnlyList<string> words, int first, IReadOnlyList<string> queryWords, LanguageCode textLanguage,
+        Dictionary<(string, LanguageCode, int), bool> meets)
     {
         if (first + queryWords.Count > words.Count) return false;
         for (int i = 0; i < queryWords.Count; i++)
         {
             var key = (Word: words[first + i], textLanguage, i);
             if (!meets.TryGetValue(key, out bool same))
-                meets[key] = same = NameFolding.SameName(key.Word, textLanguage, queryWords[i], "und");
+                meets[key] = same = NameFolding.SameName(key.Word, textLanguage, queryWords[i], LanguageCode.Undetermined);
             if (!same) return false;
         }
         return true;

@@ -2,6 +2,7 @@ using Microsoft.Data.Sqlite;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
 using SwitchTag.Lexicon;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Store;
 
@@ -12,7 +13,7 @@ internal sealed class StoreSearch(SqliteConnection connection)
     private sealed record TurnInfo(string Folder, string? Speaker, string Text);
 
     private readonly Dictionary<(long, int), TurnInfo> _turns = [];
-    private readonly Dictionary<(string, string, int), bool> _meets = [];
+    private readonly Dictionary<(string, LanguageCode, int), bool> _meets = [];
 
     public IReadOnlyList<SearchHit> Run(SearchQuery query)
     {
@@ -32,13 +33,13 @@ internal sealed class StoreSearch(SqliteConnection connection)
                 for (int i = 0; i < terms.Length; i++)
                 {
                     if (!firstPrefixes.Any(p => terms[i].StartsWith(p, StringComparison.Ordinal))) continue;
-                    if (!SearchTerms.MeetsAt(terms, i, words, row.Language ?? "und", _meets)) continue;
+                    if (!SearchTerms.MeetsAt(terms, i, words, row.Language, _meets)) continue;
                     if (row.Heading is not null) { headings[(row.Interview, row.Heading)] = null; break; }
                     rowWords ??= NameWords.Bounds(row.Text);
                     int start = row.CharStart + rowWords[i].Start, end = row.CharStart + rowWords[i + words.Count - 1].End;
                     var turn = Turn(row.Interview, row.Turn);
                     textHits.Add(new SearchHit(turn.Folder, new TimeRange(new Timecode(row.StartMs), new Timecode(row.EndMs)), turn.Speaker, null,
-                        Sentence.Around(turn.Text, start, end), turn.Text[start..end], row.Language!, row.Turn, start, end, null, null, null, null));
+                        Sentence.Around(turn.Text, start, end), turn.Text[start..end], row.Language, row.Turn, start, end, null, null, null, null));
                 }
             }
 
@@ -59,14 +60,14 @@ internal sealed class StoreSearch(SqliteConnection connection)
         string? speaker = query.Speaker is null ? null : NameFolding.FoldedWords(query.Speaker);
         return hits
             .Where(h => query.Label is null || h.Label == query.Label)
-            .Where(h => query.Language is null || string.Equals(h.Language, query.Language, StringComparison.OrdinalIgnoreCase))
+            .Where(h => query.Language is null || string.Equals(h.Language.Code, query.Language, StringComparison.OrdinalIgnoreCase))
             .Where(h => speaker is null || (h.Speaker is not null && NameFolding.FoldedWords(h.Speaker) == speaker))
             .OrderBy(h => h.Interview, StringComparer.Ordinal)
             .ThenBy(h => h.Time.Start).ThenBy(h => h.Turn).ThenBy(h => h.CharStart).ThenBy(h => h.Label is null)
             .ToList();
     }
 
-    private sealed record Row(long Interview, string? Heading, int Turn, int CharStart, string? Language, long StartMs, long EndMs, string Text, string Terms);
+    private sealed record Row(long Interview, string? Heading, int Turn, int CharStart, LanguageCode Language, long StartMs, long EndMs, string Text, string Terms);
 
     /// <summary>The rows the full-text index matches; for text rows the turn's folder, speaker and text
     /// come along (one query, not one per hit).</summary>
@@ -83,7 +84,7 @@ internal sealed class StoreSearch(SqliteConnection connection)
         while (reader.Read())
         {
             var row = new Row(reader.GetInt64(0), reader.IsDBNull(1) ? null : reader.GetString(1), reader.IsDBNull(2) ? -1 : reader.GetInt32(2),
-                reader.IsDBNull(3) ? 0 : reader.GetInt32(3), reader.IsDBNull(4) ? null : reader.GetString(4),
+                reader.IsDBNull(3) ? 0 : reader.GetInt32(3), reader.IsDBNull(4) ? LanguageCode.Undetermined : new LanguageCode(reader.GetString(4)),
                 reader.IsDBNull(5) ? 0 : reader.GetInt64(5), reader.IsDBNull(6) ? 0 : reader.GetInt64(6), reader.GetString(7), reader.GetString(11));
             if (row.Heading is null)
                 _turns.TryAdd((row.Interview, row.Turn), new TurnInfo(reader.GetString(8), reader.IsDBNull(9) ? null : reader.GetString(9), reader.GetString(10)));
@@ -106,7 +107,7 @@ internal sealed class StoreSearch(SqliteConnection connection)
         }
         var named = placeWords.Count == 0 ? [] : Candidates(placeWords)
             .Where(r => r.Heading is not null)
-            .Where(r => { var w = r.Terms.Split(' '); return w.Length == placeWords.Count && SearchTerms.MeetsAt(w, 0, placeWords, "und", new()); })
+            .Where(r => { var w = r.Terms.Split(' '); return w.Length == placeWords.Count && SearchTerms.MeetsAt(w, 0, placeWords, LanguageCode.Undetermined, new()); })
             .Select(r => (r.Interview, r.Heading!)).ToHashSet();
         var centres = linked.Where(l => named.Contains((l.Interview, l.Heading))).Select(l => (l.Lat, l.Lon)).Distinct().ToList();
         var result = new Dictionary<(long, string), double?>();
@@ -140,7 +141,7 @@ internal sealed class StoreSearch(SqliteConnection connection)
             string folder = reader.GetString(15), text = reader.GetString(17), heading = reader.GetString(19);
             hits.Add(new SearchHit(folder, new TimeRange(new Timecode(reader.GetInt64(3)), new Timecode(reader.GetInt64(4))),
                 reader.IsDBNull(16) ? null : reader.GetString(16), Enum.Parse<NameLabel>(reader.GetString(6)), Sentence.Around(text, start, end),
-                reader.GetString(5), reader.GetString(7), turnIndex, start, end, heading, reader.GetString(8), StoredPlace.Read(reader, 9),
+                reader.GetString(5), new LanguageCode(reader.GetString(7)), turnIndex, start, end, heading, reader.GetString(8), StoredPlace.Read(reader, 9),
                 headings[(reader.GetInt64(18), heading)]));
         }
         return hits;

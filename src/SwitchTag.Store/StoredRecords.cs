@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Store;
 
@@ -15,7 +16,7 @@ public sealed record StoredDecision(string Decision, int Applied);
 
 /// <summary>One interview of the collection, as the collection pages show it: its headings, its
 /// mentions (for the review page) and the text of the reviewer decisions applied to it.</summary>
-public sealed record CollectionInterview(string Name, string Folder, string MainLanguage, Timecode Duration, ImmutableArray<CollectionHeadingUse> Headings,
+public sealed record CollectionInterview(string Name, string Folder, LanguageCode MainLanguage, Timecode Duration, ImmutableArray<CollectionHeadingUse> Headings,
     ImmutableArray<StoredMention> Mentions, ImmutableArray<string> Decisions);
 
 /// <summary>One heading of one interview with the start times of its mentions, in time order, and its variants.</summary>

@@ -28,7 +28,7 @@ public static class NerEvaluation
         return new NerReport(
             ConllScore.Score(pairs.Select(p => p.Pair)),
             Grouped(pairs, l => l.Source),
-            Grouped(pairs, l => l.Language));
+            Grouped(pairs, l => l.Language.Code));
     }
 
     /// <summary>The sentence with every word lower-cased (invariant culture), tags unchanged: how

@@ -1,4 +1,5 @@
 using System.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Tests;
 
@@ -10,7 +11,7 @@ public sealed class BadInputTests(ModelFixture fixture)
     public void EmptyTextIsUndeterminedWithNoSpans()
     {
         var guess = fixture.Segmenter.Identify("");
-        Assert.Equal(("und", 0.0), (guess.Language, guess.Confidence));
+        Assert.Equal((LanguageCode.Undetermined, 0.0), (guess.Language, guess.Confidence));
         Assert.Empty(fixture.Segmenter.Segment("", "en"));
     }
 
@@ -23,7 +24,7 @@ public sealed class BadInputTests(ModelFixture fixture)
     {
         Assert.Equal("und", fixture.Segmenter.Identify(text).Language);
         var spans = fixture.Segmenter.Segment(text, "en");
-        Assert.Equal((0, text.Length, "und"), (spans.Single().CharStart, spans.Single().CharEnd, spans.Single().Language));
+        Assert.Equal((0, text.Length, LanguageCode.Undetermined), (spans.Single().CharStart, spans.Single().CharEnd, spans.Single().Language));
     }
 
     [Fact]

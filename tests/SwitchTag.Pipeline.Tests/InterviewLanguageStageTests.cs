@@ -41,8 +41,8 @@ public sealed class InterviewLanguageStageTests(ModelFixture fixture)
         var whole = fixture.Segmenter.SegmentInterview(index.Turns.Select(t => t.Text).ToList());
         Assert.Equal(whole.Spans.SelectMany(s => s), index.Spans.SelectMany(s => s.Select(t => t.Value)));
         // Both gold languages are in the profile, together holding most of it, Spanish's share near the gold's.
-        Assert.Equal(["en", "es"], index.LanguageProfile.Select(p => p.Language).Where(l => l is "en" or "es").Order());
-        Assert.InRange(index.LanguageProfile.Where(p => p.Language is "en" or "es").Sum(p => p.Share), 0.9, 1.0001);
+        Assert.Equal(["en", "es"], index.LanguageProfile.Select(p => p.Language.Code).Where(l => l is "en" or "es").Order());
+        Assert.InRange(index.LanguageProfile.Where(p => p.Language.Code is "en" or "es").Sum(p => p.Share), 0.9, 1.0001);
         Assert.InRange(index.LanguageProfile.Single(p => p.Language == "es").Share, SpanishShare(conversation) - 0.15, SpanishShare(conversation) + 0.15);
     }
 

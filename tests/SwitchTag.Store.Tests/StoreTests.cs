@@ -105,7 +105,7 @@ public class StoreTests
         store.Save(Interviews.Small(), "anna-nowak", "m1", [], DateTimeOffset.UnixEpoch);
         var hit = Assert.Single(store.Search(new SearchQuery("dziecko")));
         Assert.Null(hit.Label);
-        Assert.Equal(("Anna Nowak", "pl", 11.0, 16.0), (hit.Speaker, hit.Language, hit.Time.Start.TotalSeconds, hit.Time.End.TotalSeconds));
+        Assert.Equal(("Anna Nowak", "pl", 11.0, 16.0), (hit.Speaker, hit.Language.Code, hit.Time.Start.TotalSeconds, hit.Time.End.TotalSeconds));
         Assert.Equal("Mama mówiła: dziecko.", hit.Text);
         Assert.Empty(store.Search(new SearchQuery("dziecko", Label: NameLabel.PER)));
         Assert.Empty(store.Search(new SearchQuery("dziecko", Language: "en")));

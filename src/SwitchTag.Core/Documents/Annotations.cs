@@ -1,11 +1,12 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Time;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Core.Documents;
 
 /// <summary>A stretch of a turn's text in one language. Language is an ISO 639-1 code where one
 /// exists, else ISO 639-3, or <c>und</c> when nothing is confident.</summary>
-public sealed record LanguageSpan(int CharStart, int CharEnd, string Language, double Confidence);
+public sealed record LanguageSpan(int CharStart, int CharEnd, LanguageCode Language, double Confidence);
 
 public enum NameLabel { PER, LOC, ORG }
 
@@ -34,7 +35,7 @@ public sealed record Mention(
     int CharEnd,
     string Text,
     NameLabel Label,
-    string Language,
+    LanguageCode Language,
     double Confidence,
     MentionSource Source);
 

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Time;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Core.Documents;
 
@@ -39,7 +40,7 @@ public sealed record IndexedMention(Mention Mention, TimeRange Time, string? Hea
 public sealed record WorklistItem(
     TimeRange Time,
     string? Speaker,
-    string Language,
+    LanguageCode Language,
     double Confidence,
     string Text,
     int Turn,
@@ -49,11 +50,11 @@ public sealed record WorklistItem(
     bool Check = false);
 
 /// <summary>How much of the interview is in one language: seconds of recording and words.</summary>
-public sealed record LanguageShare(string Language, double Seconds, int Words);
+public sealed record LanguageShare(LanguageCode Language, double Seconds, int Words);
 
 /// <summary>A language span outside the interview's main language (<c>und</c> excluded), offsets into
 /// its turn's text: what the annotated transcript marks.</summary>
-public sealed record ForeignSpan(int Turn, int CharStart, int CharEnd, string Language);
+public sealed record ForeignSpan(int Turn, int CharStart, int CharEnd, LanguageCode Language);
 
 /// <summary>A mention held back from the index for a person to decide.</summary>
 public sealed record ReviewItem(int Mention, string Reason);
@@ -65,7 +66,7 @@ public sealed record ReviewItem(int Mention, string Reason);
 /// <param name="Media">Where the recording is (URL or relative path), so a report can open it at a time; null when not given.</param>
 public sealed record InterviewIndex(
     Transcript Transcript,
-    string MainLanguage,
+    LanguageCode MainLanguage,
     Duration Duration,
     ImmutableArray<Turn> Turns,
     ImmutableArray<ImmutableArray<Timed<LanguageSpan>>> Spans,

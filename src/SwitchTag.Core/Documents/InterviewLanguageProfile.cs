@@ -1,9 +1,10 @@
 using System.Collections.Immutable;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Core.Documents;
 
 /// <summary>One language and its share (0..1) of something: the interview's words, or a side's talk.</summary>
-public sealed record LanguageFraction(string Language, double Share);
+public sealed record LanguageFraction(LanguageCode Language, double Share);
 
 /// <summary>How an interview's main language was chosen, for index.json.</summary>
 /// <param name="Basis">"given" (--main), "narrator-talk", "interviewer-tie-break", "all-talk",
@@ -27,5 +28,5 @@ public sealed record MainLanguageDecision(
 public sealed record InterviewLanguageResult(
     ImmutableArray<LanguageFraction> Profile,
     ImmutableArray<ImmutableArray<LanguageSpan>> Spans,
-    string MainLanguage,
+    LanguageCode MainLanguage,
     MainLanguageDecision MainBasis);

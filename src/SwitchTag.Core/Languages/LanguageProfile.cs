@@ -7,8 +7,8 @@ namespace SwitchTag.Core.Languages;
 /// names), <c>titles.txt</c> (words before a person's name), <c>particles.txt</c> (lower-case words
 /// inside names) and <c>stemming.txt</c> (case endings). Every file is optional.</summary>
 public sealed record LanguageProfile(
-    string Code,
-    ImmutableArray<string> Aliases,
+    LanguageCode Code,
+    ImmutableArray<LanguageCode> Aliases,
     ImmutableArray<string> StopWords,
     ImmutableArray<string> Titles,
     ImmutableArray<string> NameParticles,

@@ -16,7 +16,7 @@ public sealed class LanguageProfiles
         var byCode = new Dictionary<string, LanguageProfile>(StringComparer.Ordinal);
         foreach (var p in all)
             foreach (var code in p.Aliases.Prepend(p.Code))
-                if (!byCode.TryAdd(code, p)) throw new InvalidDataException($"language code {code} is claimed by two profiles");
+                if (!byCode.TryAdd(code.Code, p)) throw new InvalidDataException($"language code {code} is claimed by two profiles");
         _byCode = byCode.ToFrozenDictionary(StringComparer.Ordinal);
         StopWords = all.SelectMany(p => p.StopWords.Concat(p.Titles)).ToFrozenSet(StringComparer.Ordinal);
         NameParticles = all.SelectMany(p => p.NameParticles).ToFrozenSet(StringComparer.Ordinal);
@@ -34,7 +34,11 @@ public sealed class LanguageProfiles
     /// <summary>Name particles of every language.</summary>
     public FrozenSet<string> NameParticles { get; }
 
-    /// <summary>The profile of an ISO 639-1 or 639-3 code or alias (case and region suffix ignored: "pl-PL"), or null.</summary>
+    /// <summary>The profile of a code or alias, or null.</summary>
+    public LanguageProfile? For(LanguageCode language) => _byCode.GetValueOrDefault(language.Code);
+
+    /// <summary>The profile of an ISO 639-1 or 639-3 code or alias as people write it (case and
+    /// region suffix ignored: "pl-PL"), or null.</summary>
     public LanguageProfile? For(string? language)
     {
         if (string.IsNullOrWhiteSpace(language)) return null;

@@ -8,7 +8,7 @@ namespace SwitchTag.Core.Languages;
 internal static class ProfileText
 {
     public static LanguageProfile Parse(string code, string aliases, string stopWords, string titles, string particles, string stemming) =>
-        new(code, Words(aliases), Words(stopWords), Words(titles), Words(particles), stemming.Length == 0 ? null : Stemming(code, stemming));
+        new(new LanguageCode(code), [.. Words(aliases).Select(a => new LanguageCode(a))], Words(stopWords), Words(titles), Words(particles), stemming.Length == 0 ? null : Stemming(code, stemming));
 
     private static IEnumerable<string> Lines(string text) =>
         text.Split('\n').Select(l => l.Trim()).Where(l => l.Length > 0 && !l.StartsWith('#'));

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Core.Pipeline;
 
@@ -8,7 +9,7 @@ namespace SwitchTag.Core.Pipeline;
 /// so short turns are judged with the whole interview's evidence), names, index.</summary>
 public sealed class InterviewPipeline(ILanguageSegmenter languages, INameTagger names, IIndexBuilder index)
 {
-    public InterviewIndex Run(Transcript transcript, string? mainLanguage = null)
+    public InterviewIndex Run(Transcript transcript, LanguageCode? mainLanguage = null)
     {
         var turns = TurnBuilder.Build(transcript);
         var result = languages.SegmentInterview(turns, mainLanguage);
@@ -27,17 +28,15 @@ public sealed class InterviewPipeline(ILanguageSegmenter languages, INameTagger 
 /// <summary>The interview's main language: the language holding most characters of confident talk.</summary>
 public static class MainLanguage
 {
-    public const string Undetermined = "und";
-
-    public static string Detect(ILanguageSegmenter languages, ImmutableArray<Turn> turns)
+    public static LanguageCode Detect(ILanguageSegmenter languages, ImmutableArray<Turn> turns)
     {
-        var weight = new Dictionary<string, double>(StringComparer.Ordinal);
+        var weight = new Dictionary<LanguageCode, double>();
         foreach (var turn in turns)
         {
             var guess = languages.Identify(turn.Text);
-            if (guess.Language == Undetermined) continue;
+            if (guess.Language.IsUndetermined) continue;
             weight[guess.Language] = weight.GetValueOrDefault(guess.Language) + turn.Text.Length * guess.Confidence;
         }
-        return weight.Count == 0 ? Undetermined : weight.MaxBy(kv => kv.Value).Key;
+        return weight.Count == 0 ? LanguageCode.Undetermined : weight.MaxBy(kv => kv.Value).Key;
     }
 }

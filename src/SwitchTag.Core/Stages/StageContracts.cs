@@ -1,32 +1,33 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Pipeline;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Core.Stages;
 
 /// <summary>A guess of one language for a whole stretch.</summary>
-public sealed record LanguageGuess(string Language, double Confidence);
+public sealed record LanguageGuess(LanguageCode Language, double Confidence);
 
 /// <summary>The langid stage: whole-stretch identification and switch segmentation inside a turn.</summary>
 public interface ILanguageSegmenter
 {
-    IReadOnlyList<string> Languages { get; }
+    IReadOnlyList<LanguageCode> Languages { get; }
 
     LanguageGuess Identify(ReadOnlySpan<char> text);
 
     /// <summary>Spans covering the words of <paramref name="text"/>, offsets into it; the main
     /// language is the prior the segmentation leans towards.</summary>
-    ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage);
+    ImmutableArray<LanguageSpan> Segment(string text, LanguageCode mainLanguage);
 
     /// <summary>All turns of one interview at once, and its main language (<paramref name="mainLanguage"/>
     /// when given). This default segments turn by turn around the language with most confident
     /// characters and knows no profile; a stage that can judge the interview as a whole overrides it.</summary>
-    InterviewLanguageResult SegmentInterview(ImmutableArray<Turn> turns, string? mainLanguage)
+    InterviewLanguageResult SegmentInterview(ImmutableArray<Turn> turns, LanguageCode? mainLanguage)
     {
-        string main = mainLanguage ?? MainLanguage.Detect(this, turns);
+        LanguageCode main = mainLanguage ?? MainLanguage.Detect(this, turns);
         var spans = turns.Select(t => Segment(t.Text, main)).ToImmutableArray();
         var basis = mainLanguage is not null ? MainLanguageDecision.Given
-            : new MainLanguageDecision(main == MainLanguage.Undetermined ? "none" : "largest-share", "characters", [], [], []);
+            : new MainLanguageDecision(main.IsUndetermined ? "none" : "largest-share", "characters", [], [], []);
         return new InterviewLanguageResult([], spans, main, basis);
     }
 }
@@ -50,7 +51,7 @@ public interface IIndexBuilder
     InterviewIndex Build(
         Transcript transcript,
         ImmutableArray<Turn> turns,
-        string mainLanguage,
+        LanguageCode mainLanguage,
         ImmutableArray<ImmutableArray<LanguageSpan>> spans,
         ImmutableArray<Mention> mentions);
 }

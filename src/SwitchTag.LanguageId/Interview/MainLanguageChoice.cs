@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Interview;
 
@@ -24,7 +25,7 @@ public enum MainLanguageBasis
 /// <param name="InterviewerShares">share of the interviewers' talk per language, largest first</param>
 /// <param name="Narrators">speaker labels counted as narrators (empty when speakers are unknown)</param>
 public sealed record MainLanguageChoice(
-    string Language,
+    LanguageCode Language,
     MainLanguageBasis Basis,
     string Unit,
     ImmutableArray<SpokenLanguage> NarratorShares,

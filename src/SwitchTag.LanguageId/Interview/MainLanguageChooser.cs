@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Interview;
 
@@ -16,29 +17,27 @@ public static class MainLanguageChooser
     /// <summary>Two languages within 10 points of the narrators' talk are a tie.</summary>
     public const double TieMargin = 0.10;
 
-    public const string Undetermined = "und";
-
     public static MainLanguageChoice Choose(IReadOnlyList<Turn> turns, IReadOnlyList<ImmutableArray<LanguageSpan>> spans,
         Func<string?, bool>? isInterviewer = null)
     {
         isInterviewer ??= InterviewerLabels.IsInterviewer;
-        bool timed = Enumerable.Range(0, turns.Count).Where(t => spans[t].Any(s => s.Language != Undetermined))
+        bool timed = Enumerable.Range(0, turns.Count).Where(t => spans[t].Any(s => s.Language != LanguageCode.Undetermined))
             .All(t => turns[t].Time.Duration.Milliseconds > 0);
-        var talk = new Dictionary<string, Dictionary<string, double>>(StringComparer.Ordinal);
+        var talk = new Dictionary<string, Dictionary<LanguageCode, double>>(StringComparer.Ordinal);
         for (int t = 0; t < turns.Count; t++)
         {
             var turn = turns[t];
             int chars = spans[t].Sum(s => s.CharEnd - s.CharStart);
-            if (chars == 0 || spans[t].All(s => s.Language == Undetermined)) continue;
+            if (chars == 0 || spans[t].All(s => s.Language == LanguageCode.Undetermined)) continue;
             double amount = timed ? turn.Time.Duration.TotalSeconds : chars;
             string speaker = turn.SpeakerLabel ?? turn.Speaker ?? "";
-            if (!talk.TryGetValue(speaker, out var bySpeaker)) talk[speaker] = bySpeaker = new(StringComparer.Ordinal);
+            if (!talk.TryGetValue(speaker, out var bySpeaker)) talk[speaker] = bySpeaker = [];
             foreach (var s in spans[t])
-                if (s.Language != Undetermined)
+                if (s.Language != LanguageCode.Undetermined)
                     bySpeaker[s.Language] = bySpeaker.GetValueOrDefault(s.Language) + amount * (s.CharEnd - s.CharStart) / chars;
         }
         string unit = timed ? "seconds" : "characters";
-        if (talk.Count == 0) return new MainLanguageChoice(Undetermined, MainLanguageBasis.None, unit, [], [], []);
+        if (talk.Count == 0) return new MainLanguageChoice(LanguageCode.Undetermined, MainLanguageBasis.None, unit, [], [], []);
 
         var labelled = talk.Keys.Where(k => k.Length > 0).ToList();
         var interviewers = labelled.Where(k => isInterviewer(k)).ToHashSet(StringComparer.Ordinal);
@@ -55,9 +54,9 @@ public static class MainLanguageChooser
         bool allTalk = narrators.Count == 0;
         var narratorShares = Shares(talk, allTalk ? talk.Keys : narrators);
         var interviewerShares = Shares(talk, interviewers);
-        if (narratorShares.IsEmpty) return new MainLanguageChoice(Undetermined, MainLanguageBasis.None, unit, [], interviewerShares, []);
+        if (narratorShares.IsEmpty) return new MainLanguageChoice(LanguageCode.Undetermined, MainLanguageBasis.None, unit, [], interviewerShares, []);
         var basis = allTalk ? MainLanguageBasis.AllTalk : MainLanguageBasis.NarratorTalk;
-        string main = narratorShares[0].Language;
+        LanguageCode main = narratorShares[0].Language;
         if (narratorShares.Length > 1 && narratorShares[0].Share - narratorShares[1].Share < TieMargin)
         {
             double first = ShareOf(interviewerShares, narratorShares[0].Language);
@@ -73,17 +72,17 @@ public static class MainLanguageChooser
             narrators.Order(StringComparer.Ordinal).ToImmutableArray());
     }
 
-    private static double ShareOf(ImmutableArray<SpokenLanguage> shares, string language) =>
+    private static double ShareOf(ImmutableArray<SpokenLanguage> shares, LanguageCode language) =>
         shares.FirstOrDefault(s => s.Language == language)?.Share ?? 0;
 
-    private static ImmutableArray<SpokenLanguage> Shares(Dictionary<string, Dictionary<string, double>> talk, IEnumerable<string> speakers)
+    private static ImmutableArray<SpokenLanguage> Shares(Dictionary<string, Dictionary<LanguageCode, double>> talk, IEnumerable<string> speakers)
     {
-        var sum = new Dictionary<string, double>(StringComparer.Ordinal);
+        var sum = new Dictionary<LanguageCode, double>();
         foreach (var speaker in speakers)
             foreach (var (language, amount) in talk[speaker]) sum[language] = sum.GetValueOrDefault(language) + amount;
         double total = sum.Values.Sum();
         if (total <= 0) return [];
-        return sum.OrderByDescending(kv => kv.Value).ThenBy(kv => kv.Key, StringComparer.Ordinal)
+        return sum.OrderByDescending(kv => kv.Value).ThenBy(kv => kv.Key)
             .Select(kv => new SpokenLanguage(kv.Key, Math.Round(kv.Value / total, 4))).ToImmutableArray();
     }
 }

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.LanguageId.Interview;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Segmentation;
 
@@ -13,12 +14,12 @@ public sealed partial class CodeSwitchSegmenter
     /// <see cref="MainLanguageChooser"/>'s (narrators' talk, interviewer as tie-breaker). The
     /// profile reported is the languages that shaped decoding (share at least
     /// <see cref="InterviewParameters.MinShare"/>).</summary>
-    public InterviewLanguageResult SegmentInterview(ImmutableArray<Turn> turns, string? mainLanguage)
+    public InterviewLanguageResult SegmentInterview(ImmutableArray<Turn> turns, LanguageCode? mainLanguage)
     {
         var segmentation = SegmentInterview(turns.Select(t => t.Text).ToArray());
         var profile = Fractions(segmentation.Profile.Spoken);
-        if (mainLanguage is not null)
-            return new InterviewLanguageResult(profile, segmentation.Spans, mainLanguage, MainLanguageDecision.Given);
+        if (mainLanguage is { } given)
+            return new InterviewLanguageResult(profile, segmentation.Spans, given, MainLanguageDecision.Given);
         var choice = MainLanguageChooser.Choose(turns, segmentation.Spans);
         return new InterviewLanguageResult(profile, segmentation.Spans, choice.Language,
             new MainLanguageDecision(choice.BasisName, choice.Unit, Fractions(choice.NarratorShares), Fractions(choice.InterviewerShares), choice.Narrators));

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.LanguageId.Interview;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Segmentation;
 
@@ -48,11 +49,11 @@ public sealed partial class CodeSwitchSegmenter
         {
             string text = turns[t] ?? "";
             var ev = evidence[t];
-            if (text.Length == 0) { spans.Add([]); guesses.Add(new LanguageGuess(Undetermined, 0)); continue; }
+            if (text.Length == 0) { spans.Add([]); guesses.Add(new LanguageGuess(LanguageCode.Undetermined, 0)); continue; }
             if (ev.Count == 0)
             {
-                spans.Add([new LanguageSpan(0, text.Length, Undetermined, 0)]);
-                guesses.Add(new LanguageGuess(Undetermined, 0));
+                spans.Add([new LanguageSpan(0, text.Length, LanguageCode.Undetermined, 0)]);
+                guesses.Add(new LanguageGuess(LanguageCode.Undetermined, 0));
                 continue;
             }
             if (!startPriors.TryGetValue(previousCode, out var start))
@@ -65,7 +66,7 @@ public sealed partial class CodeSwitchSegmenter
             var posterior = CodePosterior(ev, 0, ev.Count, logPrior);
             int best = ArgMax(posterior);
             double confidence = p.Calibration.Apply(posterior[best], WordsIn(ev, 0, text.Length), ShareOf(profile, _codes[best], p));
-            guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(confidence, 4)));
+            guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(LanguageCode.Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(confidence, 4)));
             previousCode = _codeOfClass[labels[^1]];
         }
         return new InterviewSegmentation(profile, guesses.MoveToImmutable(), spans.MoveToImmutable());
@@ -86,7 +87,7 @@ public sealed partial class CodeSwitchSegmenter
 
     /// <summary>A language's share of the interview as the calibration sees it (outside the profile:
     /// <see cref="InterviewParameters.OutsideShare"/>).</summary>
-    public static double ShareOf(InterviewLanguages profile, string language, InterviewParameters p) =>
+    public static double ShareOf(InterviewLanguages profile, LanguageCode language, InterviewParameters p) =>
         profile.Spoken.FirstOrDefault(s => s.Language == language)?.Share ?? p.OutsideShare;
 
     /// <summary>A one-word island whose word the surrounding language also uses as a word of its own
@@ -170,7 +171,7 @@ public sealed partial class CodeSwitchSegmenter
         var byCode = new double[_codes.Length];
         for (int c = 0; c < classShare.Length; c++) byCode[_codeOfClass[c]] += classShare[c];
         var shares = Enumerable.Range(0, _codes.Length).Where(i => byCode[i] >= ReportedShare)
-            .OrderByDescending(i => byCode[i]).ThenBy(i => _codes[i], StringComparer.Ordinal)
+            .OrderByDescending(i => byCode[i]).ThenBy(i => _codes[i])
             .Select(i => new SpokenLanguage(_codes[i], Math.Round(byCode[i], 4))).ToImmutableArray();
         return new InterviewLanguages(shares.Where(s => s.Share >= p.MinShare).ToImmutableArray(), shares);
     }

@@ -5,6 +5,7 @@ using SwitchTag.Core.Text;
 using SwitchTag.LanguageId.Model;
 using SwitchTag.LanguageId.Profiles;
 using SwitchTag.LanguageId.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Segmentation;
 
@@ -18,8 +19,6 @@ namespace SwitchTag.LanguageId.Segmentation;
 /// <see cref="SegmentInterview"/> decides each turn within the languages of the whole interview.</summary>
 public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 {
-    public const string Undetermined = "und";
-
     /// <summary>Below this probability a stretch is reported as und.</summary>
     public const float MinConfidence = 0.2f;
 
@@ -28,7 +27,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 
     private readonly NgramLanguageModel _model;
     private readonly INameLexicon? _names;
-    private readonly string[] _codes;
+    private readonly LanguageCode[] _codes;
     private readonly int[] _codeOfClass;
     private readonly NeutralWords _neutral;
 
@@ -37,8 +36,8 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         _model = model;
         _names = names;
         _neutral = neutral ?? NeutralWords.Default;
-        _codes = model.ClassCodes.Distinct().Order(StringComparer.Ordinal).ToArray();
-        _codeOfClass = model.ClassCodes.Select(c => Array.IndexOf(_codes, c)).ToArray();
+        _codes = model.ClassCodes.Distinct().Order(StringComparer.Ordinal).Select(c => new LanguageCode(c)).ToArray();
+        _codeOfClass = model.ClassCodes.Select(c => Array.IndexOf(_codes, new LanguageCode(c))).ToArray();
         Languages = _codes;
     }
 
@@ -47,7 +46,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 
     public NgramLanguageModel Model => _model;
 
-    public IReadOnlyList<string> Languages { get; }
+    public IReadOnlyList<LanguageCode> Languages { get; }
 
     /// <summary>Words that look like names (capitalised mid-sentence, all capitals, or known to the
     /// lexicon) are left out when at least two other words remain, so "born in Szczebrzeszyn" stays
@@ -71,7 +70,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         if (words < 2 && names > 0)
         {
             if (words == 0 && names == 1 && _names is not null && _names.IsKnownName(text[tokens[lastName].Start..tokens[lastName].End]))
-                return new LanguageGuess(Undetermined, 0);
+                return new LanguageGuess(LanguageCode.Undetermined, 0);
             acc.Clear();
             foreach (var token in tokens)
             {
@@ -80,20 +79,20 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
                 _model.AddWord(buffer[..len], acc);
             }
         }
-        if (acc.FeatureHits == 0) return new LanguageGuess(Undetermined, 0);
+        if (acc.FeatureHits == 0) return new LanguageGuess(LanguageCode.Undetermined, 0);
         var (code, p) = Best(acc);
-        return p < MinConfidence ? new LanguageGuess(Undetermined, 0) : new LanguageGuess(_codes[code], p);
+        return p < MinConfidence ? new LanguageGuess(LanguageCode.Undetermined, 0) : new LanguageGuess(_codes[code], p);
     }
 
-    public ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage) =>
+    public ImmutableArray<LanguageSpan> Segment(string text, LanguageCode mainLanguage) =>
         Segment(text, mainLanguage, _model.Parameters);
 
     /// <summary>Segment with explicit decoder parameters (the trainer uses this to fit them).</summary>
-    public ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage, ModelParameters parameters)
+    public ImmutableArray<LanguageSpan> Segment(string text, LanguageCode mainLanguage, ModelParameters parameters)
     {
         if (string.IsNullOrEmpty(text)) return [];
         var evidence = CollectEvidence(text, parameters, null);
-        if (evidence.Count == 0) return [new LanguageSpan(0, text.Length, Undetermined, 0)];
+        if (evidence.Count == 0) return [new LanguageSpan(0, text.Length, LanguageCode.Undetermined, 0)];
         int classes = _model.ClassCount;
         var start = new float[classes];
         var enter = new float[classes];

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Training;
 
@@ -46,8 +47,8 @@ public sealed class SwitchScore
 
     private static string LanguageAt(ImmutableArray<LanguageSpan> spans, int offset)
     {
-        foreach (var s in spans) if (offset >= s.CharStart && offset < s.CharEnd) return s.Language;
-        return "und";
+        foreach (var s in spans) if (offset >= s.CharStart && offset < s.CharEnd) return s.Language.Code;
+        return LanguageCode.Undetermined.Code;
     }
 
     private static List<int> SwitchPoints(string[] labels)

@@ -3,6 +3,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Text;
 using SwitchTag.Output.Text;
 using SwitchTag.Core.Time;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.AnnotatedVtt;
 
@@ -26,7 +27,7 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
         var sb = new StringBuilder("WEBVTT\n\nNOTE\nMachine annotation of ");
         sb.Append(Escape(Path.GetFileName(index.Transcript.Source.Path)))
           .Append(": <lang> marks stretches outside the main language (")
-          .Append(index.MainLanguage).Append(").\n\n");
+          .Append(index.MainLanguage.Code).Append(").\n\n");
         var cues = index.Transcript.Cues;
         for (int c = 0; c < cues.Length; c++)
         {
@@ -47,9 +48,9 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
     /// <summary>The foreign stretches inside one cue of a turn. A turn's stretches are in text order and
     /// do not overlap, so the first one that can reach the cue is found by binary search: a turn of one
     /// speaker may hold hundreds of thousands of cues and as many stretches.</summary>
-    private static List<(int Start, int End, string Language)> CueSpans(ForeignSpan[] spans, TurnCue part)
+    private static List<(int Start, int End, LanguageCode Language)> CueSpans(ForeignSpan[] spans, TurnCue part)
     {
-        var result = new List<(int, int, string)>();
+        var result = new List<(int, int, LanguageCode)>();
         int lo = 0, hi = spans.Length;
         while (lo < hi)
         {
@@ -69,7 +70,7 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
     // Tags go in at char positions of the cue text: at one position, closing tags, then the word
     // timestamp, then opening tags, so tags nest properly. Spans come in text order and do not
     // overlap, so one pass over the cut points places them (a 10 MB cue may hold 100k spans).
-    private static void AppendText(StringBuilder sb, Cue cue, List<(int Start, int End, string Language)> spans)
+    private static void AppendText(StringBuilder sb, Cue cue, List<(int Start, int End, LanguageCode Language)> spans)
     {
         string text = cue.Text;
         var breaks = LineBreaks(text);
@@ -86,7 +87,7 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
             int at = cuts[k];
             if (ends.Contains(at)) sb.Append("</lang>");
             if (times.TryGetValue(at, out var time)) sb.Append('<').Append(time).Append('>');
-            for (; next < spans.Count && spans[next].Start == at; next++) sb.Append("<lang ").Append(spans[next].Language).Append('>');
+            for (; next < spans.Count && spans[next].Start == at; next++) sb.Append("<lang ").Append(spans[next].Language.Code).Append('>');
             if (k + 1 < cuts.Count) AppendEscaped(sb, text, at, cuts[k + 1], breaks);
         }
     }

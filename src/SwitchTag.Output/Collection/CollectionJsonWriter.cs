@@ -26,7 +26,7 @@ public sealed class CollectionJsonWriter : ICollectionWriter
             w.WriteStartObject();
             w.WriteString("interview", e.Interview);
             w.WriteString("index", $"{e.Folder}/index.json");
-            w.WriteString("mainLanguage", e.MainLanguage);
+            w.WriteString("mainLanguage", e.MainLanguage.Code);
             IndexJsonWriter.Seconds(w, "duration", e.Duration);
             w.WriteEndObject();
         }

@@ -1,5 +1,6 @@
 using System.Collections.Frozen;
 using System.Reflection;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.Html;
 
@@ -10,10 +11,10 @@ public static class LanguageNames
 {
     private static readonly FrozenDictionary<string, string> Names = Load();
 
-    public static string Of(string code) => code == "und" ? "undetermined" : Names.GetValueOrDefault(code, code);
+    public static string Of(LanguageCode code) => code.IsUndetermined ? "undetermined" : Names.GetValueOrDefault(code.Code, code.Code);
 
     /// <summary>"Polish (pl)": the name and the code the JSON outputs use.</summary>
-    public static string WithCode(string code) => $"{Of(code)} ({code})";
+    public static string WithCode(LanguageCode code) => $"{Of(code)} ({code})";
 
     private static FrozenDictionary<string, string> Load()
     {

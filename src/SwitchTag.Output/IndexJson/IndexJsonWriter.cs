@@ -34,7 +34,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
         w.WriteString("format", index.Transcript.Source.Format.Name);
         w.WriteString("sha256", index.Transcript.Source.Sha256);
         w.WriteEndObject();
-        w.WriteString("mainLanguage", index.MainLanguage);
+        w.WriteString("mainLanguage", index.MainLanguage.Code);
         w.WriteString("mainLanguageBasis", index.MainLanguageDecision?.Basis);
         Seconds(w, "duration", index.Duration);
         if (index.Media is not null) w.WriteString("media", index.Media);
@@ -43,7 +43,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
         foreach (var share in index.Languages)
         {
             w.WriteStartObject();
-            w.WriteString("language", share.Language);
+            w.WriteString("language", share.Language.Code);
             w.WriteNumber("seconds", share.Seconds);
             w.WriteNumber("words", share.Words);
             w.WriteEndObject();
@@ -101,7 +101,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
         foreach (var f in fractions.IsDefault ? [] : fractions)
         {
             w.WriteStartObject();
-            w.WriteString("language", f.Language);
+            w.WriteString("language", f.Language.Code);
             w.WriteNumber("share", f.Share);
             w.WriteEndObject();
         }
@@ -128,7 +128,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
                 w.WriteNumber("charEnd", timed.Value.CharEnd);
                 Seconds(w, "start", timed.Time.Start);
                 Seconds(w, "end", timed.Time.End);
-                w.WriteString("language", timed.Value.Language);
+                w.WriteString("language", timed.Value.Language.Code);
                 w.WriteNumber("confidence", Math.Round(timed.Value.Confidence, 4));
                 w.WriteEndObject();
             }
@@ -167,7 +167,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteNumber("charEnd", m.CharEnd);
             Seconds(w, "start", time.Start);
             Seconds(w, "end", time.End);
-            w.WriteString("language", m.Language);
+            w.WriteString("language", m.Language.Code);
             w.WriteNumber("confidence", Math.Round(m.Confidence, 4));
             w.WriteString("source", m.Source.Name);
             w.WriteString("heading", heading);
@@ -244,7 +244,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             Seconds(w, "start", item.Time.Start);
             Seconds(w, "end", item.Time.End);
             w.WriteString("speaker", item.Speaker);
-            w.WriteString("language", item.Language);
+            w.WriteString("language", item.Language.Code);
             w.WriteNumber("confidence", item.Confidence);
             w.WriteString("text", item.Text);
             w.WriteNumber("turn", item.Turn);

@@ -48,7 +48,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         md.Append("## Languages\n\n");
         var table = new MarkdownTable(md, "| Language | Time (s) | Words |", "| --- | ---: | ---: |");
         foreach (var s in index.Languages)
-            table.Row().Append("| ").Append(MarkdownText.Escape(s.Language)).Append(" | ")
+            table.Row().Append("| ").Append(MarkdownText.Escape(s.Language.Code)).Append(" | ")
               .Append(s.Seconds.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)).Append(" | ").Append(s.Words).Append(" |\n");
         md.Append('\n');
     }

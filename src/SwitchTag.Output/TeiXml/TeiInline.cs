@@ -1,4 +1,5 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.TeiXml;
 
@@ -8,7 +9,7 @@ namespace SwitchTag.Output.TeiXml;
 /// Offsets are into the turn's text.</summary>
 internal static class TeiInline
 {
-    public sealed record Element(int Start, int End, string Kind, string? Language, int Mention);
+    public sealed record Element(int Start, int End, string Kind, LanguageCode? Language, int Mention);
 
     public static List<Element> Layout(InterviewIndex index, int turn)
     {
@@ -23,7 +24,7 @@ internal static class TeiInline
         var foreign = new List<Element>();
         foreach (var (span, _) in index.Spans[turn])
         {
-            if (span.Language == index.MainLanguage || span.Language == "und") continue;
+            if (span.Language == index.MainLanguage || span.Language.IsUndetermined) continue;
             var pieces = new List<(int Start, int End)> { (span.CharStart, span.CharEnd) };
             foreach (var n in names)
                 pieces = pieces.SelectMany(p => Cut(p, n)).ToList();

@@ -3,6 +3,7 @@ using System.Text;
 using System.Xml;
 using SwitchTag.Core.Documents;
 using SwitchTag.Output.Report;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.TeiXml;
 
@@ -42,7 +43,7 @@ public sealed class TeiXmlWriter : IInterviewWriter
         Header(w, index, ids);
         StandOff(w, index, ids);
         w.WriteStartElement("text");
-        w.WriteAttributeString("xml", "lang", XmlNs, index.MainLanguage);
+        w.WriteAttributeString("xml", "lang", XmlNs, index.MainLanguage.Code);
         w.WriteStartElement("body");
         Timeline(w, index);
         foreach (var turn in index.Turns) Utterance(w, index, turn, ids);
@@ -96,10 +97,10 @@ public sealed class TeiXmlWriter : IInterviewWriter
         w.WriteStartElement("profileDesc");
         w.WriteStartElement("langUsage");
         foreach (var language in index.Spans.SelectMany(s => s).Select(s => s.Value.Language).Append(index.MainLanguage)
-                     .Distinct(StringComparer.Ordinal).Order(StringComparer.Ordinal))
+                     .Distinct().Order())
         {
             w.WriteStartElement("language");
-            w.WriteAttributeString("ident", language);
+            w.WriteAttributeString("ident", language.Code);
             if (language == index.MainLanguage) w.WriteAttributeString("role", "main");
             w.WriteEndElement();
         }
@@ -232,7 +233,7 @@ public sealed class TeiXmlWriter : IInterviewWriter
             if (e.Kind == "foreign")
             {
                 w.WriteStartElement("foreign");
-                w.WriteAttributeString("xml", "lang", XmlNs, e.Language);
+                w.WriteAttributeString("xml", "lang", XmlNs, e.Language?.Code);
                 return;
             }
             var (mention, _, headingId) = index.Mentions[e.Mention];

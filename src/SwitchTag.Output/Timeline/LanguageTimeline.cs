@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Output.Html;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.Timeline;
 
@@ -13,10 +14,10 @@ public static class LanguageTimeline
     private const double Left = 130, Plot = 850, Row = 24, Top = 8, Axis = 22;
 
     /// <summary>The main language in a quiet colour, the others in distinct ones (most time first).</summary>
-    public static IReadOnlyDictionary<string, string> Colours(InterviewIndex index)
+    public static IReadOnlyDictionary<LanguageCode, string> Colours(InterviewIndex index)
     {
         string[] palette = ["#d95f02", "#1b9e77", "#7570b3", "#e7298a", "#66a61e", "#e6ab02", "#a6761d", "#1f78b4"];
-        var colours = new Dictionary<string, string>(StringComparer.Ordinal) { [index.MainLanguage] = "#a9bccc", ["und"] = "#dddddd" };
+        var colours = new Dictionary<LanguageCode, string> { [index.MainLanguage] = "#a9bccc", [LanguageCode.Undetermined] = "#dddddd" };
         int next = 0;
         foreach (var share in index.Languages)
             if (!colours.ContainsKey(share.Language)) colours[share.Language] = palette[next++ % palette.Length];
@@ -50,7 +51,7 @@ public static class LanguageTimeline
             foreach (var span in index.Spans[t])
             {
                 double x = X(span.Time.Start.Milliseconds), w = Math.Max(1.2, X(span.Time.End.Milliseconds) - x);
-                string language = span.Value.Language;
+                var language = span.Value.Language;
                 svg.Append("<rect class=\"band\" data-lang=\"").Append(HtmlText.Esc(language)).Append("\" x=\"").Append(N(x)).Append("\" y=\"").Append(N(y))
                    .Append("\" width=\"").Append(N(w)).Append("\" height=\"").Append(N(Row - 6)).Append("\" fill=\"").Append(colours[language]).Append("\"><title>")
                    .Append(HtmlText.Esc(LanguageNames.Of(language))).Append(' ').Append(HtmlText.Clock(span.Time.Start)).Append('–').Append(HtmlText.Clock(span.Time.End))

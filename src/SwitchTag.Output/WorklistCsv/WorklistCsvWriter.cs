@@ -20,7 +20,7 @@ public sealed class WorklistCsvWriter : IInterviewWriter
         var csv = new Csv().Row(Header);
         foreach (var item in index.Worklist)
             csv.Row(item.Time.Start.ToString(), item.Time.End.ToString(), item.Time.Start.ToSecondsString(), item.Time.End.ToSecondsString(),
-                item.Speaker, item.Language, LanguageNames.Of(item.Language), Numbers.Confidence(item.Confidence), item.Check ? "yes" : "no",
+                item.Speaker, item.Language.Code, LanguageNames.Of(item.Language), Numbers.Confidence(item.Confidence), item.Check ? "yes" : "no",
                 Numbers.Integer(item.Words), item.Text,
                 Numbers.Integer(item.Turn), Numbers.Integer(item.CharStart), Numbers.Integer(item.CharEnd));
         return csv.ToString();

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Tagging.Sources;
 
@@ -10,11 +11,11 @@ namespace SwitchTag.Tagging.Sources;
 public static class RuleMatching
 {
     public static ImmutableArray<Mention> Find(int turn, string text, ImmutableArray<LanguageSpan> spans,
-        Func<string, string, ImmutableArray<NameMatch>> find)
+        Func<string, LanguageCode, ImmutableArray<NameMatch>> find)
     {
         if (string.IsNullOrEmpty(text)) return [];
         if (spans.IsDefault) spans = [];
-        var languages = spans.Select(s => s.Language).Distinct(StringComparer.Ordinal).DefaultIfEmpty("und");
+        var languages = spans.Select(s => s.Language).Distinct().DefaultIfEmpty(LanguageCode.Undetermined);
         var matches = new List<NameMatch>();
         foreach (var language in languages)
             matches.AddRange(find(text, language).Where(m => spans.IsEmpty || SpanLanguage.At(spans, m.CharStart) == language));

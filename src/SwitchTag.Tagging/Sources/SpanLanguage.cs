@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Tagging.Sources;
 
@@ -7,7 +8,7 @@ namespace SwitchTag.Tagging.Sources;
 /// the nearest span, else <c>und</c>.</summary>
 public static class SpanLanguage
 {
-    public static string At(ImmutableArray<LanguageSpan> spans, int charStart)
+    public static LanguageCode At(ImmutableArray<LanguageSpan> spans, int charStart)
     {
         // Spans are in text order and disjoint: a binary search finds the one holding charStart.
         int lo = 0, hi = spans.Length;
@@ -17,6 +18,6 @@ public static class SpanLanguage
             if (spans[mid].CharEnd <= charStart) lo = mid + 1; else hi = mid;
         }
         if (lo < spans.Length && spans[lo].CharStart <= charStart) return spans[lo].Language;
-        return spans.IsEmpty ? "und" : spans.MinBy(s => Math.Min(Math.Abs(s.CharStart - charStart), Math.Abs(s.CharEnd - charStart)))!.Language;
+        return spans.IsEmpty ? LanguageCode.Undetermined : spans.MinBy(s => Math.Min(Math.Abs(s.CharStart - charStart), Math.Abs(s.CharEnd - charStart)))!.Language;
     }
 }

@@ -3,6 +3,7 @@ using System.Globalization;
 using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Indexing;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
 
@@ -10,11 +11,11 @@ namespace SwitchTag.Indexing.Tests.Fakes;
 /// case ending stripped), so heading tests do not move when the real lexicon changes.</summary>
 public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places) : IHeadingLexicon
 {
-    public string Key(string name, string language) =>
+    public string Key(string name, LanguageCode language) =>
         string.Join(' ', Fold(name).Split(' ', StringSplitOptions.RemoveEmptyEntries).Select(Stem));
 
     /// <summary>By folded name, else by key (so an inflected form finds its nominative).</summary>
-    public ImmutableArray<PlaceLink> Places(string name, string language) =>
+    public ImmutableArray<PlaceLink> Places(string name, LanguageCode language) =>
         places.TryGetValue(Fold(name), out var found) || places.TryGetValue(Key(name, language), out found) ? found : [];
 
     public static string Fold(string text)

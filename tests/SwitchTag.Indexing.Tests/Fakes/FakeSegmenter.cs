@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
 
@@ -9,11 +10,11 @@ namespace SwitchTag.Indexing.Tests.Fakes;
 /// between words of one language belong to the span.</summary>
 public sealed class FakeSegmenter(IReadOnlyDictionary<string, string> words, string main = "en") : ILanguageSegmenter
 {
-    public IReadOnlyList<string> Languages => ["en", "pl", "de"];
+    public IReadOnlyList<LanguageCode> Languages => [new("en"), new("pl"), new("de")];
 
     public LanguageGuess Identify(ReadOnlySpan<char> text) => new(main, 0.9);
 
-    public ImmutableArray<LanguageSpan> Segment(string text, string mainLanguage)
+    public ImmutableArray<LanguageSpan> Segment(string text, LanguageCode mainLanguage)
     {
         var spans = ImmutableArray.CreateBuilder<LanguageSpan>();
         int i = 0;
@@ -24,7 +25,7 @@ public sealed class FakeSegmenter(IReadOnlyDictionary<string, string> words, str
             int start = i;
             while (i < text.Length && !char.IsWhiteSpace(text[i])) i++;
             string word = text[start..i].Trim(',', '.', '!', '?', ':', ';');
-            string language = words.GetValueOrDefault(word.ToLowerInvariant(), mainLanguage);
+            LanguageCode language = words.TryGetValue(word.ToLowerInvariant(), out var listed) ? new(listed) : mainLanguage;
             if (spans.Count > 0 && spans[^1].Language == language)
                 spans[^1] = spans[^1] with { CharEnd = i };
             else

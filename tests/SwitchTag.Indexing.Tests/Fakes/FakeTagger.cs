@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
 
@@ -20,7 +21,7 @@ public sealed class FakeTagger(IReadOnlyList<(string Surface, NameLabel Label, d
                 bool word = (at == 0 || !char.IsLetter(turnText[at - 1])) && (end == turnText.Length || !char.IsLetter(turnText[end]));
                 if (!word || taken.AsSpan(at, surface.Length).Contains(true)) continue;
                 taken.AsSpan(at, surface.Length).Fill(true);
-                string language = spans.FirstOrDefault(s => s.CharStart <= at && at < s.CharEnd)?.Language ?? "und";
+                var language = spans.FirstOrDefault(s => s.CharStart <= at && at < s.CharEnd)?.Language ?? LanguageCode.Undetermined;
                 found.Add(new Mention(turnIndex, at, end, surface, label, language, confidence, MentionSource.Model));
             }
         }

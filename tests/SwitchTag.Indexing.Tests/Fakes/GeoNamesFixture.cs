@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using System.Globalization;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 using SwitchTag.Tests.Shared;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
@@ -29,7 +30,7 @@ public static class GeoNamesFixture
                 f[8], long.Parse(f[14], CultureInfo.InvariantCulture));
             var names = new HashSet<string>(StringComparer.Ordinal) { FakeLexicon.Fold(f[1]), FakeLexicon.Fold(f[2]) };
             foreach (var alt in f[3].Split(',', StringSplitOptions.RemoveEmptyEntries)) names.Add(FakeLexicon.Fold(alt));
-            foreach (var n in names.ToList()) names.Add(Keyer.Key(n, ""));
+            foreach (var n in names.ToList()) names.Add(Keyer.Key(n, LanguageCode.Undetermined));
             foreach (var n in names)
             {
                 if (!byName.TryGetValue(n, out var list)) byName[n] = list = [];
