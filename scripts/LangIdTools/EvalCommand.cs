@@ -9,8 +9,8 @@ namespace LangIdTools;
 /// reference identifier Lingua; prints markdown tables.</summary>
 public static class EvalCommand
 {
-    private const int SyntheticTurns = 1000;
-    private const int SyntheticSeed = 11;
+    internal const int SyntheticTurns = 1000;
+    internal const int SyntheticSeed = 11;
 
     public static int Run(string dataRoot, string modelPath)
     {

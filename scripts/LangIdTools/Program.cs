@@ -2,12 +2,14 @@ using LangIdTools;
 
 // Usage: LangIdTools train DATA OUT | eval DATA MODEL | bench DATA MODEL
 //        LangIdTools tune DATA              (compare smoothing settings on the calibration split)
+//        LangIdTools heldout DATA MODEL   (held-out means and synthetic switch F1 only, no reference)
 //        LangIdTools errors DATA MODEL CODE (held-out lines of CODE the model gets wrong)
 //        LangIdTools switch-errors DATA MODEL (synthetic calibration turns with missed switches)
 //        LangIdTools speech DATA MODEL      (transcribed Spanish-English conversation, Miami dev)
 //        LangIdTools tune-speech DATA MODEL (grid of the interview decoder numbers on Miami dev)
 //        LangIdTools calibrate-speech DATA MODEL (fit and report the stretch confidence calibration)
 if (args is ["tune", var data]) return TrainCommand.Tune(data);
+if (args is ["heldout", var hd, var hm]) return HeldOutCommand.Run(hd, hm);
 if (args is ["errors", var d, var m, var code]) return EvalCommand.Errors(d, m, code);
 if (args is ["tune-speech", var td, var tm]) return SpeechTuneCommand.Run(td, tm);
 if (args is ["calibrate-speech", var cd, var cm]) return SpeechCalibrateCommand.Run(cd, cm);

@@ -23,12 +23,19 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// (a middle name may come and go); a one-word name joins a multi-word heading only when exactly one
 /// such heading has it as its first or last word (so "Kowalczyk" stays apart when two Kowalczyks are
 /// named); other one-word names group by folded key.
+/// A camp, ghetto or historical region or state the name lists know (<see cref="IHeadingLexicon.Listed"/>)
+/// keeps the name said as its heading: a camp is shown at its town ("Auschwitz", at Oświęcim, PL); a
+/// historical region or state is not linked to a modern place of the name (<see cref="Historical"/>),
+/// which stays among the alternatives for the reviewer.
 /// Organisations group by folded key.
 /// Held for review instead: mentions below the confidence floor, PER mentions that are the own name
 /// of a place of 100,000 people or more, surfaces tagged both PER and LOC in the interview, model mentions whose first letter is
-/// lower case (names in cased scripts are capitalised; uncased scripts are never caught), and one-word
+/// lower case (names in cased scripts are capitalised; uncased scripts are never caught), one-word
 /// model mentions the interview also writes in lower case as an ordinary word (unless a place
-/// mention the gazetteer knows: "o porto" beside Porto).</summary>
+/// mention the gazetteer knows: "o porto" beside Porto) and one-word bare gazetteer matches it so
+/// writes (no context and no model backs them: "Coats from the morning" beside "sewing coats"), and
+/// places whose every gazetteer candidate is accented otherwise (<see cref="Respelling"/>: "Perón" is
+/// not Péron, FR) or is a village named so only in one of its other names (<see cref="VillagePopulation"/>).</summary>
 public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow = HeadingBuilder.DefaultReviewBelow)
 {
     public const double DefaultReviewBelow = 0.5;
@@ -36,6 +43,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// <summary>A person's name competes with a place only when it is the own name of a place this
     /// large: small towns named like given names (Hanna, Alberta) would otherwise hold back every person.</summary>
     public const long CompetingPlacePopulation = 100_000;
+
+    /// <summary>A place smaller than this, reached only through one of its other names (not its own)
+    /// by a one-word Latin-script name with no place evidence, is too weak a link to index unreviewed
+    /// ("against Perón" is not Leones, AR, once called Perón). The gazetteer's village size.</summary>
+    public const long VillagePopulation = 15_000;
 
     public HeadingResult Build(
         ImmutableArray<Mention> mentions,
@@ -46,12 +58,15 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         int n = mentions.Length;
         var keys = new string[n];
         var places = new ImmutableArray<PlaceLink>[n];
+        var respelled = new PlaceLink?[n];
         var placeCache = new Dictionary<(string, LanguageCode), ImmutableArray<PlaceLink>>();
         for (int i = 0; i < n; i++)
         {
             var m = mentions[i];
             keys[i] = lexicon.Key(m.Text, m.Language);
-            places[i] = CachedPlaces(placeCache, m.Text, m.Language);
+            var found = CachedPlaces(placeCache, m.Text, m.Language);
+            places[i] = found.RemoveAll(p => Respelling.MarksConflict(m.Text, p.Name));
+            if (places[i].IsEmpty && !found.IsEmpty) respelled[i] = found[0];
         }
 
         var lowerWords = LowerCaseWords(turns);
@@ -70,7 +85,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         for (int i = 0; i < n; i++)
         {
             if (accepted?.Contains(i) == true) continue;
-            var reason = ReviewReason(mentions[i], keys[i], places[i], labelsOfSurface[keys[i]], lowerWords);
+            var reason = ReviewReason(mentions[i], keys[i], places[i], respelled[i], labelsOfSurface[keys[i]], lowerWords);
             if (reason is null) continue;
             held[i] = true;
             review.Add(new ReviewItem(i, reason));
@@ -126,9 +141,15 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         return words;
     }
 
-    private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, HashSet<NameLabel> labelsOfSurface,
+    private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, PlaceLink? respelled, HashSet<NameLabel> labelsOfSurface,
         HashSet<string> lowerWords)
     {
+        bool open = m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer;
+        if (open && m.Label == NameLabel.LOC && respelled is not null)
+            return $"\"{m.Text}\" is accented otherwise than the only places of that name ({respelled.Name}, {respelled.Country}): another name, perhaps a person's";
+        if (open && m.Label == NameLabel.LOC && !places.IsEmpty && !m.Text.Any(char.IsWhiteSpace) && m.Text.All(c => !char.IsLetter(c) || c < '\u0250')
+            && places.All(p => p.Population < VillagePopulation && Key(p.Name, m.Language) != key))
+            return $"\"{m.Text}\" is only another name of a village ({places[0].Name}, {places[0].Country}), and the sentence does not say it is a place";
         if (labelsOfSurface.Contains(NameLabel.PER) && labelsOfSurface.Contains(NameLabel.LOC) && m.Label != NameLabel.ORG
             && m.Source != MentionSource.Cue && m.Source != MentionSource.PlaceEvidence)
             return "the same name is tagged both PER and LOC in this interview, and the evidence is even";
@@ -136,7 +157,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return $"tagged PER, but \"{m.Text}\" is also the name of a place ({place.Name}, {place.Country})";
         if (m.Source == MentionSource.Model && m.Text.FirstOrDefault(char.IsLetter) is var first && char.IsLower(first))
             return "the model tagged a name that does not start with a capital letter";
-        if (m.Source == MentionSource.Model && (m.Label != NameLabel.LOC || places.IsEmpty) && !m.Text.Any(char.IsWhiteSpace) && m.Text.Length > 0 && char.IsUpper(m.Text[0])
+        if ((m.Source == MentionSource.Model && (m.Label != NameLabel.LOC || places.IsEmpty) || m.Source == MentionSource.Gazetteer)
+            && !m.Text.Any(char.IsWhiteSpace) && m.Text.Length > 0 && char.IsUpper(m.Text[0])
             && lowerWords.Contains(m.Text.ToLowerInvariant()))
             return $"\"{m.Text}\" is also used as an ordinary word in this interview (\"{m.Text.ToLowerInvariant()}\")";
         if (m.Confidence < reviewBelow)
@@ -149,6 +171,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         public NameLabel Label { get; } = label;
         public string Key { get; } = key;
         public PlaceLink? Place { get; set; }
+
+        /// <summary>A camp or historical place: the heading keeps the name said, the place is where it lies.</summary>
+        public bool KeepsSpokenName { get; init; }
         public List<int> Members { get; } = [];
         public HashSet<Group> Possible { get; } = [];
     }
@@ -165,19 +190,34 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
     private void GroupPlaces(ImmutableArray<Mention> mentions, string[] keys, ImmutableArray<PlaceLink>[] places, bool[] held, List<Group> groups)
     {
+        var listed = new ListedPlace?[mentions.Length];
+        for (int i = 0; i < mentions.Length; i++)
+            if (!held[i] && mentions[i].Label == NameLabel.LOC) listed[i] = lexicon.Listed(mentions[i].Text, mentions[i].Language);
+
         var evidence = new Dictionary<string, int>(StringComparer.Ordinal);
         for (int i = 0; i < mentions.Length; i++)
-            if (!held[i] && mentions[i].Label == NameLabel.LOC && places[i].Length == 1)
+            if (!held[i] && mentions[i].Label == NameLabel.LOC && listed[i] is null && places[i].Length == 1)
                 evidence[places[i][0].Country] = evidence.GetValueOrDefault(places[i][0].Country) + 1;
 
         int evidenceTotal = evidence.Values.Sum();
         var byPlace = new Dictionary<long, Group>();
+        var bySpoken = new Dictionary<string, Group>(StringComparer.Ordinal);
         var unlinked = new List<int>();
         for (int i = 0; i < mentions.Length; i++)
         {
             if (held[i] || mentions[i].Label != NameLabel.LOC) continue;
-            if (places[i].IsEmpty) { unlinked.Add(i); continue; }
             var m = mentions[i];
+            if (listed[i] is { } spoken && (spoken.IsSite || Historical(spoken, m, places[i], evidence)))
+            {
+                if (!bySpoken.TryGetValue(spoken.Name, out var own))
+                {
+                    bySpoken[spoken.Name] = own = new Group(NameLabel.LOC, keys[i]) { Place = spoken.At, KeepsSpokenName = true };
+                    groups.Add(own);
+                }
+                own.Members.Add(i);
+                continue;
+            }
+            if (places[i].IsEmpty) { unlinked.Add(i); continue; }
             var chosen = places[i]
                 .OrderByDescending(p => PlaceScore(p, Key(m.Text, m.Language) == Key(p.Name, m.Language), evidence, evidenceTotal))
                 .ThenBy(p => p.GeonameId)
@@ -205,6 +245,20 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
             group.Members.Add(i);
         }
+    }
+
+    /// <summary>Whether a listed historical region or state is meant rather than a modern place of the
+    /// name. A modern country of the name gives way only to a historical state, and only when the
+    /// interview's other places lie in a country holding it (Palestine beside Haifa is the Mandate, not
+    /// the State of Palestine; Polish "Czechy" stays Czechia, though Bohemia is also so called). A town
+    /// gives way when its own name is not the name said (Galicia is not Galich, RU), or when the other
+    /// places lie in a country holding the region. Otherwise the modern place stands (Galicia in a
+    /// Spanish story).</summary>
+    private bool Historical(ListedPlace spoken, Mention m, ImmutableArray<PlaceLink> places, Dictionary<string, int> evidence)
+    {
+        bool inCountry = spoken.Countries.Any(evidence.ContainsKey);
+        if (places.Any(p => p.GeonameId < 0)) return spoken.Kind == "state" && inCountry;
+        return inCountry || places.All(p => Key(p.Name, m.Language) != Key(m.Text, m.Language));
     }
 
     /// <summary>Persons, merged only on certain evidence. A full name (two or more words) joins a
@@ -292,11 +346,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     {
         var members = g.Members.OrderBy(i => times[i].Start).ThenBy(i => i).ToImmutableArray();
         var variants = members.Select(i => mentions[i].Text).Distinct(StringComparer.Ordinal).ToImmutableArray();
-        string name = g.Place?.Name ?? DisplayName(g.Label, members, mentions);
-        var alternatives = g.Place is null
-            ? ImmutableArray<PlaceLink>.Empty
-            : members.SelectMany(i => places[i]).Where(p => p.GeonameId != g.Place.GeonameId)
-                .DistinctBy(p => p.GeonameId).OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId).ToImmutableArray();
+        string name = g.KeepsSpokenName || g.Place is null ? DisplayName(g.Label, members, mentions) : g.Place.Name;
+        var alternatives = members.SelectMany(i => places[i]).Where(p => p.GeonameId != g.Place?.GeonameId)
+            .DistinctBy(p => p.GeonameId).OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId).ToImmutableArray();
         var speakers = members.Select(i => turns[mentions[i].Turn].Speaker).OfType<string>().Distinct(StringComparer.Ordinal).ToImmutableArray();
         double confidence = Math.Round(members.Average(i => mentions[i].Confidence), 4);
         var source = members.Any(i => mentions[i].Source == MentionSource.Authority) ? MentionSource.Authority

@@ -15,6 +15,10 @@ public interface IHeadingLexicon
     /// <summary>Every gazetteer place the name may denote; empty when the gazetteer does not know it.</summary>
     ImmutableArray<PlaceLink> Places(string name, LanguageCode language);
 
+    /// <summary>The camp, ghetto, historical region or state the whole name denotes, whose own name a
+    /// gazetteer link would replace; null when the name is none.</summary>
+    ListedPlace? Listed(string name, LanguageCode language) => null;
+
     /// <summary>Whether a word is a listed first name of some language.</summary>
     bool IsFirstName(string word) => false;
 
@@ -29,3 +33,10 @@ public interface IHeadingLexicon
     /// probable, not certain.</summary>
     bool EquivalentGivenNames(string a, string b) => false;
 }
+
+/// <summary>A place known by the name said, which a gazetteer link would rename: a site (camp, ghetto,
+/// killing site) shown at the town it lies at or beside (<paramref name="At"/>, null when the gazetteer
+/// lacks it), or a historical region or state (<paramref name="At"/> null) with the modern countries
+/// holding it.</summary>
+public sealed record ListedPlace(string Name, string Kind, bool IsSite, PlaceLink? At, ImmutableArray<string> Countries);
+

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing;
 
@@ -8,8 +9,9 @@ namespace SwitchTag.Indexing;
 /// list, person cues and place evidence fixed theirs earlier in the cascade.
 /// In order: (1) a name of two or more words whose first word is a listed first name and which the
 /// gazetteer does not know as a whole is a person ("Esterina Saltiel"); (2) a one-word name that is the
-/// first or last word of a person named in full in the interview is that person's name ("Szwarc"
-/// beside "Hanka Szwarc"), unless place evidence put it in a place; (3) every mention of one grouping
+/// first or last word of a person named in full in the interview, or a listed diminutive of that
+/// person's given name, is that person's name ("Szwarc" beside "Hanka Szwarc", "Pina" beside "Giuseppina
+/// Russo"), unless place evidence put it in a place; (3) every mention of one grouping
 /// key (so inflected forms too: "Krakowie" beside "Kraków") takes the label with the most evidence:
 /// cues and place evidence weigh 10, a model mention its confidence, a bare gazetteer match 0.5, and
 /// a place mention the gazetteer knows 0.5 more. Changes by (1) and (2) are recorded as decided by a
@@ -33,6 +35,7 @@ internal static class LabelVote
         }
 
         var nameParts = new HashSet<string>(StringComparer.Ordinal);
+        var givenNames = new List<(string Name, LanguageCode Language)>();
         foreach (var m in result)
         {
             if (m.Label != NameLabel.PER) continue;
@@ -40,9 +43,11 @@ internal static class LabelVote
             if (words.Length < 2) continue;
             nameParts.Add(lexicon.Key(words[0], m.Language));
             nameParts.Add(lexicon.Key(words[^1], m.Language));
+            givenNames.Add((words[0], m.Language));
         }
         for (int i = 0; i < result.Length; i++)
-            if (Open(result[i]) && result[i].Label != NameLabel.PER && Words(result[i].Text).Length == 1 && nameParts.Contains(keys[i]))
+            if (Open(result[i]) && result[i].Label != NameLabel.PER && Words(result[i].Text).Length == 1
+                && (nameParts.Contains(keys[i]) || givenNames.Any(g => IsDiminutiveOf(lexicon, result[i], g))))
                 result[i] = result[i] with { Label = NameLabel.PER, Source = MentionSource.Cue };
 
         foreach (var group in Enumerable.Range(0, result.Length).GroupBy(i => keys[i], StringComparer.Ordinal))
@@ -59,6 +64,12 @@ internal static class LabelVote
         }
         return [.. result];
     }
+
+    /// <summary>The given name, a case form of it or a listed diminutive or nickname of the given name
+    /// of a person named in full in the interview ("Pina" beside "Giuseppina Russo", "Chico" beside "Francisco Ruiz"): the interview ties
+    /// the word to that person, whatever small place bears it.</summary>
+    private static bool IsDiminutiveOf(IHeadingLexicon lexicon, Mention m, (string Name, LanguageCode Language) given) =>
+        lexicon.SameGivenName(given.Name, given.Language, m.Text, m.Language);
 
     /// <summary>Whether a later stage may change the mention's label.</summary>
     private static bool Open(Mention m) => m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer;

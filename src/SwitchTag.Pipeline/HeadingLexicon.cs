@@ -9,7 +9,8 @@ namespace SwitchTag.Pipeline;
 
 /// <summary>The lexicon seen by heading building: the lexicon's own grouping key (fold and per-language
 /// stem), its gazetteer lookup (folded, inflected and other-language names) and the name lists'
-/// first names, surname keys, diminutives and equivalents.</summary>
+/// first names, surname keys, diminutives and equivalents, and the camps and historical regions whose
+/// spoken names a link would replace (a camp's town from the gazetteer, else the list's own centre).</summary>
 public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = null) : IHeadingLexicon
 {
     private readonly NameListSet _lists = lists ?? NameListSet.Empty;
@@ -20,6 +21,16 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
         gazetteer.Lookup(name, language)
             .Select(p => new PlaceLink(p.GeonameId, p.Name, p.Latitude, p.Longitude, p.Country, p.Population))
             .ToImmutableArray();
+
+    public ListedPlace? Listed(string name, LanguageCode language)
+    {
+        if (_lists.Places.Find(name) is not { } listed) return null;
+        var at = listed.At is null ? null
+            : gazetteer.Lookup(listed.At, LanguageCode.Undetermined).Where(p => p.Country == listed.Countries[0] && Key(p.Name, LanguageCode.Undetermined) == Key(listed.At, LanguageCode.Undetermined))
+                .Select(p => new PlaceLink(p.GeonameId, p.Name, p.Latitude, p.Longitude, p.Country, p.Population)).FirstOrDefault()
+              ?? new PlaceLink(0, listed.At, listed.Latitude, listed.Longitude, listed.Countries[0], 0);
+        return new ListedPlace(listed.Name, listed.Kind, listed.IsSite, at, listed.Countries);
+    }
 
     public bool IsFirstName(string word) => _lists.Cues.IsFirstName(NameFolding.Fold(word));
 

@@ -113,4 +113,79 @@ public class HeadingBuilderTests
         Assert.Equal("\"Her\" is also used as an ordinary word in this interview (\"her\")", Assert.Single(result.Review).Reason);
         Assert.Equal("Irena", Assert.Single(result.Headings).Name);
     }
+
+    [Fact]
+    public void A_diminutive_of_a_person_named_in_full_is_that_person_not_a_village()
+    {
+        // GeoNames cities1000 row 1694091 (Piña, PH, pop 3137), as in models/gazetteer.bin.gz; "Pina" as the
+        // Italian diminutive of Giuseppina is from memory (models/lexicon/Languages/it/hypocoristics.tsv).
+        var pina = new PlaceLink(1694091, "Piña", 12.19078, 124.4015, "PH", 3137);
+        var lexicon = new FakeLexicon(new Dictionary<string, ImmutableArray<PlaceLink>> { ["pina"] = [pina] },
+            new Dictionary<string, string> { ["Pina"] = "Giuseppina" });
+        var result = Build(lexicon, ("Giuseppina Russo", NameLabel.PER, "en"), ("Pina", NameLabel.LOC, "en"), ("Pina", NameLabel.LOC, "en"));
+        var heading = Assert.Single(result.Headings);
+        Assert.Equal(NameLabel.PER, heading.Label);
+        Assert.Equal(["Giuseppina Russo", "Pina"], heading.Variants.ToArray());
+        Assert.All(result.Mentions, m => Assert.Equal(NameLabel.PER, m.Label));
+    }
+
+    [Fact]
+    public void A_name_accented_otherwise_than_its_only_places_goes_to_review()
+    {
+        // GeoNames cities1000 rows as in models/gazetteer.bin.gz: 2987932 Péron, FR (pop 1729) and 3846991 Leones,
+        // AR (pop 9971), which lists "Perón" among its alternate names. Juan Perón, the Argentine president, is from memory.
+        var peron = new PlaceLink(2987932, "Péron", 46.19053, 5.92524, "FR", 1729);
+        var leones = new PlaceLink(3846991, "Leones", -32.66174, -62.29678, "AR", 9971);
+        var accented = Build(new FakeLexicon(new Dictionary<string, ImmutableArray<PlaceLink>> { ["peron"] = [peron] }), ("Perón", NameLabel.LOC, "en"));
+        Assert.Empty(accented.Headings);
+        Assert.StartsWith("\"Perón\" is accented otherwise than the only places of that name (Péron, FR)", Assert.Single(accented.Review).Reason);
+
+        var village = Build(new FakeLexicon(new Dictionary<string, ImmutableArray<PlaceLink>> { ["peron"] = [peron, leones] }), ("Perón", NameLabel.LOC, "en"));
+        Assert.Empty(village.Headings);
+        Assert.StartsWith("\"Perón\" is only another name of a village (Leones, AR)", Assert.Single(village.Review).Reason);
+
+        // GeoNames cities15000 row 456172 (Riga, LV): "Rīga", accented only where the place is not, is no conflict.
+        var riga = Build(GeoNamesFixture.Lexicon(), ("Rīga", NameLabel.LOC, "lv"));
+        Assert.Equal(456172, Assert.Single(riga.Headings).Place!.GeonameId);
+    }
+
+    [Fact]
+    public void A_camp_keeps_its_spoken_name_and_is_shown_at_its_town()
+    {
+        // GeoNames cities15000 row 3089658 (Oświęcim, PL); Auschwitz lay beside it (known from memory).
+        var lexicon = GeoNamesFixture.Lexicon();
+        var oswiecim = lexicon.Places("Oświęcim", "pl").Single(p => p.Country == "PL");
+        Assert.Equal(3089658, oswiecim.GeonameId);
+        var camps = new FakeLexicon(GeoNamesFixture.Places, listed: new Dictionary<string, ListedPlace>
+        {
+            ["Auschwitz"] = new("Auschwitz", "camp", true, oswiecim, ["PL"]),
+        });
+        var result = Build(camps, ("Auschwitz", NameLabel.LOC, "en"), ("Oświęcim", NameLabel.LOC, "pl"), ("Auschwitz", NameLabel.LOC, "de"));
+        Assert.Equal(2, result.Headings.Length);
+        var camp = result.Headings.Single(h => h.Name == "Auschwitz");
+        Assert.Equal(3089658, camp.Place!.GeonameId);
+        Assert.Equal(2, camp.Mentions.Length);
+        Assert.Equal(3089658, result.Headings.Single(h => h.Name == "Oświęcim").Place!.GeonameId);
+    }
+
+    [Fact]
+    public void A_historical_state_is_not_linked_to_the_modern_state_of_its_name_beside_places_of_its_land()
+    {
+        // GeoNames cities15000 row 294801 (Haifa, IL); Mandatory Palestine covered today's IL and PS (known from memory).
+        var state = new PlaceLink(-275, "State of Palestine", 31.9, 35.2, "PS", 4_000_000);
+        var places = new Dictionary<string, ImmutableArray<PlaceLink>>(GeoNamesFixture.Places.ToDictionary()) { ["palestine"] = [state] };
+        var lexicon = new FakeLexicon(places, listed: new Dictionary<string, ListedPlace>
+        {
+            ["Palestine"] = new("Palestine (Mandate)", "state", false, null, ["IL", "PS"]),
+        });
+        var story = Build(lexicon, ("Palestine", NameLabel.LOC, "en"), ("Haifa", NameLabel.LOC, "en"));
+        var palestine = story.Headings.Single(h => h.Variants.Contains("Palestine"));
+        Assert.Equal("Palestine", palestine.Name);
+        Assert.Null(palestine.Place);
+        Assert.Equal(-275, Assert.Single(palestine.Alternatives).GeonameId);
+
+        // With nothing else in the land, the modern state stands.
+        var alone = Build(lexicon, ("Palestine", NameLabel.LOC, "en"), ("Paris", NameLabel.LOC, "en"), ("Lyon", NameLabel.LOC, "en"));
+        Assert.Equal(-275, alone.Headings.Single(h => h.Variants.Contains("Palestine")).Place!.GeonameId);
+    }
 }

@@ -51,6 +51,25 @@ public class OutputTests
     }
 
     [Fact]
+    public void Both_reports_show_the_headings_that_may_be_the_same_person()
+    {
+        var index = Fixture.Run();
+        var (first, other) = (index.Headings[0], index.Headings[^1]);
+        index = index with { Headings = index.Headings.SetItem(0, first with { PossiblySame = [other.Id] }) };
+
+        // HTML Living Standard: a fragment link reaches the element whose id equals the fragment.
+        string html = ReportHtmlWriter.Render(index);
+        var link = System.Text.RegularExpressions.Regex.Match(html, "possibly the same person as <a href=\"#([^\"]+)\">");
+        Assert.True(link.Success);
+        Assert.Contains($"id=\"{link.Groups[1].Value}\"", html);
+
+        // CommonMark 0.31 (through Markdig): the note is plain text in the heading's table cell.
+        string md = ReportMarkdownWriter.Render(index);
+        var row = md.Split('\n').Single(l => l.StartsWith("| **" + MarkdownText.Escape(first.Name) + "**", StringComparison.Ordinal));
+        Assert.Contains("(possibly the same person as " + MarkdownText.Escape(other.Name) + ")", Markdig.Markdown.ToPlainText(row));
+    }
+
+    [Fact]
     public void Markdown_escaping_leaves_no_active_syntax()
     {
         // CommonMark 0.31 examples of active syntax: emphasis, links, raw HTML, code spans, table pipes.

@@ -83,6 +83,36 @@ public class NameListsTests
         Assert.True(checkedSites >= 20, $"only {checkedSites} sites had their place in the extract");
     }
 
+    [Fact]
+    public void A_language_name_of_one_language_that_is_a_place_name_is_no_veto_word()
+    {
+        var lists = SwitchTag.Lexicon.NameLists.NameListSet.Load(Lexicon);
+        // CLDR 48.2 main/fi/languages.json names Galician (gl) "galicia", which is also the historical
+        // region of Poland and Ukraine and a Spanish autonomous community (known from memory).
+        Assert.Contains(Rows(Path.Combine(Lexicon, "Languages", "fi", "language-names.tsv")), r => r[0] == "galicia" && r[1] == "gl");
+        Assert.False(lists.NotPlaces.Contains("Galicia"));
+        // CLDR 48.2 main/en/languages.json: "Yiddish" names a language and no territory; it stays a veto word.
+        Assert.True(lists.NotPlaces.Contains("Yiddish"));
+    }
+
+    [Fact]
+    public void A_camp_is_found_by_each_of_its_listed_names_and_lies_at_its_town()
+    {
+        var places = SwitchTag.Lexicon.NameLists.NameListSet.Load(Lexicon).Places;
+        // Auschwitz was built beside Oświęcim, PL; its Russian name is Освенцим (known from memory).
+        foreach (var name in new[] { "Auschwitz", "AUSCHWITZ", "Освенцим" })
+        {
+            var camp = places.Find(name);
+            Assert.NotNull(camp);
+            Assert.Equal(("Oświęcim", "PL", true), (camp.At, camp.Countries[0], camp.IsSite));
+        }
+        var galicia = places.Find("Galizien");
+        Assert.NotNull(galicia);
+        Assert.False(galicia.IsSite);
+        Assert.Equal(["PL", "UA"], galicia.Countries.ToArray());
+        Assert.Null(places.Find("Oświęcim"));
+    }
+
     private static double D(string s) => double.Parse(s, CultureInfo.InvariantCulture);
 
     private static double Km(double lat1, double lon1, double lat2, double lon2)

@@ -62,8 +62,8 @@ public sealed partial class CodeSwitchSegmenter
             // A lone name ("Irena Kowalczyk.") is no switch even into a language of the interview.
             MergeShortIslands(text, ev, labels, p.MinIslandWeight, (code, namesOnly) => namesOnly || !profile.Contains(_codes[code]));
             if (p.KeepKnownWords) MergeKnownWords(text, ev, labels);
-            spans.Add(Calibrate(BuildSpans(text, ev, labels, logPrior), ev, profile, p));
             var posterior = CodePosterior(ev, 0, ev.Count, logPrior);
+            spans.Add(Calibrate(BuildSpans(text, ev, labels, logPrior, posterior), ev, profile, p));
             int best = ArgMax(posterior);
             double confidence = p.Calibration.Apply(posterior[best], WordsIn(ev, 0, text.Length), ShareOf(profile, _codes[best], p));
             guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(LanguageCode.Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(confidence, 4)));
@@ -138,15 +138,17 @@ public sealed partial class CodeSwitchSegmenter
             turns.Add((ev.TotalWeight, kept, kept.Select(c => sum[c]).ToArray()));
         }
         var share = Enumerable.Repeat(1.0 / classes, classes).ToArray();
+        var logShare = new double[classes];
         var next = new double[classes];
         var post = new double[classes];
         for (int it = 0; it < ProfileIterations && turns.Count > 0; it++)
         {
             Array.Fill(next, ProfileSmoothing);
+            for (int c = 0; c < classes; c++) logShare[c] = Math.Log(share[c]);
             foreach (var (weight, kept, score) in turns)
             {
                 double max = double.NegativeInfinity;
-                for (int k = 0; k < kept.Length; k++) max = Math.Max(max, post[k] = Math.Log(share[kept[k]]) + score[k]);
+                for (int k = 0; k < kept.Length; k++) max = Math.Max(max, post[k] = logShare[kept[k]] + score[k]);
                 double total = 0;
                 for (int k = 0; k < kept.Length; k++) total += post[k] = Math.Exp(post[k] - max);
                 for (int k = 0; k < kept.Length; k++) next[kept[k]] += weight * post[k] / total;

@@ -109,7 +109,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 
     /// <summary>Scores every word of <paramref name="text"/> that carries evidence. With a
     /// <paramref name="cache"/> (normalised form to scores) each distinct word is scored once, and
-    /// ordinary words share one emission array (never written after it is made).</summary>
+    /// its occurrences share its emission arrays (never written after they are made).</summary>
     private TurnEvidence CollectEvidence(string text, ModelParameters parameters, Dictionary<string, ScoredWord>? cache)
     {
         var evidence = new TurnEvidence(Tokenizer.Tokenize(text));
@@ -141,15 +141,18 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             evidence.TokenIndex.Add(t);
             evidence.Scores.Add(scored.Scores);
             evidence.Weights.Add(weight);
-            evidence.Emissions.Add(weight == 1 && neutralIn.Length == 0
-                ? scored.PlainEmission ??= Emission(scored.Scores, 1, [], parameters)
-                : Emission(scored.Scores, weight, neutralIn, parameters));
+            evidence.Emissions.Add(lookup is null
+                ? Emission(scored.Scores, weight, neutralIn, parameters)
+                : weight == 1 ? scored.PlainEmission ??= Emission(scored.Scores, 1, neutralIn, parameters)
+                : scored.NameEmission ??= Emission(scored.Scores, weight, neutralIn, parameters));
         }
         return evidence;
     }
 
     /// <summary>A word's raw log-likelihoods per class (empty when no feature was known), the
-    /// languages it is a filler or loanword in, and, once needed, its emission as an ordinary word.</summary>
+    /// languages it is a filler or loanword in, and, once needed, its emission as an ordinary word
+    /// and as a name-like one (a word's weight is 1 or the name weight, and its filler languages
+    /// are its own, so these two are all it can have).</summary>
     private sealed class ScoredWord(float[] scores, string[] neutralIn)
     {
         public float[] Scores { get; } = scores;
@@ -157,6 +160,8 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         public string[] NeutralIn { get; } = neutralIn;
 
         public float[]? PlainEmission { get; set; }
+
+        public float[]? NameEmission { get; set; }
     }
 
     /// <summary>The decoder's per-class score of one word: tempered log-likelihood relative to the
@@ -264,8 +269,9 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
 
     /// <summary>One span per run of words in one language. A span's confidence is its language's
     /// posterior over the span's words (weighted log-likelihoods, tempered), with
-    /// <paramref name="logPrior"/> per class when given.</summary>
-    private ImmutableArray<LanguageSpan> BuildSpans(string text, TurnEvidence evidence, int[] labels, float[]? logPrior)
+    /// <paramref name="logPrior"/> per class when given; <paramref name="wholeTurn"/>, when given, is
+    /// that posterior over all the turn's words, already computed by the caller.</summary>
+    private ImmutableArray<LanguageSpan> BuildSpans(string text, TurnEvidence evidence, int[] labels, float[]? logPrior, float[]? wholeTurn = null)
     {
         var tokens = evidence.Tokens;
         var spans = ImmutableArray.CreateBuilder<LanguageSpan>();
@@ -277,7 +283,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             // runs stay with the earlier language and the spans cover the text without gaps.
             int end = w < evidence.Count ? tokens[evidence.TokenIndex[w]].Start : text.Length;
             int code = _codeOfClass[labels[runFirst]];
-            var posterior = CodePosterior(evidence, runFirst, w, logPrior);
+            var posterior = runFirst == 0 && w == evidence.Count && wholeTurn is not null ? wholeTurn : CodePosterior(evidence, runFirst, w, logPrior);
             spans.Add(new LanguageSpan(runStart, end, _codes[code], Math.Round(posterior[code], 4)));
             runStart = end;
             runFirst = w;

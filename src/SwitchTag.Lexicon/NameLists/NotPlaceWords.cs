@@ -6,7 +6,9 @@ namespace SwitchTag.Lexicon.NameLists;
 /// nationality adjectives (i18n-nationality), the peoples, faiths and groups marked <c>never</c>, and
 /// titles and kinship words standing alone ("Tante", "Тато"). Folded, every language at once, since an
 /// interview mixes them ("Yiddish" in Polish talk). Peoples marked <c>also-place</c> (Polish "Niemcy",
-/// Germany) are left out: there the context decides.</summary>
+/// Germany) are left out: there the context decides. So are the names of territories (CLDR) and of
+/// listed historical regions and states: a language name of one language that is a place name in
+/// another (Finnish "galicia", the Galician language) is a place.</summary>
 public sealed record NotPlaceWords(FrozenSet<string> Words)
 {
     public static NotPlaceWords Empty { get; } = new(FrozenSet<string>.Empty);
@@ -14,7 +16,7 @@ public sealed record NotPlaceWords(FrozenSet<string> Words)
     /// <summary>Whether the whole name (folded words) is one of the words.</summary>
     public bool Contains(string name) => Words.Contains(NameFolding.FoldedWords(name));
 
-    internal static NotPlaceWords Load(string lexiconDir, PersonCues cues)
+    internal static NotPlaceWords Load(string lexiconDir, PersonCues cues, SpokenPlaces places)
     {
         var words = new HashSet<string>(StringComparer.Ordinal);
         foreach (var (_, folder) in LexiconTsv.Languages(lexiconDir))
@@ -26,6 +28,9 @@ public sealed record NotPlaceWords(FrozenSet<string> Words)
         }
         words.UnionWith(cues.Titles.Select(NameFolding.FoldedWords));
         words.UnionWith(cues.Kinship.Select(NameFolding.FoldedWords));
+        words.ExceptWith(places.Names);
+        words.ExceptWith(LexiconTsv.Rows(Path.Combine(lexiconDir, "territories.tsv")).Where(r => r.Length > 1)
+            .SelectMany(r => LexiconTsv.Alternatives(r[1])).Select(NameFolding.FoldedWords));
         words.Remove("");
         return new NotPlaceWords(words.ToFrozenSet(StringComparer.Ordinal));
     }

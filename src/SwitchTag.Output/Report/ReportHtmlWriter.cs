@@ -101,7 +101,8 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         b.Append("<table>\n<tr><th>Heading</th><th>Variants</th><th>Mentions</th><th>First</th><th>Speakers</th><th>Place</th><th>Confidence</th></tr>\n");
         foreach (var h in headings)
         {
-            b.Append("<tr><td><a class=\"heading\" href=\"#").Append(Esc(HeadingAnchor(h.Id))).Append("\">").Append(Said(h.Name)).Append("</a></td><td>")
+            b.Append("<tr><td><a class=\"heading\" href=\"#").Append(Esc(HeadingAnchor(h.Id))).Append("\">").Append(Said(h.Name)).Append("</a>")
+             .Append(PossiblySame(index, h)).Append("</td><td>")
              .Append(string.Join(", ", h.Variants.Select(Said))).Append("</td><td class=\"n\">").Append(h.Mentions.Length).Append("</td><td>")
              .Append(h.Mentions.IsEmpty ? "" : TimeLink(index.Mentions[h.Mentions[0]].Time.Start, index.Media)).Append("</td><td>")
              .Append(string.Join(", ", h.Speakers.Select(Said))).Append("</td><td>").Append(Place(h)).Append("</td><td>")
@@ -117,6 +118,16 @@ public sealed class ReportHtmlWriter : IInterviewWriter
             b.Append("</ol>\n</section>\n");
         }
         b.Append("</section>\n");
+    }
+
+    /// <summary>The headings the index says may be the same person (a probable merge it did not make),
+    /// linked, for the reviewer to merge or leave apart.</summary>
+    private static string PossiblySame(InterviewIndex index, Heading h)
+    {
+        var others = h.PossiblySame.Select(id => index.Headings.FirstOrDefault(o => o.Id == id)).OfType<Heading>().ToList();
+        if (others.Count == 0) return "";
+        return "<br><span class=\"muted possibly-same\">possibly the same person as " + string.Join(", ", others.Select(o =>
+            $"<a href=\"#{Esc(HeadingAnchor(o.Id))}\">{Said(o.Name)}</a>")) + "</span>";
     }
 
     private static void Mention(StringBuilder b, InterviewIndex index, int i)
@@ -136,13 +147,13 @@ public sealed class ReportHtmlWriter : IInterviewWriter
 
     private static string Place(Heading h)
     {
-        if (h.Place is null) return h.Label == NameLabel.LOC ? "<span class=\"muted\">not in the gazetteer</span>" : "";
+        string others = h.Alternatives.IsEmpty ? ""
+            : "<br><span class=\"muted\">or: " + string.Join("; ", h.Alternatives.Take(5).Select(a => $"{Esc(a.Name)}, {Esc(a.Country)}")) + "</span>";
+        if (h.Place is null)
+            return h.Label != NameLabel.LOC ? "" : h.Alternatives.IsEmpty ? "<span class=\"muted\">not in the gazetteer</span>" : "<span class=\"muted\">not linked: may be a historical place</span>" + others;
         var p = h.Place;
-        string text = $"{Esc(p.Name)}, {Esc(p.Country)} <span class=\"muted\">({Numbers.Coordinate(p.Latitude)}, {Numbers.Coordinate(p.Longitude)}; " +
-                      $"{(p.HasGeonameId ? $"GeoNames {p.GeonameId}" : "country")})</span>";
-        if (!h.Alternatives.IsEmpty)
-            text += "<br><span class=\"muted\">or: " + string.Join("; ", h.Alternatives.Take(5).Select(a => $"{Esc(a.Name)}, {Esc(a.Country)}")) + "</span>";
-        return text;
+        return $"{(p.Name == h.Name ? "" : "at ")}{Esc(p.Name)}, {Esc(p.Country)} <span class=\"muted\">({Numbers.Coordinate(p.Latitude)}, {Numbers.Coordinate(p.Longitude)}; " +
+               $"{PlaceSource.Of(p)})</span>" + others;
     }
 
     private static void Review(StringBuilder b, InterviewIndex index)

@@ -63,7 +63,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         foreach (var h in headings)
         {
             var times = h.Mentions.Select(i => index.Mentions[i].Time.Start.ToString());
-            table.Row().Append("| **").Append(MarkdownText.Escape(h.Name)).Append("** | ")
+            table.Row().Append("| **").Append(MarkdownText.Escape(h.Name)).Append("**").Append(PossiblySame(index, h)).Append(" | ")
               .Append(string.Join(", ", h.Variants.Select(MarkdownText.Escape))).Append(" | ")
               .Append(h.Mentions.Length).Append(" | ")
               .Append(h.Mentions.IsEmpty ? "" : index.Mentions[h.Mentions[0]].Time.Start.ToString()).Append(" | ")
@@ -75,13 +75,22 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         md.Append('\n');
     }
 
+    /// <summary>The headings the index says may be the same person (a probable merge it did not make).</summary>
+    private static string PossiblySame(InterviewIndex index, Heading h)
+    {
+        var names = h.PossiblySame.Select(id => index.Headings.FirstOrDefault(o => o.Id == id)).OfType<Heading>().Select(o => MarkdownText.Escape(o.Name)).ToList();
+        return names.Count == 0 ? "" : " (possibly the same person as " + string.Join(", ", names) + ")";
+    }
+
     private static string Place(Heading h)
     {
-        if (h.Place is null) return h.Label == NameLabel.LOC ? "not in the gazetteer" : "";
+        var others = "; or: " + string.Join(", ", h.Alternatives.Take(5).Select(a => $"{MarkdownText.Escape(a.Name)}, {MarkdownText.Escape(a.Country)}"));
+        if (h.Place is null)
+            return h.Label != NameLabel.LOC ? "" : h.Alternatives.IsEmpty ? "not in the gazetteer" : "not linked: may be a historical place" + others;
         var p = h.Place;
-        var text = $"{MarkdownText.Escape(p.Name)}, {MarkdownText.Escape(p.Country)} ({Numbers.Coordinate(p.Latitude)}, {Numbers.Coordinate(p.Longitude)}; {(p.HasGeonameId ? $"GeoNames {p.GeonameId}" : "country")})";
+        var text = $"{(p.Name == h.Name ? "" : "at ")}{MarkdownText.Escape(p.Name)}, {MarkdownText.Escape(p.Country)} ({Numbers.Coordinate(p.Latitude)}, {Numbers.Coordinate(p.Longitude)}; {PlaceSource.Of(p)})";
         if (!h.Alternatives.IsEmpty)
-            text += "; or: " + string.Join(", ", h.Alternatives.Take(5).Select(a => $"{MarkdownText.Escape(a.Name)}, {MarkdownText.Escape(a.Country)}"));
+            text += others;
         return text;
     }
 

@@ -8,9 +8,16 @@ using SwitchTag.Core.Languages;
 namespace SwitchTag.Indexing.Tests.Fakes;
 
 /// <summary>A lexicon with a fixed place list (keyed by folded name or key) and a crude fold (lower case, marks removed, one Polish
-/// case ending stripped), so heading tests do not move when the real lexicon changes.</summary>
-public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places) : IHeadingLexicon
+/// case ending stripped), so heading tests do not move when the real lexicon changes; <paramref name="diminutives"/> maps a
+/// diminutive to its full given name, <paramref name="listed"/> the camps and historical places by the name said.</summary>
+public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places, IReadOnlyDictionary<string, string>? diminutives = null,
+    IReadOnlyDictionary<string, ListedPlace>? listed = null) : IHeadingLexicon
 {
+    public ListedPlace? Listed(string name, LanguageCode language) => listed?.GetValueOrDefault(name);
+
+    public bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
+        Key(a, languageA) == Key(b, languageB) || diminutives?.GetValueOrDefault(b) == a || diminutives?.GetValueOrDefault(a) == b;
+
     public string Key(string name, LanguageCode language) =>
         string.Join(' ', Fold(name).Split(' ', StringSplitOptions.RemoveEmptyEntries).Select(Stem));
 

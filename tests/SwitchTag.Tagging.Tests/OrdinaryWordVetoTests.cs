@@ -1,0 +1,45 @@
+using SwitchTag.Core.Documents;
+using SwitchTag.Lexicon;
+using SwitchTag.Lexicon.NameLists;
+using SwitchTag.Tagging.Sources.Vetoes;
+
+namespace SwitchTag.Tagging.Tests;
+
+/// <summary>Ordinary words are not places unless their context says so. Checked on the shipped gazetteer:
+/// "las" is written in lower case 1,371 times in ../shared/data/lid/es.txt (UD Spanish, counted with grep),
+/// so it carries the common-word flag, and GeoNames cities1000 has Lāsh, AF, which folds to "las" (issue 10
+/// saw "Las" linked there). Spanish "en" (in) is in models/lexicon/place-prepositions.tsv.</summary>
+public class OrdinaryWordVetoTests
+{
+    private static readonly Lazy<OrdinaryWordVeto> Veto = new(() =>
+    {
+        var gazetteer = Gazetteer.Load(Path.Combine(Models.Directory, Gazetteer.FileName));
+        var lists = NameListSet.Load(Path.Combine(Models.Directory, NameListSet.FolderName));
+        return new OrdinaryWordVeto(gazetteer, lists.Prepositions);
+    });
+
+    private static Mention Las(string text, MentionSource source)
+    {
+        int at = text.IndexOf("Las", StringComparison.Ordinal);
+        return new Mention(0, at, at + 3, "Las", NameLabel.LOC, "es", 0.9, source);
+    }
+
+    [Fact]
+    public void A_bare_gazetteer_match_of_an_ordinary_word_is_no_place()
+    {
+        Assert.True(Veto.Value.Vetoes(Las("Y dijo que Las eran buenas.", MentionSource.Gazetteer), "Y dijo que Las eran buenas."));
+    }
+
+    [Fact]
+    public void A_model_place_at_a_sentence_start_is_no_place_but_mid_sentence_it_stands()
+    {
+        Assert.True(Veto.Value.Vetoes(Las("Las chicas contestaban.", MentionSource.Model), "Las chicas contestaban."));
+        Assert.False(Veto.Value.Vetoes(Las("Y dijo que Las eran buenas.", MentionSource.Model), "Y dijo que Las eran buenas."));
+    }
+
+    [Fact]
+    public void A_locative_preposition_keeps_the_place()
+    {
+        Assert.False(Veto.Value.Vetoes(Las("Vivimos en Las.", MentionSource.Gazetteer), "Vivimos en Las."));
+    }
+}
