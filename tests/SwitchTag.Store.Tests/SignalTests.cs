@@ -12,6 +12,9 @@ namespace SwitchTag.Store.Tests;
 /// <summary>Issue 11 (found item 7, deliver item 3): a run ended by SIGTERM or SIGINT (signal numbers 15 and 2, POSIX
 /// signal.h on Linux) leaves no temporary file, no hidden half folder and no hot store journal, and
 /// the outputs of earlier runs stay whole. The command runs as a child process, as a person runs it.</summary>
+// One collection: the child processes of these tests would otherwise compete for the CPU and
+// stretch each other past their waits.
+[Collection("child processes")]
 public class SignalTests
 {
     private static readonly string Demo = Path.Combine(TestPaths.RepoRoot, "transcripts-demo", "kowalczyk-1998.vtt");
