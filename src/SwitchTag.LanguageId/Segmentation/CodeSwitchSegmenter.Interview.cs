@@ -22,7 +22,8 @@ public sealed partial class CodeSwitchSegmenter
     /// switching into a language (every language outside the profile gets
     /// <see cref="InterviewParameters.OutsideShare"/>: a third language needs strong evidence, but
     /// gets through when it has it), and with the previous turn's last language mixed into the
-    /// starting prior, so "no." or "sí." follows the conversation.</summary>
+    /// starting prior, so "no." or "sí." follows the conversation. A language that the decoded
+    /// words put at MinShare or more joins the profile, and the turns are decoded once more.</summary>
     public InterviewSegmentation SegmentInterview(IReadOnlyList<string> turns, InterviewParameters? parameters = null)
     {
         var p = parameters ?? InterviewParameters.Default;
@@ -33,6 +34,33 @@ public sealed partial class CodeSwitchSegmenter
 
         var classShare = EstimateShares(evidence);
         var profile = ProfileOf(classShare, p);
+        var decoded = DecodeTurns(turns, evidence, classShare, profile, p);
+        // Turn-level shares give a language spoken only inside turns of another (a narrator's Polish
+        // phrases in English answers) nothing; when the decoded words put such a language at MinShare
+        // or more, it joins the profile with its share of the decoded words and the turns are
+        // decoded again within it.
+        double total = decoded.Words.Sum();
+        if (total == 0) return decoded.Result;
+        var joined = (double[])classShare.Clone();
+        bool grew = false;
+        for (int c = 0; c < joined.Length; c++)
+        {
+            var code = _model.ClassCodes[c];
+            if (profile.Contains(code) || decoded.Words[c] / total < p.MinShare) continue;
+            joined[c] = decoded.Words[c] / total;
+            grew = true;
+        }
+        if (!grew) return decoded.Result;
+        double sum = joined.Sum();
+        for (int c = 0; c < joined.Length; c++) joined[c] /= sum;
+        return DecodeTurns(turns, evidence, joined, ProfileOf(joined, p), p).Result;
+    }
+
+    /// <summary>The second pass: each turn decoded within <paramref name="profile"/>; also the decoded
+    /// word weight per class, over all turns.</summary>
+    private (InterviewSegmentation Result, double[] Words) DecodeTurns(IReadOnlyList<string> turns, TurnEvidence[] evidence,
+        double[] classShare, InterviewLanguages profile, InterviewParameters p)
+    {
         int classes = _model.ClassCount;
         var logPrior = new float[classes];
         for (int c = 0; c < classes; c++)
@@ -41,6 +69,7 @@ public sealed partial class CodeSwitchSegmenter
         var enter = new float[classes];
         for (int c = 0; c < classes; c++) enter[c] = p.SwitchCost - p.EnterWeight * logPrior[c];
         var noBonus = new float[classes];
+        var words = new double[classes];
         var guesses = ImmutableArray.CreateBuilder<LanguageGuess>(turns.Count);
         var spans = ImmutableArray.CreateBuilder<ImmutableArray<LanguageSpan>>(turns.Count);
         int previousCode = -1;
@@ -62,6 +91,7 @@ public sealed partial class CodeSwitchSegmenter
             // A lone name ("Irena Kowalczyk.") is no switch even into a language of the interview.
             MergeShortIslands(text, ev, labels, p.MinIslandWeight, (code, namesOnly) => namesOnly || !profile.Contains(_codes[code]));
             if (p.KeepKnownWords) MergeKnownWords(text, ev, labels);
+            for (int w = 0; w < labels.Length; w++) words[labels[w]] += ev.Weights[w];
             var posterior = CodePosterior(ev, 0, ev.Count, logPrior);
             spans.Add(Calibrate(BuildSpans(text, ev, labels, logPrior, posterior), ev, profile, p));
             int best = ArgMax(posterior);
@@ -69,7 +99,7 @@ public sealed partial class CodeSwitchSegmenter
             guesses.Add(posterior[best] < MinConfidence ? new LanguageGuess(LanguageCode.Undetermined, 0) : new LanguageGuess(_codes[best], Math.Round(confidence, 4)));
             previousCode = _codeOfClass[labels[^1]];
         }
-        return new InterviewSegmentation(profile, guesses.MoveToImmutable(), spans.MoveToImmutable());
+        return (new InterviewSegmentation(profile, guesses.MoveToImmutable(), spans.MoveToImmutable()), words);
     }
 
     private static ImmutableArray<LanguageSpan> Calibrate(ImmutableArray<LanguageSpan> spans, TurnEvidence evidence,
