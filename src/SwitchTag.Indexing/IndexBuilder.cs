@@ -5,6 +5,7 @@ using SwitchTag.Core.Stages;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing.Decisions;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Indexing;
 
@@ -51,7 +52,7 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         var duration = (transcript.Cues.IsEmpty ? Timecode.Zero : transcript.Cues.Max(c => c.Time.End)) - Timecode.Zero;
 
         var foreign = safeSpans
-            .SelectMany((list, t) => list.Where(s => WorklistBuilder.IsForeign(s.Language, mainLanguage)).Select(s => new ForeignSpan(t, s.CharStart, s.CharEnd, s.Language)))
+            .SelectMany((list, t) => list.Where(s => WorklistBuilder.IsForeign(s.Language, mainLanguage)).Select(s => new ForeignSpan(t, new CharSpan(s.CharStart, s.CharEnd), s.Language)))
             .ToImmutableArray();
         return new InterviewIndex(transcript, mainLanguage, duration, turns, timedSpans, LanguageStatistics.Compute(turns, timedSpans), foreign, indexed,
             headings.Headings, worklist, headings.Review, diagnostics.ToImmutable(), outcomes);

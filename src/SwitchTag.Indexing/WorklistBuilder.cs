@@ -37,7 +37,7 @@ public static class WorklistBuilder
                     double confidence = Math.Round(ConfidenceOver(list, i, j, start, end), 4);
                     items.Add(new WorklistItem(
                         aligner.Align(turn, start, end), turn.Speaker, span.Language, confidence,
-                        turn.Text[start..end], t, start, end, WordCount.Of(turn.Text, start, end), confidence < checkBelow));
+                        turn.Text[start..end], t, new CharSpan(start, end), WordCount.Of(turn.Text, start, end), confidence < checkBelow));
                 }
                 i = j + 1;
             }
@@ -52,7 +52,7 @@ public static class WorklistBuilder
     /// carry the spaces after their last word), pieces holding no word left out.</summary>
     private static IEnumerable<(int Start, int End)> CuePieces(Turn turn, int start, int end)
     {
-        var cues = turn.Cues.IsDefaultOrEmpty ? [new TurnCue(-1, 0, turn.Text.Length)] : turn.Cues;
+        var cues = turn.Cues.IsDefaultOrEmpty ? [new TurnCue(-1, new CharSpan(0, turn.Text.Length))] : turn.Cues;
         foreach (var cue in cues)
         {
             int s = Math.Max(start, cue.CharStart), e = Math.Min(end, cue.CharEnd);

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Lexicon;
 

@@ -1,3 +1,5 @@
+using SwitchTag.Core.Text;
+
 namespace SwitchTag.Lexicon;
 
 /// <summary>Collects <see cref="NameCaution"/>s for gazetteer names from text corpora: one-sentence-

@@ -10,6 +10,7 @@ using SwitchTag.Tagging.Sources.Authority;
 using SwitchTag.Tagging.Sources.Gazetteer;
 using SwitchTag.Tagging.Sources.Model;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Pipeline;
 
@@ -58,7 +59,7 @@ public static partial class PersonAsPlaceEvaluation
                 for (int k = 1; k < starts.Length; k++) starts[k] = starts[k - 1] + s.Words[k - 1].Length + 1;
                 var text = string.Join(' ', s.Words);
                 if (text.Length == 0) continue;
-                ImmutableArray<LanguageSpan> spans = [new LanguageSpan(0, text.Length, language, 1)];
+                ImmutableArray<LanguageSpan> spans = [new LanguageSpan(new CharSpan(0, text.Length), language, 1)];
                 var plainPlaces = Places(plain.Tag(0, text, spans));
                 var cascadePlaces = Places(cascade.Tag(0, text, spans));
                 for (int k = 0; k < s.Words.Count; k++)

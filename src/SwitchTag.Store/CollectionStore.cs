@@ -4,6 +4,7 @@ using Microsoft.Data.Sqlite;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Store;
 
@@ -164,7 +165,7 @@ public sealed class CollectionStore : IDisposable
             long interview = r.GetInt64(0);
             int turn = r.GetInt32(1);
             if (!turnText.TryGetValue((interview, turn), out var text)) turnText[(interview, turn)] = text = r.GetString(13);
-            var mention = new Mention(turn, r.GetInt32(2), r.GetInt32(3), r.GetString(5), Enum.Parse<NameLabel>(r.GetString(6)),
+            var mention = new Mention(turn, new CharSpan(r.GetInt32(2), r.GetInt32(3)), r.GetString(5), Enum.Parse<NameLabel>(r.GetString(6)),
                 new LanguageCode(r.GetString(7)), r.GetDouble(8), new MentionSource(r.GetString(9)));
             Add(mentions, interview, new StoredMention(new Timecode(r.GetInt64(4)), mention, r.IsDBNull(12) ? null : r.GetString(12),
                 r.IsDBNull(10) ? null : r.GetString(10), r.IsDBNull(11) ? null : r.GetString(11), text));

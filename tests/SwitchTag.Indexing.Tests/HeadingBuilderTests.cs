@@ -4,6 +4,7 @@ using SwitchTag.Core.Time;
 using SwitchTag.Indexing;
 using SwitchTag.Indexing.Tests.Fakes;
 using Xunit;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Indexing.Tests;
 
@@ -11,7 +12,7 @@ public class HeadingBuilderTests
 {
     private static HeadingResult Build(IHeadingLexicon lexicon, params (string Text, NameLabel Label, string Language)[] names)
     {
-        var mentions = names.Select((n, i) => new Mention(0, i * 20, i * 20 + n.Text.Length, n.Text, n.Label, n.Language, 0.9, MentionSource.Model)).ToImmutableArray();
+        var mentions = names.Select((n, i) => new Mention(0, new CharSpan(i * 20, i * 20 + n.Text.Length), n.Text, n.Label, n.Language, 0.9, MentionSource.Model)).ToImmutableArray();
         var times = names.Select((_, i) => new TimeRange(new Timecode(i * 1000), new Timecode(i * 1000 + 500))).ToImmutableArray();
         var turn = new Turn(0, "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(100_000)), new string(' ', names.Length * 20 + 40), []);
         return new HeadingBuilder(lexicon).Build(mentions, times, [turn]);
@@ -104,8 +105,8 @@ public class HeadingBuilderTests
     {
         // English grammar (from memory): "her" is a pronoun; capitalised only at a sentence start.
         var mentions = ImmutableArray.Create(
-            new Mention(0, 0, 3, "Her", NameLabel.PER, "en", 0.9, MentionSource.Model),
-            new Mention(0, 26, 31, "Irena", NameLabel.PER, "en", 0.9, MentionSource.Model));
+            new Mention(0, new CharSpan(0, 3), "Her", NameLabel.PER, "en", 0.9, MentionSource.Model),
+            new Mention(0, new CharSpan(26, 31), "Irena", NameLabel.PER, "en", 0.9, MentionSource.Model));
         var times = ImmutableArray.Create(new TimeRange(Timecode.Zero, new Timecode(500)), new TimeRange(new Timecode(1000), new Timecode(1500)));
         const string text = "Her mother knew her well. Irena";
         var turn = new Turn(0, "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);

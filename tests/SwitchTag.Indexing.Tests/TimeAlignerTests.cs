@@ -4,6 +4,7 @@ using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing;
 using Xunit;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Indexing.Tests;
 
@@ -12,7 +13,7 @@ public class TimeAlignerTests
     private static (TimeAligner, Turn) One(string text, long start, long end, params (int, long)[] words)
     {
         var cue = new Cue(new TimeRange(new Timecode(start), new Timecode(end)), "a", "A", text,
-            words.Select(w => new WordTime(w.Item1, new Timecode(w.Item2))).ToImmutableArray(), new SourceLine("t.vtt", 1), 0, 0);
+            words.Select(w => new WordTime(w.Item1, new Timecode(w.Item2))).ToImmutableArray(), new SourceLine("t.vtt", 1), new CharSpan(0, 0));
         var transcript = new Transcript(new SourceInfo("t.vtt", TranscriptFormat.WebVtt, ""), "", [cue], []);
         return (new TimeAligner(transcript), TurnBuilder.Build(transcript)[0]);
     }
@@ -45,8 +46,8 @@ public class TimeAlignerTests
     [Fact]
     public void A_range_across_two_cues_starts_in_the_first_and_ends_in_the_second()
     {
-        var c1 = new Cue(new TimeRange(new Timecode(0), new Timecode(4_000)), "a", "A", "abcd", [], new SourceLine("t", 1), 0, 0);
-        var c2 = new Cue(new TimeRange(new Timecode(5_000), new Timecode(9_000)), "a", "A", "efgh", [], new SourceLine("t", 4), 0, 0);
+        var c1 = new Cue(new TimeRange(new Timecode(0), new Timecode(4_000)), "a", "A", "abcd", [], new SourceLine("t", 1), new CharSpan(0, 0));
+        var c2 = new Cue(new TimeRange(new Timecode(5_000), new Timecode(9_000)), "a", "A", "efgh", [], new SourceLine("t", 4), new CharSpan(0, 0));
         var transcript = new Transcript(new SourceInfo("t", TranscriptFormat.Srt, ""), "", [c1, c2], []);
         var turn = TurnBuilder.Build(transcript)[0]; // "abcd efgh": cue 2 holds chars [5, 9)
         var time = new TimeAligner(transcript).Align(turn, 2, 7);

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
 using SwitchTag.LanguageId.Interview;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.LanguageId.Tests;
 
@@ -16,7 +17,7 @@ public sealed class MainLanguageChooserTests
         int at = 0;
         foreach (var (language, chars) in parts)
         {
-            spans.Add(new LanguageSpan(at, at + chars, language, 0.9));
+            spans.Add(new LanguageSpan(new CharSpan(at, at + chars), language, 0.9));
             at += chars;
         }
         var turn = new Turn(0, speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(seconds * 1000L)), new string('x', at), []);

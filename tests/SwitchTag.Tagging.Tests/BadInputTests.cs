@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Tagging;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging.Tests;
 
@@ -11,7 +12,7 @@ public class BadInputTests
     private static readonly NameTagger Tagger = NameTagger.Create(Models.Ner);
 
     private static ImmutableArray<Mention> Tag(string text) =>
-        Tagger.Tag(0, text, [new LanguageSpan(0, text.Length, "und", 0.5)]);
+        Tagger.Tag(0, text, [new LanguageSpan(new CharSpan(0, text.Length), "und", 0.5)]);
 
     private static void AssertWellFormed(string text, ImmutableArray<Mention> mentions)
     {

@@ -1,5 +1,6 @@
 using SwitchTag.Core.Documents;
 using SwitchTag.Tagging.Sources;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging.Tests;
 
@@ -9,7 +10,7 @@ namespace SwitchTag.Tagging.Tests;
 public class NamePrecedenceTests
 {
     private static Mention M(int start, int end, MentionSource source, NameLabel label = NameLabel.LOC) =>
-        new(0, start, end, new string('x', end - start), label, "en", 0.9, source);
+        new(0, new CharSpan(start, end), new string('x', end - start), label, "en", 0.9, source);
 
     [Fact]
     public void AnAuthoritySpanIsNeverOverwritten()

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
 using SwitchTag.Tagging;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging.Tests;
 
@@ -11,7 +12,7 @@ public class NameTaggerTests
 {
     private static AuthorityList Authority(string csv) => AuthorityList.Parse(csv, "test.csv").List;
 
-    private static ImmutableArray<LanguageSpan> English(string text) => [new LanguageSpan(0, text.Length, "en", 1.0)];
+    private static ImmutableArray<LanguageSpan> English(string text) => [new LanguageSpan(new CharSpan(0, text.Length), "en", 1.0)];
 
     [Fact]
     public void ListedPersonIsNeverAPlaceOrOrganisation()
@@ -57,7 +58,7 @@ public class NameTaggerTests
     {
         var tagger = NameTagger.Create(Models.Ner);
         const string text = "My father worked in Chicago, and then jsme se vrátili do Prahy.";
-        ImmutableArray<LanguageSpan> spans = [new(0, 36, "en", 0.9), new(36, text.Length, "cs", 0.8)];
+        ImmutableArray<LanguageSpan> spans = [new(new CharSpan(0, 36), "en", 0.9), new(new CharSpan(36, text.Length), "cs", 0.8)];
         var mentions = tagger.Tag(0, text, spans);
         Assert.NotEmpty(mentions);
         foreach (var m in mentions)
@@ -75,7 +76,7 @@ public class NameTaggerTests
     [InlineData("מיר זײַנען געקומען קיין ווילנע מיט משה ראָזענבערג.", "yi", "ווילנע")]
     public void ModelMentionsInCyrillicAndHebrewAreKept(string text, string language, string name)
     {
-        var mentions = NameTagger.Create(Models.Ner).Tag(0, text, [new LanguageSpan(0, text.Length, language, 1.0)]);
+        var mentions = NameTagger.Create(Models.Ner).Tag(0, text, [new LanguageSpan(new CharSpan(0, text.Length), language, 1.0)]);
         Assert.Contains(mentions, m => m.Source == MentionSource.Model && m.Text.Contains(name));
     }
 }

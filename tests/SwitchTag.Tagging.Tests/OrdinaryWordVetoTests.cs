@@ -2,6 +2,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Tagging.Sources.Vetoes;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging.Tests;
 
@@ -21,7 +22,7 @@ public class OrdinaryWordVetoTests
     private static Mention Las(string text, MentionSource source)
     {
         int at = text.IndexOf("Las", StringComparison.Ordinal);
-        return new Mention(0, at, at + 3, "Las", NameLabel.LOC, "es", 0.9, source);
+        return new Mention(0, new CharSpan(at, at + 3), "Las", NameLabel.LOC, "es", 0.9, source);
     }
 
     [Fact]

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
 
@@ -6,7 +7,11 @@ namespace SwitchTag.Core.Documents;
 
 /// <summary>A stretch of a turn's text in one language. Language is an ISO 639-1 code where one
 /// exists, else ISO 639-3, or <c>und</c> when nothing is confident.</summary>
-public sealed record LanguageSpan(int CharStart, int CharEnd, LanguageCode Language, double Confidence);
+public sealed record LanguageSpan(CharSpan Chars, LanguageCode Language, double Confidence)
+{
+    public int CharStart => Chars.Start;
+    public int CharEnd => Chars.End;
+}
 
 public enum NameLabel { PER, LOC, ORG }
 
@@ -31,13 +36,16 @@ public readonly record struct MentionSource(string Name)
 /// <summary>A name found in a turn: offsets into <see cref="Turn.Text"/>.</summary>
 public sealed record Mention(
     int Turn,
-    int CharStart,
-    int CharEnd,
+    CharSpan Chars,
     string Text,
     NameLabel Label,
     LanguageCode Language,
     double Confidence,
-    MentionSource Source);
+    MentionSource Source)
+{
+    public int CharStart => Chars.Start;
+    public int CharEnd => Chars.End;
+}
 
 /// <summary>Anything with char offsets into a turn, placed in the recording.</summary>
 public sealed record Timed<T>(T Value, TimeRange Time);

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
+using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
 
@@ -44,17 +45,24 @@ public sealed record WorklistItem(
     double Confidence,
     string Text,
     int Turn,
-    int CharStart,
-    int CharEnd,
+    CharSpan Chars,
     int Words,
-    bool Check = false);
+    bool Check = false)
+{
+    public int CharStart => Chars.Start;
+    public int CharEnd => Chars.End;
+}
 
 /// <summary>How much of the interview is in one language: seconds of recording and words.</summary>
 public sealed record LanguageShare(LanguageCode Language, double Seconds, int Words);
 
 /// <summary>A language span outside the interview's main language (<c>und</c> excluded), offsets into
 /// its turn's text: what the annotated transcript marks.</summary>
-public sealed record ForeignSpan(int Turn, int CharStart, int CharEnd, LanguageCode Language);
+public sealed record ForeignSpan(int Turn, CharSpan Chars, LanguageCode Language)
+{
+    public int CharStart => Chars.Start;
+    public int CharEnd => Chars.End;
+}
 
 /// <summary>A mention held back from the index for a person to decide.</summary>
 public sealed record ReviewItem(int Mention, string Reason);

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 
 namespace SwitchTag.Core.Documents;
@@ -39,8 +40,7 @@ public sealed record WordTime(int CharOffset, Timecode Time);
 /// <param name="Speaker">Normalised speaker label (case, spacing and trailing colon folded), or null.</param>
 /// <param name="SpeakerLabel">The label exactly as written in the file, or null.</param>
 /// <param name="Text">Plain text: markup removed, character references decoded, lines joined by '\n'.</param>
-/// <param name="RawStart">Char offset of the cue's first line in <see cref="Transcript.OriginalText"/>.</param>
-/// <param name="RawEnd">Char offset just past the cue's last line in <see cref="Transcript.OriginalText"/>.</param>
+/// <param name="Raw">Its lines in <see cref="Transcript.OriginalText"/>: from the first line's start to just past the last line.</param>
 public sealed record Cue(
     TimeRange Time,
     string? Speaker,
@@ -48,10 +48,13 @@ public sealed record Cue(
     string Text,
     ImmutableArray<WordTime> WordTimes,
     SourceLine At,
-    int RawStart,
-    int RawEnd,
+    CharSpan Raw,
     string? Identifier = null,
-    string? Settings = null);
+    string? Settings = null)
+{
+    public int RawStart => Raw.Start;
+    public int RawEnd => Raw.End;
+}
 
 /// <summary>A whole transcript file as read: the verbatim text and every cue found in it.</summary>
 public sealed record Transcript(

@@ -1,10 +1,15 @@
 using System.Collections.Immutable;
+using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 
 namespace SwitchTag.Core.Documents;
 
-/// <summary>Where one cue's plain text sits inside its turn's text: <c>[CharStart, CharEnd)</c>.</summary>
-public sealed record TurnCue(int CueIndex, int CharStart, int CharEnd);
+/// <summary>Where one cue's plain text sits inside its turn's text.</summary>
+public sealed record TurnCue(int CueIndex, CharSpan Chars)
+{
+    public int CharStart => Chars.Start;
+    public int CharEnd => Chars.End;
+}
 
 /// <summary>Consecutive cues of one speaker. <see cref="Text"/> is the cues' plain texts joined by
 /// one space; every char offset of later stages is into this text.</summary>

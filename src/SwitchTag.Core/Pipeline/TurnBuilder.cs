@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Core.Pipeline;
 
@@ -37,7 +38,7 @@ public static class TurnBuilder
             if (c > first) text.Append(' ');
             int charStart = text.Length;
             text.Append(cues[c].Text);
-            parts.Add(new TurnCue(c, charStart, text.Length));
+            parts.Add(new TurnCue(c, new CharSpan(charStart, text.Length)));
             start = Timecode.Min(start, cues[c].Time.Start);
             end = Timecode.Max(end, cues[c].Time.End);
         }

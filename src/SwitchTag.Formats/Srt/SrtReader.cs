@@ -4,6 +4,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
 using SwitchTag.Formats.Reading;
 using SwitchTag.Formats.Text;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Formats.Srt;
 
@@ -68,7 +69,7 @@ public sealed class SrtReader : ITranscriptReader
                 text.Append(Markup.StripSrtTags(src.Span(src[k])));
             }
             cues.Add(new Cue(range, null, null, text.ToString(), [],
-                src.At(src[blockStart].Number), src[blockStart].Start, src[i - 1].End,
+                src.At(src[blockStart].Number), new CharSpan(src[blockStart].Start, src[i - 1].End),
                 Identifier: timing > blockStart ? src.Str(src[blockStart]).Trim() : null, Settings: settings));
         }
         return CueChecks.Finish(Speakers(cues), overlapAllowed: false, diagnostics);

@@ -2,6 +2,7 @@ using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
 using SwitchTag.Formats.Reading;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Formats.Timestamped;
 
@@ -133,7 +134,7 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
             }
             int firstLine = p == 0 ? entry.Line : lines[0].Line;
             cues.Add(new Cue(time, SpeakerLabels.Normalise(partLabel), partLabel, text.ToString(), [],
-                src.At(firstLine), src[firstLine - 1].Start, src[lines[^1].Line - 1].End));
+                src.At(firstLine), new CharSpan(src[firstLine - 1].Start, src[lines[^1].Line - 1].End)));
         }
         return label;
     }

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
 using SwitchTag.Formats.Reading;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Formats.WebVtt;
 
@@ -85,7 +86,7 @@ public sealed class WebVttReader : ITranscriptReader
         string? identifier = timing > blockStart ? src.Str(src[blockStart]) : null;
         int rawEnd = src[blockEnd - 1].End;
         cues.Add(new Cue(range, text.Voice, text.Voice, text.Plain, text.WordTimes,
-            src.At(src[blockStart].Number), src[blockStart].Start, rawEnd, Identifier: identifier, Settings: settings));
+            src.At(src[blockStart].Number), new CharSpan(src[blockStart].Start, rawEnd), Identifier: identifier, Settings: settings));
     }
 
     /// <summary>"start --> end [settings]"; the settings are kept as written (not interpreted).</summary>

@@ -3,6 +3,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.LanguageId.Interview;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.LanguageId.Segmentation;
 
@@ -81,7 +82,7 @@ public sealed partial class CodeSwitchSegmenter
             if (text.Length == 0) { spans.Add([]); guesses.Add(new LanguageGuess(LanguageCode.Undetermined, 0)); continue; }
             if (ev.Count == 0)
             {
-                spans.Add([new LanguageSpan(0, text.Length, LanguageCode.Undetermined, 0)]);
+                spans.Add([new LanguageSpan(new CharSpan(0, text.Length), LanguageCode.Undetermined, 0)]);
                 guesses.Add(new LanguageGuess(LanguageCode.Undetermined, 0));
                 continue;
             }

@@ -92,7 +92,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
     {
         if (string.IsNullOrEmpty(text)) return [];
         var evidence = CollectEvidence(text, parameters, null);
-        if (evidence.Count == 0) return [new LanguageSpan(0, text.Length, LanguageCode.Undetermined, 0)];
+        if (evidence.Count == 0) return [new LanguageSpan(new CharSpan(0, text.Length), LanguageCode.Undetermined, 0)];
         int classes = _model.ClassCount;
         var start = new float[classes];
         var enter = new float[classes];
@@ -284,7 +284,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             int end = w < evidence.Count ? tokens[evidence.TokenIndex[w]].Start : text.Length;
             int code = _codeOfClass[labels[runFirst]];
             var posterior = runFirst == 0 && w == evidence.Count && wholeTurn is not null ? wholeTurn : CodePosterior(evidence, runFirst, w, logPrior);
-            spans.Add(new LanguageSpan(runStart, end, _codes[code], Math.Round(posterior[code], 4)));
+            spans.Add(new LanguageSpan(new CharSpan(runStart, end), _codes[code], Math.Round(posterior[code], 4)));
             runStart = end;
             runFirst = w;
         }
@@ -321,32 +321,12 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         if (_names is not null && _names.IsKnownName(word)) return 0;
         if (word.Length < 2 || !char.IsUpper(word[0])) return 1;
         if (IsAllUpper(word)) return p.NameWeight;
-        return IsSentenceStart(text, token.Start) ? 1 : p.NameWeight;
+        return TextPosition.IsSentenceStart(text, token.Start) ? 1 : p.NameWeight;
     }
 
     private static bool IsAllUpper(ReadOnlySpan<char> word)
     {
         foreach (char c in word) if (char.IsLower(c)) return false;
-        return true;
-    }
-
-    /// <summary>True at the text start or after sentence-final punctuation (skipping spaces, quotes,
-    /// brackets and transcriber tags), where capitals say nothing about names.</summary>
-    private static bool IsSentenceStart(ReadOnlySpan<char> text, int start)
-    {
-        for (int i = start - 1; i >= 0; i--)
-        {
-            char c = text[i];
-            if (char.IsWhiteSpace(c) || c is '"' or '\'' or '\u201C' or '\u201D' or '\u2018' or '\u2019' or '(' or '\u00AB' or '\u201E' or '-' or '\u2014') continue;
-            if (c == ']')
-            {
-                int open = text[..i].LastIndexOf('[');
-                if (open < 0) return false;
-                i = open;
-                continue;
-            }
-            return c is '.' or '!' or '?' or '\u2026' or ':' or ';';
-        }
         return true;
     }
 

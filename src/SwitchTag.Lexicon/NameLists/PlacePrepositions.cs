@@ -1,4 +1,5 @@
 using System.Collections.Frozen;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Lexicon.NameLists;
 

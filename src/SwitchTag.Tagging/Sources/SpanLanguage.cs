@@ -17,7 +17,7 @@ public static class SpanLanguage
             int mid = (lo + hi) >>> 1;
             if (spans[mid].CharEnd <= charStart) lo = mid + 1; else hi = mid;
         }
-        if (lo < spans.Length && spans[lo].CharStart <= charStart) return spans[lo].Language;
+        if (lo < spans.Length && spans[lo].Chars.Contains(charStart)) return spans[lo].Language;
         return spans.IsEmpty ? LanguageCode.Undetermined : spans.MinBy(s => Math.Min(Math.Abs(s.CharStart - charStart), Math.Abs(s.CharEnd - charStart)))!.Language;
     }
 }

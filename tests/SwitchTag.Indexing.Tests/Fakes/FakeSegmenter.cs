@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
 
@@ -27,9 +28,9 @@ public sealed class FakeSegmenter(IReadOnlyDictionary<string, string> words, str
             string word = text[start..i].Trim(',', '.', '!', '?', ':', ';');
             LanguageCode language = words.TryGetValue(word.ToLowerInvariant(), out var listed) ? new(listed) : mainLanguage;
             if (spans.Count > 0 && spans[^1].Language == language)
-                spans[^1] = spans[^1] with { CharEnd = i };
+                spans[^1] = spans[^1] with { Chars = new CharSpan(spans[^1].CharStart, i) };
             else
-                spans.Add(new LanguageSpan(start, i, language, language == mainLanguage ? 0.95 : 0.8));
+                spans.Add(new LanguageSpan(new CharSpan(start, i), language, language == mainLanguage ? 0.95 : 0.8));
         }
         return spans.ToImmutable();
     }

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
 
@@ -21,8 +22,8 @@ public sealed class FakeTagger(IReadOnlyList<(string Surface, NameLabel Label, d
                 bool word = (at == 0 || !char.IsLetter(turnText[at - 1])) && (end == turnText.Length || !char.IsLetter(turnText[end]));
                 if (!word || taken.AsSpan(at, surface.Length).Contains(true)) continue;
                 taken.AsSpan(at, surface.Length).Fill(true);
-                var language = spans.FirstOrDefault(s => s.CharStart <= at && at < s.CharEnd)?.Language ?? LanguageCode.Undetermined;
-                found.Add(new Mention(turnIndex, at, end, surface, label, language, confidence, MentionSource.Model));
+                var language = spans.FirstOrDefault(s => s.Chars.Contains(at))?.Language ?? LanguageCode.Undetermined;
+                found.Add(new Mention(turnIndex, new CharSpan(at, end), surface, label, language, confidence, MentionSource.Model));
             }
         }
         return found.ToImmutable();

@@ -4,6 +4,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
 
@@ -58,5 +59,5 @@ public static class Fixture
     private static Cue Cue(long start, long end, string speaker, string text, int line, (int Offset, long Ms)[]? words = null) => new(
         new TimeRange(new Timecode(start), new Timecode(end)), speaker, speaker, text,
         (words ?? []).Select(w => new WordTime(w.Offset, new Timecode(w.Ms))).ToImmutableArray(),
-        new SourceLine("fixture/anna-nowak.vtt", line), 0, 0);
+        new SourceLine("fixture/anna-nowak.vtt", line), new CharSpan(0, 0));
 }

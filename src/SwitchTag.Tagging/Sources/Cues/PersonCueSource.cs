@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging.Sources.Cues;
 
@@ -38,7 +39,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             if (places.Value.Any(p => p.CharStart <= markerStart && markerStart < p.CharEnd && p.CharEnd > words[i].End)) continue;
             if (first == last && InflectedTown(words[first], turnText, spans)) continue;
             int start = words[first].Start, end = words[last].End;
-            found.Add(new Mention(turn, start, end, turnText[start..end], NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
+            found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
             i = last;
         }
         return found.ToImmutable();

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging.Sources.Model;
 
@@ -21,7 +22,7 @@ public sealed class NameModelSource(NerModel model) : INameSource
         {
             int start = words[s.Start].Start, end = words[s.End - 1].End;
             if (!TrainedScripts.Covers(turnText.AsSpan(start, end - start))) continue;
-            mentions.Add(new Mention(turn, start, end, turnText[start..end], s.Label, SpanLanguage.At(spans, start), s.Confidence, MentionSource.Model));
+            mentions.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], s.Label, SpanLanguage.At(spans, start), s.Confidence, MentionSource.Model));
         }
         return mentions.ToImmutable();
     }

@@ -1,11 +1,12 @@
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Formats;
+using SwitchTag.Indexing;
 using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output.AnnotatedVtt;
 using Xunit;
 
-namespace SwitchTag.Indexing.Tests;
+namespace SwitchTag.Output.Tests;
 
 /// <summary>annotated.vtt reads back to the text it was written from (issue reproduction: whitespace-only
 /// lines inside a cue became cue ends, and "&amp;#13;&amp;#13;" glued two words). Character references

@@ -1,6 +1,6 @@
 using Microsoft.VisualBasic.FileIO;
 
-namespace SwitchTag.Indexing.Tests;
+namespace SwitchTag.Output.Tests;
 
 /// <summary>Parses CSV text with Microsoft.VisualBasic.FileIO.TextFieldParser, the .NET runtime's own
 /// CSV reader, as the outside check for the CSV writers.</summary>

@@ -3,13 +3,13 @@ using SwitchTag.Output;
 using SwitchTag.Tests.Shared;
 using Xunit;
 
-namespace SwitchTag.Indexing.Tests;
+namespace SwitchTag.Output.Tests;
 
 /// <summary>Every output of the fixed fixture (fake stages) against the files in Golden/, byte for
 /// byte. Set SWITCHTAG_UPDATE_GOLDEN=1 to rewrite them after an intended change, then review the diff.</summary>
 public class GoldenFileTests
 {
-    private static readonly string GoldenDir = Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Indexing.Tests", "Golden");
+    private static readonly string GoldenDir = Path.Combine(TestPaths.RepoRoot, "tests", "SwitchTag.Output.Tests", "Golden");
 
     public static TheoryData<string> Files() => new([.. OutputWriters.Default.InterviewFileNames, .. OutputWriters.Default.CollectionFileNames]);
 

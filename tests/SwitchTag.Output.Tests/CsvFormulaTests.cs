@@ -5,7 +5,7 @@ using SwitchTag.Output.MentionsCsv;
 using SwitchTag.Output.WorklistCsv;
 using Xunit;
 
-namespace SwitchTag.Indexing.Tests;
+namespace SwitchTag.Output.Tests;
 
 /// <summary>CSV formula neutralisation (SCHEMA.md, "CSV files"), as the OWASP "CSV Injection" page
 /// recommends (from memory): a cell starting with = + - @ TAB or CR gets a leading apostrophe and is

@@ -16,7 +16,7 @@ using SwitchTag.Output.Text;
 using SwitchTag.Output.WorklistCsv;
 using Xunit;
 
-namespace SwitchTag.Indexing.Tests;
+namespace SwitchTag.Output.Tests;
 
 public class OutputTests
 {

@@ -2,7 +2,7 @@ using SwitchTag.Formats.Files;
 using SwitchTag.Output;
 using Xunit;
 
-namespace SwitchTag.Indexing.Tests;
+namespace SwitchTag.Output.Tests;
 
 /// <summary>The interview folder name rule (SCHEMA.md, "Interview folders"). Path rules: POSIX
 /// pathname resolution gives "." and ".." their meaning; Windows reserves CON, PRN, AUX, NUL, COM1-9 and

@@ -7,7 +7,7 @@ using SwitchTag.Output.IndexJson;
 using SwitchTag.Tests.Shared;
 using Xunit;
 
-namespace SwitchTag.Indexing.Tests;
+namespace SwitchTag.Output.Tests;
 
 /// <summary>index.json against its documentation (src/SwitchTag.Output/SCHEMA.md) and the contract
 /// in /work/shared/DESIGN.md "Contracts".</summary>
