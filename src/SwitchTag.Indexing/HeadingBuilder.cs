@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
 
@@ -33,7 +34,9 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// lower case (names in cased scripts are capitalised; uncased scripts are never caught), one-word
 /// model mentions the interview also writes in lower case as an ordinary word (unless a place
 /// mention the gazetteer knows: "o porto" beside Porto) and one-word bare gazetteer matches it so
-/// writes (no context and no model backs them: "Coats from the morning" beside "sewing coats"), and
+/// writes (no context and no model backs them: "Coats from the morning" beside "sewing coats"),
+/// multi-word model mentions opening a sentence whose every word the interview also writes in lower
+/// case ("Mia madre si alzava" beside "mia" and "madre"; "She became"), and
 /// places whose every gazetteer candidate is accented otherwise (<see cref="Respelling"/>: "Perón" is
 /// not Péron, FR) or is a village named so only in one of its other names (<see cref="VillagePopulation"/>).</summary>
 public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow = HeadingBuilder.DefaultReviewBelow)
@@ -85,7 +88,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         for (int i = 0; i < n; i++)
         {
             if (accepted?.Contains(i) == true) continue;
-            var reason = ReviewReason(mentions[i], keys[i], places[i], respelled[i], labelsOfSurface[keys[i]], lowerWords);
+            var reason = ReviewReason(mentions[i], keys[i], places[i], respelled[i], labelsOfSurface[keys[i]], lowerWords, turns[mentions[i].Turn].Text);
             if (reason is null) continue;
             held[i] = true;
             review.Add(new ReviewItem(i, reason));
@@ -142,7 +145,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     }
 
     private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, PlaceLink? respelled, HashSet<NameLabel> labelsOfSurface,
-        HashSet<string> lowerWords)
+        HashSet<string> lowerWords, string turnText)
     {
         bool open = m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer;
         if (open && m.Label == NameLabel.LOC && respelled is not null)
@@ -161,6 +164,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             && !m.Text.Any(char.IsWhiteSpace) && m.Text.Length > 0 && char.IsUpper(m.Text[0])
             && lowerWords.Contains(m.Text.ToLowerInvariant()))
             return $"\"{m.Text}\" is also used as an ordinary word in this interview (\"{m.Text.ToLowerInvariant()}\")";
+        if (m.Source == MentionSource.Model && m.Text.Any(char.IsWhiteSpace) && TextPosition.IsSentenceStart(turnText, m.CharStart)
+            && Words(m.Text).All(w => lowerWords.Contains(w.ToLowerInvariant())))
+            return $"\"{m.Text}\" opens a sentence and its words are used as ordinary words in this interview";
         if (m.Confidence < reviewBelow)
             return FormattableString.Invariant($"low confidence ({m.Confidence:0.00})");
         return null;

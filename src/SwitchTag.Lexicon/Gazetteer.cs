@@ -1,8 +1,8 @@
+using SwitchTag.Core.Text;
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Languages;
-using SwitchTag.Core.Text;
 
 namespace SwitchTag.Lexicon;
 

@@ -189,4 +189,20 @@ public class HeadingBuilderTests
         var alone = Build(lexicon, ("Palestine", NameLabel.LOC, "en"), ("Paris", NameLabel.LOC, "en"), ("Lyon", NameLabel.LOC, "en"));
         Assert.Equal(-275, alone.Headings.Single(h => h.Variants.Contains("Palestine")).Place!.GeonameId);
     }
+
+    [Fact]
+    public void A_sentence_opening_phrase_of_ordinary_words_goes_to_review()
+    {
+        // Italian (from memory): "mia madre" is "my mother"; both words are ordinary words, capitalised only at a sentence start.
+        const string text = "Mia madre diceva sempre: la madre mia. Santa Maria";
+        int santa = text.IndexOf("Santa", StringComparison.Ordinal);
+        var mentions = ImmutableArray.Create(
+            new Mention(0, new CharSpan(0, 9), "Mia madre", NameLabel.LOC, "it", 0.9, MentionSource.Model),
+            new Mention(0, new CharSpan(santa, santa + 11), "Santa Maria", NameLabel.LOC, "it", 0.9, MentionSource.Model));
+        var times = ImmutableArray.Create(new TimeRange(Timecode.Zero, new Timecode(500)), new TimeRange(new Timecode(1000), new Timecode(1500)));
+        var turn = new Turn(0, "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);
+        var result = new HeadingBuilder(Fixture.Lexicon()).Build(mentions, times, [turn]);
+        Assert.Equal("\"Mia madre\" opens a sentence and its words are used as ordinary words in this interview", Assert.Single(result.Review).Reason);
+        Assert.Equal("Santa Maria", Assert.Single(result.Headings).Name);
+    }
 }

@@ -1,5 +1,5 @@
-using System.Collections.Frozen;
 using SwitchTag.Core.Text;
+using System.Collections.Frozen;
 
 namespace SwitchTag.Lexicon.NameLists;
 

@@ -1,7 +1,7 @@
+using SwitchTag.Core.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
-using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging.Sources.Vetoes;
 
