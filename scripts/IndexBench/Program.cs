@@ -12,8 +12,15 @@ using SwitchTag.Tagging;
 // End-to-end throughput of `switchtag index` on one core: the demo interviews read from disk, run
 // through every stage and written out (all outputs and the collection index), repeated until each
 // target word count is reached. Prints words/s per size and the process's peak working set.
+// With --stress, the generated inputs of StressCases instead, one child process per case.
 // Usage: IndexBench DEMO_DIR [--names rules-only|default] [SIZES...]
-if (args.Length < 1) { Console.Error.WriteLine("usage: IndexBench DEMO_DIR [--names rules-only|default] [words...]"); return 2; }
+//        IndexBench DEMO_DIR --stress [CASE...]    (IndexBench --inputs DIR writes those inputs)
+//        IndexBench DEMO_DIR --stages CASE         (one generated input, time and memory per stage)
+if (args is ["--inputs", var inputDir]) { StressCases.WriteInputs(inputDir); return 0; }
+if (args is [var stressDemo, "--case", var stressCase]) return StressCases.RunCase(stressDemo, stressCase);
+if (args is [_, "--stages", var stagesCase]) return StressCases.RunStages(stagesCase);
+if (args.Length >= 2 && args[1] == "--stress") return StressCases.RunAll(args[0], args[2..]);
+if (args.Length < 1) { Console.Error.WriteLine("usage: IndexBench DEMO_DIR [--names rules-only|default] [words...] | DEMO_DIR --stress [CASE...] | --inputs DIR"); return 2; }
 string demo = args[0];
 var mode = TaggingMode.RulesThenModel;
 var sizes = new List<long>();

@@ -49,12 +49,22 @@ public static class WorklistBuilder
         !language.IsUndetermined && language != mainLanguage;
 
     /// <summary>[start, end) cut at the turn's cue boundaries, each piece trimmed of spaces (spans
-    /// carry the spaces after their last word), pieces holding no word left out.</summary>
+    /// carry the spaces after their last word), pieces holding no word left out. Only the cues that
+    /// overlap [start, end) are visited (found by binary search), so a turn of hundreds of thousands
+    /// of cues with many foreign stretches costs no scan of all its cues per stretch.</summary>
     private static IEnumerable<(int Start, int End)> CuePieces(Turn turn, int start, int end)
     {
         var cues = turn.Cues.IsDefaultOrEmpty ? [new TurnCue(-1, new CharSpan(0, turn.Text.Length))] : turn.Cues;
-        foreach (var cue in cues)
+        // The first cue ending after start; cues before it cannot overlap [start, end).
+        int lo = 0, hi = cues.Length;
+        while (lo < hi)
         {
+            int mid = (lo + hi) >>> 1;
+            if (cues[mid].CharEnd <= start) lo = mid + 1; else hi = mid;
+        }
+        for (int c = lo; c < cues.Length && cues[c].CharStart < end; c++)
+        {
+            var cue = cues[c];
             int s = Math.Max(start, cue.CharStart), e = Math.Min(end, cue.CharEnd);
             while (s < e && char.IsWhiteSpace(turn.Text[s])) s++;
             while (e > s && char.IsWhiteSpace(turn.Text[e - 1])) e--;

@@ -271,9 +271,13 @@ public static class IndexRun
 
     private static void ReportDecisions(ImmutableArray<Decision> decisions, List<DecisionOutcome> outcomes, TextWriter log)
     {
+        // Summed per decision in one pass: a file of many decisions over many interviews costs no
+        // scan of every outcome per decision.
+        var total = new Dictionary<Decision, int>(ReferenceEqualityComparer.Instance);
+        foreach (var o in outcomes) total[o.Decision] = total.GetValueOrDefault(o.Decision) + o.Applied;
         foreach (var d in decisions)
         {
-            int applied = outcomes.Where(o => ReferenceEquals(o.Decision, d)).Sum(o => o.Applied);
+            int applied = total.GetValueOrDefault(d);
             log.WriteLine(applied > 0 ? $"decision applied {applied}x: {d}" : $"decision no longer matches anything: {d}");
         }
     }

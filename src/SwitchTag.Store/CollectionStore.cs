@@ -157,18 +157,31 @@ public sealed class CollectionStore : IDisposable
                 variants.TryGetValue((interview, id), out var v) ? v.ToImmutable() : []));
         });
         var mentions = new Dictionary<long, ImmutableArray<StoredMention>.Builder>();
-        var turnText = new Dictionary<(long, int), string>();
-        Each("SELECT m.interview_id, m.turn, m.char_start, m.char_end, m.start_ms, m.text, m.label, m.language, m.confidence, m.source, " +
-             "m.heading, m.review, t.speaker, t.text FROM mentions m JOIN turns t ON t.interview_id = m.interview_id AND t.turn = m.turn " +
-             "ORDER BY m.interview_id, m.mention", r =>
+        // Each turn's speaker and text read once, by key, not joined onto every mention row: a join
+        // copies the whole turn text per mention, quadratic in one long turn of many names.
+        var turns = new Dictionary<(long, int), (string? Speaker, string Text)?>();
+        using var turnQuery = _connection.CreateCommand();
+        turnQuery.CommandText = "SELECT speaker, text FROM turns WHERE interview_id = $i AND turn = $t";
+        var turnInterview = turnQuery.Parameters.Add("$i", SqliteType.Integer);
+        var turnIndex = turnQuery.Parameters.Add("$t", SqliteType.Integer);
+        (string? Speaker, string Text)? TurnOf(long interview, int turn)
+        {
+            turnInterview.Value = interview;
+            turnIndex.Value = turn;
+            using var r = turnQuery.ExecuteReader();
+            return r.Read() ? (r.IsDBNull(0) ? null : r.GetString(0), r.GetString(1)) : null;
+        }
+        Each("SELECT interview_id, turn, char_start, char_end, start_ms, text, label, language, confidence, source, heading, review " +
+             "FROM mentions ORDER BY interview_id, mention", r =>
         {
             long interview = r.GetInt64(0);
             int turn = r.GetInt32(1);
-            if (!turnText.TryGetValue((interview, turn), out var text)) turnText[(interview, turn)] = text = r.GetString(13);
+            if (!turns.TryGetValue((interview, turn), out var t)) turns[(interview, turn)] = t = TurnOf(interview, turn);
+            if (t is not { } found) return; // a mention without its turn is left out
             var mention = new Mention(turn, new CharSpan(r.GetInt32(2), r.GetInt32(3)), r.GetString(5), Enum.Parse<NameLabel>(r.GetString(6)),
                 new LanguageCode(r.GetString(7)), r.GetDouble(8), new MentionSource(r.GetString(9)));
-            Add(mentions, interview, new StoredMention(new Timecode(r.GetInt64(4)), mention, r.IsDBNull(12) ? null : r.GetString(12),
-                r.IsDBNull(10) ? null : r.GetString(10), r.IsDBNull(11) ? null : r.GetString(11), text));
+            Add(mentions, interview, new StoredMention(new Timecode(r.GetInt64(4)), mention, found.Speaker,
+                r.IsDBNull(10) ? null : r.GetString(10), r.IsDBNull(11) ? null : r.GetString(11), found.Text));
         });
         var decisions = new Dictionary<long, ImmutableArray<string>.Builder>();
         Each("SELECT interview_id, decision FROM decisions ORDER BY interview_id, position", r => Add(decisions, r.GetInt64(0), r.GetString(1)));

@@ -25,17 +25,28 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
         var kept = ImmutableArray.CreateBuilder<Mention>();
         var accepted = new HashSet<int>();
         var times = mentions.Select(timeOf).ToArray();
-        var picked = Mine.Select(d => d is MentionDecision md ? md.Pick(mentions, times).ToHashSet() : null).ToArray();
+        // A decision looks only at the mentions of its own text (any case), so many decisions on
+        // many mentions cost no scan of every mention per decision.
+        var byText = new Dictionary<string, List<int>>(StringComparer.OrdinalIgnoreCase);
+        for (int i = 0; i < mentions.Length; i++)
+        {
+            if (!byText.TryGetValue(mentions[i].Text, out var same)) byText[mentions[i].Text] = same = [];
+            same.Add(i);
+        }
+        // Per mention, the decisions that picked it, in file order.
+        var pickedBy = new List<int>?[mentions.Length];
+        for (int d = 0; d < Mine.Length; d++)
+            if (Mine[d] is MentionDecision md && byText.TryGetValue(md.Name, out var same))
+                foreach (int i in md.Pick(same, mentions, times)) (pickedBy[i] ??= []).Add(d);
         for (int i = 0; i < mentions.Length; i++)
         {
             var current = mentions[i];
             bool decided = false, rejected = false;
-            for (int d = 0; d < Mine.Length; d++)
+            foreach (int d in pickedBy[i] ?? [])
             {
-                if (Mine[d] is not MentionDecision decision || !picked[d]!.Contains(i)) continue;
                 counts[d]++;
                 decided = true;
-                if (decision.Apply(current) is { } next) current = next; else rejected = true;
+                if (((MentionDecision)Mine[d]).Apply(current) is { } next) current = next; else rejected = true;
             }
             if (rejected) continue;
             if (decided) accepted.Add(kept.Count);
@@ -52,11 +63,17 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
         var counts = new int[Mine.Length];
         var edit = new HeadingEdit(result.Headings.Select(h => new HeadingDraft(h)).ToList(), new bool[mentions.Length],
             mentions.Select(m => m.Label).ToArray(), times);
+        Dictionary<string, List<HeadingDraft>>? byName = null;
         for (int d = 0; d < Mine.Length; d++)
         {
             if (Mine[d] is not HeadingDecision decision) continue;
-            foreach (var h in edit.Drafts.Where(h => h.Answers(decision.Label, decision.Name)).ToList())
+            byName ??= DraftsByName(edit.Drafts);
+            if (!byName.TryGetValue(decision.Name, out var named)) continue;
+            var targets = named.Where(h => h.Answers(decision.Label, decision.Name)).ToList();
+            foreach (var h in targets)
                 if (decision.Apply(h, edit)) counts[d]++;
+            // Applying may rename, relabel, merge or remove drafts: look them up afresh.
+            if (targets.Count > 0) byName = null;
         }
 
         var newIndex = new int[mentions.Length];
@@ -75,6 +92,20 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
             foreach (int i in h.Mentions) headingOf[i] = h.Id;
         var review = result.Review.Where(r => !edit.Dropped[r.Mention]).Select(r => r with { Mention = newIndex[r.Mention] }).ToImmutableArray();
         return (keptMentions.ToImmutable(), keptTimes.ToImmutable(), new HeadingResult(headings, [.. headingOf], review), Outcomes(counts));
+    }
+
+    /// <summary>The drafts under each of their names (id, name, variants; any case), each list in
+    /// draft order, so a heading decision finds its headings without a scan of all of them.</summary>
+    private static Dictionary<string, List<HeadingDraft>> DraftsByName(List<HeadingDraft> drafts)
+    {
+        var byName = new Dictionary<string, List<HeadingDraft>>(StringComparer.OrdinalIgnoreCase);
+        foreach (var h in drafts)
+            foreach (var name in h.Variants.Prepend(h.Name).Prepend(h.Id))
+            {
+                if (!byName.TryGetValue(name, out var list)) byName[name] = list = [];
+                if (list.Count == 0 || list[^1] != h) list.Add(h);
+            }
+        return byName;
     }
 
     private ImmutableArray<DecisionOutcome> Outcomes(int[] counts) =>

@@ -17,9 +17,15 @@ public abstract record MentionDecision(SourceLine At, string Action, string Inte
 
     /// <summary>The mentions this decision means: every match of a turn and char; for a time only the
     /// closest match (the earlier on a tie), since one name said twice can fall within the tolerance.</summary>
-    public IEnumerable<int> Pick(IReadOnlyList<Mention> mentions, IReadOnlyList<TimeRange> times)
+    public IEnumerable<int> Pick(IReadOnlyList<Mention> mentions, IReadOnlyList<TimeRange> times) =>
+        Pick(Enumerable.Range(0, mentions.Count), mentions, times);
+
+    /// <summary><see cref="Pick(IReadOnlyList{Mention}, IReadOnlyList{TimeRange})"/> among
+    /// <paramref name="candidates"/> (indices in ascending order), which must hold every mention of
+    /// this decision's text.</summary>
+    public IEnumerable<int> Pick(IEnumerable<int> candidates, IReadOnlyList<Mention> mentions, IReadOnlyList<TimeRange> times)
     {
-        var matches = Enumerable.Range(0, mentions.Count).Where(i => Matches(mentions[i], times[i]));
+        var matches = candidates.Where(i => Matches(mentions[i], times[i]));
         return Target is MentionAtTime at ? matches.OrderBy(i => Math.Abs((times[i].Start - at.Time).Milliseconds)).ThenBy(i => i).Take(1) : matches;
     }
 

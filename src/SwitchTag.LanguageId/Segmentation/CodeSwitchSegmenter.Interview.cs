@@ -110,9 +110,22 @@ public sealed partial class CodeSwitchSegmenter
             Confidence = Math.Round(p.Calibration.Apply(s.Confidence, WordsIn(evidence, s.CharStart, s.CharEnd), ShareOf(profile, s.Language, p)), 4),
         }).ToImmutableArray();
 
-    /// <summary>Words (letters, not numbers or fillers of every language) starting in [start, end).</summary>
-    public static int WordsIn(IReadOnlyList<Text.Token> tokens, int start, int end) =>
-        tokens.Count(t => t.Kind == Text.TokenKind.Word && t.Start >= start && t.Start < end);
+    /// <summary>Words (letters, not numbers or fillers of every language) starting in [start, end) of
+    /// <paramref name="tokens"/> (in text order, as the tokenizer gives them). Only the tokens in the
+    /// range are visited, so counting every span of a long turn costs one pass over the turn.</summary>
+    public static int WordsIn(IReadOnlyList<Text.Token> tokens, int start, int end)
+    {
+        int lo = 0, hi = tokens.Count;
+        while (lo < hi)
+        {
+            int mid = (lo + hi) >>> 1;
+            if (tokens[mid].Start < start) lo = mid + 1; else hi = mid;
+        }
+        int words = 0;
+        for (int i = lo; i < tokens.Count && tokens[i].Start < end; i++)
+            if (tokens[i].Kind == Text.TokenKind.Word) words++;
+        return words;
+    }
 
     private static int WordsIn(TurnEvidence evidence, int start, int end) => WordsIn(evidence.Tokens, start, end);
 

@@ -189,7 +189,8 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         int classes = _model.ClassCount, n = evidence.Count;
         var current = new float[classes];
         var next = new float[classes];
-        var switched = new bool[n * classes];
+        // One bit per word and class: a turn of millions of words keeps its back-pointers small.
+        var switched = new ulong[((long)n * classes + 63) >> 6];
         var switchedFrom = new int[n];
         for (int c = 0; c < classes; c++) current[c] = priors.Start[c] + evidence.Emissions[0][c] + priors.Bonus[c];
         for (int w = 1; w < n; w++)
@@ -201,7 +202,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
             {
                 float switchFrom = current[bestPrev] - priors.Enter[c];
                 bool sw = c != bestPrev && switchFrom > current[c];
-                switched[w * classes + c] = sw;
+                if (sw) Set(switched, (long)w * classes + c);
                 next[c] = (sw ? switchFrom : current[c]) + e[c] + priors.Bonus[c];
             }
             (current, next) = (next, current);
@@ -211,10 +212,14 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         for (int w = n - 1; w >= 0; w--)
         {
             labels[w] = state;
-            if (switched[w * classes + state]) state = switchedFrom[w];
+            if (IsSet(switched, (long)w * classes + state)) state = switchedFrom[w];
         }
         return labels;
     }
+
+    private static void Set(ulong[] bits, long i) => bits[i >> 6] |= 1UL << (int)(i & 63);
+
+    private static bool IsSet(ulong[] bits, long i) => (bits[i >> 6] & (1UL << (int)(i & 63))) != 0;
 
     /// <summary>At most one ordinary word of evidence (or only names) between words of another
     /// language in the same script is a loanword, a cognate or a name ("voyage?", "Kurt. [pause] Kurt"),

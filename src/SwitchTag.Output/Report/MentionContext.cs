@@ -13,12 +13,14 @@ public sealed record MentionContext(string Before, string Name, string After)
 
     public static MentionContext Of(string text, Mention m)
     {
+        // Each search stops one char past MaxSide, where the side is cut anyway: a text without
+        // sentence ends (one 10 MB line) then costs no scan to its start or end per name.
         int start = m.CharStart;
-        while (start > 0 && !EndsSentence(text, start - 1)) start--;
+        while (start > 0 && m.CharStart - start <= MaxSide && !EndsSentence(text, start - 1)) start--;
         bool cutBefore = m.CharStart - start > MaxSide;
         if (cutBefore) start = NextSpace(text, m.CharStart - MaxSide, m.CharStart);
         int end = m.CharEnd;
-        while (end < text.Length && !EndsSentence(text, end)) end++;
+        while (end < text.Length && end - m.CharEnd <= MaxSide && !EndsSentence(text, end)) end++;
         if (end < text.Length) end++;
         bool cutAfter = end - m.CharEnd > MaxSide;
         if (cutAfter) end = PreviousSpace(text, m.CharEnd + MaxSide, m.CharEnd);

@@ -11,28 +11,51 @@ internal static class TeiInline
 {
     public sealed record Element(int Start, int End, string Kind, LanguageCode? Language, int Mention);
 
-    public static List<Element> Layout(InterviewIndex index, int turn)
+    /// <param name="mentions">the indices into <c>index.Mentions</c> of this turn's mentions, in index order</param>
+    public static List<Element> Layout(InterviewIndex index, int turn, IEnumerable<int> mentions)
     {
         var names = new List<Element>();
-        for (int i = 0; i < index.Mentions.Length; i++)
+        // One flag per char held by a name already laid: a name is checked over its own chars only,
+        // so a turn of many thousand names costs no comparison of every name with every other.
+        var ofTurn = mentions.ToList();
+        var held = new bool[ofTurn.Select(i => index.Mentions[i].Mention.CharEnd).Append(index.Turns[turn].Text.Length).Max()];
+        foreach (int i in ofTurn)
         {
             var (m, _, heading) = index.Mentions[i];
             if (m.Turn != turn || heading is null || m.CharEnd <= m.CharStart) continue;
-            if (names.Any(n => n.Start < m.CharEnd && m.CharStart < n.End)) continue;
+            if (held.AsSpan(m.CharStart, m.CharEnd - m.CharStart).Contains(true)) continue;
+            held.AsSpan(m.CharStart, m.CharEnd - m.CharStart).Fill(true);
             names.Add(new Element(m.CharStart, m.CharEnd, "name", null, i));
         }
+        // The names do not overlap, so ordered by start they are ordered by end too.
+        var byStart = Enumerable.Range(0, names.Count).OrderBy(k => names[k].Start).ToArray();
         var foreign = new List<Element>();
         foreach (var (span, _) in index.Spans[turn])
         {
             if (span.Language == index.MainLanguage || span.Language.IsUndetermined) continue;
             var pieces = new List<(int Start, int End)> { (span.CharStart, span.CharEnd) };
-            foreach (var n in names)
+            // Only the names overlapping the span can cut it; they cut in the order they were laid.
+            foreach (var n in Overlapping(names, byStart, span.CharStart, span.CharEnd))
                 pieces = pieces.SelectMany(p => Cut(p, n)).ToList();
             foreach (var (start, end) in pieces)
                 if (end > start && index.Turns[turn].Text.AsSpan(start, end - start).Trim().Length > 0)
                     foreign.Add(new Element(start, end, "foreign", span.Language, -1));
         }
         return foreign.Concat(names).OrderBy(e => e.Start).ThenByDescending(e => e.End).ThenBy(e => e.Kind == "name").ToList();
+    }
+
+    private static IEnumerable<Element> Overlapping(List<Element> names, int[] byStart, int start, int end)
+    {
+        int lo = 0, hi = byStart.Length;
+        while (lo < hi)
+        {
+            int mid = (lo + hi) >>> 1;
+            if (names[byStart[mid]].End <= start) lo = mid + 1; else hi = mid;
+        }
+        var found = new List<int>();
+        for (int k = lo; k < byStart.Length && names[byStart[k]].Start < end; k++) found.Add(byStart[k]);
+        found.Sort();
+        return found.Select(k => names[k]);
     }
 
     /// <summary>The piece minus the name when the name straddles one of its edges; whole otherwise.</summary>

@@ -46,7 +46,12 @@ public sealed class TeiXmlWriter : IInterviewWriter
         w.WriteAttributeString("xml", "lang", XmlNs, index.MainLanguage.Code);
         w.WriteStartElement("body");
         Timeline(w, index);
-        foreach (var turn in index.Turns) Utterance(w, index, turn, ids);
+        // Each turn's mentions and each heading by id, gathered once: a per-turn or per-name scan of
+        // them all would make a long interview quadratic.
+        var mentionsOf = index.Mentions.Select((m, i) => (m.Mention.Turn, i)).ToLookup(x => x.Turn, x => x.i);
+        var headings = new Dictionary<string, Heading>(StringComparer.Ordinal);
+        foreach (var h in index.Headings) headings.TryAdd(h.Id, h);
+        foreach (var turn in index.Turns) Utterance(w, index, turn, ids, mentionsOf[turn.Index], headings);
         w.WriteEndElement();
         w.WriteEndElement();
         w.WriteEndElement();
@@ -194,7 +199,7 @@ public sealed class TeiXmlWriter : IInterviewWriter
         w.WriteEndElement();
     }
 
-    private static void Utterance(XmlWriter w, InterviewIndex index, Turn turn, TeiIds ids)
+    private static void Utterance(XmlWriter w, InterviewIndex index, Turn turn, TeiIds ids, IEnumerable<int> mentions, Dictionary<string, Heading> headings)
     {
         w.WriteStartElement("u");
         if (turn.Speaker is not null) w.WriteAttributeString("who", "#" + ids.Speaker(turn.Speaker));
@@ -204,11 +209,12 @@ public sealed class TeiXmlWriter : IInterviewWriter
         // An empty string marks the content as mixed, so the indenting writer adds no whitespace inside.
         w.WriteString("");
         var anchors = turn.Cues.Skip(1).Select(c => (c.CharStart, Ms: index.Transcript.Cues[c.CueIndex].Time.Start.Milliseconds)).ToList();
-        new UtteranceContent(w, index, turn, anchors, ids).Write(0, turn.Text.Length, TeiInline.Layout(index, turn.Index));
+        new UtteranceContent(w, index, turn, anchors, ids, headings).Write(0, turn.Text.Length, TeiInline.Layout(index, turn.Index, mentions));
         w.WriteEndElement();
     }
 
-    private sealed class UtteranceContent(XmlWriter w, InterviewIndex index, Turn turn, List<(int At, long Ms)> anchors, TeiIds ids)
+    private sealed class UtteranceContent(XmlWriter w, InterviewIndex index, Turn turn, List<(int At, long Ms)> anchors, TeiIds ids,
+        Dictionary<string, Heading> headings)
     {
         public void Write(int from, int to, List<TeiInline.Element> inner)
         {
@@ -237,7 +243,7 @@ public sealed class TeiXmlWriter : IInterviewWriter
                 return;
             }
             var (mention, _, headingId) = index.Mentions[e.Mention];
-            var heading = index.Headings.First(h => h.Id == headingId);
+            var heading = headings[headingId!];
             w.WriteStartElement(mention.Label switch { NameLabel.PER => "persName", NameLabel.LOC => "placeName", _ => "orgName" });
             string reference = "#" + ids.Heading(heading.Id);
             if (heading.Place is { HasGeonameId: true } place)
@@ -248,9 +254,16 @@ public sealed class TeiXmlWriter : IInterviewWriter
         private void Text(int from, int to)
         {
             int pos = from;
-            foreach (var (at, ms) in anchors)
+            // Anchors are in text order: start at the first one at or after from.
+            int lo = 0, hi = anchors.Count;
+            while (lo < hi)
             {
-                if (at < from || at >= to) continue;
+                int mid = (lo + hi) >>> 1;
+                if (anchors[mid].At < from) lo = mid + 1; else hi = mid;
+            }
+            for (int k = lo; k < anchors.Count && anchors[k].At < to; k++)
+            {
+                var (at, ms) = anchors[k];
                 if (at > pos) w.WriteString(Clean(turn.Text[pos..at]));
                 w.WriteStartElement("anchor");
                 w.WriteAttributeString("synch", "#" + TeiIds.When(ms));

@@ -62,8 +62,17 @@ public sealed class NamePrecedence
         var all = proposals.Where(m => m.CharEnd > m.CharStart && m.CharStart >= 0).ToList();
         if (all.Count == 0) return [];
         if (!Yields.IsEmpty)
-            all = all.Where(p => !Yields.Any(y => y.Source == p.Source && !IsProtected(p.Source)
-                && all.Any(q => q.Source == y.To && q.Label == y.Label && q.CharStart < p.CharEnd && p.CharStart < q.CharEnd))).ToList();
+        {
+            var withdrawn = new bool[all.Count];
+            foreach (var y in Yields)
+            {
+                if (IsProtected(y.Source)) continue;
+                var to = new RangeReach(all.Where(q => q.Source == y.To && q.Label == y.Label).Select(q => (q.CharStart, q.CharEnd)));
+                for (int i = 0; i < all.Count; i++)
+                    if (all[i].Source == y.Source && to.Overlaps(all[i].CharStart, all[i].CharEnd)) withdrawn[i] = true;
+            }
+            all = all.Where((_, i) => !withdrawn[i]).ToList();
+        }
         if (all.Count == 0) return [];
         // One flag per char held by a higher rank: each proposal is checked over its own chars only,
         // so one long speaker turn with many names stays linear, not quadratic.

@@ -11,8 +11,10 @@ using SwitchTag.Indexing;
 // a case times TranscriptFile.Parse on a generated input (best of three runs, after one warm-up) and
 // prints one line. The "one turn" cases also build the turn and place one mention per cue in time
 // (TimeAligner), the work that grew quadratically inside one long speaker turn; the 200k/50k time
-// ratio is printed after them (linear cost gives 4). Arguments: "--case NAME" runs one case; files
-// to read and report on instead (diagnostics printed).
+// ratio is printed after them (linear cost gives 4). The "stress" cases read the inputs that
+// scripts/bench-index runs through the whole pipeline (StressInputs), and the decisions case parses
+// a decisions file of 100k rows. Arguments: "--case NAME" runs one case; files to read and report on
+// instead (diagnostics printed).
 if (args is ["--case", var only]) return RunCase(only);
 if (args.Length > 0)
 {
@@ -38,28 +40,39 @@ foreach (var name in Cases().Select(c => c.Name))
     seconds[name] = double.Parse(line.Split('\t')[2].TrimEnd('s', ' '), CultureInfo.InvariantCulture);
 }
 Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-    $"one turn, 200k cues / 50k cues time ratio: {seconds["webvtt one turn 200k cues"] / seconds["webvtt one turn 50k cues"]:0.00} (linear: 4)"));
+    $"one turn, 200k cues / 50k cues time ratio: {seconds["webvtt one turn 200k cues"] / seconds["webvtt one turn 50k cues"]:0.00}, stress text {seconds["stress one turn 200k cues"] / seconds["stress one turn 50k cues"]:0.00} (linear: 4)"));
 return 0;
 
 static int RunCase(string name)
 {
-    var (_, path, make, align) = Cases().Single(c => c.Name == name);
+    var (_, path, make, kind) = Cases().Single(c => c.Name == name);
     string text = make();
-    Run(path, text, align);
+    Run(path, text, kind);
     double best = double.MaxValue;
-    ReadResult last = null!;
+    (int Items, int Diagnostics, string Unit) last = default;
     for (int run = 0; run < 3; run++)
     {
         var sw = Stopwatch.StartNew();
-        last = Run(path, text, align);
+        last = Run(path, text, kind);
         best = Math.Min(best, sw.Elapsed.TotalSeconds);
     }
     Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-        $"{name,-30}\t{text.Length / 1e6,6:0.0} M chars\t{best,7:0.000} s\t{last.Transcript?.Cues.Length ?? 0,7} cues\t{last.Diagnostics.Length} diagnostics\tpeak {Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024):0} MB"));
+        $"{name,-30}\t{text.Length / 1e6,6:0.0} M chars\t{best,7:0.000} s\t{last.Items,7} {last.Unit}\t{last.Diagnostics} diagnostics\tpeak {Process.GetCurrentProcess().PeakWorkingSet64 / (1024.0 * 1024):0} MB"));
     return 0;
 }
 
-static ReadResult Run(string path, string text, bool align)
+static (int Items, int Diagnostics, string Unit) Run(string path, string text, Kind kind)
+{
+    if (kind == Kind.Decisions)
+    {
+        var (decisions, problems) = SwitchTag.Indexing.Decisions.DecisionsFile.Parse(path, text);
+        return (decisions.Length, problems.Length, "rows");
+    }
+    var result = Read(path, text, kind == Kind.Align);
+    return (result.Transcript?.Cues.Length ?? 0, result.Diagnostics.Length, "cues");
+}
+
+static ReadResult Read(string path, string text, bool align)
 {
     var result = TranscriptFile.Parse(path, text);
     if (!align || result.Transcript is null) return result;
@@ -74,23 +87,27 @@ static ReadResult Run(string path, string text, bool align)
 }
 
 // Inputs are made only in the child that runs the case, so no case's peak holds another's input.
-static (string Name, string Path, Func<string> Text, bool Align)[] Cases()
+static (string Name, string Path, Func<string> Text, Kind Kind)[] Cases()
 {
     static string Words() => string.Concat(Enumerable.Repeat("palavra słowo ", 10_000_000 / 14 + 1));
     return
     [
-        ("webvtt 10 MB single line", "huge.vtt", () => "WEBVTT\n\n00:01.000 --> 00:02.000\n" + Words(), false),
-        ("srt 10 MB single line", "huge.srt", () => "1\n00:00:01,000 --> 00:00:02,000\n" + Words(), false),
-        ("text 10 MB single line", "huge.txt", () => "[00:00:01] ANNA: " + Words(), false),
-        ("markdown 10 MB single line", "huge.md", () => "# T\n\n**[00:00:01] ANNA:** " + Words(), false),
-        ("unknown 10 MB single line", "huge-prose.txt", () => new string('a', 10_000_000), false),
-        ("webvtt 100 KB of '<'", "lt.vtt", () => "WEBVTT\n\n00:01.000 --> 00:02.000\n" + new string('<', 100_000), false),
-        ("webvtt 100k cues", "many.vtt", () => Many(100_000, i => $"{T(i)} --> {T(i + 1)}\n<v Speaker {i % 3}>Cue number {i} with <i>some</i> &amp; <{new Timecode(i * 2000L + 500)}>words", "WEBVTT\n\n"), false),
-        ("srt 100k cues", "many.srt", () => Many(100_000, i => $"{i + 1}\n{T(i).Replace('.', ',')} --> {T(i + 1).Replace('.', ',')}\n{(i % 4 == 0 ? "ANNA: " : "")}Cue number {i} with some words", ""), false),
-        ("text 100k entries", "many.txt", () => Many(100_000, i => $"[{T(i)}] {(i % 4 == 0 ? "ANNA: " : "")}Entry number {i} with some words", "", "\n"), false),
-        ("markdown 100k entries", "many.md", () => "# Interview\n\n" + Many(100_000, i => $"**[{T(i)}] ANNA:** Entry number {i} with *some* words", ""), false),
-        ("webvtt one turn 50k cues", "turn50k.vtt", () => OneTurn(50_000), true),
-        ("webvtt one turn 200k cues", "turn200k.vtt", () => OneTurn(200_000), true),
+        ("webvtt 10 MB single line", "huge.vtt", () => "WEBVTT\n\n00:01.000 --> 00:02.000\n" + Words(), Kind.Read),
+        ("srt 10 MB single line", "huge.srt", () => "1\n00:00:01,000 --> 00:00:02,000\n" + Words(), Kind.Read),
+        ("text 10 MB single line", "huge.txt", () => "[00:00:01] ANNA: " + Words(), Kind.Read),
+        ("markdown 10 MB single line", "huge.md", () => "# T\n\n**[00:00:01] ANNA:** " + Words(), Kind.Read),
+        ("unknown 10 MB single line", "huge-prose.txt", () => new string('a', 10_000_000), Kind.Read),
+        ("webvtt 100 KB of '<'", "lt.vtt", () => "WEBVTT\n\n00:01.000 --> 00:02.000\n" + new string('<', 100_000), Kind.Read),
+        ("webvtt 100k cues", "many.vtt", () => Many(100_000, i => $"{T(i)} --> {T(i + 1)}\n<v Speaker {i % 3}>Cue number {i} with <i>some</i> &amp; <{new Timecode(i * 2000L + 500)}>words", "WEBVTT\n\n"), Kind.Read),
+        ("srt 100k cues", "many.srt", () => Many(100_000, i => $"{i + 1}\n{T(i).Replace('.', ',')} --> {T(i + 1).Replace('.', ',')}\n{(i % 4 == 0 ? "ANNA: " : "")}Cue number {i} with some words", ""), Kind.Read),
+        ("text 100k entries", "many.txt", () => Many(100_000, i => $"[{T(i)}] {(i % 4 == 0 ? "ANNA: " : "")}Entry number {i} with some words", "", "\n"), Kind.Read),
+        ("markdown 100k entries", "many.md", () => "# Interview\n\n" + Many(100_000, i => $"**[{T(i)}] ANNA:** Entry number {i} with *some* words", ""), Kind.Read),
+        ("webvtt one turn 50k cues", "turn50k.vtt", () => OneTurn(50_000), Kind.Align),
+        ("webvtt one turn 200k cues", "turn200k.vtt", () => OneTurn(200_000), Kind.Align),
+        ("stress one turn 50k cues", "turn50k.vtt", () => StressInputs.OneTurn(50_000), Kind.Align),
+        ("stress one turn 200k cues", "turn200k.vtt", () => StressInputs.OneTurn(200_000), Kind.Align),
+        ("stress one line 10 MB", "line10mb.txt", () => StressInputs.OneLine(10_000_000), Kind.Read),
+        ("decisions 100k rows", "decisions.csv", () => StressInputs.Decisions(100_000, ["a", "b", "c", "d"]), Kind.Decisions),
     ];
 }
 
@@ -104,3 +121,5 @@ static string Many(int n, Func<int, string> cue, string head, string separator =
     for (int i = 0; i < n; i++) sb.Append(cue(i)).Append(separator);
     return sb.ToString();
 }
+
+internal enum Kind { Read, Align, Decisions }

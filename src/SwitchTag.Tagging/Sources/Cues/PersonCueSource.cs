@@ -23,7 +23,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
         if (spans.IsDefault) spans = [];
         var words = NameWords.Split(turnText);
         var found = ImmutableArray.CreateBuilder<Mention>();
-        ImmutableArray<Mention>? places = null;
+        RangeReach? places = null;
         for (int i = 0; i + 1 < words.Count; i++)
         {
             if (!cues.IsMarker(WordAt(turnText, words[i]))) continue;
@@ -34,9 +34,9 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             while (last + 1 < words.Count && last + 1 - first < MaxNameWords && Joined(turnText, words[last], words[last + 1], allowDot: false)
                    && IsNameWord(turnText, words[last + 1]) && !cues.IsMarker(WordAt(turnText, words[last + 1])))
                 last++;
-            places ??= RuleMatching.Find(turn, turnText, spans, gazetteer.Find);
-            int markerStart = words[i].Start;
-            if (places.Value.Any(p => p.CharStart <= markerStart && markerStart < p.CharEnd && p.CharEnd > words[i].End)) continue;
+            places ??= new RangeReach(RuleMatching.Find(turn, turnText, spans, gazetteer.Find).Select(p => (p.CharStart, p.CharEnd)));
+            // A place holding the marker and reaching past it ("Prince Edward Island").
+            if (places.Reaches(words[i].Start, words[i].End)) continue;
             if (first == last && InflectedTown(words[first], turnText, spans)) continue;
             int start = words[first].Start, end = words[last].End;
             found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
