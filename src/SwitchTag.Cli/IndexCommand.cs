@@ -27,7 +27,7 @@ public static class IndexCommand
         var names = new Option<string>("--names") { Description = "rules-only (authority list and gazetteer) or default (rules, then the name model).", DefaultValueFactory = _ => "default", HelpName = "default|rules-only" };
         var authority = new Option<string?>("--authority") { Description = "Authority list CSV (label,name,variants).", HelpName = "NAMES.csv" };
         var decisions = new Option<string?>("--decisions") { Description = "Reviewers' decisions CSV, as review.html exports it (see SCHEMA.md).", HelpName = "DECISIONS.csv" };
-        var media = new Option<string?>("--media") { Description = "The recording, so each time in the report opens it at that second; {interview} stands for the interview's name.", HelpName = "URL" };
+        var media = new Option<string?>("--media") { Description = "The recording, so each time in the report opens it at that second; {interview} stands for the interview's id.", HelpName = "URL" };
         var jobs = new Option<int>("--jobs", "-j") { Description = "Interviews indexed at once (default: one per core); the outputs are the same for any number.", HelpName = "N" };
         var force = new Option<bool>("--force") { Description = "Redo interviews the collection store holds unchanged." };
         var allowInside = new Option<bool>("--allow-out-inside-input") { Description = "Write into an --out that is an input folder or lies inside one (it is then never read as input)." };
@@ -51,12 +51,21 @@ public static class IndexCommand
                 return ExitCodes.Usage;
             }
             request = request.WithCollection(parse.GetValue(jobs), parse.GetValue(force), parse.GetValue(prune));
-            return IndexRun.Execute(request, Console.Error, IndexProgress.Run) switch
+            try
             {
-                IndexRunResult.Indexed => ExitCodes.Success,
-                IndexRunResult.InputsRejected => ExitCodes.InputsRejected,
-                _ => ExitCodes.Usage,
-            };
+                return IndexRun.Execute(request, Console.Error, IndexProgress.Run) switch
+                {
+                    IndexRunResult.Indexed => ExitCodes.Success,
+                    IndexRunResult.InputsRejected => ExitCodes.InputsRejected,
+                    _ => ExitCodes.Usage,
+                };
+            }
+            catch (Exception e) when (WriteGate.Stopped && e is OperationCanceledException or AggregateException)
+            {
+                // SIGINT/SIGTERM: the signal ends the process; say what was kept instead of a stack trace.
+                Console.Error.WriteLine("switchtag index: stopped by a signal; interviews finished before it are kept, nothing half-written is left");
+                return ExitCodes.InputsRejected;
+            }
         });
         return command;
     }

@@ -34,7 +34,7 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         }
         var ordered = valid.OrderBy(m => m.Turn).ThenBy(m => m.CharStart).ThenBy(m => m.CharEnd).ToImmutableArray();
 
-        var decisionStage = new DecisionStage(decisions, transcript.Name);
+        var decisionStage = new DecisionStage(decisions, transcript.Id);
         var (decided, accepted, mentionOutcomes) = decisionStage.ApplyToMentions(ordered, m => aligner.Align(turns[m.Turn], m.CharStart, m.CharEnd));
         var times = decided.Select(m => aligner.Align(turns[m.Turn], m.CharStart, m.CharEnd)).ToImmutableArray();
         var grouped = new HeadingBuilder(lexicon, reviewBelow).Build(decided, times, turns, accepted);

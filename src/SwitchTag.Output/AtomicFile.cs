@@ -6,7 +6,11 @@ namespace SwitchTag.Output;
 /// writing, and a crash loses at most a run that can be repeated.</summary>
 public static class AtomicFile
 {
-    public static void Write(string path, Action<Stream> write)
+    /// <summary>Writes <paramref name="path"/> as one <see cref="WriteGate"/> step, so a signal never
+    /// leaves its temporary file behind.</summary>
+    public static void Write(string path, Action<Stream> write) => WriteGate.Step(() => WriteNow(path, write));
+
+    private static void WriteNow(string path, Action<Stream> write)
     {
         string full = Path.GetFullPath(path);
         string dir = Path.GetDirectoryName(full)!;

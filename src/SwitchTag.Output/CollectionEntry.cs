@@ -16,7 +16,7 @@ public sealed record CollectionEntry(string Interview, string Folder, LanguageCo
     {
         var reasons = index.Review.ToDictionary(r => r.Mention, r => r.Reason);
         return new(
-            index.Transcript.Name, folder, index.MainLanguage, index.Duration,
+            index.Transcript.Id, folder, index.MainLanguage, index.Duration,
             index.Headings.Select(h => new CollectionHeading(h.Id, h.Label, h.Name, h.Place,
                 h.Mentions.Select(i => index.Mentions[i].Time.Start).ToImmutableArray(), h.Variants)).ToImmutableArray(),
             index.Mentions.Select((m, i) =>

@@ -76,8 +76,10 @@ public sealed record IndexRequest(
     /// <see cref="Prune"/> removes from the collection the interviews whose source file is gone.</summary>
     public IndexRequest WithCollection(int jobs, bool force, bool prune) => this with { Jobs = jobs, Force = force, Prune = prune };
 
-    /// <summary>The recording of one interview: <see cref="Media"/> with <c>{interview}</c> replaced by its name.</summary>
-    public string? MediaOf(string interview) => Media?.Replace("{interview}", Uri.EscapeDataString(interview), StringComparison.Ordinal);
+    /// <summary>The recording of one interview: <see cref="Media"/> with <c>{interview}</c> replaced by its
+    /// id, each folder of it URL-escaped and the '/' between them kept, so recordings may mirror the input folders.</summary>
+    public string? MediaOf(string interview) =>
+        Media?.Replace("{interview}", string.Join('/', interview.Split('/').Select(Uri.EscapeDataString)), StringComparison.Ordinal);
 
     /// <summary>The builder for this request: the shipped models and the request's settings.</summary>
     public IndexPipelineBuilder Builder() => new IndexPipelineBuilder()

@@ -25,7 +25,7 @@ public static class IndexRun
     /// <summary>Runs <paramref name="work"/> once per file, in order; a caller may wrap it (a progress bar).</summary>
     public delegate void FileLoop(TextWriter log, IReadOnlyList<string> files, Action<string> work);
 
-    private sealed record Planned(string File, string Folder, StoredInterview? Stored, bool Unchanged);
+    private sealed record Planned(string File, string Id, string Folder, StoredInterview? Stored, bool Unchanged);
 
     private sealed record Done(Planned Plan, ImmutableArray<string> Log, bool Rejected, InterviewIndex? Index);
 
@@ -35,17 +35,15 @@ public static class IndexRun
         var problems = new List<Diagnostic>();
         // The output folder is never read as input, even when it lies inside an input folder.
         string outReal = RealPath.Resolve(request.OutDir, out _) ?? Path.GetFullPath(request.OutDir);
-        var files = InputWalker.Find(request.Paths, problems, (request.SkipFolders.IsDefault ? [] : request.SkipFolders).Append(outReal))
-            .Select(f => f.Path).ToList();
+        var files = InputWalker.Find(request.Paths, problems, (request.SkipFolders.IsDefault ? [] : request.SkipFolders).Append(outReal));
         // A decisions row that could not be read is a rejected input: the run says so and exits 1.
         bool rejected = problems.Count > 0 || request.DecisionProblems.Any(p => p.Severity == Severity.Error);
         foreach (var p in problems) log.WriteLine(p);
 
-        builder ??= request.Builder();
         CollectionStore store;
         try
         {
-            store = CollectionStore.Open(request.OutDir);
+            store = WriteGate.Step(() => CollectionStore.Open(request.OutDir));
         }
         catch (Exception e) when (e is Microsoft.Data.Sqlite.SqliteException or InvalidDataException or IOException or UnauthorizedAccessException)
         {
@@ -56,8 +54,16 @@ public static class IndexRun
         using var swap = new FolderSwap();
         using (store)
         {
+            var stored = store.Interviews();
+            var ids = Ids(files, stored);
+            // Decisions find their interview by id; the builder is made after, so the pipeline applies them so.
+            var (decisions, targetProblems) = DecisionTargets.Resolve(request.Decisions, files, ids);
+            foreach (var p in targetProblems) log.WriteLine(p);
+            rejected |= !targetProblems.IsEmpty;
+            request = request with { Decisions = decisions };
+            builder ??= request.Builder();
             string fingerprint = RunFingerprint.Of(request, builder.Models);
-            var plan = Plan(files, store.Interviews(), request, fingerprint);
+            var plan = Plan(files, ids, stored, request, fingerprint);
             IndexPipeline? pipeline = null;
             if (plan.Any(p => !p.Unchanged))
             {
@@ -87,7 +93,7 @@ public static class IndexRun
                 rejected = true;
             }
             ReportDecisions(request.Decisions, outcomes, log);
-            log.WriteLine($"switchtag index: {indexed} of {files.Count} interviews indexed, {skipped} unchanged, into {request.OutDir}");
+            log.WriteLine($"switchtag index: {indexed} of {files.Length} interviews indexed, {skipped} unchanged, into {request.OutDir}");
         }
         return rejected ? IndexRunResult.InputsRejected : IndexRunResult.Indexed;
     }
@@ -132,8 +138,9 @@ public static class IndexRun
                 }
                 else if (done.Index is { } index)
                 {
-                    store.Save(index, done.Plan.Folder, fingerprint,
-                        index.Decisions.Select(o => new StoredDecision(StoreEntries.DecisionKey(o.Decision), o.Applied)).ToList(), DateTimeOffset.UtcNow);
+                    // One step, so a signal lets the transaction commit rather than leave a hot journal.
+                    WriteGate.Step(() => store.Save(index, done.Plan.Folder, fingerprint,
+                        index.Decisions.Select(o => new StoredDecision(StoreEntries.DecisionKey(o.Decision), o.Applied)).ToList(), DateTimeOffset.UtcNow));
                     indexed++;
                     outcomes.AddRange(index.Decisions);
                 }
@@ -149,28 +156,35 @@ public static class IndexRun
         return (indexed, skipped, rejected, outcomes);
     }
 
-    /// <summary>Each distinct file with its folder: the one the store already gives its source, else
-    /// a safe name (<see cref="InterviewFolderName"/>) past any folder taken in the store or earlier in
-    /// this run; and whether it is unchanged (same bytes, same fingerprint, outputs still there),
-    /// found from the bytes' SHA-256 alone, without parsing.</summary>
-    private static List<Planned> Plan(IReadOnlyList<string> files, IReadOnlyList<StoredInterview> stored, IndexRequest request, string fingerprint)
+    /// <summary>Each input's interview id (<see cref="InterviewIds"/>), kept off the ids of the store's
+    /// interviews from other sources, so no two interviews of the collection share one.</summary>
+    private static ImmutableArray<string> Ids(IReadOnlyList<InputFile> files, IReadOnlyList<StoredInterview> stored)
+    {
+        var inRun = files.Select(f => Path.GetFullPath(f.Path)).ToHashSet(StringComparer.Ordinal);
+        return InterviewIds.Assign(files, stored.Where(s => !inRun.Contains(s.SourcePath)).Select(s => s.Name));
+    }
+
+    /// <summary>Each file (the walk gives each real file once) with its id and folder: the folder the
+    /// store already gives its source, else a safe name made from the id (<see cref="InterviewFolderName"/>)
+    /// past any folder taken in the store or earlier in this run; and whether it is unchanged (same
+    /// bytes, fingerprint and id, outputs still there), found from the bytes' SHA-256 alone, without parsing.</summary>
+    private static List<Planned> Plan(IReadOnlyList<InputFile> files, ImmutableArray<string> ids, IReadOnlyList<StoredInterview> stored,
+        IndexRequest request, string fingerprint)
     {
         var bySource = stored.ToDictionary(s => s.SourcePath, StringComparer.Ordinal);
         var folders = new InterviewFolderName(stored.Select(s => s.Folder));
-        var seen = new HashSet<string>(StringComparer.Ordinal);
         var plan = new List<Planned>();
-        foreach (var file in files)
+        for (int i = 0; i < files.Count; i++)
         {
-            string full = Path.GetFullPath(file);
-            if (!seen.Add(full)) continue;
-            if (bySource.TryGetValue(full, out var known))
+            string file = files[i].Path, id = ids[i];
+            if (bySource.TryGetValue(Path.GetFullPath(file), out var known))
             {
-                bool unchanged = !request.Force && known.ModelVersions == fingerprint && Sha256Of(file) == known.Sha256
+                bool unchanged = !request.Force && known.ModelVersions == fingerprint && known.Name == id && Sha256Of(file) == known.Sha256
                                  && File.Exists(Path.Combine(request.OutDir, known.Folder, "index.json"));
-                plan.Add(new Planned(file, known.Folder, known, unchanged));
+                plan.Add(new Planned(file, id, known.Folder, known, unchanged));
                 continue;
             }
-            plan.Add(new Planned(file, folders.Next(Path.GetFileNameWithoutExtension(file)), null, false));
+            plan.Add(new Planned(file, id, folders.Next(id), null, false));
         }
         return plan;
     }
@@ -194,7 +208,7 @@ public static class IndexRun
         var read = pipeline!.Read(plan.File);
         var log = read.Diagnostics.Select(d => d.ToString()).ToImmutableArray();
         if (read.Transcript is null) return new Done(plan, log, true, null);
-        var index = pipeline.Run(read.Transcript) with { Media = request.MediaOf(read.Transcript.Name) };
+        var index = pipeline.Run(read.Transcript with { Id = plan.Id }) with { Media = request.MediaOf(plan.Id) };
         try
         {
             swap.Replace(Path.Combine(request.OutDir, plan.Folder), folder => pipeline.Write(index, folder));
@@ -225,11 +239,14 @@ public static class IndexRun
                 log.WriteLine($"source gone, kept in the collection (--prune removes it): {gone.SourcePath} ({gone.Folder})");
                 continue;
             }
-            store.Remove(gone.SourcePath);
             string folder = Path.Combine(request.OutDir, gone.Folder);
-            foreach (var name in writers.InterviewFileNames)
-                if (File.Exists(Path.Combine(folder, name))) File.Delete(Path.Combine(folder, name));
-            if (Directory.Exists(folder) && !Directory.EnumerateFileSystemEntries(folder).Any()) Directory.Delete(folder);
+            WriteGate.Step(() =>
+            {
+                store.Remove(gone.SourcePath);
+                foreach (var name in writers.InterviewFileNames)
+                    if (File.Exists(Path.Combine(folder, name))) File.Delete(Path.Combine(folder, name));
+                if (Directory.Exists(folder) && !Directory.EnumerateFileSystemEntries(folder).Any()) Directory.Delete(folder);
+            });
             log.WriteLine($"source gone, pruned from the collection: {gone.SourcePath} ({gone.Folder})");
         }
     }

@@ -107,7 +107,7 @@ public sealed class CollectionStore : IDisposable
         if (existing is { } old) DeleteRows(tx, old);
         long id = existing ?? (ScalarOrNull(tx, "SELECT max(id) FROM interviews") ?? 0) + 1;
         Execute(tx, "INSERT INTO interviews VALUES ($id, $p, $f, $n, $fmt, $sha, $mv, $lang, $dur, $at)",
-            ("$id", id), ("$p", source), ("$f", folder), ("$n", index.Transcript.Name), ("$fmt", index.Transcript.Source.Format.Name),
+            ("$id", id), ("$p", source), ("$f", folder), ("$n", index.Transcript.Id), ("$fmt", index.Transcript.Source.Format.Name),
             ("$sha", index.Transcript.Source.Sha256), ("$mv", modelVersions), ("$lang", index.MainLanguage.Code),
             ("$dur", index.Duration.Milliseconds), ("$at", indexedAt.UtcDateTime.ToString("yyyy-MM-ddTHH:mm:ssZ", CultureInfo.InvariantCulture)));
         using (var rows = new InterviewRows(_connection, tx, id)) rows.Write(index, decisions);

@@ -1,6 +1,7 @@
 using System.Text;
 using System.Text.Json;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Pipeline;
 using SwitchTag.Formats;
 using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output;
@@ -9,6 +10,7 @@ using SwitchTag.Output.Collection;
 using SwitchTag.Output.IndexJson;
 using SwitchTag.Output.MentionsCsv;
 using SwitchTag.Output.PlacesGeoJson;
+using SwitchTag.Output.Review;
 using SwitchTag.Output.Report;
 using SwitchTag.Output.Text;
 using SwitchTag.Output.WorklistCsv;
@@ -177,6 +179,39 @@ public class OutputTests
         // re-read warns about none of them.
         Assert.Contains("<lang pl>", vtt);
         Assert.DoesNotContain(reread.Diagnostics, d => d.Message.Contains("lang", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Reports_show_control_and_bidi_override_characters_as_marks_while_data_files_keep_them()
+    {
+        // Issue 11 item 13: bidi overrides and ESC passed into the reports. U+202E RIGHT-TO-LEFT
+        // OVERRIDE reorders what follows it on the line ("Trojan Source", CVE-2021-42574); U+001B ESC
+        // starts a terminal control sequence (ECMA-48 section 5.4). The reports show them as
+        // "[U+202E]" and as U+241B SYMBOL FOR ESCAPE (Unicode Control Pictures block).
+        const string speaker = "Inter\u202Eweiv\u202C\u001B[31mer";
+        var t = Fixture.Transcript();
+        t = t with { Cues = t.Cues.SetItem(0, t.Cues[0] with { Speaker = speaker, SpeakerLabel = speaker }) };
+        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new SwitchTag.Indexing.IndexBuilder(Fixture.Lexicon(), default)).Run(t, "en");
+        var entries = new[] { CollectionEntry.From(index, "anna-nowak") };
+        var reports = new Dictionary<string, string>
+        {
+            ["index.html"] = ReportHtmlWriter.Render(index),
+            ["index.md"] = ReportMarkdownWriter.Render(index),
+            ["review.html"] = ReviewHtmlWriter.Render(entries),
+            ["collection.html"] = CollectionHtmlWriter.Render(entries),
+        };
+        foreach (var (name, text) in reports)
+        {
+            Assert.False(text.Any(c => c is '\u202E' or '\u202C' or '\u001B'), name);
+            if (name != "collection.html") // the collection page names headings, not speakers
+            {
+                const string shown = "Inter[U+202E]weiv[U+202C]\u241B[31mer";
+                Assert.Contains(name == "index.md" ? MarkdownText.Escape(shown) : shown, text); // Markdown escapes the brackets
+            }
+        }
+        // index.json is data: its turn text and offsets stay exactly as read.
+        using var json = JsonDocument.Parse(Bytes(s => IndexJsonWriter.Write(index, s)));
+        Assert.Equal(speaker, json.RootElement.GetProperty("turns")[0].GetProperty("speaker").GetString());
     }
 
     [Fact]

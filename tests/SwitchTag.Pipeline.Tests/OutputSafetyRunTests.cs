@@ -1,3 +1,4 @@
+using System.Text.Json;
 using SwitchTag.Tagging;
 using SwitchTag.Tests.Shared;
 using Xunit;
@@ -73,6 +74,42 @@ public class OutputSafetyRunTests : IDisposable
         // The second run must not read its own annotated.vtt/index.md back as interviews.
         var (_, log) = Run(request! with { Force = true });
         Assert.Contains("1 of 1 interviews indexed", log);
+    }
+
+    [Fact]
+    public void Two_files_of_one_name_in_different_folders_are_two_interviews_and_a_decision_targets_one()
+    {
+        // Issue 11 item 9: two same.vtt in different folders were both interview "same" in the JSON,
+        // and a decision for "same" applied to both. The demo transcript names Kraków (line 26), which
+        // the rules-only stages link as a LOC heading.
+        Input(Path.Combine("in", "a", "same.vtt"));
+        Input(Path.Combine("in", "b", "same.vtt"));
+        string input = Path.Combine(_dir, "in"), outDir = Path.Combine(_dir, "out");
+        string decisions = Path.Combine(_dir, "decisions.csv");
+        File.WriteAllText(decisions, "action,interview,label,name,time,value\nreject-heading,b/same,LOC,Kraków,,\n");
+        var request = IndexRequest.From([input], outDir, null, "en", "rules-only", null, decisions, out _)!;
+        var (result, log) = Run(request);
+        Assert.Equal(IndexRunResult.Indexed, result);
+        Assert.Contains("decision applied 1x", log);
+
+        JsonElement Index(string folder) => JsonDocument.Parse(File.ReadAllText(Path.Combine(outDir, folder, "index.json"))).RootElement;
+        bool NamesKrakow(JsonElement index) => index.GetProperty("headings").EnumerateArray().Any(h => h.GetProperty("name").GetString() == "Kraków");
+        var a = Index("a_same");
+        var b = Index("b_same");
+        Assert.Equal("a/same", a.GetProperty("interview").GetString());
+        Assert.Equal("b/same", b.GetProperty("interview").GetString());
+        Assert.True(NamesKrakow(a));
+        Assert.False(NamesKrakow(b));
+        var collection = JsonDocument.Parse(File.ReadAllText(Path.Combine(outDir, "collection.json"))).RootElement;
+        Assert.Equal(["a/same", "b/same"], collection.GetProperty("interviews").EnumerateArray().Select(i => i.GetProperty("interview").GetString()).Order());
+
+        // The bare file name now names two interviews: refused with file:line, applied to neither.
+        File.WriteAllText(decisions, "action,interview,label,name,time,value\nreject-heading,same,LOC,Kraków,,\n");
+        (result, log) = Run(IndexRequest.From([input], outDir, null, "en", "rules-only", null, decisions, out _)!);
+        Assert.Equal(IndexRunResult.InputsRejected, result);
+        Assert.Contains($"{decisions}:2: error: interview \"same\" is the file name of 2 interviews (a/same, b/same)", log);
+        Assert.True(NamesKrakow(Index("a_same")));
+        Assert.True(NamesKrakow(Index("b_same")));
     }
 
     [Fact]

@@ -5,6 +5,9 @@ using Xunit;
 
 namespace SwitchTag.Store.Tests;
 
+// One collection: the child processes of these tests would otherwise compete for the CPU and
+// stretch each other past their waits.
+[Collection("child processes")]
 public class KillTests
 {
     /// <summary>A writer killed with SIGKILL in the middle of an interview's transaction leaves the

@@ -65,4 +65,12 @@ public sealed record Transcript(
 {
     /// <summary>The interview's name: the file name without its extension.</summary>
     public string Name => System.IO.Path.GetFileNameWithoutExtension(Source.Path);
+
+    private readonly string? _id;
+
+    /// <summary>The interview's id, unique in its collection and the same on every run over the same
+    /// inputs: a run sets it to the path relative to the input folder (SwitchTag.Formats
+    /// <c>InterviewIds</c>); a transcript read alone has its <see cref="Name"/>. Every output names the
+    /// interview by it, and decisions find their interview by it.</summary>
+    public string Id { get => _id ?? Name; init => _id = value; }
 }

@@ -8,16 +8,19 @@ namespace SwitchTag.Formats.Files;
 /// (<c>smith/interview-1</c>); a file named directly is its file name without extension. Two inputs
 /// that would share an id both keep their extension (<c>same.vtt</c>, <c>same.srt</c>); should they
 /// still share one (one relative path under two input folders), the input folder's name goes in front
-/// (<c>archive-a/same</c>), and as a last resort a counter after it (<c>same~2</c>) in path order.
+/// (<c>archive-a/same</c>), and as a last resort a counter after it (<c>same~2</c>) in path order,
+/// which also keeps an id off the ids <c>taken</c> by other interviews of the collection.
 /// Ids are compared ignoring case, as a case-insensitive file system would. Text is NFC.</summary>
 public static class InterviewIds
 {
-    public static ImmutableArray<string> Assign(IReadOnlyList<InputFile> files)
+    /// <param name="taken">Ids that interviews outside <paramref name="files"/> already hold (the
+    /// collection store's interviews from other sources), so no two interviews of a collection share one.</param>
+    public static ImmutableArray<string> Assign(IReadOnlyList<InputFile> files, IEnumerable<string>? taken = null)
     {
         var ids = files.Select(f => Relative(f, withExtension: false)).ToArray();
         Resolve(ids, i => Relative(files[i], withExtension: true));
         Resolve(ids, i => files[i].Root is { } root ? Join(Path.GetFileName(Path.TrimEndingDirectorySeparator(root)), Relative(files[i], withExtension: false)) : ids[i]);
-        var used = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
+        var used = new HashSet<string>(taken ?? [], StringComparer.OrdinalIgnoreCase);
         for (int i = 0; i < ids.Length; i++)
         {
             string id = ids[i];

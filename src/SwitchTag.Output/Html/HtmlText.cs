@@ -1,18 +1,25 @@
 using System.Globalization;
 using System.Net;
+using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 
 namespace SwitchTag.Output.Html;
 
 /// <summary>The small pieces every page is built from. Anything that came from a transcript goes
-/// through <see cref="Text"/> (escaped, and <c>dir="auto"</c> so a Yiddish or Hebrew stretch keeps its
-/// punctuation on the right side); every other string through <see cref="Esc"/>.</summary>
+/// through <see cref="Said"/> (escaped, and <c>dir="auto"</c> so a Yiddish or Hebrew stretch keeps its
+/// punctuation on the right side); every other string through <see cref="Esc"/>. Both show control and
+/// bidi-override characters as visible marks (<see cref="DisplayText"/>), so a transcript cannot reorder
+/// or hide what a reader sees; <see cref="Attr"/> keeps a value exact for a script to send back.</summary>
 public static class HtmlText
 {
     /// <summary>At or above this confidence a name shows as "high", below it as "check".</summary>
     public const double HighConfidence = 0.8;
 
-    public static string Esc(string? text) => WebUtility.HtmlEncode(text ?? "");
+    public static string Esc(string? text) => WebUtility.HtmlEncode(DisplayText.Neutralise(text));
+
+    /// <summary>An attribute value a page's script reads back into a decisions file (a mention's text,
+    /// a heading id, an interview id), escaped but otherwise exact so the decision matches again.</summary>
+    public static string Attr(string? text) => WebUtility.HtmlEncode(text ?? "");
 
     public static string Said(string? text) => $"<span dir=\"auto\">{Esc(text)}</span>";
 

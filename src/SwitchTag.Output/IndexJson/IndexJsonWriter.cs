@@ -28,7 +28,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
         using var w = new Utf8JsonWriter(stream, Options);
         w.WriteStartObject();
         w.WriteString("schema", Schema);
-        w.WriteString("interview", index.Transcript.Name);
+        w.WriteString("interview", index.Transcript.Id);
         w.WriteStartObject("source");
         w.WriteString("path", index.Transcript.Source.Path);
         w.WriteString("format", index.Transcript.Source.Format.Name);

@@ -32,7 +32,7 @@ public sealed class PlacesGeoJsonWriter : IInterviewWriter
             w.WriteEndArray();
             w.WriteEndObject();
             w.WriteStartObject("properties");
-            w.WriteString("interview", index.Transcript.Name);
+            w.WriteString("interview", index.Transcript.Id);
             w.WriteString("heading", h.Id);
             w.WriteString("name", h.Name);
             if (h.Place.HasGeonameId) w.WriteNumber("geonameId", h.Place.GeonameId); else w.WriteNull("geonameId");

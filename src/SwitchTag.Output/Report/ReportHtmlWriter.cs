@@ -25,7 +25,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
     public static string Render(InterviewIndex index)
     {
         var b = new StringBuilder();
-        string name = index.Transcript.Name;
+        string name = index.Transcript.Id;
         b.Append("<h1>Interview index: ").Append(Said(name)).Append("</h1>\n");
         b.Append(CautionBlock());
         Facts(b, index);

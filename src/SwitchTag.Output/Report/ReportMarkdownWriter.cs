@@ -21,7 +21,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
     public static string Render(InterviewIndex index)
     {
         var md = new StringBuilder();
-        var name = MarkdownText.Escape(index.Transcript.Name);
+        var name = MarkdownText.Escape(index.Transcript.Id);
         md.Append("# Interview index: ").Append(name).Append("\n\n");
         md.Append("> ").Append(Caution).Append("\n\n");
         md.Append("- Source: ").Append(MarkdownText.Escape(index.Transcript.Source.Path))

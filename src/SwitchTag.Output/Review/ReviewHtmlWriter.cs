@@ -37,12 +37,12 @@ public sealed class ReviewHtmlWriter : ICollectionWriter
     private static void Interview(StringBuilder b, CollectionEntry e)
     {
         var mentions = e.Mentions.IsDefault ? [] : e.Mentions;
-        b.Append("<section class=\"interview\" data-interview=\"").Append(Esc(e.Interview)).Append("\">\n<h2>").Append(Said(e.Interview))
+        b.Append("<section class=\"interview\" data-interview=\"").Append(Attr(e.Interview)).Append("\">\n<h2>").Append(Said(e.Interview))
          .Append(" <a class=\"muted\" href=\"").Append(Esc(Uri.EscapeDataString(e.Folder))).Append("/index.html\">report</a></h2>\n");
         b.Append("<table>\n<tr><th>Heading</th><th>Label</th><th>Variants</th><th>Mentions</th><th>Decide</th><th>Decided</th></tr>\n");
         foreach (var h in e.Headings)
         {
-            b.Append("<tr class=\"heading\" data-id=\"").Append(Esc(h.Id)).Append("\" data-original=\"").Append(Esc(h.Id)).Append("\" data-name=\"").Append(Esc(h.Name))
+            b.Append("<tr class=\"heading\" data-id=\"").Append(Attr(h.Id)).Append("\" data-original=\"").Append(Attr(h.Id)).Append("\" data-name=\"").Append(Attr(h.Name))
              .Append("\" data-label=\"").Append(h.Label)
              .Append("\"><td>").Append(Said(h.Name)).Append(" <span class=\"muted\">").Append(Esc(h.Id)).Append("</span></td><td>").Append(h.Label).Append("</td><td>")
              .Append(string.Join(", ", (h.Variants.IsDefault ? [] : h.Variants).Select(Said))).Append("</td><td class=\"n\">").Append(h.Times.Length).Append("</td><td>")
@@ -66,7 +66,7 @@ public sealed class ReviewHtmlWriter : ICollectionWriter
 
     /// <summary>The attributes the script keys a mention decision by: its time in seconds and its text.</summary>
     private static string Target(CollectionMention m) =>
-        $"data-time=\"{m.Time.ToSecondsString()}\" data-text=\"{Esc(m.Text)}\"";
+        $"data-time=\"{m.Time.ToSecondsString()}\" data-text=\"{Attr(m.Text)}\"";
 
     private static string InContext(CollectionMention m) =>
         $"<span class=\"time\">{Clock(m.Time)}</span> {(m.Speaker is null ? "" : $"<span class=\"speaker\">{Said(m.Speaker)}</span> ")}" +

@@ -64,7 +64,7 @@ public sealed class TeiXmlWriter : IInterviewWriter
         w.WriteStartElement("teiHeader");
         w.WriteStartElement("fileDesc");
         w.WriteStartElement("titleStmt");
-        w.WriteElementString("title", $"Interview index: {Clean(index.Transcript.Name)}");
+        w.WriteElementString("title", $"Interview index: {Clean(index.Transcript.Id)}");
         w.WriteEndElement();
         w.WriteStartElement("publicationStmt");
         w.WriteElementString("p", "Machine draft made by SwitchTag; not published.");

@@ -1,4 +1,5 @@
 using System.Text;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Output.Text;
 
@@ -6,7 +7,8 @@ namespace SwitchTag.Output.Text;
 /// (emphasis, code, links, images, raw HTML, entities, table cells, escapes) is backslash-escaped
 /// (CommonMark 0.31 section 2.4 allows it for any ASCII punctuation). Values never start a line, so
 /// block markers (#, -, digits) are harmless and stay readable. Line breaks become spaces so a value
-/// stays in its table cell.</summary>
+/// stays in its table cell. Control and bidi-override characters show as visible marks
+/// (<see cref="DisplayText"/>), so a transcript cannot reorder or hide what a reader sees.</summary>
 public static class MarkdownText
 {
     private const string Active = "\\`*_[]<>&|!~";
@@ -14,6 +16,7 @@ public static class MarkdownText
     public static string Escape(string? text)
     {
         if (string.IsNullOrEmpty(text)) return "";
+        text = DisplayText.Neutralise(text);
         var sb = new StringBuilder(text.Length + 8);
         foreach (char c in text)
         {

@@ -1,5 +1,6 @@
 using System.Collections.Concurrent;
 using System.Runtime.InteropServices;
+using SwitchTag.Output;
 
 namespace SwitchTag.Pipeline.Collection;
 
@@ -7,8 +8,10 @@ namespace SwitchTag.Pipeline.Collection;
 /// folder beside the target (<c>.switchtag-new-*</c>), then the old folder is renamed aside
 /// (<c>.switchtag-old-*</c>), the new one renamed into place and the old one deleted. A reader sees
 /// the old set or the new one, never a mix. Hidden folders and <see cref="Output.AtomicFile"/> temp
-/// files left by a killed run are swept at the next run's start (<see cref="Sweep"/>); on SIGINT or
-/// SIGTERM the folders of this run are removed before the process ends.</summary>
+/// files left by a killed run are swept at the next run's start (<see cref="Sweep"/>). On SIGINT or
+/// SIGTERM, <see cref="WriteGate.Stop"/> first lets the write steps in progress finish (the two renames
+/// of a swap are one step, so the target is never missing), then this run's hidden folders are removed
+/// before the process ends: earlier outputs stay whole and nothing half-written remains.</summary>
 public sealed class FolderSwap : IDisposable
 {
     private const string NewPrefix = ".switchtag-new-", OldPrefix = ".switchtag-old-";
@@ -17,7 +20,7 @@ public sealed class FolderSwap : IDisposable
     private readonly PosixSignalRegistration[] _signals;
 
     public FolderSwap() =>
-        _signals = [PosixSignalRegistration.Create(PosixSignal.SIGINT, _ => RemovePending()), PosixSignalRegistration.Create(PosixSignal.SIGTERM, _ => RemovePending())];
+        _signals = [PosixSignalRegistration.Create(PosixSignal.SIGINT, _ => Stop()), PosixSignalRegistration.Create(PosixSignal.SIGTERM, _ => Stop())];
 
     public void Dispose()
     {
@@ -28,21 +31,28 @@ public sealed class FolderSwap : IDisposable
     public void Replace(string target, Action<string> write)
     {
         string parent = Path.GetDirectoryName(Path.GetFullPath(target))!, name = Path.GetFileName(target);
-        Directory.CreateDirectory(parent);
         string fresh = Path.Combine(parent, $"{NewPrefix}{name}.{Guid.NewGuid():N}");
-        _pending[fresh] = 0;
+        WriteGate.Step(() =>
+        {
+            Directory.CreateDirectory(fresh);
+            _pending[fresh] = 0;
+        });
         try
         {
             write(fresh);
-            string? old = null;
-            if (Directory.Exists(target))
+            string? old = WriteGate.Step(() =>
             {
-                old = Path.Combine(parent, $"{OldPrefix}{name}.{Guid.NewGuid():N}");
-                _pending[old] = 0;
-                Directory.Move(target, old);
-            }
-            Directory.Move(fresh, target);
-            _pending.TryRemove(fresh, out _);
+                string? aside = null;
+                if (Directory.Exists(target))
+                {
+                    aside = Path.Combine(parent, $"{OldPrefix}{name}.{Guid.NewGuid():N}");
+                    _pending[aside] = 0;
+                    Directory.Move(target, aside);
+                }
+                Directory.Move(fresh, target);
+                _pending.TryRemove(fresh, out _);
+                return aside;
+            });
             if (old is not null)
             {
                 Directory.Delete(old, recursive: true);
@@ -51,7 +61,8 @@ public sealed class FolderSwap : IDisposable
         }
         finally
         {
-            if (Directory.Exists(fresh)) Directory.Delete(fresh, recursive: true);
+            // A step refused after a signal leaves the folder to the signal's clean-up.
+            if (!WriteGate.Stopped && Directory.Exists(fresh)) Directory.Delete(fresh, recursive: true);
             _pending.TryRemove(fresh, out _);
         }
     }
@@ -83,8 +94,12 @@ public sealed class FolderSwap : IDisposable
         return removed;
     }
 
-    private void RemovePending()
+    /// <summary>After the write steps in progress, removes this run's hidden folders: fresh ones never
+    /// swapped in, and old ones whose new set is already in place (a swap is one step, so no old folder
+    /// is without its replacement here). Returning lets the signal end the process.</summary>
+    private void Stop()
     {
+        WriteGate.Stop();
         foreach (var path in _pending.Keys)
             try { if (Directory.Exists(path)) Directory.Delete(path, recursive: true); }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException) { }
