@@ -70,4 +70,21 @@ public class Rfc4180ReaderTests
         Assert.Equal(2, records.Length);
         Assert.Equal([2, 4], problems.Select(p => p.Line));
     }
+
+    [Fact]
+    public void A_quote_never_closed_costs_only_its_own_line()
+    {
+        // RFC 4180 §2 rule 6 lets a quoted field hold line breaks, so a quote that is never closed
+        // would run to the end of the file; the reader gives up that one line and reads on.
+        var (records, problems) = Rfc4180Reader.Parse("a,b\n\"open,c\nnext,row\nlast,x\n");
+        Assert.Equal(["a,b", "next,row", "last,x"], records.Select(r => string.Join(",", r.Fields)));
+        Assert.Equal([3, 4], records.Skip(1).Select(r => r.Line));
+        Assert.Equal([2], problems.Select(p => p.Line));
+
+        // The same stray quote "closed" by a quote of a later row (a value that is quoted as rule 5
+        // allows) still costs only its own line.
+        (records, problems) = Rfc4180Reader.Parse("a,b\n\"open,c\nnext,row\nlast,\"x\"\n");
+        Assert.Equal(["a,b", "next,row", "last,x"], records.Select(r => string.Join(",", r.Fields)));
+        Assert.Equal([2], problems.Select(p => p.Line));
+    }
 }

@@ -9,7 +9,7 @@ public sealed record CsvRecord(int Line, ImmutableArray<string> Fields);
 /// <summary>CSV as RFC 4180 §2 defines it: fields separated by commas, records by line breaks
 /// (CRLF, and LF or CR alone as the usual leniency); a field may be enclosed in double quotes, and
 /// then may hold commas, line breaks, and quotes doubled (""). Malformed quoting yields a problem
-/// for that line and the record is skipped.</summary>
+/// for that line and the record is skipped; a quote never closed costs only the line it opens on.</summary>
 public static class Rfc4180Reader
 {
     public static (ImmutableArray<CsvRecord> Records, ImmutableArray<(int Line, string Message)> Problems) Parse(string text)
@@ -27,7 +27,7 @@ public static class Rfc4180Reader
             char c = text[i];
             if (c == '"' && field.Length == 0 && !bad)
             {
-                int openLine = line;
+                int openLine = line, openAt = i;
                 i++;
                 bool closed = false;
                 while (i < text.Length)
@@ -44,10 +44,18 @@ public static class Rfc4180Reader
                     field.Append(q);
                     i++;
                 }
-                if (!closed)
+                bool strayAfterClose = closed && i < text.Length && text[i] is not (',' or '\r' or '\n');
+                if (!closed || (strayAfterClose && line > openLine))
                 {
-                    problems.Add((openLine, "quoted field is never closed"));
-                    return (records.ToImmutable(), problems.ToImmutable());
+                    // A quote left open (or closed only lines later by another row's quote) would
+                    // swallow the rows between; only its own line is lost, and reading resumes on
+                    // the next line.
+                    problems.Add((openLine, "quoted field is never closed; the rest of this line is not read"));
+                    i = openAt;
+                    while (i < text.Length && text[i] is not ('\r' or '\n')) i++;
+                    line = openLine;
+                    field.Clear();
+                    bad = true;
                 }
                 if (i < text.Length && text[i] is not (',' or '\r' or '\n'))
                 {
