@@ -150,7 +150,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         bool open = m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer;
         if (open && m.Label == NameLabel.LOC && respelled is not null)
             return $"\"{m.Text}\" is accented otherwise than the only places of that name ({respelled.Name}, {respelled.Country}): another name, perhaps a person's";
-        if (open && m.Label == NameLabel.LOC && !places.IsEmpty && !m.Text.Any(char.IsWhiteSpace) && m.Text.All(c => !char.IsLetter(c) || c < '\u0250')
+        if (open && m.Label == NameLabel.LOC && !places.IsEmpty && !m.Text.Any(char.IsWhiteSpace) && m.Text.All(c => WritingScripts.Of(c) is WritingScript.None or WritingScript.Latin)
             && places.All(p => p.Population < VillagePopulation && Key(p.Name, m.Language) != key))
             return $"\"{m.Text}\" is only another name of a village ({places[0].Name}, {places[0].Country}), and the sentence does not say it is a place";
         if (labelsOfSurface.Contains(NameLabel.PER) && labelsOfSurface.Contains(NameLabel.LOC) && m.Label != NameLabel.ORG
