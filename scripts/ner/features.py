@@ -7,15 +7,16 @@ Per word, FEATURE_SLOTS hashed ids into one table of HASH_ROWS rows (row 0 = pad
   slots 5-7  "s2:"/"s3:"/"s4:" + last 2/3/4 code points of lower(word)
   slot 8  "sh:" + shape(word)         slot 9  "c:" + case class + ("^" if sentence-initial)
   slots 10-19  "3:" + trigram of "<" + lower(word) + ">", the first 5 and last 5 when more than 10
+  slot 20 "lex:" + the name-list flags of lower(word) (lexicon.py; "lex:" alone when it is in none)
 and PIECE_SLOTS SentencePiece ids (+1, 0 = padding) of lower(word): all when at most 4, else the
 first 3 and the last one. lower() maps each BMP code point through its single-code-point lowercase
 (code points whose lowercase is longer, and non-BMP code points, stay as they are)."""
 import unicodedata
 
 HASH_ROWS = 1 << 17
-FEATURE_SLOTS = 20
+FEATURE_SLOTS = 21
 PIECE_SLOTS = 4
-GROUPS = {"char": list(range(2, 8)) + list(range(10, 20)), "shape": [1, 8, 9]}
+GROUPS = {"char": list(range(2, 8)) + list(range(10, 20)), "shape": [1, 8, 9], "lexicon": [20]}
 SENTENCE_OPENERS = {".", "!", "?", "…", ":", ";", "\"", "“", "”", "„", "«", "»", "(", "-", "–", "—"}
 
 
@@ -70,7 +71,7 @@ def case_class(word):
     return "mixed"
 
 
-def feature_ids(word, first):
+def feature_ids(word, first, lexicon):
     lw = lower(word)
     ids = [fid("w:" + lw), fid("W:" + word)]
     ids += [fid("p%d:" % k + lw[:k]) for k in (2, 3, 4)]
@@ -82,7 +83,8 @@ def feature_ids(word, first):
     if len(tri) > 10:
         tri = tri[:5] + tri[-5:]
     ids += [fid("3:" + t) for t in tri]
-    ids += [0] * (FEATURE_SLOTS - len(ids))
+    ids += [0] * (FEATURE_SLOTS - 1 - len(ids))
+    ids.append(fid("lex:" + lexicon.get(lw, "")))
     return ids
 
 

@@ -13,6 +13,7 @@ import torch
 
 import corpora
 import features as fx
+import lexicon as lx
 from model import LABELS, Tagger
 
 SEED = 20261201
@@ -70,8 +71,8 @@ def prf(gold_pred):
 
 
 class Featurizer:
-    def __init__(self, sp, drop_groups=()):
-        self.sp, self.cache = sp, {}
+    def __init__(self, sp, lexicon, drop_groups=()):
+        self.sp, self.lexicon, self.cache = sp, lexicon, {}
         self.zero = [s for g in drop_groups if g != "pieces" for s in fx.GROUPS[g]]
         self.no_pieces = "pieces" in drop_groups
 
@@ -79,7 +80,7 @@ class Featurizer:
         key = (w, first)
         v = self.cache.get(key)
         if v is None:
-            f = fx.feature_ids(w, first)
+            f = fx.feature_ids(w, first, self.lexicon)
             for s in self.zero: f[s] = 0
             p = [0] * fx.PIECE_SLOTS if self.no_pieces else fx.piece_ids(self.sp, w)
             v = self.cache[key] = (f, p)
@@ -208,11 +209,11 @@ def add_control_pieces(path):
         f.write(m.SerializeToString())
 
 
-def run(args, data, sp, drop_groups, dim, dilations, epochs, log):
+def run(args, data, sp, lexicon, drop_groups, dim, dilations, epochs, log):
     torch.manual_seed(SEED); random.seed(SEED); np.random.seed(SEED)
     rng = random.Random(SEED)
     nrng = np.random.default_rng(SEED)
-    feat = Featurizer(sp, drop_groups)
+    feat = Featurizer(sp, lexicon, drop_groups)
     model = Tagger(fx.HASH_ROWS, sp.get_piece_size() + 1, dim, dilations)
     tables = [model.hash.weight, model.piece.weight]
     opts = [torch.optim.SparseAdam(tables, lr=2e-3),
@@ -284,7 +285,7 @@ def export(model, feat, sp, out_dir, log):
         json.dump(fixture, fh, ensure_ascii=False)
     with open(os.path.join(out_dir, "ner.labels.json"), "w", encoding="utf-8") as fh:
         json.dump({"labels": LABELS, "hashRows": fx.HASH_ROWS, "featureSlots": fx.FEATURE_SLOTS,
-                   "pieceSlots": fx.PIECE_SLOTS, "pieceModel": "ner.spm"}, fh, indent=1)
+                   "pieceSlots": fx.PIECE_SLOTS, "pieceModel": "ner.spm", "lexicon": "ner.lexicon.tsv.gz"}, fh, indent=1)
     log(f"exported {onnx_path} ({os.path.getsize(onnx_path) / 1e6:.1f} MB)")
 
 
@@ -292,6 +293,7 @@ def main():
     ap = argparse.ArgumentParser()
     ap.add_argument("--data", default="../shared/data")
     ap.add_argument("--out", default="models")
+    ap.add_argument("--lists", default="models/lexicon", help="the shipped name lists (models/namelists.md) the name lexicon is built from")
     ap.add_argument("--epochs", type=int, default=7)
     ap.add_argument("--budget", type=float, default=1.9e6, help="training tokens per epoch (sample_plan)")
     ap.add_argument("--alpha", type=float, default=0.5, help="sampling temperature exponent over training sets")
@@ -334,15 +336,21 @@ def main():
         os.remove(sp_prefix + ".vocab")
         add_control_pieces(sp_prefix + ".spm")
     sp = spm.SentencePieceProcessor(model_file=sp_prefix + ".spm")
+    lexicon = lx.build(args.data, args.lists)
+    counts = Counter(f for flags in lexicon.values() for f in flags)
+    log(f"name lexicon: {len(lexicon)} words; " + " ".join(f"{f}={counts[f]}" for f in lx.FLAGS))
+    if not args.ablations:
+        lx.write(lexicon, os.path.join(args.out, "ner.lexicon.tsv.gz"))
     if args.ablations:
         variants = [("full", (), 96, (1, 2, 4, 1)), ("no subword pieces", ("pieces",), 96, (1, 2, 4, 1)),
                     ("no char n-grams/affixes", ("char",), 96, (1, 2, 4, 1)),
                     ("no shape/case features", ("shape",), 96, (1, 2, 4, 1)),
+                    ("no name lexicon", ("lexicon",), 96, (1, 2, 4, 1)),
                     ("smaller CNN (2 x 64)", (), 64, (1, 2))]
         rows = []
         for name, drop, dim, dil in variants:
             log(f"ablation: {name}")
-            model, feat, best, secs = run(args, data, sp, drop, dim, dil, args.ablation_epochs, log)
+            model, feat, best, secs = run(args, data, sp, lexicon, drop, dim, dil, args.ablation_epochs, log)
             rows.append((name, best, secs))
         with open(os.path.join(args.out, "ner.ablations.tsv"), "w", encoding="utf-8") as fh:
             fh.write("variant\tdev_mean_f1\ttrain_seconds\n")
@@ -353,7 +361,7 @@ def main():
     assert sum(dilations) <= 16, "receptive field beyond the C# window overlap"
     log(f"dilations {dilations}, word dropout {args.word_dropout} (count > {args.dropout_count} scaled down), {args.epochs} epochs, "
         f"budget {args.budget:.0f} tokens/epoch, alpha {args.alpha}, max repeat {args.max_repeat}, hash rows {fx.HASH_ROWS}")
-    model, feat, best, secs = run(args, data, sp, (), 96, dilations, args.epochs, log)
+    model, feat, best, secs = run(args, data, sp, lexicon, (), 96, dilations, args.epochs, log)
     log(f"best dev mean F1 {best:.4f}, training {secs:.0f}s")
     export(model, feat, sp, args.out, log)
     for n, s in sorted(data["test"].items()):

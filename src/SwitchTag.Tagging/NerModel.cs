@@ -6,8 +6,9 @@ using Microsoft.ML.OnnxRuntime.Tensors;
 namespace SwitchTag.Tagging;
 
 /// <summary>The shipped word-level name classifier: <c>ner.onnx</c> (inputs <c>features</c>
-/// [batch, words, 20] and <c>pieces</c> [batch, words, 4], int64; output <c>logits</c> [batch, words,
-/// labels]), <c>ner.spm</c> (SentencePiece) and <c>ner.labels.json</c> (labels and feature sizes).
+/// [batch, words, FeatureSlots] and <c>pieces</c> [batch, words, 4], int64; output <c>logits</c> [batch, words,
+/// labels]), <c>ner.spm</c> (SentencePiece), <c>ner.labels.json</c> (labels and feature layout) and,
+/// when the layout names one, the name lexicon the model was trained with.
 /// Thread-safe; <see cref="Shared"/> keeps one ONNX Runtime session per models folder per process.</summary>
 public sealed class NerModel : IDisposable
 {
@@ -18,14 +19,20 @@ public sealed class NerModel : IDisposable
 
     public IReadOnlyList<string> Labels { get; }
 
+    /// <summary>Feature ids per word, as <c>ner.labels.json</c> lays them out.</summary>
+    public int FeatureSlots => _features.Slots;
+
     private NerModel(string directory)
     {
         using var json = JsonDocument.Parse(File.ReadAllText(Path.Combine(directory, "ner.labels.json")));
         var root = json.RootElement;
         Labels = [.. root.GetProperty("labels").EnumerateArray().Select(e => e.GetString()!)];
-        if (root.GetProperty("featureSlots").GetInt32() != WordFeatures.Slots || root.GetProperty("pieceSlots").GetInt32() != PieceEncoder.Slots)
+        var lexicon = root.TryGetProperty("lexicon", out var lex)
+            ? NameLexicon.Load(Path.Combine(directory, lex.GetString()!))
+            : null;
+        _features = new WordFeatures(root.GetProperty("hashRows").GetInt32(), lexicon);
+        if (root.GetProperty("featureSlots").GetInt32() != _features.Slots || root.GetProperty("pieceSlots").GetInt32() != PieceEncoder.Slots)
             throw new InvalidDataException("ner.labels.json: feature layout does not match this build");
-        _features = new WordFeatures(root.GetProperty("hashRows").GetInt32());
         using (var sp = File.OpenRead(Path.Combine(directory, root.GetProperty("pieceModel").GetString()!)))
             _pieces = new PieceEncoder(sp);
         var options = new SessionOptions
@@ -38,7 +45,7 @@ public sealed class NerModel : IDisposable
         _session = new InferenceSession(Path.Combine(directory, "ner.onnx"), options);
     }
 
-    /// <summary>Loads a model folder (ner.onnx, ner.spm, ner.labels.json); throws when files are missing or malformed.</summary>
+    /// <summary>Loads a model folder (ner.onnx, ner.spm, ner.labels.json, the lexicon it names); throws when files are missing or malformed.</summary>
     public static NerModel Load(string directory) => new(directory);
 
     /// <summary>The process-wide instance for <paramref name="directory"/>, loaded on first use.</summary>
@@ -51,7 +58,7 @@ public sealed class NerModel : IDisposable
     {
         for (int i = 0; i < count; i++)
         {
-            _features.Compute(words[from + i], WordFeatures.IsSentenceInitial(words, from + i), features.Slice(i * WordFeatures.Slots, WordFeatures.Slots));
+            _features.Compute(words[from + i], WordFeatures.IsSentenceInitial(words, from + i), features.Slice(i * FeatureSlots, FeatureSlots));
             _pieces.Encode(words[from + i]).CopyTo(pieces.Slice(i * PieceEncoder.Slots, PieceEncoder.Slots));
         }
     }
@@ -61,7 +68,7 @@ public sealed class NerModel : IDisposable
     {
         var inputs = new[]
         {
-            NamedOnnxValue.CreateFromTensor("features", new DenseTensor<long>(features, [batch, words, WordFeatures.Slots])),
+            NamedOnnxValue.CreateFromTensor("features", new DenseTensor<long>(features, [batch, words, FeatureSlots])),
             NamedOnnxValue.CreateFromTensor("pieces", new DenseTensor<long>(pieces, [batch, words, PieceEncoder.Slots])),
         };
         using var results = _session.Run(inputs);

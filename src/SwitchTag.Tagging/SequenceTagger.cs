@@ -47,13 +47,13 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
             int limit = Math.Max(1, Math.Min(chunks.Count - i, batchWords / Math.Max(1, width)));
             int count = 1;
             while (count < limit && chunks[i + count].Length * 4 >= width * 3) count++;
-            var features = new long[count * width * WordFeatures.Slots];
+            var features = new long[count * width * model.FeatureSlots];
             var pieces = new long[count * width * PieceEncoder.Slots];
             for (int b = 0; b < count; b++)
             {
                 var c = chunks[i + b];
                 model.Featurize(sentences[c.Sentence], c.Start, c.Length,
-                    features.AsSpan(b * width * WordFeatures.Slots), pieces.AsSpan(b * width * PieceEncoder.Slots));
+                    features.AsSpan(b * width * model.FeatureSlots), pieces.AsSpan(b * width * PieceEncoder.Slots));
             }
             var logits = model.Run(features, pieces, count, width);
             for (int b = 0; b < count; b++)

@@ -7,10 +7,14 @@ namespace SwitchTag.Tagging;
 /// model was trained on these ids): id(s) = 1 + FNV-1a-32(UTF-8(s)) mod (rows - 1), with slot 0
 /// "w:"+lower, 1 "W:"+word, 2-4 "p2:".."p4:" prefixes, 5-7 "s2:".."s4:" suffixes of lower, 8
 /// "sh:"+shape, 9 "c:"+case class (+"^" sentence-initial), 10-19 "3:"+trigrams of "&lt;"+lower+"&gt;"
-/// (first 5 and last 5 when more than 10). Lengths count code points, not UTF-16 units.</summary>
-public sealed class WordFeatures(int hashRows)
+/// (first 5 and last 5 when more than 10), and, for a model trained with a name lexicon, slot 20
+/// "lex:"+the word's <see cref="NameLexicon"/> flags. Lengths count code points, not UTF-16 units.</summary>
+public sealed class WordFeatures(int hashRows, NameLexicon? lexicon = null)
 {
-    public const int Slots = 20;
+    private const int BaseSlots = 20;
+
+    /// <summary>Ids per word: 20, or 21 with a name lexicon.</summary>
+    public int Slots { get; } = BaseSlots + (lexicon is null ? 0 : 1);
 
     /// <summary>Words after which the next word starts a sentence for the case feature.</summary>
     private static readonly HashSet<string> SentenceOpeners =
@@ -35,7 +39,8 @@ public sealed class WordFeatures(int hashRows)
     {
         ids.Clear();
         var orig = ToRunes(word);
-        var lower = ToRunes(Lower(word));
+        var lowerText = Lower(word);
+        var lower = ToRunes(lowerText);
         int n = lower.Length;
         ids[0] = Id("w:", lower);
         ids[1] = Id("W:", orig);
@@ -57,6 +62,8 @@ public sealed class WordFeatures(int hashRows)
             if (count > 10 && t >= 5 && t < count - 5) continue;
             ids[slot++] = Id("3:", padded.AsSpan(t, 3));
         }
+        if (lexicon is not null)
+            ids[BaseSlots] = Id("lex:" + lexicon.Flags(lowerText), []);
     }
 
     private long Id(string prefix, ReadOnlySpan<int> runes) => 1 + Hash(prefix, runes) % (uint)(hashRows - 1);

@@ -26,12 +26,12 @@ public class ParityTests
     {
         foreach (var (words, features, pieces, _) in Fixture())
         {
-            var f = new long[words.Length * WordFeatures.Slots];
+            var f = new long[words.Length * Models.Ner.FeatureSlots];
             var p = new long[words.Length * PieceEncoder.Slots];
             Models.Ner.Featurize(words, 0, words.Length, f, p);
             for (int i = 0; i < words.Length; i++)
             {
-                Assert.Equal(features[i], f.AsSpan(i * WordFeatures.Slots, WordFeatures.Slots).ToArray());
+                Assert.Equal(features[i], f.AsSpan(i * Models.Ner.FeatureSlots, Models.Ner.FeatureSlots).ToArray());
                 Assert.Equal(pieces[i], p.AsSpan(i * PieceEncoder.Slots, PieceEncoder.Slots).ToArray());
             }
         }
