@@ -1,4 +1,3 @@
-using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Text;
 using SwitchTag.Output.Text;
@@ -14,9 +13,21 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
 {
     public string FileName => "annotated.vtt";
 
-    public void Write(InterviewIndex index, Stream stream) => Utf8Text.Write(stream, Render(index));
+    public void Write(InterviewIndex index, Stream stream)
+    {
+        using var text = Utf8Text.Writer(stream);
+        Render(index, text);
+    }
 
     public static string Render(InterviewIndex index)
+    {
+        var text = new StringWriter();
+        Render(index, text);
+        return text.ToString();
+    }
+
+    /// <summary>The file, written to <paramref name="sb"/> cue by cue.</summary>
+    public static void Render(InterviewIndex index, TextWriter sb)
     {
         var cueTurn = new Dictionary<int, (Turn Turn, TurnCue Part, int TurnIndex)>();
         for (int t = 0; t < index.Turns.Length; t++)
@@ -24,8 +35,7 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
                 cueTurn[part.CueIndex] = (index.Turns[t], part, t);
         var foreign = index.ForeignSpans.GroupBy(f => f.Turn).ToDictionary(g => g.Key, g => g.OrderBy(f => f.CharStart).ToArray());
 
-        var sb = new StringBuilder("WEBVTT\n\nNOTE\nMachine annotation of ");
-        sb.Append(Escape(Path.GetFileName(index.Transcript.Source.Path)))
+        sb.Append("WEBVTT\n\nNOTE\nMachine annotation of ").Append(Escape(Path.GetFileName(index.Transcript.Source.Path)))
           .Append(": <lang> marks stretches outside the main language (")
           .Append(index.MainLanguage.Code).Append(").\n\n");
         var cues = index.Transcript.Cues;
@@ -42,7 +52,6 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
             AppendText(sb, cue, spans);
             sb.Append("\n\n");
         }
-        return sb.ToString();
     }
 
     /// <summary>The foreign stretches inside one cue of a turn. A turn's stretches are in text order and
@@ -70,7 +79,7 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
     // Tags go in at char positions of the cue text: at one position, closing tags, then the word
     // timestamp, then opening tags, so tags nest properly. Spans come in text order and do not
     // overlap, so one pass over the cut points places them (a 10 MB cue may hold 100k spans).
-    private static void AppendText(StringBuilder sb, Cue cue, List<(int Start, int End, LanguageCode Language)> spans)
+    private static void AppendText(TextWriter sb, Cue cue, List<(int Start, int End, LanguageCode Language)> spans)
     {
         string text = cue.Text;
         var breaks = LineBreaks(text);
@@ -113,7 +122,7 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
 
     /// <summary>Cue text escaped (WebVttText.Escape), with CR kept as <c>&amp;#13;</c> (a raw one would end
     /// the line) and each line break written as <see cref="LineBreaks"/> says.</summary>
-    private static void AppendEscaped(StringBuilder sb, string text, int from, int to, bool[] breaks)
+    private static void AppendEscaped(TextWriter sb, string text, int from, int to, bool[] breaks)
     {
         int run = from;
         for (int i = from; i < to; i++)

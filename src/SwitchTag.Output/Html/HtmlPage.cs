@@ -1,4 +1,4 @@
-using System.Text;
+using SwitchTag.Output.Text;
 
 namespace SwitchTag.Output.Html;
 
@@ -25,11 +25,23 @@ public static class HtmlPage
 
     public static string Render(string title, string body, string? script = null)
     {
-        var page = new StringBuilder();
+        var page = new StringWriter();
+        Start(page, title);
+        page.Write(body);
+        End(page, script);
+        return page.ToString();
+    }
+
+    /// <summary>Everything before the body, for a page written to a stream as it is made.</summary>
+    public static void Start(TextWriter page, string title) =>
         page.Append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
             .Append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n<title>").Append(HtmlText.Esc(title))
-            .Append("</title>\n<style>").Append(Style).Append("</style>\n</head>\n<body>\n").Append(body);
+            .Append("</title>\n<style>").Append(Style).Append("</style>\n</head>\n<body>\n");
+
+    /// <summary>Everything after the body.</summary>
+    public static void End(TextWriter page, string? script = null)
+    {
         if (script is not null) page.Append("<script>\n").Append(script).Append("</script>\n");
-        return page.Append("</body>\n</html>\n").ToString();
+        page.Append("</body>\n</html>\n");
     }
 }

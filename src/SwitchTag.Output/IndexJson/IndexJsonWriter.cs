@@ -7,7 +7,9 @@ using SwitchTag.Core.Time;
 namespace SwitchTag.Output.IndexJson;
 
 /// <summary>Writes <c>index.json</c>, schema <c>switchtag.index/1</c> (fields in SCHEMA.md).
-/// Times are seconds as JSON numbers; numbers are written in invariant form by Utf8JsonWriter.</summary>
+/// Times are seconds as JSON numbers; numbers are written in invariant form by Utf8JsonWriter.
+/// The writer is flushed to the stream as it goes (<see cref="Spill"/>) and a turn's text is written
+/// in pieces, so one speaker turn of 200k cues never holds the whole file, or its text escaped, in memory.</summary>
 public sealed class IndexJsonWriter : IInterviewWriter
 {
     public string FileName => "index.json";
@@ -22,6 +24,12 @@ public sealed class IndexJsonWriter : IInterviewWriter
         // Names and transcript text stay readable; the file is never embedded in HTML.
         Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
     };
+
+    /// <summary>Bytes a writer holds before <see cref="Spill"/> hands them to the stream.</summary>
+    private const int SpillAt = 1 << 16;
+
+    /// <summary>Chars of a long string written per piece.</summary>
+    private const int PieceChars = 1 << 14;
 
     public static void Write(InterviewIndex index, Stream stream)
     {
@@ -119,7 +127,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteString("speakerLabel", turn.SpeakerLabel);
             Seconds(w, "start", turn.Time.Start);
             Seconds(w, "end", turn.Time.End);
-            w.WriteString("text", turn.Text);
+            LongString(w, "text", turn.Text);
             w.WriteStartArray("spans");
             foreach (var timed in index.Spans[t])
             {
@@ -131,6 +139,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
                 w.WriteString("language", timed.Value.Language.Code);
                 w.WriteNumber("confidence", Math.Round(timed.Value.Confidence, 4));
                 w.WriteEndObject();
+                Spill(w);
             }
             w.WriteEndArray();
             // The cues the turn was made of, so a user sees exactly what was read and from which line.
@@ -145,6 +154,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
                 w.WriteNumber("charEnd", part.CharEnd);
                 w.WriteNumber("line", cue.At.Line);
                 w.WriteEndObject();
+                Spill(w);
             }
             w.WriteEndArray();
             w.WriteEndObject();
@@ -174,6 +184,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteString("speaker", index.Turns[m.Turn].Speaker);
             w.WriteString("review", reasons.GetValueOrDefault(i));
             w.WriteEndObject();
+            Spill(w);
         }
         w.WriteEndArray();
     }
@@ -199,7 +210,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             if (h.Mentions.IsEmpty) w.WriteNull("firstMention");
             else Seconds(w, "firstMention", index.Mentions[h.Mentions[0]].Time.Start);
             w.WriteStartArray("mentions");
-            foreach (int i in h.Mentions) w.WriteNumberValue(i);
+            foreach (int i in h.Mentions) { w.WriteNumberValue(i); Spill(w); }
             w.WriteEndArray();
             w.WriteStartArray("times");
             foreach (int i in h.Mentions)
@@ -208,6 +219,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
                 Seconds(w, "start", index.Mentions[i].Time.Start);
                 Seconds(w, "end", index.Mentions[i].Time.End);
                 w.WriteEndObject();
+                Spill(w);
             }
             w.WriteEndArray();
             w.WriteStartArray("speakers");
@@ -253,8 +265,30 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteNumber("words", item.Words);
             w.WriteBoolean("check", item.Check);
             w.WriteEndObject();
+            Spill(w);
         }
         w.WriteEndArray();
+    }
+
+    /// <summary>Hands what the writer holds to the stream once it passes <see cref="SpillAt"/> bytes:
+    /// a writer over a stream otherwise keeps the whole document until it is disposed.</summary>
+    private static void Spill(Utf8JsonWriter w)
+    {
+        if (w.BytesPending >= SpillAt) w.Flush();
+    }
+
+    /// <summary>A string property written in pieces (the writer escapes a whole value at once otherwise,
+    /// with room for six bytes a char); the bytes are those of one <c>WriteString</c>.</summary>
+    private static void LongString(Utf8JsonWriter w, string name, string value)
+    {
+        if (value.Length <= PieceChars) { w.WriteString(name, value); return; }
+        w.WritePropertyName(name);
+        for (int at = 0; at < value.Length; at += PieceChars)
+        {
+            int length = Math.Min(PieceChars, value.Length - at);
+            w.WriteStringValueSegment(value.AsSpan(at, length), isFinalSegment: at + length == value.Length);
+            Spill(w);
+        }
     }
 
     public static void Seconds(Utf8JsonWriter w, string name, Timecode t) => w.WriteNumber(name, t.Milliseconds / 1000m);

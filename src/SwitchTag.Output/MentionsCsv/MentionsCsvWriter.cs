@@ -9,17 +9,23 @@ public sealed class MentionsCsvWriter : IInterviewWriter
 {
     public string FileName => "mentions.csv";
 
-    public void Write(InterviewIndex index, Stream stream) => Utf8Text.Write(stream, Render(index));
+    public void Write(InterviewIndex index, Stream stream)
+    {
+        using var text = Utf8Text.Writer(stream);
+        Rows(index, new Csv(text));
+    }
 
     public static readonly string[] Header =
         ["start", "end", "start_seconds", "end_seconds", "speaker", "text", "label", "heading", "heading_name",
          "language", "confidence", "source", "review", "turn", "char", "char_end"];
 
-    public static string Render(InterviewIndex index)
+    public static string Render(InterviewIndex index) => Rows(index, new Csv()).ToString();
+
+    private static Csv Rows(InterviewIndex index, Csv csv)
     {
         var names = index.Headings.ToDictionary(h => h.Id, h => h.Name);
         var reasons = index.Review.ToDictionary(r => r.Mention, r => r.Reason);
-        var csv = new Csv().Row(Header);
+        csv.Row(Header);
         for (int i = 0; i < index.Mentions.Length; i++)
         {
             var (m, time, heading) = index.Mentions[i];
@@ -29,6 +35,6 @@ public sealed class MentionsCsvWriter : IInterviewWriter
                 m.Source.Name, reasons.GetValueOrDefault(i), Numbers.Integer(m.Turn), Numbers.Integer(m.CharStart),
                 Numbers.Integer(m.CharEnd));
         }
-        return csv.ToString();
+        return csv;
     }
 }

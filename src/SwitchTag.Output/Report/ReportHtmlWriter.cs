@@ -1,4 +1,3 @@
-using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Output.Html;
 using SwitchTag.Output.Map;
@@ -20,12 +19,24 @@ public sealed class ReportHtmlWriter : IInterviewWriter
     private static readonly (NameLabel Label, string Id, string Title)[] Sections =
         [(NameLabel.PER, "people", "People"), (NameLabel.LOC, "places", "Places"), (NameLabel.ORG, "organisations", "Organisations")];
 
-    public void Write(InterviewIndex index, Stream stream) => Utf8Text.Write(stream, Render(index));
+    public void Write(InterviewIndex index, Stream stream)
+    {
+        using var text = Utf8Text.Writer(stream);
+        Render(index, text);
+    }
 
     public static string Render(InterviewIndex index)
     {
-        var b = new StringBuilder();
+        var text = new StringWriter();
+        Render(index, text);
+        return text.ToString();
+    }
+
+    /// <summary>The page, written to <paramref name="b"/> as it is made.</summary>
+    public static void Render(InterviewIndex index, TextWriter b)
+    {
         string name = index.Transcript.Id;
+        HtmlPage.Start(b, $"Interview index: {name}");
         b.Append("<h1>Interview index: ").Append(Said(name)).Append("</h1>\n");
         b.Append(CautionBlock());
         Facts(b, index);
@@ -37,7 +48,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         Review(b, index);
         Worklist(b, index);
         Notes(b, index);
-        return HtmlPage.Render($"Interview index: {name}", b.ToString());
+        HtmlPage.End(b);
     }
 
     /// <summary>The caution of the Markdown report, its bold lead kept bold.</summary>
@@ -52,7 +63,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         index.Headings.Where(h => h.Place is not null)
             .Select(h => new MapPlace(h.Id, h.Name, h.Place!.Latitude, h.Place.Longitude, "#" + HeadingAnchor(h.Id))).ToList();
 
-    private static void Facts(StringBuilder b, InterviewIndex index)
+    private static void Facts(TextWriter b, InterviewIndex index)
     {
         var source = index.Transcript.Source;
         b.Append("<ul class=\"facts\">\n")
@@ -69,7 +80,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         b.Append("</li>\n</ul>\n");
     }
 
-    private static void Contents(StringBuilder b, InterviewIndex index)
+    private static void Contents(TextWriter b, InterviewIndex index)
     {
         b.Append("<nav class=\"contents\">\n<h2>Contents</h2>\n<ol>\n")
          .Append("<li><a href=\"#languages\">Languages</a></li>\n<li><a href=\"#timeline\">Timeline of languages</a></li>\n<li><a href=\"#map\">Map of places</a></li>\n");
@@ -82,7 +93,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         b.Append("</ol>\n</nav>\n");
     }
 
-    private static void Languages(StringBuilder b, InterviewIndex index)
+    private static void Languages(TextWriter b, InterviewIndex index)
     {
         double total = index.Languages.Sum(s => s.Seconds);
         b.Append("<section id=\"languages\">\n<h2>Languages</h2>\n<table>\n<tr><th>Language</th><th>Time</th><th>Share of time</th><th>Words</th></tr>\n");
@@ -93,7 +104,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         b.Append("</table>\n</section>\n");
     }
 
-    private static void Headings(StringBuilder b, InterviewIndex index, NameLabel label, string id, string title)
+    private static void Headings(TextWriter b, InterviewIndex index, NameLabel label, string id, string title)
     {
         var headings = index.Headings.Where(h => h.Label == label).ToList();
         b.Append("<section id=\"").Append(id).Append("\">\n<h2>").Append(title).Append("</h2>\n");
@@ -130,7 +141,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
             $"<a href=\"#{Esc(HeadingAnchor(o.Id))}\">{Said(o.Name)}</a>")) + "</span>";
     }
 
-    private static void Mention(StringBuilder b, InterviewIndex index, int i)
+    private static void Mention(TextWriter b, InterviewIndex index, int i)
     {
         var m = index.Mentions[i];
         b.Append("<li class=\"mention\" id=\"m-").Append(i).Append("\">").Append(TimeLink(m.Time.Start, index.Media)).Append(' ');
@@ -156,7 +167,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
                $"{PlaceSource.Of(p)})</span>" + others;
     }
 
-    private static void Review(StringBuilder b, InterviewIndex index)
+    private static void Review(TextWriter b, InterviewIndex index)
     {
         b.Append("<section id=\"review\">\n<h2>For review</h2>\n<p>These mentions are held back from the index until a person decides " +
                  "(review.html in the output folder writes the decisions file).</p>\n");
@@ -172,7 +183,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         b.Append("</table>\n</section>\n");
     }
 
-    private static void Worklist(StringBuilder b, InterviewIndex index)
+    private static void Worklist(TextWriter b, InterviewIndex index)
     {
         b.Append("<section id=\"worklist\">\n<h2>Translators' worklist</h2>\n");
         WorklistTable(b, index, index.Worklist.Where(w => !w.Check).ToList(), "No stretch outside the main language was found.");
@@ -182,7 +193,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         b.Append("</section>\n");
     }
 
-    private static void WorklistTable(StringBuilder b, InterviewIndex index, List<WorklistItem> items, string empty)
+    private static void WorklistTable(TextWriter b, InterviewIndex index, List<WorklistItem> items, string empty)
     {
         if (items.Count == 0) { b.Append("<p class=\"muted\">").Append(empty).Append("</p>\n"); return; }
         b.Append("<table>\n<tr><th>Start</th><th>End</th><th>Speaker</th><th>Language</th><th>Confidence</th><th>Text</th></tr>\n");
@@ -193,7 +204,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         b.Append("</table>\n");
     }
 
-    private static void Notes(StringBuilder b, InterviewIndex index)
+    private static void Notes(TextWriter b, InterviewIndex index)
     {
         if (index.Diagnostics.IsEmpty) return;
         b.Append("<section id=\"notes\">\n<h2>Reading notes</h2>\n<ul>\n");

@@ -1,4 +1,3 @@
-using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Output.Html;
 using SwitchTag.Output.Text;
@@ -11,7 +10,11 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
 {
     public string FileName => "index.md";
 
-    public void Write(InterviewIndex index, Stream stream) => Utf8Text.Write(stream, Render(index));
+    public void Write(InterviewIndex index, Stream stream)
+    {
+        using var text = Utf8Text.Writer(stream);
+        Render(index, text);
+    }
 
     public const string Caution =
         "**Machine draft — review before publication.** This index, its place links and the translators' worklist " +
@@ -20,7 +23,14 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
 
     public static string Render(InterviewIndex index)
     {
-        var md = new StringBuilder();
+        var text = new StringWriter();
+        Render(index, text);
+        return text.ToString();
+    }
+
+    /// <summary>The report, written to <paramref name="md"/> as it is made.</summary>
+    public static void Render(InterviewIndex index, TextWriter md)
+    {
         var name = MarkdownText.Escape(index.Transcript.Id);
         md.Append("# Interview index: ").Append(name).Append("\n\n");
         md.Append("> ").Append(Caution).Append("\n\n");
@@ -40,10 +50,9 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         Review(md, index);
         Worklist(md, index);
         Diagnostics(md, index);
-        return md.ToString();
     }
 
-    private static void Languages(StringBuilder md, InterviewIndex index)
+    private static void Languages(TextWriter md, InterviewIndex index)
     {
         md.Append("## Languages\n\n");
         var table = new MarkdownTable(md, "| Language | Time (s) | Words |", "| --- | ---: | ---: |");
@@ -53,7 +62,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         md.Append('\n');
     }
 
-    private static void Headings(StringBuilder md, InterviewIndex index, NameLabel label, string title)
+    private static void Headings(TextWriter md, InterviewIndex index, NameLabel label, string title)
     {
         var headings = index.Headings.Where(h => h.Label == label).ToList();
         md.Append("## ").Append(title).Append("\n\n");
@@ -94,7 +103,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         return text;
     }
 
-    private static void Review(StringBuilder md, InterviewIndex index)
+    private static void Review(TextWriter md, InterviewIndex index)
     {
         md.Append("## For review\n\nThese mentions are held back from the index until a person decides (see the decisions file in SCHEMA.md).\n\n");
         if (index.Review.IsEmpty) { md.Append("Nothing held back.\n\n"); return; }
@@ -109,7 +118,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         md.Append('\n');
     }
 
-    private static void Worklist(StringBuilder md, InterviewIndex index)
+    private static void Worklist(TextWriter md, InterviewIndex index)
     {
         md.Append("## Translators' worklist\n\n");
         WorklistTable(md, index.Worklist.Where(w => !w.Check).ToList(), "No stretch outside the main language was found.");
@@ -117,7 +126,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         WorklistTable(md, index.Worklist.Where(w => w.Check).ToList(), "None.");
     }
 
-    private static void WorklistTable(StringBuilder md, List<WorklistItem> items, string empty)
+    private static void WorklistTable(TextWriter md, List<WorklistItem> items, string empty)
     {
         if (items.Count == 0) { md.Append(empty).Append("\n\n"); return; }
         var table = new MarkdownTable(md, "| Start | End | Speaker | Language | Confidence | Text |", "| --- | --- | --- | --- | ---: | --- |");
@@ -128,7 +137,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         md.Append('\n');
     }
 
-    private static void Diagnostics(StringBuilder md, InterviewIndex index)
+    private static void Diagnostics(TextWriter md, InterviewIndex index)
     {
         if (index.Diagnostics.IsEmpty) return;
         md.Append("## Reading notes\n\n");

@@ -1,17 +1,17 @@
-using System.Text;
 
 namespace SwitchTag.Output.Text;
 
 /// <summary>RFC 4180 output: CRLF after every record, a field quoted when it holds a comma, a quote,
 /// CR or LF, and a quote inside a quoted field doubled. A cell a spreadsheet would run as a formula is
-/// neutralised as the OWASP "CSV Injection" page recommends (<see cref="Neutralise"/>).</summary>
-public sealed class Csv
+/// neutralised as the OWASP "CSV Injection" page recommends (<see cref="Neutralise"/>). Rows go to
+/// the given writer as they are made (a stream's, for a file of any length), or to a string.</summary>
+public sealed class Csv(TextWriter? target = null)
 {
     /// <summary>Characters that make a spreadsheet read a cell as a formula (OWASP, "CSV Injection":
     /// equals, plus, minus, at, tab, carriage return).</summary>
     private const string FormulaStarts = "=+-@\t\r";
 
-    private readonly StringBuilder _text = new();
+    private readonly TextWriter _text = target ?? new StringWriter();
 
     public Csv Row(params string?[] fields)
     {
@@ -24,7 +24,8 @@ public sealed class Csv
         return this;
     }
 
-    public override string ToString() => _text.ToString();
+    /// <summary>The rows so far, when they went to a string.</summary>
+    public override string ToString() => _text.ToString()!;
 
     /// <summary>A cell that starts with a formula character, after any apostrophes, gets one more
     /// apostrophe in front (the spreadsheet then shows it as text). Counting the apostrophes keeps the

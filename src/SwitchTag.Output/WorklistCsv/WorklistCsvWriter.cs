@@ -10,19 +10,25 @@ public sealed class WorklistCsvWriter : IInterviewWriter
 {
     public string FileName => "worklist.csv";
 
-    public void Write(InterviewIndex index, Stream stream) => Utf8Text.Write(stream, Render(index));
+    public void Write(InterviewIndex index, Stream stream)
+    {
+        using var text = Utf8Text.Writer(stream);
+        Rows(index, new Csv(text));
+    }
 
     public static readonly string[] Header =
         ["start", "end", "start_seconds", "end_seconds", "speaker", "language", "language_name", "confidence", "check", "words", "text", "turn", "char", "char_end"];
 
-    public static string Render(InterviewIndex index)
+    public static string Render(InterviewIndex index) => Rows(index, new Csv()).ToString();
+
+    private static Csv Rows(InterviewIndex index, Csv csv)
     {
-        var csv = new Csv().Row(Header);
+        csv.Row(Header);
         foreach (var item in index.Worklist)
             csv.Row(item.Time.Start.ToString(), item.Time.End.ToString(), item.Time.Start.ToSecondsString(), item.Time.End.ToSecondsString(),
                 item.Speaker, item.Language.Code, LanguageNames.Of(item.Language), Numbers.Confidence(item.Confidence), item.Check ? "yes" : "no",
                 Numbers.Integer(item.Words), item.Text,
                 Numbers.Integer(item.Turn), Numbers.Integer(item.CharStart), Numbers.Integer(item.CharEnd));
-        return csv.ToString();
+        return csv;
     }
 }
