@@ -48,6 +48,36 @@ public class WebVttConformanceTests
         Assert.Equal("x", cue.Text);
     }
 
+    [Theory]
+    [InlineData("   ")]
+    [InlineData("\t")]
+    [InlineData(" \t ")]
+    public void A_line_of_spaces_or_tabs_inside_a_cue_is_cue_text(string blankish)
+    {
+        // Collect a WebVTT block, loop: "Otherwise, if line is the empty string, break out of loop";
+        // any other line without "-->" is appended to the buffer, so only an empty line ends the cue.
+        var cue = Only("WEBVTT\n\n00:00.000 --> 00:01.000\nfirst\n" + blankish + "\nsecond\n\n");
+        Assert.Equal("first\n" + blankish + "\nsecond", cue.Text);
+    }
+
+    [Fact]
+    public void A_line_of_spaces_does_not_end_the_header()
+    {
+        // The header is collected as a block with "in header" set: it too ends only at an empty line.
+        var cue = Only("WEBVTT\nKind: captions\n  \nLanguage: en\n\n00:00.000 --> 00:01.000\nx\n");
+        Assert.Equal("x", cue.Text);
+    }
+
+    [Fact]
+    public void A_timing_line_after_a_line_of_spaces_starts_the_next_cue()
+    {
+        // Collect a WebVTT block: "-->" on the third line or later ends the block before that line,
+        // which begins the next block; the line of spaces stays in the first cue's text.
+        var r = Parse("WEBVTT\n\n00:00.000 --> 00:01.000\nx\n  \n00:01.000 --> 00:02.000\ny\n");
+        Assert.True(r.Accepted, string.Join("; ", r.Diagnostics));
+        Assert.Equal(["x\n  ", "y"], r.Transcript!.Cues.Select(c => c.Text));
+    }
+
     [Fact]
     public void Line_before_the_timing_line_is_the_identifier()
     {

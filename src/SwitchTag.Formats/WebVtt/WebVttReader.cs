@@ -7,7 +7,9 @@ using SwitchTag.Core.Text;
 namespace SwitchTag.Formats.WebVtt;
 
 /// <summary>Reads WebVTT as the W3C WebVTT spec's parsing algorithm does: the WEBVTT signature line,
-/// header lines up to the first blank line, then blocks separated by blank lines. A block whose first
+/// header lines up to the first empty line, then blocks each ended by an empty line ("collect a WebVTT
+/// block": only a line that is the empty string breaks out of its loop, so a line of spaces or tabs is
+/// cue text). A block whose first
 /// or second line holds "-->" is a cue (the line before the timing line is its identifier); NOTE,
 /// STYLE and REGION blocks are skipped; any other block is reported, its text quoted.</summary>
 public sealed class WebVttReader : ITranscriptReader
@@ -43,15 +45,17 @@ public sealed class WebVttReader : ITranscriptReader
             diagnostics.Warn(1, "blank lines before the WEBVTT signature (WebVTT wants it on the first line); read anyway");
         var cues = new List<Cue>();
         int i = signature + 1;
-        while (i < src.LineCount && !SourceText.IsBlank(src.Span(src[i])) && !src.Span(src[i]).Contains("-->", StringComparison.Ordinal))
+        while (i < src.LineCount && !src.Span(src[i]).IsEmpty && !src.Span(src[i]).Contains("-->", StringComparison.Ordinal))
             i++;
 
         while (i < src.LineCount)
         {
+            // Between blocks a line of only spaces or tabs is skipped like an empty one (the spec would
+            // make it the next cue's identifier); inside a block only an empty line ends it.
             while (i < src.LineCount && SourceText.IsBlank(src.Span(src[i]))) i++;
             if (i >= src.LineCount) break;
             int blockStart = i, timing = -1;
-            while (i < src.LineCount && !SourceText.IsBlank(src.Span(src[i])))
+            while (i < src.LineCount && !src.Span(src[i]).IsEmpty)
             {
                 if (src.Span(src[i]).Contains("-->", StringComparison.Ordinal))
                 {

@@ -101,9 +101,10 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
         }
     }
 
-    /// <summary>Which '\n' of the text may be written as a line break. A reader ends a cue at a blank or
-    /// whitespace-only line, so a break next to such a line is written as the character reference
-    /// <c>&amp;#10;</c> instead, and the cue reads back with the same text.</summary>
+    /// <summary>Which '\n' of the text may be written as a line break. A WebVTT parser ends a cue at an
+    /// empty line, and some readers also end it at a whitespace-only line, so a break next to
+    /// either is written as the character reference <c>&amp;#10;</c> instead, and the cue reads back with
+    /// the same text in both.</summary>
     private static bool[] LineBreaks(string text)
     {
         var raw = new bool[text.Length];
