@@ -75,7 +75,7 @@ public static class TranscriptFile
 
     /// <summary>Files to read, as paths (see <see cref="InputWalker.Find"/> for the real paths and input
     /// roots): folders are walked recursively for <see cref="KnownExtensions"/>, in ordinal path order,
-    /// skipping hidden entries, the notes a folder of transcripts carries (<see cref="IsFolderNote"/>)
+    /// skipping hidden entries (reported in <paramref name="problems"/>), the notes a folder of transcripts carries (<see cref="IsFolderNote"/>)
     /// and this tool's own outputs (<see cref="ToolOutputs"/>); symbolic links are followed, each real
     /// file comes once, loops and special files are reported; a named file is taken whatever its name; a
     /// missing path is reported in <paramref name="problems"/>.</summary>

@@ -35,10 +35,12 @@ public static class IndexRun
         var problems = new List<Diagnostic>();
         // The output folder is never read as input, even when it lies inside an input folder.
         string outReal = RealPath.Resolve(request.OutDir, out _) ?? Path.GetFullPath(request.OutDir);
-        var files = InputWalker.Find(request.Paths, problems, (request.SkipFolders.IsDefault ? [] : request.SkipFolders).Append(outReal));
+        // Hidden entries are skipped on purpose: reported, but no reason to reject the run.
+        var hidden = new List<Diagnostic>();
+        var files = InputWalker.Find(request.Paths, problems, (request.SkipFolders.IsDefault ? [] : request.SkipFolders).Append(outReal), hidden);
         // A decisions row that could not be read is a rejected input: the run says so and exits 1.
         bool rejected = problems.Count > 0 || request.DecisionProblems.Any(p => p.Severity == Severity.Error);
-        foreach (var p in problems) log.WriteLine(p);
+        foreach (var p in problems.Concat(hidden)) log.WriteLine(p);
 
         CollectionStore store;
         try

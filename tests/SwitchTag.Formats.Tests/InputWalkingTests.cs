@@ -33,6 +33,36 @@ public sealed class InputWalkingTests : IDisposable
     }
 
     [Fact]
+    public void Hidden_entries_are_reported_with_a_count_and_the_first_paths_but_the_tools_temporary_names_are_not()
+    {
+        // Issue 11: hidden files in walked folders were skipped silently. The temporary names are the
+        // tool's own (AtomicFile: ".NAME.PID.GUID.tmp"; FolderSwap: ".switchtag-new-*", ".switchtag-old-*").
+        Write("a.vtt");
+        Write(".draft.vtt");
+        Write(".notes/b.vtt");
+        Write("sub/.c.vtt");
+        Write("sub/.DS_Store", "x");
+        Write(".index.json.4242." + new string('0', 32) + ".tmp", "half");
+        Write(".switchtag-new-a.0123/index.json", "{}");
+        Write(".switchtag-old-a.0123/index.json", "{}");
+        var (files, problems) = Expand(root);
+        Assert.Equal([Path.Combine(root, "a.vtt")], files);
+        var note = Assert.Single(problems);
+        Assert.Equal(Severity.Warning, note.Severity);
+        Assert.Equal(root, note.At.Path);
+        Assert.Equal($"4 hidden entries (name starting with '.') not read: {Path.Combine(root, ".draft.vtt")}, {Path.Combine(root, ".notes")}, "
+            + $"{Path.Combine(root, "sub", ".DS_Store")}, and 1 more", note.Message);
+    }
+
+    [Fact]
+    public void A_folder_without_hidden_entries_gives_no_warning()
+    {
+        Write("a.vtt");
+        Write(".switchtag-new-a.0123/index.json", "{}");
+        Assert.Empty(Expand(root).Problems);
+    }
+
+    [Fact]
     public void A_link_to_the_parent_folder_is_reported_as_a_loop_and_each_file_read_once()
     {
         // Issue reproduction: `ln -s .. loop/up` indexed every file 41 times.

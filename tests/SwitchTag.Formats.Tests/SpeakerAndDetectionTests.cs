@@ -53,7 +53,7 @@ public class SpeakerAndDetectionTests
         Assert.Equal([".vtt", ".srt", ".txt", ".md", ".markdown"], TranscriptFile.KnownExtensions);
 
     [Fact]
-    public void Expand_walks_folders_sorted_skips_notes_and_reports_missing_paths()
+    public void Expand_walks_folders_sorted_skips_notes_and_reports_hidden_entries_and_missing_paths()
     {
         var root = Path.Combine(Path.GetTempPath(), "switchtag-expand-" + Guid.NewGuid().ToString("N"));
         Directory.CreateDirectory(Path.Combine(root, "b"));
@@ -64,8 +64,10 @@ public class SpeakerAndDetectionTests
         var missing = Path.Combine(root, "missing.vtt");
         var files = TranscriptFile.Expand([root, Path.Combine(root, "c.md"), missing, Path.Combine(root, "notes.json")], problems).ToList();
         Assert.Equal([Path.Combine(root, "a.VTT"), Path.Combine(root, "b", "z.srt"), Path.Combine(root, "c.md"), Path.Combine(root, "notes.json")], files);
-        var p = Assert.Single(problems);
-        Assert.Equal(new SourceLine(missing, TranscriptFile.WholeFile), p.At);
-        Assert.Equal(Severity.Error, p.Severity);
+        Assert.Equal(2, problems.Count);
+        // The hidden folder is not walked, and said so (InputWalkingTests has the details).
+        Assert.Equal((new SourceLine(root, TranscriptFile.WholeFile), Severity.Warning), (problems[0].At, problems[0].Severity));
+        Assert.Contains(Path.Combine(root, ".hidden"), problems[0].Message);
+        Assert.Equal((new SourceLine(missing, TranscriptFile.WholeFile), Severity.Error), (problems[1].At, problems[1].Severity));
     }
 }

@@ -31,6 +31,18 @@ public class OutputSafetyRunTests : IDisposable
     }
 
     [Fact]
+    public void A_hidden_file_in_an_input_folder_is_reported_and_the_run_still_succeeds()
+    {
+        // Issue 11: hidden files were skipped without a word. Skipped on purpose, so no failed run.
+        Input(Path.Combine("in", "kowalczyk-1998.vtt"));
+        string hidden = Input(Path.Combine("in", ".kowalczyk-1998.draft.vtt"));
+        var request = new IndexRequest([Path.Combine(_dir, "in")], Path.Combine(_dir, "out"), null, "en", TaggingMode.RulesOnly, null, [], []);
+        var (result, log) = Run(request);
+        Assert.Equal(IndexRunResult.Indexed, result);
+        Assert.Contains($"warning: 1 hidden entry (name starting with '.') not read: {hidden}", log);
+    }
+
+    [Fact]
     public void A_file_named_dots_writes_inside_out_under_a_safe_folder()
     {
         // Issue 11 item 1: "...txt" used to become interview "..", whose files landed beside --out.

@@ -8,12 +8,20 @@ namespace SwitchTag.Formats.Files;
 /// the path is too long, reading every file again on each lap. Here every folder and file is known by
 /// its real path: a folder reached again is not walked again, a link to a folder above is reported as
 /// a loop, and only regular files are taken (a named pipe would block the read forever, a link to
-/// /dev/zero would never end).</summary>
+/// /dev/zero would never end). Hidden entries (a name starting with '.') are not read, and are reported:
+/// one warning per folder given, with their count and the first <see cref="HiddenShown"/> paths; only
+/// this tool's own temporary files and folders (<see cref="ToolOutputs.IsTemporaryName"/>) pass silently.</summary>
 public static class InputWalker
 {
+    /// <summary>Hidden paths a warning names before "and N more".</summary>
+    public const int HiddenShown = 3;
+
     /// <param name="skipFolders">Real paths of folders never walked (an output folder inside an input,
     /// <see cref="OutputSafety"/>); files named directly are still read.</param>
-    public static ImmutableArray<InputFile> Find(IEnumerable<string> paths, ICollection<Diagnostic> problems, IEnumerable<string>? skipFolders = null)
+    /// <param name="notes">Where the hidden-entry warnings go, when not into <paramref name="problems"/>:
+    /// they report what was skipped on purpose, not a file that could not be read.</param>
+    public static ImmutableArray<InputFile> Find(IEnumerable<string> paths, ICollection<Diagnostic> problems, IEnumerable<string>? skipFolders = null,
+        ICollection<Diagnostic>? notes = null)
     {
         var files = ImmutableArray.CreateBuilder<InputFile>();
         var seenFiles = new HashSet<string>(StringComparer.Ordinal);
@@ -27,7 +35,9 @@ public static class InputWalker
             {
                 case FileKind.Directory:
                     var found = new List<InputFile>();
-                    Walk(path, real, found, seenFolders, problems);
+                    var hidden = new List<string>();
+                    Walk(path, real, found, hidden, seenFolders, problems);
+                    if (hidden.Count > 0) Problem(notes ?? problems, path, Severity.Warning, HiddenMessage(hidden));
                     found.Sort((a, b) => string.CompareOrdinal(a.Path, b.Path));
                     foreach (var f in found)
                         if (seenFiles.Add(f.RealPath)) files.Add(f);
@@ -46,7 +56,15 @@ public static class InputWalker
         return files.ToImmutable();
     }
 
-    private static void Walk(string root, string realRoot, List<InputFile> found, HashSet<string> seenFolders, ICollection<Diagnostic> problems)
+    private static string HiddenMessage(List<string> hidden)
+    {
+        hidden.Sort(StringComparer.Ordinal);
+        string shown = string.Join(", ", hidden.Take(HiddenShown));
+        string more = hidden.Count > HiddenShown ? $", and {hidden.Count - HiddenShown} more" : "";
+        return $"{hidden.Count} hidden {(hidden.Count == 1 ? "entry" : "entries")} (name starting with '.') not read: {shown}{more}";
+    }
+
+    private static void Walk(string root, string realRoot, List<InputFile> found, List<string> hidden, HashSet<string> seenFolders, ICollection<Diagnostic> problems)
     {
         if (!seenFolders.Add(realRoot)) return;
         // Depth first, each folder with the real paths of the folders above it, to tell a loop (a link
@@ -69,8 +87,12 @@ public static class InputWalker
             bool outputsHere = ToolOutputs.FolderHoldsIndex(folder.Path);
             foreach (var entry in entries)
             {
-                if (entry.Name.StartsWith('.')) continue;
                 string path = Path.Join(folder.Path, entry.Name);
+                if (entry.Name.StartsWith('.'))
+                {
+                    if (!ToolOutputs.IsTemporaryName(entry.Name)) hidden.Add(path);
+                    continue;
+                }
                 string? real = Path.Join(folder.Real, entry.Name);
                 if (entry.LinkTarget is { } target)
                 {

@@ -5,7 +5,7 @@ namespace SwitchTag.Formats.Files;
 /// when it holds an <c>index.json</c> whose schema is this tool's (<c>switchtag.index/…</c>); in it,
 /// the output files with a transcript extension (<c>index.md</c>, <c>annotated.vtt</c>) are skipped.
 /// Files of the same name in any other folder are ordinary transcripts.</summary>
-public static class ToolOutputs
+public static partial class ToolOutputs
 {
     /// <summary>The per-interview files the tool writes (SCHEMA.md); kept here because the readers
     /// must know them and the writers sit above the readers.</summary>
@@ -18,6 +18,16 @@ public static class ToolOutputs
     private const string SchemaPrefix = "\"switchtag.index/";
 
     public static bool IsOutputName(string fileName) => FileNames.Contains(fileName, StringComparer.Ordinal);
+
+    /// <summary>The hidden names this tool gives what it writes before putting it in place: an output
+    /// file's temporary copy (<c>.NAME.PID.GUID.tmp</c>, Output's AtomicFile) and an interview's fresh
+    /// or replaced folder (<c>.switchtag-new-*</c>, <c>.switchtag-old-*</c>, Pipeline's FolderSwap).</summary>
+    public static bool IsTemporaryName(string name) =>
+        name.StartsWith(".switchtag-new-", StringComparison.Ordinal) || name.StartsWith(".switchtag-old-", StringComparison.Ordinal)
+        || TemporaryFile().IsMatch(name);
+
+    [System.Text.RegularExpressions.GeneratedRegex(@"^\..+\.[0-9]+\.[0-9a-f]{32}\.tmp$", System.Text.RegularExpressions.RegexOptions.CultureInvariant)]
+    private static partial System.Text.RegularExpressions.Regex TemporaryFile();
 
     /// <summary>True when the folder holds an index.json written by this tool (its first 512 bytes
     /// name the schema; the writer puts it first).</summary>
