@@ -40,9 +40,19 @@ public class SignalTests
 
         // Many more interviews, one at a time: the signal lands while some are still to do.
         Copies(input, "more", 60);
+        // Woken by the file system (inotify) when a folder appears in OUT or the child ends, not by a
+        // timer: each wake re-counts, so no event can be missed between a count and the wait.
+        using var changed = new AutoResetEvent(false);
+        using var watcher = new FileSystemWatcher(outDir) { NotifyFilter = NotifyFilters.DirectoryName };
+        watcher.Created += (_, _) => changed.Set();
+        watcher.Renamed += (_, _) => changed.Set();
+        watcher.EnableRaisingEvents = true;
         using var run = Start(input, outDir, "--force");
+        run.Process.EnableRaisingEvents = true;
+        run.Process.Exited += (_, _) => changed.Set();
         var waited = Stopwatch.StartNew();
-        while (Folders(outDir).Count < before.Count + 4 && !run.Process.HasExited && waited.Elapsed < TimeSpan.FromMinutes(3)) Thread.Sleep(20);
+        while (Folders(outDir).Count < before.Count + 4 && !run.Process.HasExited)
+            Assert.True(changed.WaitOne(TimeSpan.FromMinutes(3) - waited.Elapsed is { Ticks: > 0 } left ? left : TimeSpan.Zero), "no interview folder appeared within 3 minutes: " + run.Log());
         Assert.False(run.Process.HasExited, "the run ended before the signal: " + run.Log());
         Assert.Equal(0, kill(run.Process.Id, signal));
         Assert.True(run.Process.WaitForExit(TimeSpan.FromMinutes(2)), "the run did not end after the signal");

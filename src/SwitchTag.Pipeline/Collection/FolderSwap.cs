@@ -53,17 +53,29 @@ public sealed class FolderSwap : IDisposable
                 _pending.TryRemove(fresh, out _);
                 return aside;
             });
+            // Deleting is a step too: the signal's clean-up waits for it rather than deleting the same
+            // folder at the same time (one delete failing on the other's work, the process ending with
+            // the folder half gone). Refused after a signal, which leaves the folder to that clean-up.
             if (old is not null)
-            {
-                Directory.Delete(old, recursive: true);
-                _pending.TryRemove(old, out _);
-            }
+                WriteGate.Step(() =>
+                {
+                    Directory.Delete(old, recursive: true);
+                    _pending.TryRemove(old, out _);
+                });
         }
         finally
         {
-            // A step refused after a signal leaves the folder to the signal's clean-up.
-            if (!WriteGate.Stopped && Directory.Exists(fresh)) Directory.Delete(fresh, recursive: true);
-            _pending.TryRemove(fresh, out _);
+            // The same for a fresh folder not swapped in; the entry leaves the pending list only with
+            // the folder, so a signal's clean-up, which lists them after the steps in progress, finds it.
+            try
+            {
+                WriteGate.Step(() =>
+                {
+                    if (Directory.Exists(fresh)) Directory.Delete(fresh, recursive: true);
+                    _pending.TryRemove(fresh, out _);
+                });
+            }
+            catch (OperationCanceledException) { }
         }
     }
 
