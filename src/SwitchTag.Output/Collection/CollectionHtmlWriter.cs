@@ -1,4 +1,3 @@
-using System.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Output.Html;
 using SwitchTag.Output.Map;
@@ -22,12 +21,25 @@ public sealed class CollectionHtmlWriter : ICollectionWriter
         "for(const r of rows){const on=!q||r.dataset.text.includes(q);r.hidden=!on;if(on)n++;}shown.textContent=n;}\n" +
         "box.addEventListener('input',filter);filter(); // a browser may restore the box's text on going back\n";
 
-    public void Write(IReadOnlyList<CollectionEntry> entries, Stream stream) => Utf8Text.Write(stream, Render(entries));
+    public void Write(IReadOnlyList<CollectionEntry> entries, Stream stream)
+    {
+        using var text = Utf8Text.Writer(stream);
+        Render(entries, text);
+    }
 
     public static string Render(IReadOnlyList<CollectionEntry> entries)
     {
+        var text = new StringWriter();
+        Render(entries, text);
+        return text.ToString();
+    }
+
+    /// <summary>The page, written to <paramref name="b"/> as it is made.</summary>
+    public static void Render(IReadOnlyList<CollectionEntry> entries, TextWriter b)
+    {
         var rows = CollectionRows.Of(entries);
-        var b = new StringBuilder("<h1>Collection index</h1>\n").Append(ReportHtmlWriter.CautionBlock());
+        Html.HtmlPage.Start(b, "Collection index");
+        b.Append("<h1>Collection index</h1>\n").Append(ReportHtmlWriter.CautionBlock());
         b.Append("<p>").Append(entries.Count).Append(entries.Count == 1 ? " interview, " : " interviews, ").Append(rows.Count).Append(" headings (")
          .Append(string.Join(", ", Enum.GetValues<NameLabel>().Select(l => $"{rows.Count(r => r.Label == l)} {l}"))).Append("), ")
          .Append(rows.Sum(r => r.Uses.Sum(u => u.Heading.Times.Length))).Append(" mentions. Review every interview at once in <a href=\"review.html\">review.html</a>.</p>\n");
@@ -56,7 +68,7 @@ public sealed class CollectionHtmlWriter : ICollectionWriter
              .Append("</td><td>").Append(row.Place is null ? "" : $"{Esc(row.Place.Name)}, {Esc(row.Place.Country)}").Append("</td></tr>\n");
         }
         b.Append("</table>\n");
-        return HtmlPage.Render("Collection index", b.ToString(), FilterScript);
+        Html.HtmlPage.End(b, FilterScript);
     }
 
     private static List<MapPlace> Places(List<CollectionRows.Row> rows) =>

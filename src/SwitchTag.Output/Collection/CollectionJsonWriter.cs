@@ -56,7 +56,12 @@ public sealed class CollectionJsonWriter : ICollectionWriter
                 w.WriteString("name", heading.Name);
                 w.WriteNumber("count", heading.Times.Length);
                 w.WriteStartArray("times");
-                foreach (var t in heading.Times) w.WriteNumberValue(t.Milliseconds / 1000m);
+                foreach (var t in heading.Times)
+                {
+                    w.WriteNumberValue(t.Milliseconds / 1000m);
+                    // A writer over a stream keeps the whole document until disposed unless flushed.
+                    if (w.BytesPending >= 1 << 16) w.Flush();
+                }
                 w.WriteEndArray();
                 w.WriteEndObject();
             }

@@ -23,16 +23,7 @@ public static class HtmlPage
         "input[type=search]{font-size:1rem;padding:.3rem .5rem;width:24rem;max-width:100%}button{margin:0 .15rem;cursor:pointer}" +
         ".muted{color:#777}.decided{opacity:.55}";
 
-    public static string Render(string title, string body, string? script = null)
-    {
-        var page = new StringWriter();
-        Start(page, title);
-        page.Write(body);
-        End(page, script);
-        return page.ToString();
-    }
-
-    /// <summary>Everything before the body, for a page written to a stream as it is made.</summary>
+    /// <summary>Everything before the body; pages are written to their stream as they are made.</summary>
     public static void Start(TextWriter page, string title) =>
         page.Append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
             .Append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n<title>").Append(HtmlText.Esc(title))

@@ -1,5 +1,4 @@
 using System.Reflection;
-using System.Text;
 using System.Text.Json;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
@@ -19,11 +18,24 @@ public sealed class ReviewHtmlWriter : ICollectionWriter
 
     private static readonly string Script = LoadScript();
 
-    public void Write(IReadOnlyList<CollectionEntry> entries, Stream stream) => Utf8Text.Write(stream, Render(entries));
+    public void Write(IReadOnlyList<CollectionEntry> entries, Stream stream)
+    {
+        using var text = Utf8Text.Writer(stream);
+        Render(entries, text);
+    }
 
     public static string Render(IReadOnlyList<CollectionEntry> entries)
     {
-        var b = new StringBuilder("<h1>Review</h1>\n").Append(Report.ReportHtmlWriter.CautionBlock());
+        var text = new StringWriter();
+        Render(entries, text);
+        return text.ToString();
+    }
+
+    /// <summary>The page, written to <paramref name="b"/> as it is made.</summary>
+    public static void Render(IReadOnlyList<CollectionEntry> entries, TextWriter b)
+    {
+        Html.HtmlPage.Start(b, "Review");
+        b.Append("<h1>Review</h1>\n").Append(Report.ReportHtmlWriter.CautionBlock());
         b.Append("<p>Decide on the headings and the mentions held back, then export the decisions file and give it to the next run: " +
                  "<code>switchtag index ... --decisions decisions.csv</code>. The run reports which decisions applied and which no longer match. " +
                  "Headings are named by their id, mentions by their time and text, so the decisions hold when the transcript or the model changes a little.</p>\n");
@@ -31,10 +43,10 @@ public sealed class ReviewHtmlWriter : ICollectionWriter
          .Append("<textarea id=\"csv\" readonly rows=\"4\" cols=\"100\" aria-label=\"The exported decisions file\"></textarea>\n");
         foreach (var e in entries) Interview(b, e);
         b.Append("<script type=\"application/json\" id=\"prior\">").Append(PriorDecisions(entries)).Append("</script>\n");
-        return Html.HtmlPage.Render("Review", b.ToString(), Script);
+        Html.HtmlPage.End(b, Script);
     }
 
-    private static void Interview(StringBuilder b, CollectionEntry e)
+    private static void Interview(TextWriter b, CollectionEntry e)
     {
         var mentions = e.Mentions.IsDefault ? [] : e.Mentions;
         b.Append("<section class=\"interview\" data-interview=\"").Append(Attr(e.Interview)).Append("\">\n<h2>").Append(Said(e.Interview))
