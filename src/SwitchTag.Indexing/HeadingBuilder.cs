@@ -17,7 +17,7 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// <summary>Groups mentions under headings.
 /// Places: each LOC mention's gazetteer candidates (alternate names in all languages) are resolved by
 /// evidence (see <see cref="PlaceScore"/>): population, whether the name said is the place's own name,
-/// and the countries of the interview's unambiguous places; the others are kept as alternatives. Mentions resolved to one gazetteer
+/// and the countries of the interview's unambiguous places (every candidate in one country: Haifa the city and the district); the others are kept as alternatives. Mentions resolved to one gazetteer
 /// id form one heading; a LOC mention the gazetteer does not know joins a linked heading whose variant
 /// has its folded key, else forms a heading without coordinates.
 /// Persons are grouped conservatively: multi-word names group by their folded first and last words
@@ -52,6 +52,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// ("against Perón" is not Leones, AR, once called Perón). The gazetteer's village size.</summary>
     public const long VillagePopulation = 15_000;
 
+    /// <summary>A town this large reached through another of its names is what a speaker means rather
+    /// than a first-level region of that name ("New York").</summary>
+    public const long MetropolisPopulation = 1_000_000;
+
     public HeadingResult Build(
         ImmutableArray<Mention> mentions,
         ImmutableArray<TimeRange> times,
@@ -70,6 +74,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             var found = CachedPlaces(placeCache, m.Text, m.Language);
             places[i] = found.RemoveAll(p => Respelling.MarksConflict(m.Text, p.Name));
             if (places[i].IsEmpty && !found.IsEmpty) respelled[i] = found[0];
+            // An accented name said is not a village spelt plainly: the link goes, the place stays.
+            places[i] = places[i].RemoveAll(p => p.HasGeonameId && p.Population < VillagePopulation && Respelling.MarksAdded(m.Text, p.Name));
         }
 
         var lowerWords = LowerCaseWords(turns);
@@ -202,11 +208,12 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
         var evidence = new Dictionary<string, int>(StringComparer.Ordinal);
         for (int i = 0; i < mentions.Length; i++)
-            if (!held[i] && mentions[i].Label == NameLabel.LOC && listed[i] is null && places[i].Length == 1)
+            if (!held[i] && mentions[i].Label == NameLabel.LOC && listed[i] is null && !places[i].IsEmpty
+                && places[i].All(p => p.Country == places[i][0].Country))
                 evidence[places[i][0].Country] = evidence.GetValueOrDefault(places[i][0].Country) + 1;
 
         int evidenceTotal = evidence.Values.Sum();
-        var byPlace = new Dictionary<long, Group>();
+        var byPlace = new Dictionary<string, Group>(StringComparer.Ordinal);
         var bySpoken = new Dictionary<string, Group>(StringComparer.Ordinal);
         var unlinked = new List<int>();
         for (int i = 0; i < mentions.Length; i++)
@@ -224,13 +231,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 continue;
             }
             if (places[i].IsEmpty) { unlinked.Add(i); continue; }
-            var chosen = places[i]
-                .OrderByDescending(p => PlaceScore(p, Key(m.Text, m.Language) == Key(p.Name, m.Language), evidence, evidenceTotal))
-                .ThenBy(p => p.GeonameId)
-                .First();
-            if (!byPlace.TryGetValue(chosen.GeonameId, out var group))
+            var chosen = Choose(m, places[i], evidence, evidenceTotal);
+            if (!byPlace.TryGetValue(chosen.Key, out var group))
             {
-                byPlace[chosen.GeonameId] = group = new Group(NameLabel.LOC, "g" + chosen.GeonameId) { Place = chosen };
+                byPlace[chosen.Key] = group = new Group(NameLabel.LOC, chosen.Key) { Place = chosen };
                 groups.Add(group);
             }
             group.Members.Add(i);
@@ -251,6 +255,27 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
             group.Members.Add(i);
         }
+    }
+
+    /// <summary>The place a LOC mention is linked to. A first-level region of the name (which the lists
+    /// give no population) is chosen over towns reached only through another of their names: Veneto
+    /// is not Venice, New Jersey not Three Rivers, Michigan. A town keeps precedence when the name said
+    /// is its own name (São Paulo), when it has <see cref="MetropolisPopulation"/> people or more (New
+    /// York beside the state), or when its own name also names the region (Wien, the city-state); a
+    /// country of the name does too (Georgia). Otherwise the <see cref="PlaceScore"/> decides, among
+    /// regions the interview's countries only.</summary>
+    private PlaceLink Choose(Mention m, ImmutableArray<PlaceLink> places, Dictionary<string, int> evidence, int evidenceTotal)
+    {
+        string said = Key(m.Text, m.Language);
+        var regions = places.Where(p => p.Region is not null).ToList();
+        var towns = places.Where(p => p.Region is null).ToList();
+        bool townFirst = regions.Count == 0 || towns.Any(p => p.GeonameId < 0 || p.Population >= MetropolisPopulation
+            || Key(p.Name, m.Language) == said
+            || lexicon.Places(p.Name, m.Language).Any(r => r.Region is not null && regions.Any(x => x.Region == r.Region)));
+        return (townFirst ? towns : regions)
+            .OrderByDescending(p => PlaceScore(p, Key(p.Name, m.Language) == said, evidence, evidenceTotal))
+            .ThenBy(p => p.GeonameId).ThenBy(p => p.Key, StringComparer.Ordinal)
+            .First();
     }
 
     /// <summary>Whether a listed historical region or state is meant rather than a modern place of the
@@ -353,8 +378,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var members = g.Members.OrderBy(i => times[i].Start).ThenBy(i => i).ToImmutableArray();
         var variants = members.Select(i => mentions[i].Text).Distinct(StringComparer.Ordinal).ToImmutableArray();
         string name = g.KeepsSpokenName || g.Place is null ? DisplayName(g.Label, members, mentions) : g.Place.Name;
-        var alternatives = members.SelectMany(i => places[i]).Where(p => p.GeonameId != g.Place?.GeonameId)
-            .DistinctBy(p => p.GeonameId).OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId).ToImmutableArray();
+        var alternatives = members.SelectMany(i => places[i]).Where(p => p.Key != g.Place?.Key)
+            .DistinctBy(p => p.Key).OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId).ThenBy(p => p.Key, StringComparer.Ordinal).ToImmutableArray();
         var speakers = members.Select(i => turns[mentions[i].Turn].Speaker).OfType<string>().Distinct(StringComparer.Ordinal).ToImmutableArray();
         double confidence = Math.Round(members.Average(i => mentions[i].Confidence), 4);
         var source = members.Any(i => mentions[i].Source == MentionSource.Authority) ? MentionSource.Authority

@@ -10,19 +10,26 @@ namespace SwitchTag.Indexing;
 /// ("Krakow", "Bras") or with only the place's own ("Rīga" beside "Riga") is no conflict.</summary>
 internal static class Respelling
 {
-    public static bool MarksConflict(string said, string name)
+    public static bool MarksConflict(string said, string name) => Compare(said, name) is (true, true);
+
+    /// <summary>Whether the name said carries accents the gazetteer name lacks and none the other way
+    /// ("Brás" beside Bras, FR): a writer who accents a name knows its spelling, so a place spelt
+    /// plainly is likely another place. Weak evidence, so the caller applies it to villages only.</summary>
+    public static bool MarksAdded(string said, string name) => Compare(said, name) is (true, false);
+
+    private static (bool SaidOnly, bool NameOnly) Compare(string said, string name)
     {
         var a = Letters(said);
         var b = Letters(name);
-        if (a.Count != b.Count || a.Count == 0) return false;
+        if (a.Count != b.Count || a.Count == 0) return (false, false);
         bool saidOnly = false, nameOnly = false;
         for (int i = 0; i < a.Count; i++)
         {
-            if (a[i].Base != b[i].Base) return false;
+            if (a[i].Base != b[i].Base) return (false, false);
             if (a[i].Marked && !b[i].Marked) saidOnly = true;
             if (b[i].Marked && !a[i].Marked) nameOnly = true;
         }
-        return saidOnly && nameOnly;
+        return (saidOnly, nameOnly);
     }
 
     /// <summary>Letters in canonical decomposition, lower case, each with whether a combining mark follows.</summary>

@@ -17,10 +17,12 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public string Key(string name, LanguageCode language) => NameFolding.Key(name, language);
 
+    /// <summary>Gazetteer places, then the first-level regions of the name (no coordinates, no population).</summary>
     public ImmutableArray<PlaceLink> Places(string name, LanguageCode language) =>
-        gazetteer.Lookup(name, language)
-            .Select(p => new PlaceLink(p.GeonameId, p.Name, p.Latitude, p.Longitude, p.Country, p.Population))
-            .ToImmutableArray();
+    [
+        .. gazetteer.Lookup(name, language).Select(p => new PlaceLink(p.GeonameId, p.Name, p.Latitude, p.Longitude, p.Country, p.Population)),
+        .. _lists.Regions.Find(name).Select(r => new PlaceLink(0, r.Name, null, null, r.Country, 0, r.Code)),
+    ];
 
     public ListedPlace? Listed(string name, LanguageCode language)
     {

@@ -57,8 +57,8 @@ public sealed record SearchHit(
             {
                 w.WriteStartObject("place");
                 if (Place.HasGeonameId) w.WriteNumber("geonameId", Place.GeonameId); else w.WriteNull("geonameId");
-                w.WriteNumber("lat", Place.Latitude);
-                w.WriteNumber("lon", Place.Longitude);
+                if (Place.Latitude is { } lat) w.WriteNumber("lat", lat); else w.WriteNull("lat");
+                if (Place.Longitude is { } lon) w.WriteNumber("lon", lon); else w.WriteNull("lon");
                 w.WriteString("country", Place.Country);
                 w.WriteEndObject();
             }

@@ -27,8 +27,8 @@ public class HeadingBuilderTests
         var heading = Assert.Single(result.Headings);
         Assert.Equal(756135, heading.Place!.GeonameId);
         Assert.Equal("PL", heading.Place.Country);
-        Assert.Equal(52.22977, heading.Place.Latitude, 5);
-        Assert.Equal(21.01178, heading.Place.Longitude, 5);
+        Assert.Equal(52.22977, heading.Place.Latitude!.Value, 5);
+        Assert.Equal(21.01178, heading.Place.Longitude!.Value, 5);
         Assert.Equal(["Warschau", "Varsovie", "Warszawy"], heading.Variants.ToArray());
     }
 
@@ -204,5 +204,50 @@ public class HeadingBuilderTests
         var result = new HeadingBuilder(Fixture.Lexicon()).Build(mentions, times, [turn]);
         Assert.Equal("\"Mia madre\" opens a sentence and its words are used as ordinary words in this interview", Assert.Single(result.Review).Reason);
         Assert.Equal("Santa Maria", Assert.Single(result.Headings).Name);
+    }
+
+    // GeoNames cities15000 rows: 3164603 Venice, IT (270,816 people), 5128581 New York City, US
+    // (8,175,133), 2761369 Vienna, AT (1,691,468). ISO 3166-2 codes as the shipped regions.tsv gives
+    // them from Debian iso-codes: IT-34 Veneto, US-NY New York, AT-9 Wien.
+    private static readonly PlaceLink Venice = new(3164603, "Venice", 45.43861, 12.32667, "IT", 270816);
+    private static readonly PlaceLink NewYorkCity = new(5128581, "New York City", 40.71427, -74.00597, "US", 8175133);
+    private static readonly PlaceLink Vienna = new(2761369, "Vienna", 48.20849, 16.37208, "AT", 1691468);
+
+    private static PlaceLink Region(string name, string country, string code) => new(0, name, null, null, country, 0, code);
+
+    [Fact]
+    public void A_first_level_region_is_linked_before_a_town_met_only_through_another_of_its_names()
+    {
+        var lexicon = new FakeLexicon(new Dictionary<string, ImmutableArray<PlaceLink>> { ["veneto"] = [Venice, Region("Veneto", "IT", "IT-34")] });
+        var heading = Assert.Single(Build(lexicon, ("Veneto", NameLabel.LOC, "it")).Headings);
+        Assert.Equal("IT-34", heading.Place!.Region);
+        Assert.False(heading.Place.HasCoordinates);
+        Assert.Equal("loc-r-it-34", heading.Id);
+        Assert.Equal([Venice], heading.Alternatives.ToArray());
+    }
+
+    [Fact]
+    public void A_metropolis_or_a_city_state_keeps_its_name_before_the_region()
+    {
+        var lexicon = new FakeLexicon(new Dictionary<string, ImmutableArray<PlaceLink>>
+        {
+            ["new york"] = [NewYorkCity, Region("New York", "US", "US-NY")],
+            ["wien"] = [Vienna, Region("Wien", "AT", "AT-9")],
+            ["vienna"] = [Vienna, Region("Vienna", "AT", "AT-9")],
+        });
+        var result = Build(lexicon, ("New York", NameLabel.LOC, "en"), ("Wien", NameLabel.LOC, "de"));
+        Assert.Equal([Vienna.GeonameId, NewYorkCity.GeonameId], result.Headings.Select(h => h.Place!.GeonameId).Order().ToArray());
+    }
+
+    [Fact]
+    public void An_accented_name_is_not_linked_to_a_village_spelt_plainly()
+    {
+        // GeoNames cities1000 row 3030529 (the shipped gazetteer's source, models/gazetteer.md): Bras, FR, 1,888 people; Brás is a district of São Paulo (from memory).
+        var bras = new PlaceLink(3030529, "Bras", 43.47163, 5.95486, "FR", 1888);
+        var lexicon = new FakeLexicon(new Dictionary<string, ImmutableArray<PlaceLink>> { ["bras"] = [bras] });
+        var heading = Assert.Single(Build(lexicon, ("Brás", NameLabel.LOC, "pt")).Headings);
+        Assert.Null(heading.Place);
+        var plain = Assert.Single(Build(lexicon, ("Bras", NameLabel.LOC, "fr")).Headings);
+        Assert.Equal(bras, plain.Place);
     }
 }

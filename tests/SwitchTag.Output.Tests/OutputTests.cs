@@ -141,6 +141,7 @@ public class OutputTests
             Assert.Equal("Feature", f.GetProperty("type").GetString());
             Assert.Equal(JsonValueKind.Object, f.GetProperty("properties").ValueKind); // section 3.2: properties member
             var geometry = f.GetProperty("geometry");
+            Assert.Equal(JsonValueKind.Object, geometry.ValueKind);
             Assert.Equal("Point", geometry.GetProperty("type").GetString());
             var position = geometry.GetProperty("coordinates").EnumerateArray().Select(e => e.GetDouble()).ToArray();
             Assert.Equal(2, position.Length);
@@ -154,6 +155,30 @@ public class OutputTests
         // Warsaw from GeoNames row 756135: lon 21.01178, lat 52.22977.
         var warsaw = features.Single(f => f.GetProperty("properties").GetProperty("geonameId").GetInt64() == 756135);
         Assert.Equal(21.01178, warsaw.GetProperty("geometry").GetProperty("coordinates")[0].GetDouble());
+    }
+
+    [Fact]
+    public void A_region_without_coordinates_is_an_unlocated_feature_and_null_coordinates_in_the_index()
+    {
+        // ISO 3166-2 code IT-78 (Calabria) as the shipped regions.tsv gives it from Debian iso-codes.
+        var index = Fixture.Run();
+        var first = index.Headings.First(h => h.Place is not null);
+        var region = new PlaceLink(0, "Calabria", null, null, "IT", 0, "IT-78");
+        index = index with { Headings = index.Headings.Replace(first, first with { Place = region }) };
+
+        using var geo = JsonDocument.Parse(Bytes(s => PlacesGeoJsonWriter.Write(index, s)));
+        var feature = geo.RootElement.GetProperty("features").EnumerateArray().Single(f => f.GetProperty("id").GetString() == first.Id);
+        // RFC 7946 section 3.2: "in the case that the Feature is unlocated", geometry is a JSON null.
+        Assert.Equal(JsonValueKind.Null, feature.GetProperty("geometry").ValueKind);
+        Assert.Equal("IT-78", feature.GetProperty("properties").GetProperty("region").GetString());
+
+        using var json = JsonDocument.Parse(Bytes(s => IndexJsonWriter.Write(index, s)));
+        var place = json.RootElement.GetProperty("headings").EnumerateArray().Single(h => h.GetProperty("id").GetString() == first.Id).GetProperty("place");
+        Assert.Equal(JsonValueKind.Null, place.GetProperty("lat").ValueKind);
+        Assert.Equal(JsonValueKind.Null, place.GetProperty("lon").ValueKind);
+        Assert.Equal("IT", place.GetProperty("country").GetString());
+        Assert.Equal("IT-78", place.GetProperty("region").GetString());
+        Assert.Contains("region IT-78; no coordinates", ReportMarkdownWriter.Render(index));
     }
 
     [Fact]

@@ -7,10 +7,17 @@ using SwitchTag.Core.Languages;
 namespace SwitchTag.Core.Documents;
 
 /// <summary>A gazetteer place a heading is linked to. Countries come from an ISO 3166 list rather
-/// than GeoNames and carry a non-positive id (minus the ISO numeric code) that is no GeoNames id.</summary>
-public sealed record PlaceLink(long GeonameId, string Name, double Latitude, double Longitude, string Country, long Population)
+/// than GeoNames and carry a non-positive id (minus the ISO numeric code) that is no GeoNames id. A
+/// first-level region (<paramref name="Region"/>, its ISO 3166-2 code) has id 0 and no coordinates:
+/// no list with region centres could ship (models/namelists.md).</summary>
+public sealed record PlaceLink(long GeonameId, string Name, double? Latitude, double? Longitude, string Country, long Population, string? Region = null)
 {
     public bool HasGeonameId => GeonameId > 0;
+
+    public bool HasCoordinates => Latitude is not null && Longitude is not null;
+
+    /// <summary>One key per distinct place: "g" + the id, or "r-" + the region code in lower case.</summary>
+    public string Key => Region is null ? "g" + GeonameId.ToString(System.Globalization.CultureInfo.InvariantCulture) : "r-" + Region.ToLowerInvariant();
 }
 
 /// <summary>One index entry: every mention of one person, place or organisation.</summary>

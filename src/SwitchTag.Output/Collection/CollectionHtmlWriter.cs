@@ -72,6 +72,6 @@ public sealed class CollectionHtmlWriter : ICollectionWriter
     }
 
     private static List<MapPlace> Places(List<CollectionRows.Row> rows) =>
-        rows.Where(r => r.Place is not null)
-            .Select(r => new MapPlace(r.Id, r.Name, r.Place!.Latitude, r.Place.Longitude, "#" + "c-" + r.Id)).ToList();
+        rows.Where(r => r.Place is { HasCoordinates: true })
+            .Select(r => new MapPlace(r.Id, r.Name, r.Place!.Latitude!.Value, r.Place.Longitude!.Value, "#" + "c-" + r.Id)).ToList();
 }

@@ -2,6 +2,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
 using System.Text.Json;
 using SwitchTag.Output.IndexJson;
+using SwitchTag.Output.Text;
 
 namespace SwitchTag.Output.Collection;
 
@@ -43,9 +44,10 @@ public sealed class CollectionJsonWriter : ICollectionWriter
             {
                 w.WriteStartObject("place");
                 if (row.Place.HasGeonameId) w.WriteNumber("geonameId", row.Place.GeonameId); else w.WriteNull("geonameId");
-                w.WriteNumber("lat", row.Place.Latitude);
-                w.WriteNumber("lon", row.Place.Longitude);
+                JsonNumbers.WriteOrNull(w, "lat", row.Place.Latitude);
+                JsonNumbers.WriteOrNull(w, "lon", row.Place.Longitude);
                 w.WriteString("country", row.Place.Country);
+                if (row.Place.Region is not null) w.WriteString("region", row.Place.Region);
                 w.WriteEndObject();
             }
             w.WriteStartArray("interviews");

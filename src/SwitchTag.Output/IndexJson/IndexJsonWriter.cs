@@ -3,6 +3,7 @@ using System.Text.Encodings.Web;
 using System.Text.Json;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
+using SwitchTag.Output.Text;
 
 namespace SwitchTag.Output.IndexJson;
 
@@ -239,11 +240,12 @@ public sealed class IndexJsonWriter : IInterviewWriter
     {
         w.WriteStartObject();
         if (p.HasGeonameId) w.WriteNumber("geonameId", p.GeonameId); else w.WriteNull("geonameId");
-        w.WriteNumber("lat", p.Latitude);
-        w.WriteNumber("lon", p.Longitude);
+        JsonNumbers.WriteOrNull(w, "lat", p.Latitude);
+        JsonNumbers.WriteOrNull(w, "lon", p.Longitude);
         w.WriteString("country", p.Country);
         w.WriteString("name", p.Name);
         w.WriteNumber("population", p.Population);
+        if (p.Region is not null) w.WriteString("region", p.Region);
         w.WriteEndObject();
     }
 

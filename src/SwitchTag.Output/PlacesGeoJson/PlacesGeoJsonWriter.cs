@@ -24,19 +24,25 @@ public sealed class PlacesGeoJsonWriter : IInterviewWriter
             w.WriteStartObject();
             w.WriteString("type", "Feature");
             w.WriteString("id", h.Id);
-            w.WriteStartObject("geometry");
-            w.WriteString("type", "Point");
-            w.WriteStartArray("coordinates");
-            w.WriteNumberValue(h.Place.Longitude);
-            w.WriteNumberValue(h.Place.Latitude);
-            w.WriteEndArray();
-            w.WriteEndObject();
+            // RFC 7946 section 3.2: an unlocated feature (a region without coordinates) has a null geometry.
+            if (h.Place is { Longitude: { } lon, Latitude: { } lat })
+            {
+                w.WriteStartObject("geometry");
+                w.WriteString("type", "Point");
+                w.WriteStartArray("coordinates");
+                w.WriteNumberValue(lon);
+                w.WriteNumberValue(lat);
+                w.WriteEndArray();
+                w.WriteEndObject();
+            }
+            else w.WriteNull("geometry");
             w.WriteStartObject("properties");
             w.WriteString("interview", index.Transcript.Id);
             w.WriteString("heading", h.Id);
             w.WriteString("name", h.Name);
             if (h.Place.HasGeonameId) w.WriteNumber("geonameId", h.Place.GeonameId); else w.WriteNull("geonameId");
             w.WriteString("country", h.Place.Country);
+            if (h.Place.Region is not null) w.WriteString("region", h.Place.Region);
             w.WriteStartArray("variants");
             foreach (var v in h.Variants) w.WriteStringValue(v);
             w.WriteEndArray();

@@ -60,8 +60,8 @@ public sealed class ReportHtmlWriter : IInterviewWriter
 
     /// <summary>One marker per heading linked to a place, linking to the heading's mentions.</summary>
     public static List<MapPlace> Places(InterviewIndex index) =>
-        index.Headings.Where(h => h.Place is not null)
-            .Select(h => new MapPlace(h.Id, h.Name, h.Place!.Latitude, h.Place.Longitude, "#" + HeadingAnchor(h.Id))).ToList();
+        index.Headings.Where(h => h.Place is { HasCoordinates: true })
+            .Select(h => new MapPlace(h.Id, h.Name, h.Place!.Latitude!.Value, h.Place.Longitude!.Value, "#" + HeadingAnchor(h.Id))).ToList();
 
     private static void Facts(TextWriter b, InterviewIndex index)
     {
@@ -163,8 +163,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         if (h.Place is null)
             return h.Label != NameLabel.LOC ? "" : h.Alternatives.IsEmpty ? "<span class=\"muted\">not in the gazetteer</span>" : "<span class=\"muted\">not linked: may be a historical place</span>" + others;
         var p = h.Place;
-        return $"{(p.Name == h.Name ? "" : "at ")}{Esc(p.Name)}, {Esc(p.Country)} <span class=\"muted\">({Numbers.Coordinate(p.Latitude)}, {Numbers.Coordinate(p.Longitude)}; " +
-               $"{PlaceSource.Of(p)})</span>" + others;
+        return $"{(p.Name == h.Name ? "" : "at ")}{Esc(p.Name)}, {Esc(p.Country)} <span class=\"muted\">({Esc(PlaceSource.Describe(p))})</span>" + others;
     }
 
     private static void Review(TextWriter b, InterviewIndex index)

@@ -158,9 +158,12 @@ public sealed class TeiXmlWriter : IInterviewWriter
                 }
                 if (h.Place is { } place)
                 {
-                    w.WriteStartElement("location");
-                    w.WriteElementString("geo", string.Create(CultureInfo.InvariantCulture, $"{place.Latitude} {place.Longitude}"));
-                    w.WriteEndElement();
+                    if (place is { Latitude: { } lat, Longitude: { } lon })
+                    {
+                        w.WriteStartElement("location");
+                        w.WriteElementString("geo", string.Create(CultureInfo.InvariantCulture, $"{lat} {lon}"));
+                        w.WriteEndElement();
+                    }
                     if (place.HasGeonameId)
                     {
                         w.WriteStartElement("idno");

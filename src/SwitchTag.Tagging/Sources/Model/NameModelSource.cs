@@ -1,11 +1,15 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Languages;
 using SwitchTag.Core.Text;
+using SwitchTag.Lexicon;
 
 namespace SwitchTag.Tagging.Sources.Model;
 
 /// <summary>Names the shipped model tags in the turn's words. Mentions in scripts the model never saw
-/// in training are dropped (<see cref="TrainedScripts"/>).</summary>
+/// in training are dropped (<see cref="TrainedScripts"/>). The model reads a whole turn at once but
+/// learnt from single sentences, so a span running over a sentence end ("Paco. Paco", "Stanley.
+/// Stanley Kowalczyk") is cut there (<see cref="Pieces"/>).</summary>
 public sealed class NameModelSource(NerModel model) : INameSource
 {
     private readonly SequenceTagger _tagger = new(model);
@@ -20,10 +24,44 @@ public sealed class NameModelSource(NerModel model) : INameSource
         var mentions = ImmutableArray.CreateBuilder<Mention>();
         foreach (var s in _tagger.Spans([words.Select(w => w.Text).ToArray()])[0])
         {
-            int start = words[s.Start].Start, end = words[s.End - 1].End;
-            if (!TrainedScripts.Covers(turnText.AsSpan(start, end - start))) continue;
-            mentions.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], s.Label, SpanLanguage.At(spans, start), s.Confidence, MentionSource.Model));
+            foreach (var (from, to) in Pieces(words, s.Start, s.End, turnText))
+            {
+                int start = words[from].Start, end = words[to - 1].End;
+                if (!TrainedScripts.Covers(turnText.AsSpan(start, end - start))) continue;
+                mentions.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], s.Label, SpanLanguage.At(spans, start), s.Confidence, MentionSource.Model));
+            }
         }
         return mentions.ToImmutable();
     }
+
+    /// <summary>The word ranges of a tagged span, cut before every word that opens a sentence
+    /// (<see cref="TextPosition.IsSentenceStart"/>) unless the break is a dot after a short capitalised
+    /// word (St. Louis, Dr. Roth), with punctuation at either edge of a piece dropped ("Hanna." is Hanna).
+    /// A piece that is one stop word or title of any language ("I", "God", "Pani") is no name.</summary>
+    public static IEnumerable<(int From, int To)> Pieces(IReadOnlyList<WordToken> words, int from, int to, string text)
+    {
+        int start = from;
+        for (int k = from + 1; k < to; k++)
+        {
+            if (!HasLetterOrDigit(words[k].Text) || !TextPosition.IsSentenceStart(text, words[k].Start) || AfterAbbreviation(words, k)) continue;
+            if (Trim(words, start, k) is { } piece && !IsStopWord(words, piece)) yield return piece;
+            start = k;
+        }
+        if (Trim(words, start, to) is { } last && !IsStopWord(words, last)) yield return last;
+    }
+
+    private static bool IsStopWord(IReadOnlyList<WordToken> words, (int From, int To) piece) =>
+        piece.To - piece.From == 1 && LanguageProfiles.Default.StopWords.Contains(NameFolding.Fold(words[piece.From].Text));
+
+    private static (int, int)? Trim(IReadOnlyList<WordToken> words, int from, int to)
+    {
+        while (from < to && !HasLetterOrDigit(words[from].Text)) from++;
+        while (to > from && !HasLetterOrDigit(words[to - 1].Text)) to--;
+        return from < to ? (from, to) : null;
+    }
+
+    private static bool AfterAbbreviation(IReadOnlyList<WordToken> words, int k) =>
+        k >= 2 && words[k - 1].Text == "." && words[k - 2].Text is { Length: <= 3 } w && char.IsUpper(w[0]) && w.All(char.IsLetter);
+
+    private static bool HasLetterOrDigit(string word) => word.Any(char.IsLetterOrDigit);
 }
