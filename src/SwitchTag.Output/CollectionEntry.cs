@@ -8,7 +8,7 @@ using SwitchTag.Core.Languages;
 namespace SwitchTag.Output;
 
 /// <summary>What the collection pages keep of one interview: its headings, and for the review page its
-/// mentions with their sentences and the decisions already applied to it (small beside the index).</summary>
+/// mentions (each with its turn's text, to cut its sentence from) and the decisions already applied to it.</summary>
 public sealed record CollectionEntry(string Interview, string Folder, LanguageCode MainLanguage, Duration Duration, ImmutableArray<CollectionHeading> Headings,
     ImmutableArray<CollectionMention> Mentions = default, ImmutableArray<Decision> Decisions = default)
 {
@@ -19,12 +19,8 @@ public sealed record CollectionEntry(string Interview, string Folder, LanguageCo
             index.Transcript.Id, folder, index.MainLanguage, index.Duration,
             index.Headings.Select(h => new CollectionHeading(h.Id, h.Label, h.Name, h.Place,
                 h.Mentions.Select(i => index.Mentions[i].Time.Start).ToImmutableArray(), h.Variants)).ToImmutableArray(),
-            index.Mentions.Select((m, i) =>
-            {
-                var c = MentionContext.Of(index, m);
-                return new CollectionMention(m.Time.Start, m.Mention.Text, m.Mention.Label, index.Turns[m.Mention.Turn].Speaker, m.HeadingId,
-                    reasons.GetValueOrDefault(i), c.Before, c.After);
-            }).ToImmutableArray(),
+            index.Mentions.Select((m, i) => new CollectionMention(m.Time.Start, m.Mention, index.Turns[m.Mention.Turn].Speaker, m.HeadingId,
+                reasons.GetValueOrDefault(i), index.Turns[m.Mention.Turn].Text)).ToImmutableArray(),
             index.Decisions.Select(o => o.Decision).ToImmutableArray());
     }
 }
@@ -32,6 +28,15 @@ public sealed record CollectionEntry(string Interview, string Folder, LanguageCo
 public sealed record CollectionHeading(string Id, NameLabel Label, string Name, PlaceLink? Place, ImmutableArray<Timecode> Times,
     ImmutableArray<string> Variants = default);
 
-/// <summary>One mention as the review page shows it: under a heading, or held for review with the reason.</summary>
-public sealed record CollectionMention(Timecode Time, string Text, NameLabel Label, string? Speaker, string? HeadingId, string? ReviewReason,
-    string Before, string After);
+/// <summary>One mention as the review page shows it: under a heading, or held for review with the reason.
+/// Its sentence is cut from the turn's text when the page is written (<see cref="Context"/>): kept as two
+/// strings per mention, the sentences of one 200k-cue turn took some 300 MB until the run's end.</summary>
+public sealed record CollectionMention(Timecode Time, Mention Mention, string? Speaker, string? HeadingId, string? ReviewReason, string TurnText)
+{
+    public string Text => Mention.Text;
+
+    public NameLabel Label => Mention.Label;
+
+    /// <summary>The sentence around the mention (<see cref="MentionContext"/>).</summary>
+    public MentionContext Context => MentionContext.Of(TurnText, Mention);
+}

@@ -80,9 +80,12 @@ public sealed class ReviewHtmlWriter : ICollectionWriter
     private static string Target(CollectionMention m) =>
         $"data-time=\"{m.Time.ToSecondsString()}\" data-text=\"{Attr(m.Text)}\"";
 
-    private static string InContext(CollectionMention m) =>
-        $"<span class=\"time\">{Clock(m.Time)}</span> {(m.Speaker is null ? "" : $"<span class=\"speaker\">{Said(m.Speaker)}</span> ")}" +
-        $"<span class=\"ctx\" dir=\"auto\">{Esc(m.Before)}<mark>{Esc(m.Text)}</mark>{Esc(m.After)}</span>";
+    private static string InContext(CollectionMention m)
+    {
+        var c = m.Context;
+        return $"<span class=\"time\">{Clock(m.Time)}</span> {(m.Speaker is null ? "" : $"<span class=\"speaker\">{Said(m.Speaker)}</span> ")}" +
+               $"<span class=\"ctx\" dir=\"auto\">{Esc(c.Before)}<mark>{Esc(m.Text)}</mark>{Esc(c.After)}</span>";
+    }
 
     private static string MentionButtons() =>
         "<button data-act=\"accept\">Accept</button><button data-act=\"reject\">Reject</button>" + LabelSelect("relabel…");

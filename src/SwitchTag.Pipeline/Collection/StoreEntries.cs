@@ -2,7 +2,6 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Time;
 using SwitchTag.Output;
-using SwitchTag.Output.Report;
 using SwitchTag.Store;
 
 namespace SwitchTag.Pipeline.Collection;
@@ -20,11 +19,7 @@ public static class StoreEntries
         foreach (var d in decisions) byText.TryAdd(DecisionKey(d), d);
         return store.Collection().Select(i => new CollectionEntry(i.Name, i.Folder, i.MainLanguage, i.Duration - Timecode.Zero,
             i.Headings.Select(h => new CollectionHeading(h.Id, h.Label, h.Name, h.Place, h.Times, h.Variants)).ToImmutableArray(),
-            i.Mentions.Select(m =>
-            {
-                var c = MentionContext.Of(m.TurnText, m.Mention);
-                return new CollectionMention(m.Time, m.Mention.Text, m.Mention.Label, m.Speaker, m.HeadingId, m.ReviewReason, c.Before, c.After);
-            }).ToImmutableArray(),
+            i.Mentions.Select(m => new CollectionMention(m.Time, m.Mention, m.Speaker, m.HeadingId, m.ReviewReason, m.TurnText)).ToImmutableArray(),
             i.Decisions.Select(t => byText.GetValueOrDefault(t)).OfType<Decision>().ToImmutableArray())).ToList();
     }
 
