@@ -18,8 +18,14 @@ public class SchemaTests
         using var stream = new MemoryStream();
         // With a recording given, so the optional media field is written too, and with a language
         // profile and a chosen (not given) main language, so their array elements are written.
-        IndexJsonWriter.Write(Fixture.Run() with
+        // The last linked heading is given a first-level region (ISO 3166-2 PL-12, Lesser Poland, as
+        // Debian iso-codes lists it), so the region field and null coordinates are written too.
+        var run = Fixture.Run();
+        var last = run.Headings.Last(h => h.Place is not null);
+        var headings = run.Headings.Replace(last, last with { Place = new PlaceLink(0, "Małopolskie", null, null, "PL", 0, "PL-12") });
+        IndexJsonWriter.Write(run with
         {
+            Headings = headings,
             Media = "../media/anna-nowak.mp3",
             LanguageProfile = [new LanguageFraction("en", 0.8), new LanguageFraction("pl", 0.2)],
             MainLanguageDecision = new MainLanguageDecision("narrator-talk", "seconds",
