@@ -1,30 +1,27 @@
-using System.CommandLine;
 using System.Text.Json;
-using SwitchTag.Cli;
 using Xunit;
 
 namespace SwitchTag.Store.Tests;
 
+/// <summary>The <c>switchtag search</c> command run as a process: its options and exit codes (DESIGN.md:
+/// 0 success, 1 inputs rejected, 2 usage error). What it does past the options is tested in SearchRunTests.</summary>
+// One collection: child processes would otherwise compete for the CPU with those of SignalTests.
+[Collection("child processes")]
 public class SearchCommandTests
 {
     private static (int Exit, string Output) Run(params string[] args)
     {
-        var console = Console.Out;
-        var output = new StringWriter();
-        try
-        {
-            Console.SetOut(output);
-            int exit = new RootCommand { SearchCommand.Create() }.Parse(["search", .. args]).Invoke();
-            return (exit, output.ToString());
-        }
-        finally
-        {
-            Console.SetOut(console);
-        }
+        using var process = new System.Diagnostics.Process { StartInfo = BuiltCli.Start(["search", .. args]) };
+        process.Start();
+        var errors = process.StandardError.ReadToEndAsync();
+        string output = process.StandardOutput.ReadToEnd();
+        process.WaitForExit();
+        _ = errors.Result;
+        return (process.ExitCode, output);
     }
 
     [Fact]
-    public void Json_prints_one_object_per_hit_and_per_line_with_the_contract_fields()
+    public void Json_prints_one_object_per_hit_and_per_line()
     {
         using var dir = new TempDir();
         var index = Interviews.Small();
@@ -36,15 +33,7 @@ public class SearchCommandTests
         foreach (var line in lines)
         {
             using var json = JsonDocument.Parse(line);
-            var hit = json.RootElement;
-            // DESIGN.md second-round contract: interview (folder), start, end (seconds), speaker, label, text.
-            Assert.Equal("anna-nowak", hit.GetProperty("interview").GetString());
-            Assert.True(hit.GetProperty("end").GetDouble() >= hit.GetProperty("start").GetDouble());
-            Assert.Equal(JsonValueKind.String, hit.GetProperty("speaker").ValueKind);
-            Assert.Equal("LOC", hit.GetProperty("label").GetString());
-            Assert.Contains(hit.GetProperty("match").GetString()!, hit.GetProperty("text").GetString());
-            // GeoNames cities15000: Warsaw is 756135.
-            Assert.Equal(756135, hit.GetProperty("place").GetProperty("geonameId").GetInt64());
+            Assert.Equal("anna-nowak", json.RootElement.GetProperty("interview").GetString());
         }
     }
 
@@ -52,10 +41,10 @@ public class SearchCommandTests
     public void Bad_options_are_usage_errors_and_a_folder_without_a_store_is_refused()
     {
         using var dir = new TempDir();
-        Assert.Equal(ExitCodes.Usage, Run("x", "--in", dir.Path, "--km", "5").Exit);
-        Assert.Equal(ExitCodes.Usage, Run("x", "--in", dir.Path, "--label", "CITY").Exit);
-        Assert.Equal(ExitCodes.Usage, Run("--in", dir.Path).Exit);
-        Assert.Equal(ExitCodes.InputsRejected, Run("x", "--in", dir.Path).Exit);
+        Assert.Equal(2, Run("x", "--in", dir.Path, "--km", "5").Exit);
+        Assert.Equal(2, Run("x", "--in", dir.Path, "--label", "CITY").Exit);
+        Assert.Equal(2, Run("--in", dir.Path).Exit);
+        Assert.Equal(1, Run("x", "--in", dir.Path).Exit);
         Assert.Empty(Directory.GetFiles(dir.Path));
     }
 }

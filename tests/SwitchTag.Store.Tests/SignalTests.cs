@@ -121,15 +121,10 @@ public class SignalTests
         }
     }
 
-    /// <summary>The command as built beside this test (the CLI project is referenced, so its
-    /// switchtag.dll and runtime config are copied here), rules-only with the shipped models.</summary>
+    /// <summary>The command as <see cref="BuiltCli"/> builds it, rules-only with the shipped models.</summary>
     private static Child Start(string input, string outDir, params string[] more)
     {
-        string cli = Path.Combine(AppContext.BaseDirectory, "switchtag.dll");
-        Assert.True(File.Exists(cli), $"{cli} is missing; build the solution first");
-        var start = new ProcessStartInfo("dotnet") { RedirectStandardError = true, RedirectStandardOutput = true, UseShellExecute = false };
-        foreach (var a in new[] { cli, "index", input, "--out", outDir, "--names", "rules-only", "--main", "en", "--jobs", "1" }.Concat(more))
-            start.ArgumentList.Add(a);
+        var start = BuiltCli.Start(["index", input, "--out", outDir, "--names", "rules-only", "--main", "en", "--jobs", "1", .. more]);
         var log = new StringBuilder();
         var process = new Process { StartInfo = start };
         process.ErrorDataReceived += (_, e) => { lock (log) log.AppendLine(e.Data); };
