@@ -5,14 +5,16 @@ namespace SwitchTag.Core.Languages;
 /// <summary>What the stages know about one language, read from its folder under Languages/:
 /// <c>aliases.txt</c> (other ISO 639 codes), <c>stopwords.txt</c> (capitalised words that are rarely
 /// names), <c>titles.txt</c> (words before a person's name), <c>particles.txt</c> (lower-case words
-/// inside names) and <c>stemming.txt</c> (case endings). Every file is optional.</summary>
+/// inside names), <c>stemming.txt</c> (case endings) and <c>patronymics.txt</c> (endings of a
+/// patronymic, lower case, in every script the language is written in). Every file is optional.</summary>
 public sealed record LanguageProfile(
     LanguageCode Code,
     ImmutableArray<LanguageCode> Aliases,
     ImmutableArray<string> StopWords,
     ImmutableArray<string> Titles,
     ImmutableArray<string> NameParticles,
-    StemmingData? Stemming);
+    StemmingData? Stemming,
+    ImmutableArray<string> PatronymicEndings);
 
 /// <summary>A language's case endings as <c>stemming.txt</c> writes them (<c>key: values</c> lines):
 /// <c>endings</c> a name may carry in running text, <c>nominative</c> endings of a dictionary form,

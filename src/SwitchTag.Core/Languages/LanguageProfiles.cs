@@ -20,7 +20,12 @@ public sealed class LanguageProfiles
         _byCode = byCode.ToFrozenDictionary(StringComparer.Ordinal);
         StopWords = all.SelectMany(p => p.StopWords.Concat(p.Titles)).ToFrozenSet(StringComparer.Ordinal);
         NameParticles = all.SelectMany(p => p.NameParticles).ToFrozenSet(StringComparer.Ordinal);
+        PatronymicEndings = [.. all.SelectMany(p => p.PatronymicEndings).Distinct(StringComparer.Ordinal).OrderByDescending(e => e.Length)];
     }
+
+    /// <summary>Patronymic endings of every language, longest first: a transliterated "Petrovna" in
+    /// an English turn is as much a patronymic as "Петровна" in a Russian one.</summary>
+    public ImmutableArray<string> PatronymicEndings { get; }
 
     public static LanguageProfiles Default { get; } = FromResources(typeof(LanguageProfiles).Assembly);
 
@@ -63,7 +68,7 @@ public sealed class LanguageProfiles
                 using var reader = new StreamReader(stream);
                 return reader.ReadToEnd();
             }
-            return ProfileText.Parse(g.Key, Read("aliases.txt"), Read("stopwords.txt"), Read("titles.txt"), Read("particles.txt"), Read("stemming.txt"));
+            return ProfileText.Parse(g.Key, Read("aliases.txt"), Read("stopwords.txt"), Read("titles.txt"), Read("particles.txt"), Read("stemming.txt"), Read("patronymics.txt"));
         });
         return new LanguageProfiles([.. profiles]);
     }

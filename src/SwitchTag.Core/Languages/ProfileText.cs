@@ -7,8 +7,9 @@ namespace SwitchTag.Core.Languages;
 /// <c>stemming.txt</c> as <c>key: space-separated values</c> lines; <c>#</c> starts a comment line.</summary>
 internal static class ProfileText
 {
-    public static LanguageProfile Parse(string code, string aliases, string stopWords, string titles, string particles, string stemming) =>
-        new(new LanguageCode(code), [.. Words(aliases).Select(a => new LanguageCode(a))], Words(stopWords), Words(titles), Words(particles), stemming.Length == 0 ? null : Stemming(code, stemming));
+    public static LanguageProfile Parse(string code, string aliases, string stopWords, string titles, string particles, string stemming, string patronymics) =>
+        new(new LanguageCode(code), [.. Words(aliases).Select(a => new LanguageCode(a))], Words(stopWords), Words(titles), Words(particles),
+            stemming.Length == 0 ? null : Stemming(code, stemming), Words(patronymics));
 
     private static IEnumerable<string> Lines(string text) =>
         text.Split('\n').Select(l => l.Trim()).Where(l => l.Length > 0 && !l.StartsWith('#'));

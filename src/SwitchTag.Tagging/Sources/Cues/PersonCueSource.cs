@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
+using SwitchTag.Core.Languages;
 using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging.Sources.Cues;
@@ -10,7 +11,9 @@ namespace SwitchTag.Tagging.Sources.Cues;
 /// Hanka", "uncle Kurt", "Reb Yosl"): the capitalised words after the marker (up to three, joined by
 /// spaces or hyphens) are a person, whatever a gazetteer or model says of them. The marker itself is
 /// left out of the span, so "Mister Hnatyuk" joins the heading of Mykola Hnatyuk. A marker that
-/// starts a multi-word place name ("Prince Edward Island", "General Santos") is no marker.</summary>
+/// starts a multi-word place name ("Prince Edward Island", "General Santos") is no marker.
+/// A given name followed by a patronymic (the language profiles' <c>patronymics.txt</c>: "Lidiya
+/// Petrovna", "Иван Петрович"), with a capitalised surname after it when there is one, is a person too.</summary>
 public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Lexicon.Gazetteer gazetteer) : INameSource
 {
     private const int MaxNameWords = 3;
@@ -42,7 +45,24 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
             i = last;
         }
+        for (int i = 0; i + 1 < words.Count; i++)
+        {
+            if (!IsNameWord(turnText, words[i]) || !Joined(turnText, words[i], words[i + 1], allowDot: false) || !IsPatronymic(turnText, words[i + 1])) continue;
+            int last = i + 1;
+            if (last + 1 < words.Count && Joined(turnText, words[last], words[last + 1], allowDot: false) && IsNameWord(turnText, words[last + 1])) last++;
+            int start = words[i].Start, end = words[last].End;
+            if (found.Any(m => m.CharStart < end && start < m.CharEnd)) continue;
+            found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
+            i = last;
+        }
         return found.ToImmutable();
+    }
+
+    private static bool IsPatronymic(string text, NameWord word)
+    {
+        if (!char.IsUpper(text[word.Start])) return false;
+        var lower = text[word.Start..word.End].ToLowerInvariant();
+        return LanguageProfiles.Default.PatronymicEndings.Any(e => lower.Length >= e.Length + 2 && lower.EndsWith(e, StringComparison.Ordinal));
     }
 
     private bool IsNameWord(string text, NameWord word) =>
