@@ -14,6 +14,7 @@ using SwitchTag.Tagging.Sources.Authority;
 using SwitchTag.Tagging.Sources.Cues;
 using SwitchTag.Tagging.Sources.Gazetteer;
 using SwitchTag.Tagging.Sources.Model;
+using SwitchTag.Tagging.Sources.Organisations;
 using SwitchTag.Tagging.Sources.PlaceEvidence;
 using SwitchTag.Core.Languages;
 
@@ -162,6 +163,7 @@ public sealed class IndexPipelineBuilder
             }
             var sources = new NameSources()
                 .Add(new AuthorityListSource(authority ?? AuthorityList.Empty))
+                .Add(new OrganisationCueSource())
                 .Add(new PersonCueSource(lists.Cues, lists.NotPlaces, gazetteer))
                 .Add(new GazetteerSource(gazetteer, new PlaceContext(gazetteer, lists.Prepositions, lists.Cues)));
             if (model is not null) sources.Add(new NameModelSource(model));

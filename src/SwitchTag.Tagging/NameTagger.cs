@@ -8,6 +8,7 @@ using SwitchTag.Tagging.Sources.Authority;
 using SwitchTag.Tagging.Sources.Cues;
 using SwitchTag.Tagging.Sources.Gazetteer;
 using SwitchTag.Tagging.Sources.Model;
+using SwitchTag.Tagging.Sources.Organisations;
 using SwitchTag.Tagging.Sources.PlaceEvidence;
 using SwitchTag.Tagging.Sources.Vetoes;
 
@@ -31,6 +32,7 @@ public sealed class NameTagger(NameSources sources, NamePrecedence? precedence =
         lists ??= NameListSet.Empty;
         var sources = new NameSources()
             .Add(new AuthorityListSource(authority ?? AuthorityList.Empty))
+            .Add(new OrganisationCueSource())
             .Add(new PersonCueSource(lists.Cues, lists.NotPlaces, gazetteer))
             .Add(new GazetteerSource(gazetteer, new PlaceContext(gazetteer, lists.Prepositions, lists.Cues)));
         if (mode == TaggingMode.RulesThenModel && model is not null) sources.Add(new NameModelSource(model));

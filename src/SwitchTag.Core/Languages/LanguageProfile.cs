@@ -6,7 +6,9 @@ namespace SwitchTag.Core.Languages;
 /// <c>aliases.txt</c> (other ISO 639 codes), <c>stopwords.txt</c> (capitalised words that are rarely
 /// names), <c>titles.txt</c> (words before a person's name), <c>particles.txt</c> (lower-case words
 /// inside names), <c>stemming.txt</c> (case endings) and <c>patronymics.txt</c> (endings of a
-/// patronymic, lower case, in every script the language is written in). Every file is optional.</summary>
+/// patronymic, lower case, in every script the language is written in) and <c>organisations.txt</c>
+/// (<c>heads:</c> words that make a capitalised run an organisation's name, <c>joins:</c> small
+/// words that may stand inside one). Every file is optional.</summary>
 public sealed record LanguageProfile(
     LanguageCode Code,
     ImmutableArray<LanguageCode> Aliases,
@@ -14,7 +16,9 @@ public sealed record LanguageProfile(
     ImmutableArray<string> Titles,
     ImmutableArray<string> NameParticles,
     StemmingData? Stemming,
-    ImmutableArray<string> PatronymicEndings);
+    ImmutableArray<string> PatronymicEndings,
+    ImmutableArray<string> OrganisationHeads,
+    ImmutableArray<string> OrganisationJoins);
 
 /// <summary>A language's case endings as <c>stemming.txt</c> writes them (<c>key: values</c> lines):
 /// <c>endings</c> a name may carry in running text, <c>nominative</c> endings of a dictionary form,

@@ -20,8 +20,16 @@ public sealed class LanguageProfiles
         _byCode = byCode.ToFrozenDictionary(StringComparer.Ordinal);
         StopWords = all.SelectMany(p => p.StopWords.Concat(p.Titles)).ToFrozenSet(StringComparer.Ordinal);
         NameParticles = all.SelectMany(p => p.NameParticles).ToFrozenSet(StringComparer.Ordinal);
+        OrganisationHeads = all.SelectMany(p => p.OrganisationHeads).ToFrozenSet(StringComparer.Ordinal);
+        OrganisationJoins = all.SelectMany(p => p.OrganisationJoins).ToFrozenSet(StringComparer.Ordinal);
         PatronymicEndings = [.. all.SelectMany(p => p.PatronymicEndings).Distinct(StringComparer.Ordinal).OrderByDescending(e => e.Length)];
     }
+
+    /// <summary>Organisation head words and the small words inside such names, of every language
+    /// (lower case): names are said across languages ("the Scuola Elementare Regina Margherita").</summary>
+    public FrozenSet<string> OrganisationHeads { get; }
+
+    public FrozenSet<string> OrganisationJoins { get; }
 
     /// <summary>Patronymic endings of every language, longest first: a transliterated "Petrovna" in
     /// an English turn is as much a patronymic as "Петровна" in a Russian one.</summary>
@@ -68,7 +76,7 @@ public sealed class LanguageProfiles
                 using var reader = new StreamReader(stream);
                 return reader.ReadToEnd();
             }
-            return ProfileText.Parse(g.Key, Read("aliases.txt"), Read("stopwords.txt"), Read("titles.txt"), Read("particles.txt"), Read("stemming.txt"), Read("patronymics.txt"));
+            return ProfileText.Parse(g.Key, Read("aliases.txt"), Read("stopwords.txt"), Read("titles.txt"), Read("particles.txt"), Read("stemming.txt"), Read("patronymics.txt"), Read("organisations.txt"));
         });
         return new LanguageProfiles([.. profiles]);
     }

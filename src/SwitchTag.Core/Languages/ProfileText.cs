@@ -7,9 +7,25 @@ namespace SwitchTag.Core.Languages;
 /// <c>stemming.txt</c> as <c>key: space-separated values</c> lines; <c>#</c> starts a comment line.</summary>
 internal static class ProfileText
 {
-    public static LanguageProfile Parse(string code, string aliases, string stopWords, string titles, string particles, string stemming, string patronymics) =>
-        new(new LanguageCode(code), [.. Words(aliases).Select(a => new LanguageCode(a))], Words(stopWords), Words(titles), Words(particles),
-            stemming.Length == 0 ? null : Stemming(code, stemming), Words(patronymics));
+    public static LanguageProfile Parse(string code, string aliases, string stopWords, string titles, string particles, string stemming, string patronymics,
+        string organisations)
+    {
+        var org = KeyValues(code, "organisations.txt", organisations);
+        return new(new LanguageCode(code), [.. Words(aliases).Select(a => new LanguageCode(a))], Words(stopWords), Words(titles), Words(particles),
+            stemming.Length == 0 ? null : Stemming(code, stemming), Words(patronymics), org.GetValueOrDefault("heads", []), org.GetValueOrDefault("joins", []));
+    }
+
+    private static Dictionary<string, ImmutableArray<string>> KeyValues(string code, string file, string text)
+    {
+        var keys = new Dictionary<string, ImmutableArray<string>>(StringComparer.Ordinal);
+        foreach (var line in Lines(text))
+        {
+            int colon = line.IndexOf(':');
+            if (colon <= 0) throw new InvalidDataException($"Languages/{code}/{file}: \"{line}\" is no key: values line");
+            keys[line[..colon].Trim()] = [.. line[(colon + 1)..].Split(' ', StringSplitOptions.RemoveEmptyEntries)];
+        }
+        return keys;
+    }
 
     private static IEnumerable<string> Lines(string text) =>
         text.Split('\n').Select(l => l.Trim()).Where(l => l.Length > 0 && !l.StartsWith('#'));
@@ -18,13 +34,7 @@ internal static class ProfileText
 
     private static StemmingData Stemming(string code, string text)
     {
-        var keys = new Dictionary<string, ImmutableArray<string>>(StringComparer.Ordinal);
-        foreach (var line in Lines(text))
-        {
-            int colon = line.IndexOf(':');
-            if (colon <= 0) throw new InvalidDataException($"Languages/{code}/stemming.txt: \"{line}\" is no key: values line");
-            keys[line[..colon].Trim()] = [.. line[(colon + 1)..].Split(' ', StringSplitOptions.RemoveEmptyEntries)];
-        }
+        var keys = KeyValues(code, "stemming.txt", text);
         ImmutableArray<string> Get(string key) => keys.GetValueOrDefault(key, []);
         var replacements = Get("replace").Select(r => r.Split('>') is [var from, var to] ? (from, to)
             : throw new InvalidDataException($"Languages/{code}/stemming.txt: replace wants from>to, not \"{r}\"")).ToImmutableArray();

@@ -7,7 +7,8 @@ namespace SwitchTag.Tagging.Sources;
 /// a proposal is dropped when it overlaps a standing proposal of a higher-ranked source (never split,
 /// shortened or relabelled), and stands otherwise. Protected sources rank above every other: a span
 /// from an archive's own list is never overwritten, whatever is inserted later.
-/// <see cref="Default"/>, highest first: the authority list (protected); person cues (a titled or
+/// <see cref="Default"/>, highest first: the authority list (protected); organisation cues (a
+/// capitalised run around a head word: "Fiação Santa Rita" is never Santa Rita, BR); person cues (a titled or
 /// kin-marked name is a person: "Mr. Roth" is never Roth, DE); place evidence (a gazetteer place after
 /// a locative preposition, with a case ending, or a multi-word name matched whole: "w Tarnowie" is never
 /// a person); the model (it has seen the context: "Jordan Peterson" is a person, not the country); the
@@ -42,7 +43,7 @@ public sealed class NamePrecedence
     }
 
     public static NamePrecedence Default { get; } =
-        new([MentionSource.Authority, MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, MentionSource.Gazetteer], [MentionSource.Authority],
+        new([MentionSource.Authority, Organisations.OrganisationCueSource.Organisation, MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, MentionSource.Gazetteer], [MentionSource.Authority],
             [new Yield(MentionSource.PlaceEvidence, MentionSource.Model, NameLabel.PER)]);
 
     /// <summary>Highest rank first.</summary>
