@@ -37,6 +37,7 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// writes (no context and no model backs them: "Coats from the morning" beside "sewing coats"),
 /// multi-word model mentions opening a sentence whose every word the interview also writes in lower
 /// case ("Mia madre si alzava" beside "mia" and "madre"; "She became"), and
+/// one-word places nothing knows whose ending makes them a word for people ("Neapolitan"), and
 /// places whose every gazetteer candidate is accented otherwise (<see cref="Respelling"/>: "Perón" is
 /// not Péron, FR) or is a village named so only in one of its other names (<see cref="VillagePopulation"/>).</summary>
 public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow = HeadingBuilder.DefaultReviewBelow)
@@ -173,9 +174,20 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         if (m.Source == MentionSource.Model && m.Text.Any(char.IsWhiteSpace) && TextPosition.IsSentenceStart(turnText, m.CharStart)
             && Words(m.Text).All(w => lowerWords.Contains(w.ToLowerInvariant())))
             return $"\"{m.Text}\" opens a sentence and its words are used as ordinary words in this interview";
+        if (open && m.Label == NameLabel.LOC && places.IsEmpty && respelled is null && !m.Text.Any(char.IsWhiteSpace)
+            && lexicon.Listed(m.Text, m.Language) is null && DemonymEnding(m.Text) is { } ending)
+            return $"\"{m.Text}\" reads as a word for the people of a place (-{ending}), and no place of that name is known";
         if (m.Confidence < reviewBelow)
             return FormattableString.Invariant($"low confidence ({m.Confidence:0.00})");
         return null;
+    }
+
+    /// <summary>The demonym ending (language profiles' <c>demonym-endings.txt</c>) a word carries
+    /// after a stem of three letters or more, or null: nationality and people words are never places.</summary>
+    private static string? DemonymEnding(string word)
+    {
+        var lower = word.ToLowerInvariant();
+        return LanguageProfiles.Default.DemonymEndings.FirstOrDefault(e => lower.Length >= e.Length + 3 && lower.EndsWith(e, StringComparison.Ordinal));
     }
 
     private sealed class Group(NameLabel label, string key)

@@ -250,4 +250,14 @@ public class HeadingBuilderTests
         var plain = Assert.Single(Build(lexicon, ("Bras", NameLabel.LOC, "fr")).Headings);
         Assert.Equal(bras, plain.Place);
     }
+
+    [Fact]
+    public void A_word_for_the_people_of_a_place_that_names_no_known_place_goes_to_review()
+    {
+        // English word formation (from memory): -an, -ian, -ese make words for the people of a place.
+        var result = Build(new FakeLexicon(new Dictionary<string, ImmutableArray<PlaceLink>> { ["venice"] = [Venice] }),
+            ("Neapolitan", NameLabel.LOC, "en"), ("Venice", NameLabel.LOC, "en"));
+        Assert.StartsWith("\"Neapolitan\" reads as a word for the people of a place (-an)", Assert.Single(result.Review).Reason);
+        Assert.Equal(Venice, Assert.Single(result.Headings).Place);
+    }
 }

@@ -8,7 +8,8 @@ namespace SwitchTag.Core.Languages;
 /// inside names), <c>stemming.txt</c> (case endings) and <c>patronymics.txt</c> (endings of a
 /// patronymic, lower case, in every script the language is written in) and <c>organisations.txt</c>
 /// (<c>heads:</c> words that make a capitalised run an organisation's name, <c>joins:</c> small
-/// words that may stand inside one). Every file is optional.</summary>
+/// words that may stand inside one) and <c>demonym-endings.txt</c> (endings of words for the people of
+/// a place: "Neapolitan", "Viennese"). Every file is optional.</summary>
 public sealed record LanguageProfile(
     LanguageCode Code,
     ImmutableArray<LanguageCode> Aliases,
@@ -18,7 +19,8 @@ public sealed record LanguageProfile(
     StemmingData? Stemming,
     ImmutableArray<string> PatronymicEndings,
     ImmutableArray<string> OrganisationHeads,
-    ImmutableArray<string> OrganisationJoins);
+    ImmutableArray<string> OrganisationJoins,
+    ImmutableArray<string> DemonymEndings);
 
 /// <summary>A language's case endings as <c>stemming.txt</c> writes them (<c>key: values</c> lines):
 /// <c>endings</c> a name may carry in running text, <c>nominative</c> endings of a dictionary form,

@@ -22,6 +22,7 @@ public sealed class LanguageProfiles
         NameParticles = all.SelectMany(p => p.NameParticles).ToFrozenSet(StringComparer.Ordinal);
         OrganisationHeads = all.SelectMany(p => p.OrganisationHeads).ToFrozenSet(StringComparer.Ordinal);
         OrganisationJoins = all.SelectMany(p => p.OrganisationJoins).ToFrozenSet(StringComparer.Ordinal);
+        DemonymEndings = [.. all.SelectMany(p => p.DemonymEndings).Distinct(StringComparer.Ordinal).OrderByDescending(e => e.Length)];
         PatronymicEndings = [.. all.SelectMany(p => p.PatronymicEndings).Distinct(StringComparer.Ordinal).OrderByDescending(e => e.Length)];
     }
 
@@ -30,6 +31,9 @@ public sealed class LanguageProfiles
     public FrozenSet<string> OrganisationHeads { get; }
 
     public FrozenSet<string> OrganisationJoins { get; }
+
+    /// <summary>Endings of words for the people of a place, every language, longest first.</summary>
+    public ImmutableArray<string> DemonymEndings { get; }
 
     /// <summary>Patronymic endings of every language, longest first: a transliterated "Petrovna" in
     /// an English turn is as much a patronymic as "Петровна" in a Russian one.</summary>
@@ -76,7 +80,7 @@ public sealed class LanguageProfiles
                 using var reader = new StreamReader(stream);
                 return reader.ReadToEnd();
             }
-            return ProfileText.Parse(g.Key, Read("aliases.txt"), Read("stopwords.txt"), Read("titles.txt"), Read("particles.txt"), Read("stemming.txt"), Read("patronymics.txt"), Read("organisations.txt"));
+            return ProfileText.Parse(g.Key, Read("aliases.txt"), Read("stopwords.txt"), Read("titles.txt"), Read("particles.txt"), Read("stemming.txt"), Read("patronymics.txt"), Read("organisations.txt"), Read("demonym-endings.txt"));
         });
         return new LanguageProfiles([.. profiles]);
     }
