@@ -294,7 +294,7 @@ def main():
     ap.add_argument("--data", default="../shared/data")
     ap.add_argument("--out", default="models")
     ap.add_argument("--lists", default="models/lexicon", help="the shipped name lists (models/namelists.md) the name lexicon is built from")
-    ap.add_argument("--epochs", type=int, default=7)
+    ap.add_argument("--epochs", type=int, default=8)
     ap.add_argument("--budget", type=float, default=1.9e6, help="training tokens per epoch (sample_plan)")
     ap.add_argument("--alpha", type=float, default=0.5, help="sampling temperature exponent over training sets")
     ap.add_argument("--max-repeat", type=float, default=3.0, help="most passes over one set per epoch")
