@@ -100,16 +100,16 @@ public sealed class AuthorityList : INameLexicon
     {
         ArgumentNullException.ThrowIfNull(text);
         if (Entries.IsEmpty || text.Length == 0) return [];
-        var words = NameWords.Split(text);
         var rule = StemRules.For(language);
         var candidates = new List<NameMatch>();
-        for (int i = 0; i < words.Count; i++)
-        {
-            var best = BestHit(text, words, i, rule);
-            if (best is not { } hit) continue;
-            var entry = Entries[_index.IdsAt(hit.KeyIndex)[0]];
-            candidates.Add(new NameMatch(words[i].Start, words[i + hit.WordCount - 1].End, entry.Label, entry.Name, MentionSource.Authority));
-        }
+        foreach (var (words, starts) in NameWords.Windows(text, InflectedMatcher.MaxNameWords - 1))
+            for (int i = 0; i < starts; i++)
+            {
+                var best = BestHit(text, words, i, rule);
+                if (best is not { } hit) continue;
+                var entry = Entries[_index.IdsAt(hit.KeyIndex)[0]];
+                candidates.Add(new NameMatch(words[i].Start, words[i + hit.WordCount - 1].End, entry.Label, entry.Name, MentionSource.Authority));
+            }
         return NameMatchSelection.LongestFirst(candidates);
     }
 

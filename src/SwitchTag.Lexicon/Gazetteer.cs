@@ -123,25 +123,25 @@ public sealed class Gazetteer : INameLexicon
     {
         ArgumentNullException.ThrowIfNull(text);
         if (_places.Length == 0 || text.Length == 0) return [];
-        var words = NameWords.Split(text);
         var rule = StemRules.For(language);
         var candidates = new List<NameMatch>();
-        for (int i = 0; i < words.Count; i++)
-        {
-            if (!char.IsLetter(text[words[i].Start]) || !NameWords.StartsUpper(text.AsSpan(words[i].Start))) continue;
-            var hits = InflectedMatcher.MatchAt(_index, text, words, i, rule)
-                .Where(h => NameWords.StartsUpper(text.AsSpan(words[i + h.WordCount - 1].Start)))
-                .Where(h => h.WordCount > 1 || AcceptsSingleWord(text, words, i, h))
-                .ToList();
-            if (hits.Count == 0) continue;
-            int longest = hits.Max(h => h.WordCount);
-            var place = hits.Where(h => h.WordCount == longest)
-                .SelectMany(h => _index.IdsAt(h.KeyIndex).ToArray())
-                .Select(id => _places[id])
-                .OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId)
-                .First();
-            candidates.Add(new NameMatch(words[i].Start, words[i + longest - 1].End, NameLabel.LOC, place.Name, MentionSource.Gazetteer));
-        }
+        foreach (var (words, starts) in NameWords.Windows(text, InflectedMatcher.MaxNameWords - 1))
+            for (int i = 0; i < starts; i++)
+            {
+                if (!char.IsLetter(text[words[i].Start]) || !NameWords.StartsUpper(text.AsSpan(words[i].Start))) continue;
+                var hits = InflectedMatcher.MatchAt(_index, text, words, i, rule)
+                    .Where(h => NameWords.StartsUpper(text.AsSpan(words[i + h.WordCount - 1].Start)))
+                    .Where(h => h.WordCount > 1 || AcceptsSingleWord(text, words, i, h))
+                    .ToList();
+                if (hits.Count == 0) continue;
+                int longest = hits.Max(h => h.WordCount);
+                var place = hits.Where(h => h.WordCount == longest)
+                    .SelectMany(h => _index.IdsAt(h.KeyIndex).ToArray())
+                    .Select(id => _places[id])
+                    .OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId)
+                    .First();
+                candidates.Add(new NameMatch(words[i].Start, words[i + longest - 1].End, NameLabel.LOC, place.Name, MentionSource.Gazetteer));
+            }
         return NameMatchSelection.LongestFirst(candidates);
     }
 

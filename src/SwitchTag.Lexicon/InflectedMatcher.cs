@@ -18,7 +18,8 @@ public readonly record struct IndexHit(int KeyIndex, int WordCount, MatchKind Ki
 /// word's nominative stem; with no rule only folded equality counts.</summary>
 public static class InflectedMatcher
 {
-    private const int MaxNameWords = 6;
+    /// <summary>Words one name may span: a match starting at a word looks at most this many words.</summary>
+    public const int MaxNameWords = 6;
 
     /// <summary>All names that the words from <paramref name="first"/> on spell, under one rule
     /// (null: folded equality only); <paramref name="fallback"/> when the rule is not the text's own

@@ -13,19 +13,47 @@ public static class NameWords
     public static List<NameWord> Split(string text) =>
         Bounds(text).Select(b => new NameWord(b.Start, b.End, NameFolding.Fold(text[b.Start..b.End]))).ToList();
 
+    /// <summary>The words of <see cref="Split"/> a window at a time, for a scan that looks at most
+    /// <paramref name="lookAhead"/> words past the one it starts from: each window is one list holding
+    /// <c>Starts</c> words to start from and up to <paramref name="lookAhead"/> words after them (fewer at
+    /// the end of the text), so the scan sees what it would see in the whole list. One speaker turn of
+    /// millions of words is then never folded all at once. The list is reused: read it before the next window.</summary>
+    public static IEnumerable<(List<NameWord> Words, int Starts)> Windows(string text, int lookAhead, int size = 4096)
+    {
+        var window = new List<NameWord>(size + lookAhead);
+        int i = 0;
+        bool more = true;
+        while (more)
+        {
+            // The look-ahead words of the last window are the first words of this one.
+            int kept = Math.Max(0, window.Count - size);
+            window.RemoveRange(0, window.Count - kept);
+            while (window.Count < size + lookAhead)
+            {
+                if (NextWord(text, ref i) is not { } word) { more = false; break; }
+                window.Add(new NameWord(word.Start, word.End, NameFolding.Fold(text[word.Start..word.End])));
+            }
+            if (window.Count == 0) yield break;
+            yield return (window, more ? size : window.Count);
+        }
+    }
+
+    /// <summary>The next word at or after <paramref name="i"/>, moving <paramref name="i"/> past it; null at the end.</summary>
+    private static (int Start, int End)? NextWord(string text, ref int i)
+    {
+        while (i < text.Length && !IsWordChar(text, i)) i++;
+        if (i >= text.Length) return null;
+        int start = i;
+        while (i < text.Length && IsWordChar(text, i)) i += char.IsSurrogatePair(text, i) ? 2 : 1;
+        return (start, i);
+    }
+
     /// <summary>Where the words of <see cref="Split"/> are, without folding them (cheaper when only
     /// offsets are wanted).</summary>
     public static List<(int Start, int End)> Bounds(string text)
     {
         var words = new List<(int, int)>();
-        int i = 0;
-        while (i < text.Length)
-        {
-            if (!IsWordChar(text, i)) { i++; continue; }
-            int start = i;
-            while (i < text.Length && IsWordChar(text, i)) i += char.IsSurrogatePair(text, i) ? 2 : 1;
-            words.Add((start, i));
-        }
+        for (int i = 0; NextWord(text, ref i) is { } word;) words.Add(word);
         return words;
     }
 

@@ -103,11 +103,18 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
             foreach (var name in h.Variants.Prepend(h.Name).Distinct(StringComparer.Ordinal))
                 Run(row, "heading", h.Id, null, null, null, null, null, null, name, SearchTerms.Of(name));
         foreach (var turn in index.Turns)
+        {
+            // Cues and language spans are both in text order, spans disjoint: the spans a cue meets
+            // start where the previous cue's left off, so one long turn is not cues x spans.
+            var spans = index.Spans[turn.Index];
+            int first = 0;
             foreach (var c in turn.Cues)
             {
                 var cueTime = index.Transcript.Cues[c.CueIndex].Time;
-                foreach (var (span, _) in index.Spans[turn.Index])
+                while (first < spans.Length && spans[first].Value.CharEnd <= c.CharStart) first++;
+                for (int k = first; k < spans.Length && spans[k].Value.CharStart < c.CharEnd; k++)
                 {
+                    var span = spans[k].Value;
                     int from = Math.Max(c.CharStart, span.CharStart), to = Math.Min(c.CharEnd, span.CharEnd);
                     if (from >= to) continue;
                     string piece = turn.Text[from..to];
@@ -116,6 +123,7 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
                     Run(row, "text", null, turn.Index, from, to, span.Language.Code, cueTime.Start.Milliseconds, cueTime.End.Milliseconds, piece, terms);
                 }
             }
+        }
     }
 
     private SqliteCommand Command(string sql, params string[] names)

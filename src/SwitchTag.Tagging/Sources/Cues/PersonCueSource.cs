@@ -24,7 +24,8 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
     {
         if (string.IsNullOrEmpty(turnText)) return [];
         if (spans.IsDefault) spans = [];
-        var words = NameWords.Split(turnText);
+        // Offsets only: a turn of millions of words folds just the capitalised words a check needs.
+        var words = NameWords.Bounds(turnText);
         var found = ImmutableArray.CreateBuilder<Mention>();
         RangeReach? places = null;
         for (int i = 0; i + 1 < words.Count; i++)
@@ -58,25 +59,25 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
         return found.ToImmutable();
     }
 
-    private static bool IsPatronymic(string text, NameWord word)
+    private static bool IsPatronymic(string text, (int Start, int End) word)
     {
         if (!char.IsUpper(text[word.Start])) return false;
         var lower = text[word.Start..word.End].ToLowerInvariant();
         return LanguageProfiles.Default.PatronymicEndings.Any(e => lower.Length >= e.Length + 2 && lower.EndsWith(e, StringComparison.Ordinal));
     }
 
-    private bool IsNameWord(string text, NameWord word) =>
-        char.IsUpper(text[word.Start]) && word.End - word.Start > 1 && !notPlaces.Words.Contains(word.Folded);
+    private bool IsNameWord(string text, (int Start, int End) word) =>
+        char.IsUpper(text[word.Start]) && word.End - word.Start > 1 && !notPlaces.Words.Contains(NameFolding.Fold(WordAt(text, word)));
 
     /// <summary>A title short enough to be an abbreviation ("Mr.", "Dr.", "ks."): only then may a dot
     /// stand between marker and name; after "my brother." a new sentence begins.</summary>
-    private bool Abbreviation(string text, NameWord marker) => cues.IsAbbreviation(WordAt(text, marker));
+    private bool Abbreviation(string text, (int Start, int End) marker) => cues.IsAbbreviation(WordAt(text, marker));
 
-    private static string WordAt(string text, NameWord word) => text[word.Start..word.End];
+    private static string WordAt(string text, (int Start, int End) word) => text[word.Start..word.End];
 
     /// <summary>A case form of a town ("nagyapám Debrecenbe költözött": my grandfather moved to
     /// Debrecen): the kinship word there is the subject, not a mark on the name.</summary>
-    private bool InflectedTown(NameWord word, string text, ImmutableArray<LanguageSpan> spans)
+    private bool InflectedTown((int Start, int End) word, string text, ImmutableArray<LanguageSpan> spans)
     {
         var candidates = gazetteer.Candidates(WordAt(text, word), SpanLanguage.At(spans, word.Start));
         return candidates.Count > 0 && candidates.All(c => c.Kind == MatchKind.Inflected)
@@ -84,7 +85,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
     }
 
     /// <summary>One space or hyphen between the words; after an abbreviated title also "Mr. Roth".</summary>
-    private static bool Joined(string text, NameWord left, NameWord right, bool allowDot)
+    private static bool Joined(string text, (int Start, int End) left, (int Start, int End) right, bool allowDot)
     {
         var gap = text.AsSpan(left.End, right.Start - left.End);
         return gap is " " or "-" or "\u00A0" || (allowDot && gap is ". ");

@@ -27,7 +27,8 @@ public sealed class OrganisationCueSource : INameSource
         if (string.IsNullOrEmpty(turnText)) return [];
         if (spans.IsDefault) spans = [];
         var profiles = LanguageProfiles.Default;
-        var words = NameWords.Split(turnText);
+        // Offsets only: a turn of millions of words folds just the few words a stop-word check needs.
+        var words = NameWords.Bounds(turnText);
         var found = ImmutableArray.CreateBuilder<Mention>();
         for (int i = 0; i < words.Count; i++)
         {
@@ -35,7 +36,7 @@ public sealed class OrganisationCueSource : INameSource
             int first = i;
             while (first > 0 && i - first < MaxWordsBefore && Joined(turnText, words[first - 1], words[first])
                    && Capitalised(turnText, words[first - 1])
-                   && !(profiles.StopWords.Contains(words[first - 1].Folded) && TextPosition.IsSentenceStart(turnText, words[first - 1].Start)))
+                   && !(profiles.StopWords.Contains(Folded(turnText, words[first - 1])) && TextPosition.IsSentenceStart(turnText, words[first - 1].Start)))
                 first--;
             int last = i;
             for (int k = i; k + 1 < words.Count && k + 1 - first < MaxWords && Joined(turnText, words[k], words[k + 1]);)
@@ -52,11 +53,13 @@ public sealed class OrganisationCueSource : INameSource
         return found.ToImmutable();
     }
 
-    private static bool Capitalised(string text, NameWord word) => char.IsUpper(text[word.Start]);
+    private static bool Capitalised(string text, (int Start, int End) word) => char.IsUpper(text[word.Start]);
 
-    private static string Lower(string text, NameWord word) => text[word.Start..word.End].ToLowerInvariant();
+    private static string Lower(string text, (int Start, int End) word) => text[word.Start..word.End].ToLowerInvariant();
+
+    private static string Folded(string text, (int Start, int End) word) => NameFolding.Fold(text[word.Start..word.End]);
 
     /// <summary>One space, a hyphen ("Italo-Platense") or a plural possessive ("Emigrants' Aid").</summary>
-    private static bool Joined(string text, NameWord left, NameWord right) =>
+    private static bool Joined(string text, (int Start, int End) left, (int Start, int End) right) =>
         text.AsSpan(left.End, right.Start - left.End) is " " or "-" or "\u00A0" or "' ";
 }
