@@ -71,7 +71,7 @@ void StageTimes()
         t[1] += Lap();
         var spans = turns.Select(x => pipeline.Languages.Segment(x.Text, main)).ToImmutableArray();
         t[2] += Lap();
-        var mentions = turns.SelectMany((x, i) => pipeline.Names.Tag(i, x.Text, spans[i])).ToImmutableArray();
+        var mentions = turns.SelectMany((x, i) => pipeline.Names.Tag(x.Id, x.Text, spans[i])).ToImmutableArray();
         t[3] += Lap();
         var index = new IndexBuilder(pipeline.Lexicon).Build(transcript, turns, main, spans, mentions);
         t[4] += Lap();

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 using SwitchTag.LanguageId.Interview;
 using SwitchTag.Core.Text;
@@ -20,7 +21,7 @@ public sealed class MainLanguageChooserTests
             spans.Add(new LanguageSpan(new CharSpan(at, at + chars), language, 0.9));
             at += chars;
         }
-        var turn = new Turn(0, speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(seconds * 1000L)), new string('x', at), []);
+        var turn = new Turn(new TurnId(0), speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(seconds * 1000L)), new string('x', at), []);
         return (turn, spans.ToImmutable());
     }
 

@@ -1,4 +1,5 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
@@ -23,7 +24,7 @@ public class OrdinaryWordVetoTests
     private static Mention Las(string text, MentionSource source)
     {
         int at = text.IndexOf("Las", StringComparison.Ordinal);
-        return new Mention(0, new CharSpan(at, at + 3), "Las", NameLabel.LOC, "es", 0.9, source);
+        return new Mention(new TurnId(0), new CharSpan(at, at + 3), "Las", NameLabel.LOC, "es", 0.9, source);
     }
 
     [Fact]
