@@ -30,7 +30,8 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// historical region or state is not linked to a modern place of the name (<see cref="Historical"/>),
 /// which stays among the alternatives for the reviewer.
 /// Organisations group by folded key.
-/// Held for review instead: mentions below the confidence floor, PER mentions that are the own name
+/// Held for review instead: mentions below the confidence floor, model PER mentions holding a lower-case
+/// word that is no name particle, PER mentions that are the own name
 /// of a place of 100,000 people or more, surfaces tagged both PER and LOC in the interview, model mentions whose first letter is
 /// lower case (names in cased scripts are capitalised; uncased scripts are never caught), one-word
 /// model mentions the interview also writes in lower case as an ordinary word (unless a place
@@ -104,7 +105,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
         var groups = new List<Group>();
         GroupPlaces(mentions, keys, places, held, groups);
-        GroupPersons(mentions, keys, held, groups);
+        GroupPersons(mentions, keys, held, groups, turns);
         GroupByKey(mentions, keys, held, groups, NameLabel.ORG);
 
         var headingOf = new HeadingId?[n];
@@ -168,6 +169,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return $"tagged PER, but \"{m.Text}\" is also the name of a place ({place.Name}, {place.Country})";
         if (m.Source == MentionSource.Model && m.Text.FirstOrDefault(char.IsLetter) is var first && char.IsLower(first))
             return "the model tagged a name that does not start with a capital letter";
+        if (m.Source == MentionSource.Model && m.Label == NameLabel.PER && Words(m.Text).Skip(1).FirstOrDefault(OrdinaryInnerWord) is { } inner)
+            return $"a person's name does not hold the lower-case word \"{inner}\"";
         if ((m.Source == MentionSource.Model && (m.Label != NameLabel.LOC || places.IsEmpty) || m.Source == MentionSource.Gazetteer)
             && !m.Text.Any(char.IsWhiteSpace) && m.Text.Length > 0 && char.IsUpper(m.Text[0])
             && lowerWords.Contains(m.Text.ToLowerInvariant()))
@@ -182,6 +185,13 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return FormattableString.Invariant($"low confidence ({m.Confidence:0.00})");
         return null;
     }
+
+    /// <summary>A lower-case word inside a capitalised person's name that is no name particle of any
+    /// language (von, da, ben): names are written capitalised, so "Cucivo cappotti dalla mattina" is a
+    /// sentence, not a person.</summary>
+    private static bool OrdinaryInnerWord(string word) =>
+        word.FirstOrDefault(char.IsLetter) is var c && char.IsLower(c)
+        && !LanguageProfiles.Default.NameParticles.Contains(word.ToLowerInvariant());
 
     /// <summary>The demonym ending (language profiles' <c>demonym-endings.txt</c>) a word carries
     /// after a stem of three letters or more, or null: nationality and people words are never places.</summary>
@@ -273,7 +283,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// <summary>The place a LOC mention is linked to. A first-level region of the name (which the lists
     /// give no population) is chosen over towns reached only through another of their names: Veneto
     /// is not Venice, New Jersey not Three Rivers, Michigan. A town keeps precedence when the name said
-    /// is its own name (São Paulo), when it has <see cref="MetropolisPopulation"/> people or more (New
+    /// is its own name and it lies in the region's country or the interview's places point to its
+    /// country, unless they point to the region's country only (Murcia, not Asturias, PH), when it has <see cref="MetropolisPopulation"/> people or more (New
     /// York beside the state), or when its own name also names the region (Wien, the city-state); a
     /// country of the name does too (Georgia). Otherwise the <see cref="PlaceScore"/> decides, among
     /// regions the interview's countries only.</summary>
@@ -282,9 +293,15 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         string said = Key(m.Text, m.Language);
         var regions = places.Where(p => p.Region is not null).ToList();
         var towns = places.Where(p => p.Region is null).ToList();
+        // A town named so in its own right keeps precedence over a region of the name when it lies in
+        // that region's country (Salzburg, Murcia: the namesake town) or the interview's other places
+        // point to its country; a town abroad does not (Asturias, PH is not the Spanish region). And
+        // it yields when those places lie in a region's country and none in its own.
+        bool regionBacked = regions.Any(r => evidence.ContainsKey(r.Country))
+            && !towns.Any(p => Key(p.Name, m.Language) == said && evidence.ContainsKey(p.Country));
         bool townFirst = regions.Count == 0 || towns.Any(p => p.GeonameId < 0 || p.Population >= MetropolisPopulation
-            || Key(p.Name, m.Language) == said
-            || lexicon.Places(p.Name, m.Language).Any(r => r.Region is not null && regions.Any(x => x.Region == r.Region)));
+            || Key(p.Name, m.Language) == said && !regionBacked && (regions.Any(r => r.Country == p.Country) || evidence.ContainsKey(p.Country))
+            || lexicon.Places(p.Name, m.Language).Any(r => r.Region is not null && r.Country == p.Country && regions.Any(x => x.Region == r.Region)));
         return (townFirst ? towns : regions)
             .OrderByDescending(p => PlaceScore(p, Key(p.Name, m.Language) == said, evidence, evidenceTotal))
             .ThenBy(p => p.GeonameId).ThenBy(p => p.Key, StringComparer.Ordinal)
@@ -311,10 +328,14 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// (Stanisław / Stanley: with the same surname, two pieces of evidence). A one-word name joins the
     /// one full-name heading having it as first or last word, else the one whose given name it is a
     /// diminutive of (Irenko / Irena Kowalczyk); one-word names that are diminutives of each other
-    /// join (Ilona / Ilonka). A one-word name that is only a listed equivalent of another heading's
-    /// given name (Stanisław beside Stanley Kowalczyk) is not merged: both headings name each other
-    /// as "possibly the same person".</summary>
-    private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups)
+    /// join (Ilona / Ilonka). A one-word name several full names have as a word joins the one of them
+    /// that names a speaker of the interview ("Mister Lindner" beside Walter and Samuel Lindner, said
+    /// to WALTER): <see cref="SpeakerOwner"/>. A one-word name that is only a listed equivalent of
+    /// another heading's given name (Stanisław beside Stanley Kowalczyk) is a probable link: it is
+    /// merged only when that is the one heading it could mean and the interview ties the two, saying
+    /// them in one turn at most <see cref="TieWords"/> words apart ("Stanisław, he became Stanley.
+    /// Stanley Kowalczyk"); otherwise both headings name each other as "possibly the same person".</summary>
+    private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, ImmutableArray<Turn> turns)
     {
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
         var full = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname)>();
@@ -342,6 +363,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 || f.Surname == lexicon.SurnameKey(m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
             if (owners.Count == 0)
                 owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
+            if (owners.Count > 1 && SpeakerOwner(owners, mentions, turns) is { } speaker) owners = [speaker];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
             if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)) is { Group: not null } kin)
             {
@@ -355,13 +377,54 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         foreach (var l in lone)
         {
             var probable = full.Where(f => lexicon.EquivalentGivenNames(f.First, l.Name)).Select(f => f.Group)
-                .Concat(lone.Where(o => o.Group != l.Group && lexicon.EquivalentGivenNames(o.Name, l.Name)).Select(o => o.Group));
+                .Concat(lone.Where(o => o.Group != l.Group && o.Group.Members.Count > 0 && lexicon.EquivalentGivenNames(o.Name, l.Name)).Select(o => o.Group))
+                .Distinct().ToList();
+            if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns))
+            {
+                only.Members.AddRange(l.Group.Members);
+                l.Group.Members.Clear();
+                groups.Remove(l.Group);
+                continue;
+            }
             foreach (var other in probable)
             {
                 l.Group.Possible.Add(other);
                 other.Possible.Add(l.Group);
             }
         }
+    }
+
+    /// <summary>How close, in words of one turn, a one-word name and a full name it is a listed
+    /// equivalent of must be said for the interview to tie them.</summary>
+    public const int TieWords = 12;
+
+    private static bool Tied(Group a, Group b, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns)
+    {
+        foreach (int i in a.Members)
+            foreach (int j in b.Members)
+            {
+                if (mentions[i].Turn != mentions[j].Turn) continue;
+                var text = turns[mentions[i].Turn.Index].Text;
+                int from = Math.Min(mentions[i].CharEnd, mentions[j].CharEnd), to = Math.Max(mentions[i].CharStart, mentions[j].CharStart);
+                if (from >= to || Words(text[from..to]).Length <= TieWords) return true;
+            }
+        return false;
+    }
+
+    /// <summary>Of several person headings a one-word name could mean, the one naming a speaker of the
+    /// interview (every word of the speaker's label is a word of its name), when exactly one does: a
+    /// surname alone is said most often to or of the person being interviewed.</summary>
+    private Group? SpeakerOwner(List<Group> owners, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns)
+    {
+        var speakers = turns.Select(t => t.Speaker).OfType<string>().Distinct(StringComparer.Ordinal)
+            .Select(s => Words(s).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal))
+            .Where(s => s.Count > 0).ToList();
+        var named = owners.Where(g => g.Members.Any(i =>
+        {
+            var words = Words(mentions[i].Text).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal);
+            return speakers.Any(s => s.IsSubsetOf(words));
+        })).ToList();
+        return named is [var one] ? one : null;
     }
 
     private static void GroupByKey(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, NameLabel label)

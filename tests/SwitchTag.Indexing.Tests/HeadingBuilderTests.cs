@@ -241,6 +241,23 @@ public class HeadingBuilderTests
     }
 
     [Fact]
+    public void A_town_abroad_named_like_a_region_yields_to_the_region_a_namesake_town_in_it_does_not()
+    {
+        // GeoNames cities15000: 2513416 Murcia, ES (436,870). 1730032 Asturias, PH is the row of the
+        // shipped gazetteer (GeoNames cities1000; population from memory, about 50,000). ES-AS and
+        // ES-MC as the shipped regions.tsv gives them from Debian iso-codes.
+        var murcia = new PlaceLink(2513416, "Murcia", 37.98704, -1.13004, "ES", 436870);
+        var asturiasPh = new PlaceLink(1730032, "Asturias", 10.5679, 123.7178, "PH", 50000);
+        var lexicon = new FakeLexicon(new Dictionary<string, ImmutableArray<PlaceLink>>
+        {
+            ["asturias"] = [asturiasPh, Region("Asturias", "ES", "ES-AS")],
+            ["murcia"] = [murcia, Region("Murcia", "ES", "ES-MC")],
+        });
+        Assert.Equal("ES-AS", Assert.Single(Build(lexicon, ("Asturias", NameLabel.LOC, "en")).Headings).Place!.Region);
+        Assert.Equal(murcia.GeonameId, Assert.Single(Build(lexicon, ("Murcia", NameLabel.LOC, "en")).Headings).Place!.GeonameId);
+    }
+
+    [Fact]
     public void An_accented_name_is_not_linked_to_a_village_spelt_plainly()
     {
         // GeoNames cities1000 row 3030529 (the shipped gazetteer's source, models/gazetteer.md): Bras, FR, 1,888 people; Brás is a district of São Paulo (from memory).

@@ -4,7 +4,6 @@ using SwitchTag.Core.Text;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Tagging.Sources.Vetoes;
-using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging.Tests;
 

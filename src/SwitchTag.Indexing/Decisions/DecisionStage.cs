@@ -63,8 +63,11 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
         ImmutableArray<Mention> mentions, ImmutableArray<TimeRange> times, HeadingResult result)
     {
         var counts = new int[Mine.Length];
-        var edit = new HeadingEdit(result.Headings.Select(h => new HeadingDraft(h)).ToList(), new bool[mentions.Length],
-            mentions.Select(m => m.Label).ToArray(), times);
+        var drafts = result.Headings.Select(h => new HeadingDraft(h)).ToList();
+        var draftOf = drafts.ToDictionary(h => h.Id);
+        foreach (var (draft, heading) in drafts.Zip(result.Headings))
+            draft.PossiblySame.AddRange(heading.PossiblySame.Select(id => draftOf[id]));
+        var edit = new HeadingEdit(drafts, new bool[mentions.Length], mentions.Select(m => m.Label).ToArray(), times);
         Dictionary<string, List<HeadingDraft>>? byName = null;
         for (int d = 0; d < Mine.Length; d++)
         {
@@ -88,7 +91,8 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
             keptTimes.Add(times[i]);
         }
         var headingOf = new HeadingId?[renumbering.KeptCount];
-        var headings = HeadingOrder.Sort(edit.Drafts.Select(h => h.ToHeading(renumbering)));
+        var live = edit.Drafts.ToHashSet();
+        var headings = HeadingOrder.Sort(edit.Drafts.Select(h => h.ToHeading(renumbering, live)));
         foreach (var h in headings)
             foreach (var m in h.Mentions) headingOf[m.Index] = h.Id;
         var review = ImmutableArray.CreateBuilder<ReviewItem>();

@@ -20,6 +20,10 @@ internal sealed class HeadingDraft(Heading h)
     public double Confidence { get; private set; } = h.Confidence;
     public MentionSource Source { get; } = h.Source;
 
+    /// <summary>The drafts this one is possibly the same person as (<see cref="Heading.PossiblySame"/>),
+    /// held as drafts so renames and merges by decisions carry over.</summary>
+    public List<HeadingDraft> PossiblySame { get; } = [];
+
     /// <summary>Whether a decision naming <paramref name="name"/> (id, name or variant, any case) and
     /// <paramref name="label"/> (null: any) means this heading.</summary>
     public bool Answers(NameLabel? label, string name) =>
@@ -38,13 +42,20 @@ internal sealed class HeadingDraft(Heading h)
         else if (other.Place is not null && other.Place.GeonameId != Place!.GeonameId) Alternatives.Add(other.Place);
         foreach (var a in other.Alternatives)
             if (a.GeonameId != Place?.GeonameId && Alternatives.All(x => x.GeonameId != a.GeonameId)) Alternatives.Add(a);
+        foreach (var p in other.PossiblySame) if (p != this && !PossiblySame.Contains(p)) PossiblySame.Add(p);
+        PossiblySame.Remove(other);
     }
 
     /// <summary>The finished heading; a kept heading never holds a dropped mention (rejecting a heading
-    /// drops it with its mentions).</summary>
-    public Heading ToHeading(MentionRenumbering renumbering) => new(Id, Label, Name, [.. Variants], Place, [.. Alternatives],
+    /// drops it with its mentions). <paramref name="live"/> are the drafts still standing, the only
+    /// ones a "possibly the same" link may name.</summary>
+    public Heading ToHeading(MentionRenumbering renumbering, IReadOnlySet<HeadingDraft> live) => new(Id, Label, Name, [.. Variants], Place, [.. Alternatives],
         [.. Members.Select(m => renumbering.Map(m) ?? throw new InvalidOperationException($"heading {Id} holds the dropped mention {m}"))],
-        [.. Speakers], Confidence, Source);
+        [.. Speakers], Confidence, Source)
+    {
+        PossiblySame = [.. PossiblySame.Where(p => p != this && live.Contains(p) && p.Label == NameLabel.PER && Label == NameLabel.PER)
+            .Select(p => p.Id).Distinct().Order()],
+    };
 }
 
 /// <summary>What heading decisions work on: the drafts, and per grouped mention whether it is

@@ -1,0 +1,24 @@
+using SwitchTag.Lexicon.NameLists;
+using SwitchTag.Tests.Shared;
+
+namespace SwitchTag.Lexicon.Tests;
+
+/// <summary>Given-name relations read from the shipped lists (models/lexicon: name-equivalents.tsv and
+/// Languages/*/hypocoristics.tsv, written by hand). The pairs checked are common usage known from
+/// memory (Stanisław / Stanley, Giuseppina / Josefina, Staszek as a Polish diminutive of Stanisław).</summary>
+public class NameVariantsTests
+{
+    private static readonly NameVariants Variants = NameListSet.Load(Path.Combine(TestPaths.RepoRoot, "models", "lexicon")).Variants;
+
+    [Theory]
+    [InlineData("Stanley", "Stanisław")]
+    [InlineData("Stanisław", "Stanley")]
+    [InlineData("Joseph", "Józef")]
+    [InlineData("Stanley", "Staszek")]
+    public void Listed_equivalents_are_equivalent(string a, string b) => Assert.True(Variants.Equivalent(a, b), $"{a} / {b}");
+
+    [Theory]
+    [InlineData("Stanley", "Joseph")]
+    [InlineData("Walter", "Samuel")]
+    public void Unrelated_names_are_not(string a, string b) => Assert.False(Variants.Equivalent(a, b), $"{a} / {b}");
+}
