@@ -8,6 +8,7 @@ using SwitchTag.Indexing;
 using SwitchTag.Output;
 using SwitchTag.Pipeline;
 using SwitchTag.Tagging;
+using SwitchTag.Core.Languages;
 
 // End-to-end throughput of `switchtag index` on one core: the demo interviews read from disk, run
 // through every stage and written out (all outputs and the collection index), repeated until each
@@ -67,7 +68,7 @@ void StageTimes()
         var transcript = TranscriptFile.Read(file).Transcript!;
         t[0] += Lap();
         var turns = TurnBuilder.Build(transcript);
-        string main = MainLanguage.Detect(pipeline.Languages, turns);
+        var main = MainLanguage.Detect(pipeline.Languages, turns);
         t[1] += Lap();
         var spans = turns.Select(x => pipeline.Languages.Segment(x.Text, main)).ToImmutableArray();
         t[2] += Lap();

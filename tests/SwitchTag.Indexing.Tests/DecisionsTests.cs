@@ -7,6 +7,7 @@ using SwitchTag.Indexing.Decisions;
 using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output.IndexJson;
 using Xunit;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests;
 
@@ -112,7 +113,7 @@ public class DecisionsTests
         var transcript = Fixture.Transcript();
         var opening = transcript.Cues[0] with { Time = new TimeRange(new Timecode(0), new Timecode(900)), Speaker = "Archivist", SpeakerLabel = "Archivist", Text = "Recording begins." };
         var shifted = transcript with { Cues = transcript.Cues.Insert(0, opening) };
-        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new IndexBuilder(Fixture.Lexicon(), decisions)).Run(shifted, "en");
+        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new IndexBuilder(Fixture.Lexicon(), decisions)).Run(shifted, new LanguageCode("en"));
 
         Assert.DoesNotContain(index.Mentions, m => m.Mention.Text == "Paris" && m.Time.Start == paris.Time.Start);
         Assert.Equal(1, index.Decisions[0].Applied);

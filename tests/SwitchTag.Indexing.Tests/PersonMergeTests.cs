@@ -6,6 +6,7 @@ using SwitchTag.Core.Time;
 using SwitchTag.Indexing.Decisions;
 using SwitchTag.Indexing.Tests.Fakes;
 using Xunit;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests;
 
@@ -27,7 +28,7 @@ public class PersonMergeTests
         {
             int at = text.IndexOf(name, from, StringComparison.Ordinal);
             Assert.True(at >= 0, name);
-            mentions.Add(new Mention(new TurnId(0), new CharSpan(at, at + name.Length), name, NameLabel.PER, "en", 0.9, MentionSource.Model));
+            mentions.Add(new Mention(new TurnId(0), new CharSpan(at, at + name.Length), name, NameLabel.PER, new LanguageCode("en"), 0.9, MentionSource.Model));
             from = at + name.Length;
         }
         var times = mentions.Select((_, i) => new TimeRange(new Timecode(i * 1000), new Timecode(i * 1000 + 500))).ToImmutableArray();

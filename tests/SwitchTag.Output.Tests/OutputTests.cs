@@ -15,6 +15,7 @@ using SwitchTag.Output.Report;
 using SwitchTag.Output.Text;
 using SwitchTag.Output.WorklistCsv;
 using Xunit;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.Tests;
 
@@ -216,7 +217,7 @@ public class OutputTests
         const string speaker = "Inter\u202Eweiv\u202C\u001B[31mer";
         var t = Fixture.Transcript();
         t = t with { Cues = t.Cues.SetItem(0, t.Cues[0] with { Speaker = speaker, SpeakerLabel = speaker }) };
-        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new SwitchTag.Indexing.IndexBuilder(Fixture.Lexicon(), default)).Run(t, "en");
+        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new SwitchTag.Indexing.IndexBuilder(Fixture.Lexicon(), default)).Run(t, new LanguageCode("en"));
         var entries = new[] { CollectionEntry.From(index, "anna-nowak") };
         var reports = new Dictionary<string, string>
         {

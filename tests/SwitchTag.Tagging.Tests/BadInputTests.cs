@@ -4,6 +4,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Ids;
 using SwitchTag.Tagging;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Tagging.Tests;
 
@@ -13,7 +14,7 @@ public class BadInputTests
     private static readonly NameTagger Tagger = NameTagger.Create(Models.Ner);
 
     private static ImmutableArray<Mention> Tag(string text) =>
-        Tagger.Tag(new TurnId(0), text, [new LanguageSpan(new CharSpan(0, text.Length), "und", 0.5)]);
+        Tagger.Tag(new TurnId(0), text, [new LanguageSpan(new CharSpan(0, text.Length), new LanguageCode("und"), 0.5)]);
 
     private static void AssertWellFormed(string text, ImmutableArray<Mention> mentions)
     {

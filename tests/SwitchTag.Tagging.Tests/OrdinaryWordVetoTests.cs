@@ -4,6 +4,7 @@ using SwitchTag.Core.Text;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Tagging.Sources.Vetoes;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Tagging.Tests;
 
@@ -23,7 +24,7 @@ public class OrdinaryWordVetoTests
     private static Mention Las(string text, MentionSource source)
     {
         int at = text.IndexOf("Las", StringComparison.Ordinal);
-        return new Mention(new TurnId(0), new CharSpan(at, at + 3), "Las", NameLabel.LOC, "es", 0.9, source);
+        return new Mention(new TurnId(0), new CharSpan(at, at + 3), "Las", NameLabel.LOC, new LanguageCode("es"), 0.9, source);
     }
 
     [Fact]

@@ -32,7 +32,7 @@ public sealed class MentionsCsvWriter : IInterviewWriter
             var (m, time, heading) = index.Mentions[i];
             csv.Row(time.Start.ToString(), time.End.ToString(), time.Start.ToSecondsString(), time.End.ToSecondsString(),
                 index.TurnAt(m.Turn).Speaker, m.Text, m.Label.ToString(), heading?.Value,
-                heading is { } id ? names.GetValueOrDefault(id) : null, m.Language, Numbers.Confidence(m.Confidence),
+                heading is { } id ? names.GetValueOrDefault(id) : null, m.Language.Code, Numbers.Confidence(m.Confidence),
                 m.Source.Name, reasons.GetValueOrDefault(new MentionId(i)), Numbers.Integer(m.Turn.Index), Numbers.Integer(m.CharStart),
                 Numbers.Integer(m.CharEnd));
         }
