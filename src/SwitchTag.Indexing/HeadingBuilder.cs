@@ -31,7 +31,7 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// which stays among the alternatives for the reviewer.
 /// Organisations group by folded key.
 /// Held for review instead: mentions below the confidence floor, model PER mentions holding a lower-case
-/// word that is no name particle, PER mentions that are the own name
+/// word that is no name particle, multi-word PER mentions that are the own name of a town or region, PER mentions that are the own name
 /// of a place of 100,000 people or more, surfaces tagged both PER and LOC in the interview, model mentions whose first letter is
 /// lower case (names in cased scripts are capitalised; uncased scripts are never caught), one-word
 /// model mentions the interview also writes in lower case as an ordinary word (unless a place
@@ -165,7 +165,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         if (labelsOfSurface.Contains(NameLabel.PER) && labelsOfSurface.Contains(NameLabel.LOC) && m.Label != NameLabel.ORG
             && m.Source != MentionSource.Cue && m.Source != MentionSource.PlaceEvidence)
             return "the same name is tagged both PER and LOC in this interview, and the evidence is even";
-        if (m.Label == NameLabel.PER && m.Source != MentionSource.Cue && places.FirstOrDefault(p => p.Population >= CompetingPlacePopulation && lexicon.Key(p.Name, m.Language) == key) is { } place)
+        if (m.Label == NameLabel.PER && m.Source != MentionSource.Cue && places.FirstOrDefault(p => CompetesWithPerson(p, m, key)) is { } place)
             return $"tagged PER, but \"{m.Text}\" is also the name of a place ({place.Name}, {place.Country})";
         if (m.Source == MentionSource.Model && m.Text.FirstOrDefault(char.IsLetter) is var first && char.IsLower(first))
             return "the model tagged a name that does not start with a capital letter";
@@ -185,6 +185,14 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return FormattableString.Invariant($"low confidence ({m.Confidence:0.00})");
         return null;
     }
+
+    /// <summary>Whether a place named exactly as a person's mention says competes with the person: a town
+    /// of <see cref="CompetingPlacePopulation"/> or more, or, for a name of two or more words, any town
+    /// or first-level region so named (a given name and surname are seldom both a place's: "Minas
+    /// Gerais" tagged PER is the state).</summary>
+    private bool CompetesWithPerson(PlaceLink p, Mention m, string key) =>
+        lexicon.Key(p.Name, m.Language) == key
+        && (p.Population >= CompetingPlacePopulation || m.Text.Any(char.IsWhiteSpace) && (p.HasGeonameId || p.Region is not null));
 
     /// <summary>A lower-case word inside a capitalised person's name that is no name particle of any
     /// language (von, da, ben): names are written capitalised, so "Cucivo cappotti dalla mattina" is a

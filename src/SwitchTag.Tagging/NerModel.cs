@@ -56,10 +56,14 @@ public sealed class NerModel : IDisposable
     /// the sentence-initial flag), written row by row into the given buffers.</summary>
     public void Featurize(IReadOnlyList<string> words, int from, int count, Span<long> features, Span<long> pieces)
     {
+        // Each word is read once: a list may cut a word's text out of the turn on every read.
+        string? previous = from > 0 ? words[from - 1] : null;
         for (int i = 0; i < count; i++)
         {
-            _features.Compute(words[from + i], WordFeatures.IsSentenceInitial(words, from + i), features.Slice(i * FeatureSlots, FeatureSlots));
-            _pieces.Encode(words[from + i]).CopyTo(pieces.Slice(i * PieceEncoder.Slots, PieceEncoder.Slots));
+            string word = words[from + i];
+            _features.Compute(word, WordFeatures.IsSentenceInitial(previous), features.Slice(i * FeatureSlots, FeatureSlots));
+            _pieces.Encode(word).CopyTo(pieces.Slice(i * PieceEncoder.Slots, PieceEncoder.Slots));
+            previous = word;
         }
     }
 

@@ -26,41 +26,18 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
         var chunks = new List<Chunk>();
         for (int s = 0; s < sentences.Count; s++)
         {
-            int n = sentences[s].Count;
-            result[s] = new float[n * labels];
-            if (n <= window) { if (n > 0) chunks.Add(new Chunk(s, 0, n, 0, n)); continue; }
-            int stride = window - 2 * overlap;
-            for (int start = 0; ; start += stride)
-            {
-                int end = Math.Min(n, start + window);
-                int coreStart = start == 0 ? 0 : start + overlap;
-                int coreEnd = end == n ? n : end - overlap;
-                chunks.Add(new Chunk(s, start, end - start, coreStart, coreEnd));
-                if (end == n) break;
-            }
+            result[s] = new float[sentences[s].Count * labels];
+            chunks.AddRange(Windows(s, sentences[s].Count));
         }
         chunks.Sort((a, b) => b.Length.CompareTo(a.Length));
         for (int i = 0; i < chunks.Count;)
         {
-            int width = chunks[i].Length;
-            // Rows of one batch are padded to its longest: take only windows at least 3/4 as long.
-            int limit = Math.Max(1, Math.Min(chunks.Count - i, batchWords / Math.Max(1, width)));
-            int count = 1;
-            while (count < limit && chunks[i + count].Length * 4 >= width * 3) count++;
-            var features = new long[count * width * model.FeatureSlots];
-            var pieces = new long[count * width * PieceEncoder.Slots];
+            int count = BatchSize(chunks, i);
+            var logits = RunBatch(sentences, chunks, i, count);
             for (int b = 0; b < count; b++)
             {
                 var c = chunks[i + b];
-                model.Featurize(sentences[c.Sentence], c.Start, c.Length,
-                    features.AsSpan(b * width * model.FeatureSlots), pieces.AsSpan(b * width * PieceEncoder.Slots));
-            }
-            var logits = model.Run(features, pieces, count, width);
-            for (int b = 0; b < count; b++)
-            {
-                var c = chunks[i + b];
-                int from = (b * width + (c.CoreStart - c.Start)) * labels;
-                logits.AsSpan(from, (c.CoreEnd - c.CoreStart) * labels).CopyTo(result[c.Sentence].AsSpan(c.CoreStart * labels));
+                Core(logits, chunks[i].Length, b, c).CopyTo(result[c.Sentence].AsSpan(c.CoreStart * labels));
             }
             i += count;
         }
@@ -82,25 +59,119 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
         for (int s = 0; s < sentences.Count; s++)
         {
             var (tags, probs) = _decoder.Decode(logits[s], sentences[s].Count);
-            output[s] = [.. ToSpans(tags, probs)];
+            var spans = new SpanCollector(model.Labels);
+            for (int t = 0; t < tags.Length; t++) spans.Add(tags[t], probs[t]);
+            spans.End();
+            output[s] = [.. spans.Found];
         }
         return output;
     }
 
-    private IEnumerable<WordSpan> ToSpans(int[] tags, float[] probs)
+    /// <summary>Name spans of one sentence of any length, in order, the same as <see cref="Spans"/>
+    /// gives it alone. Its windows run in text order, a batch at a time (the widths those of
+    /// <see cref="Logits"/>, whose sort leaves only a sentence's last window shorter; a window's logits
+    /// do not depend on the other rows of its batch), and their logits are decoded as they come
+    /// (<see cref="BioPath"/>): one speaker turn of millions of words holds one batch of logits and its
+    /// undecided words, and a word's text only while its batch is featurised.</summary>
+    public IEnumerable<WordSpan> SpansOf(IReadOnlyList<string> words)
     {
-        int start = -1;
-        string type = "";
-        double sum = 0;
-        for (int t = 0; t <= tags.Length; t++)
+        var chunks = Windows(0, words.Count).ToList();
+        var path = _decoder.Start();
+        var spans = new SpanCollector(model.Labels);
+        Action<int, float> decided = spans.Add;
+        for (int i = 0; i < chunks.Count;)
         {
-            string label = t < tags.Length ? model.Labels[tags[t]] : "O";
-            bool inside = label.StartsWith("I-", StringComparison.Ordinal) && start >= 0 && label[2..] == type;
-            if (inside) { sum += probs[t]; continue; }
-            if (start >= 0) yield return new WordSpan(start, t, Enum.Parse<NameLabel>(type), sum / (t - start));
-            start = -1;
-            if (label == "O") continue;
-            start = t; type = label[2..]; sum = probs[t];
+            int count = BatchSize(chunks, i);
+            var logits = RunBatch([words], chunks, i, count);
+            for (int b = 0; b < count; b++)
+            {
+                var core = Core(logits, chunks[i].Length, b, chunks[i + b]);
+                for (int w = 0; w < core.Length; w += model.Labels.Count)
+                    path.Push(core.Slice(w, model.Labels.Count), decided);
+            }
+            i += count;
+            if (i == chunks.Count)
+            {
+                path.Finish(decided);
+                spans.End();
+            }
+            foreach (var span in spans.Found) yield return span;
+            spans.Found.Clear();
+        }
+    }
+
+    /// <summary>The windows of one sentence of <paramref name="words"/> words, in text order.</summary>
+    private IEnumerable<Chunk> Windows(int sentence, int words)
+    {
+        if (words <= window) { if (words > 0) yield return new Chunk(sentence, 0, words, 0, words); yield break; }
+        int stride = window - 2 * overlap;
+        for (int start = 0; ; start += stride)
+        {
+            int end = Math.Min(words, start + window);
+            yield return new Chunk(sentence, start, end - start, start == 0 ? 0 : start + overlap, end == words ? words : end - overlap);
+            if (end == words) yield break;
+        }
+    }
+
+    /// <summary>How many windows from <paramref name="i"/> on share one batch. Rows of a batch are
+    /// padded to its first (longest): take only windows at least 3/4 as long.</summary>
+    private int BatchSize(List<Chunk> chunks, int i)
+    {
+        int width = chunks[i].Length;
+        int limit = Math.Max(1, Math.Min(chunks.Count - i, batchWords / Math.Max(1, width)));
+        int count = 1;
+        while (count < limit && chunks[i + count].Length * 4 >= width * 3) count++;
+        return count;
+    }
+
+    /// <summary>Logits of windows <paramref name="i"/> to <paramref name="i"/> + <paramref name="count"/> - 1, padded to the first one's length.</summary>
+    private float[] RunBatch(IReadOnlyList<IReadOnlyList<string>> sentences, List<Chunk> chunks, int i, int count)
+    {
+        int width = chunks[i].Length;
+        var features = new long[count * width * model.FeatureSlots];
+        var pieces = new long[count * width * PieceEncoder.Slots];
+        for (int b = 0; b < count; b++)
+        {
+            var c = chunks[i + b];
+            model.Featurize(sentences[c.Sentence], c.Start, c.Length,
+                features.AsSpan(b * width * model.FeatureSlots), pieces.AsSpan(b * width * PieceEncoder.Slots));
+        }
+        return model.Run(features, pieces, count, width);
+    }
+
+    /// <summary>The logits of the core words of row <paramref name="row"/> of a batch <paramref name="width"/> words wide.</summary>
+    private ReadOnlySpan<float> Core(float[] logits, int width, int row, Chunk c)
+    {
+        int labels = model.Labels.Count;
+        return logits.AsSpan((row * width + (c.CoreStart - c.Start)) * labels, (c.CoreEnd - c.CoreStart) * labels);
+    }
+
+    /// <summary>Turns decoded tags, word by word, into spans: a B-X and the I-X after it, with the mean
+    /// probability of their tags.</summary>
+    private sealed class SpanCollector(IReadOnlyList<string> labels)
+    {
+        private int _word, _start = -1;
+        private string _type = "";
+        private double _sum;
+
+        public List<WordSpan> Found { get; } = [];
+
+        public void Add(int tag, float prob)
+        {
+            string label = labels[tag];
+            int t = _word++;
+            if (label.StartsWith("I-", StringComparison.Ordinal) && _start >= 0 && label[2..] == _type) { _sum += prob; return; }
+            Close(t);
+            if (label == "O") return;
+            _start = t; _type = label[2..]; _sum = prob;
+        }
+
+        public void End() => Close(_word);
+
+        private void Close(int t)
+        {
+            if (_start >= 0) Found.Add(new WordSpan(_start, t, Enum.Parse<NameLabel>(_type), _sum / (t - _start)));
+            _start = -1;
         }
     }
 }

@@ -20,7 +20,8 @@ public sealed class WordFeatures(int hashRows, NameLexicon? lexicon = null)
     private static readonly HashSet<string> SentenceOpeners =
         [".", "!", "?", "\u2026", ":", ";", "\"", "\u201C", "\u201D", "\u201E", "\u00AB", "\u00BB", "(", "-", "\u2013", "\u2014"];
 
-    public static bool IsSentenceInitial(IReadOnlyList<string> words, int i) => i == 0 || SentenceOpeners.Contains(words[i - 1]);
+    /// <summary>Whether a word after <paramref name="previous"/> (null: none) starts a sentence.</summary>
+    public static bool IsSentenceInitial(string? previous) => previous is null || SentenceOpeners.Contains(previous);
 
     /// <summary>Per-code-point lowercase: BMP code points map to their single lowercase code
     /// point; U+0130 (whose lowercase is two code points) and non-BMP code points stay.</summary>

@@ -11,9 +11,12 @@ namespace SwitchTag.Tagging;
 /// of one; offsets always point into the original text.</summary>
 public static class WordTokenizer
 {
-    public static List<WordToken> Tokenize(string text)
+    public static List<WordToken> Tokenize(string text) => [.. new TokenizedText(text)];
+
+    /// <summary>Where the words of <see cref="Tokenize"/> are, without cutting their text out.</summary>
+    public static List<(int Start, int End)> Bounds(string text)
     {
-        var words = new List<WordToken>();
+        var words = new List<(int, int)>();
         if (string.IsNullOrEmpty(text)) return words;
         int i = 0;
         while (i < text.Length)
@@ -41,7 +44,7 @@ public static class WordTokenizer
                 while (i + width <= text.Length && i < text.Length && text.AsSpan(i, width).SequenceEqual(text.AsSpan(start, width)))
                     i += width;
             }
-            words.Add(new WordToken(start, i, text[start..i]));
+            words.Add((start, i));
         }
         return words;
     }

@@ -259,6 +259,26 @@ public class HeadingBuilderTests
     }
 
     [Fact]
+    public void A_person_of_two_words_named_exactly_as_a_region_goes_to_review()
+    {
+        // BR-MG Minas Gerais as the shipped regions.tsv gives it (Debian iso-codes).
+        var lexicon = new FakeLexicon(new Dictionary<string, ImmutableArray<PlaceLink>> { ["minas gerais"] = [Region("Minas Gerais", "BR", "BR-MG")] });
+        var result = Build(lexicon, ("Minas Gerais", NameLabel.PER, "pt"), ("Hanna Szwarc", NameLabel.PER, "pl"));
+        Assert.Equal(["Hanna Szwarc"], result.Headings.Select(h => h.Name).ToArray());
+        Assert.Contains("also the name of a place", Assert.Single(result.Review).Reason);
+    }
+
+    [Fact]
+    public void A_person_holding_a_lower_case_word_that_is_no_particle_goes_to_review()
+    {
+        // "van" is a Dutch name particle (src/SwitchTag.Core/Languages/nl/particles.txt); "dalla mattina"
+        // is Italian for "from the morning".
+        var result = Build(Fixture.Lexicon(), ("Cucivo cappotti dalla mattina", NameLabel.PER, "it"), ("Jan van Dijk", NameLabel.PER, "nl"));
+        Assert.Equal(["Jan van Dijk"], result.Headings.Select(h => h.Name).ToArray());
+        Assert.Contains("cappotti", Assert.Single(result.Review).Reason);
+    }
+
+    [Fact]
     public void An_accented_name_is_not_linked_to_a_village_spelt_plainly()
     {
         // GeoNames cities1000 row 3030529 (the shipped gazetteer's source, models/gazetteer.md): Bras, FR, 1,888 people; Brás is a district of São Paulo (from memory).

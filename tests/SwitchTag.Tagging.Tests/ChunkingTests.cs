@@ -39,4 +39,16 @@ public class ChunkingTests
         var seams = Enumerable.Range(0, words.Count / 24).Select(k => 40 + 24 * k).ToList();
         Assert.Contains(chunked, s => seams.Any(q => s.Start < q && q < s.End));
     }
+
+    [Fact]
+    public void One_long_sentence_tagged_window_by_window_gives_the_spans_of_the_whole()
+    {
+        // Several batches of windows (36 windows of 56 words per batch of 2048 words), so the
+        // decoder runs across batch seams as well as window seams.
+        var words = LongInput(4000);
+        var tagger = new SequenceTagger(Models.Ner, window: 56, overlap: 16);
+        var whole = tagger.Spans([words])[0];
+        Assert.NotEmpty(whole);
+        Assert.Equal(whole, tagger.SpansOf(words));
+    }
 }

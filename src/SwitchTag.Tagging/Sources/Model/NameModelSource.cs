@@ -8,7 +8,7 @@ using SwitchTag.Lexicon;
 namespace SwitchTag.Tagging.Sources.Model;
 
 /// <summary>Names the shipped model tags in the turn's words. Mentions in scripts the model never saw
-/// in training are dropped (<see cref="TrainedScripts"/>). The model reads a whole turn at once but
+/// in training are dropped (<see cref="TrainedScripts"/>). The model reads a whole turn (window by window, <see cref="SequenceTagger.SpansOf"/>) but
 /// learnt from single sentences, so a span running over a sentence end ("Paco. Paco", "Stanley.
 /// Stanley Kowalczyk") is cut there (<see cref="Pieces"/>).</summary>
 public sealed class NameModelSource(NerModel model) : INameSource
@@ -21,9 +21,9 @@ public sealed class NameModelSource(NerModel model) : INameSource
     {
         if (string.IsNullOrEmpty(turnText)) return [];
         if (spans.IsDefault) spans = [];
-        var words = WordTokenizer.Tokenize(turnText);
+        var words = new TokenizedText(turnText);
         var mentions = ImmutableArray.CreateBuilder<Mention>();
-        foreach (var s in _tagger.Spans([words.Select(w => w.Text).ToArray()])[0])
+        foreach (var s in _tagger.SpansOf(words.Texts))
         {
             foreach (var (from, to) in Pieces(words, s.Start, s.End, turnText))
             {
