@@ -3,7 +3,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Text;
 using SwitchTag.LanguageId.Model;
-using SwitchTag.LanguageId.Profiles;
+using SwitchTag.LanguageId.Text;
 using SwitchTag.LanguageId.Text;
 using SwitchTag.Core.Languages;
 
