@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using SwitchTag.Lexicon;
+using SwitchTag.Core.Languages;
 
 // Converts a GeoNames cities dump into the compact gazetteer file and prints what went in, the
 // file's size and how long loading it takes (best of five loads after one warm-up).
@@ -97,7 +98,7 @@ static bool MeasureFind(string path, string? textFiles)
     var g = Gazetteer.Load(path);
     foreach (var file in textFiles.Split(':'))
     {
-        var language = Path.GetFileNameWithoutExtension(file);
+        var language = new LanguageCode(Path.GetFileNameWithoutExtension(file));
         var lines = File.ReadAllLines(file);
         int matches = 0;
         var clock = Stopwatch.StartNew();

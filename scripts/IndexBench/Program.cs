@@ -8,6 +8,7 @@ using SwitchTag.Indexing;
 using SwitchTag.Output;
 using SwitchTag.Pipeline;
 using SwitchTag.Tagging;
+using SwitchTag.Core.Languages;
 
 // End-to-end throughput of `switchtag index` on one core: the demo interviews read from disk, run
 // through every stage and written out (all outputs and the collection index), repeated until each
@@ -67,11 +68,11 @@ void StageTimes()
         var transcript = TranscriptFile.Read(file).Transcript!;
         t[0] += Lap();
         var turns = TurnBuilder.Build(transcript);
-        string main = MainLanguage.Detect(pipeline.Languages, turns);
+        var main = MainLanguage.Detect(pipeline.Languages, turns);
         t[1] += Lap();
         var spans = turns.Select(x => pipeline.Languages.Segment(x.Text, main)).ToImmutableArray();
         t[2] += Lap();
-        var mentions = turns.SelectMany((x, i) => pipeline.Names.Tag(i, x.Text, spans[i])).ToImmutableArray();
+        var mentions = turns.SelectMany((x, i) => pipeline.Names.Tag(x.Id, x.Text, spans[i])).ToImmutableArray();
         t[3] += Lap();
         var index = new IndexBuilder(pipeline.Lexicon).Build(transcript, turns, main, spans, mentions);
         t[4] += Lap();

@@ -89,7 +89,7 @@ internal static class StressCases
             Report("turns");
             var languages = pipeline.Languages.SegmentInterview(turns, null);
             Report("languages");
-            var mentions = turns.SelectMany((t, i) => pipeline.Names.Tag(i, t.Text, languages.Spans[i])).ToImmutableArray();
+            var mentions = turns.SelectMany((t, i) => pipeline.Names.Tag(t.Id, t.Text, languages.Spans[i])).ToImmutableArray();
             Report("names");
             var index = new SwitchTag.Indexing.IndexBuilder(pipeline.Lexicon, pipeline.Decisions, checkLanguageBelow: SwitchTag.LanguageId.Interview.StretchCalibration.CheckBelow)
                 .Build(transcript, turns, languages.MainLanguage, languages.Spans, mentions);

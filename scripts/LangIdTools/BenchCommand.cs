@@ -3,6 +3,7 @@ using System.Text;
 using SwitchTag.LanguageId.Model;
 using SwitchTag.LanguageId.Segmentation;
 using SwitchTag.LanguageId.Training;
+using SwitchTag.Core.Languages;
 
 namespace LangIdTools;
 
@@ -26,7 +27,7 @@ public static class BenchCommand
         long bytes = lines.Sum(t => (long)Encoding.UTF8.GetByteCount(t));
         Console.WriteLine($"held-out lines: {lines.Count:N0}, {bytes / 1048576.0:F2} MB UTF-8; machine load average {File.ReadAllText("/proc/loadavg").Split(' ')[0]} on {Environment.ProcessorCount} cores");
         Report("Identify", bytes, 3, () => { foreach (var t in lines) segmenter.Identify(t); });
-        Report("Segment (main en)", bytes, 3, () => { foreach (var t in lines) segmenter.Segment(t, "en"); });
+        Report("Segment (main en)", bytes, 3, () => { foreach (var t in lines) segmenter.Segment(t, new LanguageCode("en")); });
         // Interviews: the held-out lines in chunks of 200 (the corpus is ordered by language, so
         // most chunks hold one language and some two), and the Miami dev conversations as they are.
         var interviews = lines.Chunk(200).Select(c => (IReadOnlyList<string>)c).ToList();
@@ -44,7 +45,7 @@ public static class BenchCommand
         var big = BigLine(lines, 1 << 20);
         long bigBytes = Encoding.UTF8.GetByteCount(big);
         Report("Identify, one 1 MB line", bigBytes, 3, () => segmenter.Identify(big));
-        Report("Segment, one 1 MB line", bigBytes, 3, () => segmenter.Segment(big, "en"));
+        Report("Segment, one 1 MB line", bigBytes, 3, () => segmenter.Segment(big, new LanguageCode("en")));
         return 0;
     }
 

@@ -2,6 +2,7 @@ using System.Diagnostics;
 using System.Text;
 using SwitchTag.LanguageId.Segmentation;
 using SwitchTag.LanguageId.Training;
+using SwitchTag.Core.Languages;
 
 namespace LangIdTools;
 
@@ -61,7 +62,7 @@ public static class EvalCommand
         var ours = CodeSwitchSegmenter.Load(modelPath);
         foreach (var turn in SwitchSynthesizer.Build(LidCorpus.Load(dataRoot), Split.Calibration, 300, 3))
         {
-            var spans = ours.Segment(turn.Text, "en");
+            var spans = ours.Segment(turn.Text, new LanguageCode("en"));
             var score = new SwitchScore();
             score.Add(turn, spans);
             if (score.F1 < 1)
@@ -168,7 +169,7 @@ public static class EvalCommand
         var byCode = new Dictionary<string, SwitchScore>();
         foreach (var turn in turns)
         {
-            var spans = ours.Segment(turn.Text, "en");
+            var spans = ours.Segment(turn.Text, new LanguageCode("en"));
             all.Add(turn, spans);
             if (!byCode.TryGetValue(turn.InsertedCode, out var s)) byCode[turn.InsertedCode] = s = new SwitchScore();
             s.Add(turn, spans);
@@ -200,7 +201,7 @@ public static class EvalCommand
         var common = sets.Where(s => lingua.Codes.Contains(s.Code)).SelectMany(s => s.Lines).ToList();
         long bytes = common.Sum(t => (long)Encoding.UTF8.GetByteCount(t));
         var oursIdentify = Throughput.Measure(bytes, 1, () => { foreach (var t in common) ours.Identify(t); });
-        var oursSegment = Throughput.Measure(bytes, 1, () => { foreach (var t in common) ours.Segment(t, "en"); });
+        var oursSegment = Throughput.Measure(bytes, 1, () => { foreach (var t in common) ours.Segment(t, new LanguageCode("en")); });
         var linguaDetect = Throughput.Measure(bytes, 1, () => { foreach (var t in common) lingua.Detect(t); });
         Console.WriteLine($"## Throughput on the same {common.Count} held-out lines ({bytes / 1048576.0:F2} MB UTF-8), one thread");
         Console.WriteLine();

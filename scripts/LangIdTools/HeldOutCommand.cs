@@ -1,5 +1,6 @@
 using SwitchTag.LanguageId.Segmentation;
 using SwitchTag.LanguageId.Training;
+using SwitchTag.Core.Languages;
 
 namespace LangIdTools;
 
@@ -18,7 +19,7 @@ public static class HeldOutCommand
         Console.WriteLine($"mean of {rows.Count} classes: lines {P(Mean(rows.Select(r => r.Lines)))}  2 words {P(Mean(rows.Select(r => r.Pairs)))}  words {P(Mean(rows.Select(r => r.Words)))}");
         var score = new SwitchScore();
         foreach (var turn in SwitchSynthesizer.Build(corpus, Split.Evaluation, EvalCommand.SyntheticTurns, EvalCommand.SyntheticSeed))
-            score.Add(turn, model.Segment(turn.Text, "en"));
+            score.Add(turn, model.Segment(turn.Text, new LanguageCode("en")));
         Console.WriteLine($"synthetic switch points: P {score.Precision:F3} R {score.Recall:F3} F1 {score.F1:F3} word accuracy {score.WordAccuracy:F3}");
         return 0;
     }

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using Lingua;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace LangIdTools;
 
@@ -25,7 +26,7 @@ public sealed class LinguaReference
 
     public ImmutableArray<LanguageSpan> Segment(string text) =>
         _detector.DetectMultipleLanguagesOf(text)
-            .Select(r => { var (start, length) = r.Range.GetOffsetAndLength(text.Length); return new LanguageSpan(new CharSpan(start, start + length), Code(r.Language), 1); })
+            .Select(r => { var (start, length) = r.Range.GetOffsetAndLength(text.Length); return new LanguageSpan(new CharSpan(start, start + length), new LanguageCode(Code(r.Language)), 1); })
             .ToImmutableArray();
 
     private static string Code(Language language)

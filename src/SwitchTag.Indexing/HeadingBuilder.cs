@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
@@ -9,7 +10,7 @@ namespace SwitchTag.Indexing;
 /// <summary>Headings found for one interview: the headings, the heading id of every mention (null
 /// when held for review) and the review items; <see cref="Mentions"/>, when set, are the mentions
 /// with the labels the interview-wide vote gave them (<see cref="LabelVote"/>).</summary>
-public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableArray<string?> HeadingOf, ImmutableArray<ReviewItem> Review)
+public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableArray<HeadingId?> HeadingOf, ImmutableArray<ReviewItem> Review)
 {
     public ImmutableArray<Mention> Mentions { get; init; }
 }
@@ -62,7 +63,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         ImmutableArray<Mention> mentions,
         ImmutableArray<TimeRange> times,
         ImmutableArray<Turn> turns,
-        IReadOnlySet<int>? accepted = null)
+        IReadOnlySet<MentionId>? accepted = null)
     {
         int n = mentions.Length;
         var keys = new string[n];
@@ -95,11 +96,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         }
         for (int i = 0; i < n; i++)
         {
-            if (accepted?.Contains(i) == true) continue;
-            var reason = ReviewReason(mentions[i], keys[i], places[i], respelled[i], labelsOfSurface[keys[i]], lowerWords, turns[mentions[i].Turn].Text);
+            if (accepted?.Contains(new MentionId(i)) == true) continue;
+            var reason = ReviewReason(mentions[i], keys[i], places[i], respelled[i], labelsOfSurface[keys[i]], lowerWords, turns[mentions[i].Turn.Index].Text);
             if (reason is null) continue;
             held[i] = true;
-            review.Add(new ReviewItem(i, reason));
+            review.Add(new ReviewItem(new MentionId(i), reason));
         }
 
         var groups = new List<Group>();
@@ -107,20 +108,20 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         GroupPersons(mentions, keys, held, groups, turns);
         GroupByKey(mentions, keys, held, groups, NameLabel.ORG);
 
-        var headingOf = new string?[n];
+        var headingOf = new HeadingId?[n];
         var headings = new List<Heading>();
-        var usedIds = new HashSet<string>(StringComparer.Ordinal);
-        var idOf = new Dictionary<Group, string>();
+        var usedIds = new HashSet<HeadingId>();
+        var idOf = new Dictionary<Group, HeadingId>();
         foreach (var g in groups)
         {
             var heading = ToHeading(g, mentions, times, turns, places, usedIds);
-            foreach (int i in heading.Mentions) headingOf[i] = heading.Id;
+            foreach (var m in heading.Mentions) headingOf[m.Index] = heading.Id;
             idOf[g] = heading.Id;
             headings.Add(heading);
         }
         for (int k = 0; k < groups.Count; k++)
             if (groups[k].Possible.Count > 0)
-                headings[k] = headings[k] with { PossiblySame = [.. groups[k].Possible.Select(g => idOf[g]).Order(StringComparer.Ordinal)] };
+                headings[k] = headings[k] with { PossiblySame = [.. groups[k].Possible.Select(g => idOf[g]).Order()] };
         var ordered = HeadingOrder.Sort(headings);
         return new HeadingResult(ordered, [.. headingOf], review.ToImmutable()) { Mentions = mentions };
     }
@@ -411,7 +412,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             foreach (int j in b.Members)
             {
                 if (mentions[i].Turn != mentions[j].Turn) continue;
-                var text = turns[mentions[i].Turn].Text;
+                var text = turns[mentions[i].Turn.Index].Text;
                 int from = Math.Min(mentions[i].CharEnd, mentions[j].CharEnd), to = Math.Max(mentions[i].CharStart, mentions[j].CharStart);
                 if (from >= to || Words(text[from..to]).Length <= TieWords) return true;
             }
@@ -456,19 +457,19 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     private static string[] Words(string text) => text.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
 
     private static Heading ToHeading(Group g, ImmutableArray<Mention> mentions, ImmutableArray<TimeRange> times,
-        ImmutableArray<Turn> turns, ImmutableArray<PlaceLink>[] places, HashSet<string> usedIds)
+        ImmutableArray<Turn> turns, ImmutableArray<PlaceLink>[] places, HashSet<HeadingId> usedIds)
     {
         var members = g.Members.OrderBy(i => times[i].Start).ThenBy(i => i).ToImmutableArray();
         var variants = members.Select(i => mentions[i].Text).Distinct(StringComparer.Ordinal).ToImmutableArray();
         string name = g.KeepsSpokenName || g.Place is null ? DisplayName(g.Label, members, mentions) : g.Place.Name;
         var alternatives = members.SelectMany(i => places[i]).Where(p => p.Key != g.Place?.Key)
             .DistinctBy(p => p.Key).OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId).ThenBy(p => p.Key, StringComparer.Ordinal).ToImmutableArray();
-        var speakers = members.Select(i => turns[mentions[i].Turn].Speaker).OfType<string>().Distinct(StringComparer.Ordinal).ToImmutableArray();
+        var speakers = members.Select(i => turns[mentions[i].Turn.Index].Speaker).OfType<string>().Distinct(StringComparer.Ordinal).ToImmutableArray();
         double confidence = Math.Round(members.Average(i => mentions[i].Confidence), 4);
         var source = members.Any(i => mentions[i].Source == MentionSource.Authority) ? MentionSource.Authority
             : g.Place is not null ? MentionSource.Gazetteer
             : mentions[members[0]].Source;
-        return new Heading(UniqueId(g, usedIds), g.Label, name, variants, g.Place, alternatives, members, speakers, confidence, source);
+        return new Heading(UniqueId(g, usedIds), g.Label, name, variants, g.Place, alternatives, [.. members.Select(i => new MentionId(i))], speakers, confidence, source);
     }
 
     /// <summary>The most frequent surface (a multi-word one for persons when there is one), ties to
@@ -485,14 +486,12 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             .First().Key;
     }
 
-    public static string IdPrefix(NameLabel label) => label.ToString().ToLowerInvariant();
-
-    private static string UniqueId(Group g, HashSet<string> used)
+    private static HeadingId UniqueId(Group g, HashSet<HeadingId> used)
     {
         string slug = string.Join('-', g.Key.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries));
-        string id = $"{IdPrefix(g.Label)}-{(slug.Length == 0 ? "x" : slug)}";
-        string unique = id;
-        for (int k = 2; !used.Add(unique); k++) unique = $"{id}-{k}";
+        if (slug.Length == 0) slug = "x";
+        var unique = HeadingId.For(g.Label, slug);
+        for (int k = 2; !used.Add(unique); k++) unique = HeadingId.For(g.Label, $"{slug}-{k}");
         return unique;
     }
 }

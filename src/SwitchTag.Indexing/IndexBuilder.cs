@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing.Decisions;
@@ -26,7 +27,7 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         var valid = ImmutableArray.CreateBuilder<Mention>();
         foreach (var m in mentions.IsDefault ? [] : mentions)
         {
-            if (m.Turn >= 0 && m.Turn < turns.Length && m.CharStart >= 0 && m.CharEnd > m.CharStart && m.CharEnd <= turns[m.Turn].Text.Length)
+            if (m.Turn.Index < turns.Length && m.CharEnd > m.CharStart && m.CharEnd <= turns[m.Turn.Index].Text.Length)
                 valid.Add(m);
             else
                 diagnostics.Add(new Diagnostic(At(transcript, turns, m.Turn), Severity.Warning,
@@ -35,8 +36,8 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         var ordered = valid.OrderBy(m => m.Turn).ThenBy(m => m.CharStart).ThenBy(m => m.CharEnd).ToImmutableArray();
 
         var decisionStage = new DecisionStage(decisions, transcript.Id);
-        var (decided, accepted, mentionOutcomes) = decisionStage.ApplyToMentions(ordered, m => aligner.Align(turns[m.Turn], m.CharStart, m.CharEnd));
-        var times = decided.Select(m => aligner.Align(turns[m.Turn], m.CharStart, m.CharEnd)).ToImmutableArray();
+        var (decided, accepted, mentionOutcomes) = decisionStage.ApplyToMentions(ordered, m => aligner.Align(turns[m.Turn.Index], m.CharStart, m.CharEnd));
+        var times = decided.Select(m => aligner.Align(turns[m.Turn.Index], m.CharStart, m.CharEnd)).ToImmutableArray();
         var grouped = new HeadingBuilder(lexicon, reviewBelow).Build(decided, times, turns, accepted);
         var (finalMentions, finalTimes, headings, headingOutcomes) = decisionStage.ApplyToHeadings(grouped.Mentions.IsDefault ? decided : grouped.Mentions, times, grouped);
         var outcomes = mentionOutcomes.Zip(headingOutcomes, (m, h) => m with { Applied = m.Applied + h.Applied }).ToImmutableArray();
@@ -52,14 +53,14 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         var duration = (transcript.Cues.IsEmpty ? Timecode.Zero : transcript.Cues.Max(c => c.Time.End)) - Timecode.Zero;
 
         var foreign = safeSpans
-            .SelectMany((list, t) => list.Where(s => WorklistBuilder.IsForeign(s.Language, mainLanguage)).Select(s => new ForeignSpan(t, new CharSpan(s.CharStart, s.CharEnd), s.Language)))
+            .SelectMany((list, t) => list.Where(s => WorklistBuilder.IsForeign(s.Language, mainLanguage)).Select(s => new ForeignSpan(new TurnId(t), new CharSpan(s.CharStart, s.CharEnd), s.Language)))
             .ToImmutableArray();
         return new InterviewIndex(transcript, mainLanguage, duration, turns, timedSpans, LanguageStatistics.Compute(turns, timedSpans), foreign, indexed,
             headings.Headings, worklist, headings.Review, diagnostics.ToImmutable(), outcomes);
     }
 
-    private static SourceLine At(Transcript transcript, ImmutableArray<Turn> turns, int turn) =>
-        turn >= 0 && turn < turns.Length && !turns[turn].Cues.IsEmpty
-            ? transcript.Cues[turns[turn].Cues[0].CueIndex].At
+    private static SourceLine At(Transcript transcript, ImmutableArray<Turn> turns, TurnId turn) =>
+        turn.Index < turns.Length && !turns[turn.Index].Cues.IsEmpty
+            ? transcript.Cues[turns[turn.Index].Cues[0].CueIndex].At
             : new SourceLine(transcript.Source.Path, 1);
 }

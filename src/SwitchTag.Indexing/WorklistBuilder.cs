@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Text;
 using SwitchTag.Core.Languages;
@@ -37,7 +38,7 @@ public static class WorklistBuilder
                     double confidence = Math.Round(ConfidenceOver(list, i, j, start, end), 4);
                     items.Add(new WorklistItem(
                         aligner.Align(turn, start, end), turn.Speaker, span.Language, confidence,
-                        turn.Text[start..end], t, new CharSpan(start, end), WordCount.Of(turn.Text, start, end), confidence < checkBelow));
+                        turn.Text[start..end], new TurnId(t), new CharSpan(start, end), WordCount.Of(turn.Text, start, end), confidence < checkBelow));
                 }
                 i = j + 1;
             }

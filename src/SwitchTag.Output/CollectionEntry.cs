@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 using SwitchTag.Output.Report;
 using SwitchTag.Core.Languages;
@@ -18,20 +19,20 @@ public sealed record CollectionEntry(string Interview, string Folder, LanguageCo
         return new(
             index.Transcript.Id, folder, index.MainLanguage, index.Duration,
             index.Headings.Select(h => new CollectionHeading(h.Id, h.Label, h.Name, h.Place,
-                h.Mentions.Select(i => index.Mentions[i].Time.Start).ToImmutableArray(), h.Variants)).ToImmutableArray(),
-            index.Mentions.Select((m, i) => new CollectionMention(m.Time.Start, m.Mention, index.Turns[m.Mention.Turn].Speaker, m.HeadingId,
-                reasons.GetValueOrDefault(i), index.Turns[m.Mention.Turn].Text)).ToImmutableArray(),
+                h.Mentions.Select(m => index.MentionAt(m).Time.Start).ToImmutableArray(), h.Variants)).ToImmutableArray(),
+            index.Mentions.Select((m, i) => new CollectionMention(m.Time.Start, m.Mention, index.TurnAt(m.Mention.Turn).Speaker, m.HeadingId,
+                reasons.GetValueOrDefault(new MentionId(i)), index.TurnAt(m.Mention.Turn).Text)).ToImmutableArray(),
             index.Decisions.Select(o => o.Decision).ToImmutableArray());
     }
 }
 
-public sealed record CollectionHeading(string Id, NameLabel Label, string Name, PlaceLink? Place, ImmutableArray<Timecode> Times,
+public sealed record CollectionHeading(HeadingId Id, NameLabel Label, string Name, PlaceLink? Place, ImmutableArray<Timecode> Times,
     ImmutableArray<string> Variants = default);
 
 /// <summary>One mention as the review page shows it: under a heading, or held for review with the reason.
 /// Its sentence is cut from the turn's text when the page is written (<see cref="Context"/>): kept as two
 /// strings per mention, the sentences of one 200k-cue turn took some 300 MB until the run's end.</summary>
-public sealed record CollectionMention(Timecode Time, Mention Mention, string? Speaker, string? HeadingId, string? ReviewReason, string TurnText)
+public sealed record CollectionMention(Timecode Time, Mention Mention, string? Speaker, HeadingId? HeadingId, string? ReviewReason, string TurnText)
 {
     public string Text => Mention.Text;
 

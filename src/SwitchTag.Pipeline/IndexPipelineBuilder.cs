@@ -144,7 +144,7 @@ public sealed class IndexPipelineBuilder
         LanguageCode? main = null;
         if (_mainLanguage is not null)
         {
-            if (!segmenter.Languages.Any(l => l == _mainLanguage))
+            if (!segmenter.Languages.Any(l => l.Code == _mainLanguage))
                 return PipelineBuild.Failed($"--main \"{_mainLanguage}\" is not a supported language code; switchtag langid --languages lists them");
             main = new LanguageCode(_mainLanguage);
         }

@@ -27,7 +27,7 @@ public static class LanguageIdEvaluation
             {
                 if (string.IsNullOrWhiteSpace(line)) continue;
                 n++;
-                if (segmenter.Identify(line).Language == code) right++;
+                if (segmenter.Identify(line).Language.Code == code) right++;
             }
             scores[code] = new LanguageScore(n == 0 ? 0 : (double)right / n, n);
         }

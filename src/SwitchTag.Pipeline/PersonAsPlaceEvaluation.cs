@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using System.Text.RegularExpressions;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Pipeline.Models;
@@ -60,8 +61,8 @@ public static partial class PersonAsPlaceEvaluation
                 var text = string.Join(' ', s.Words);
                 if (text.Length == 0) continue;
                 ImmutableArray<LanguageSpan> spans = [new LanguageSpan(new CharSpan(0, text.Length), language, 1)];
-                var plainPlaces = Places(plain.Tag(0, text, spans));
-                var cascadePlaces = Places(cascade.Tag(0, text, spans));
+                var plainPlaces = Places(plain.Tag(new TurnId(0), text, spans));
+                var cascadePlaces = Places(cascade.Tag(new TurnId(0), text, spans));
                 for (int k = 0; k < s.Words.Count; k++)
                 {
                     if (!s.Tags[k].EndsWith("-PER", StringComparison.Ordinal)) continue;

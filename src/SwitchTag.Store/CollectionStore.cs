@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Globalization;
 using Microsoft.Data.Sqlite;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
 using SwitchTag.Core.Text;
@@ -152,7 +153,7 @@ public sealed class CollectionStore : IDisposable
         {
             long interview = r.GetInt64(0);
             string id = r.GetString(1);
-            Add(headings, interview, new CollectionHeadingUse(id, Enum.Parse<NameLabel>(r.GetString(2)), r.GetString(3), StoredPlace.Read(r, 4),
+            Add(headings, interview, new CollectionHeadingUse(new HeadingId(id), Enum.Parse<NameLabel>(r.GetString(2)), r.GetString(3), StoredPlace.Read(r, 4),
                 times.TryGetValue((interview, id), out var t) ? t.ToImmutable() : [],
                 variants.TryGetValue((interview, id), out var v) ? v.ToImmutable() : []));
         });
@@ -178,10 +179,10 @@ public sealed class CollectionStore : IDisposable
             int turn = r.GetInt32(1);
             if (!turns.TryGetValue((interview, turn), out var t)) turns[(interview, turn)] = t = TurnOf(interview, turn);
             if (t is not { } found) return; // a mention without its turn is left out
-            var mention = new Mention(turn, new CharSpan(r.GetInt32(2), r.GetInt32(3)), r.GetString(5), Enum.Parse<NameLabel>(r.GetString(6)),
+            var mention = new Mention(new TurnId(turn), new CharSpan(r.GetInt32(2), r.GetInt32(3)), r.GetString(5), Enum.Parse<NameLabel>(r.GetString(6)),
                 new LanguageCode(r.GetString(7)), r.GetDouble(8), new MentionSource(r.GetString(9)));
             Add(mentions, interview, new StoredMention(new Timecode(r.GetInt64(4)), mention, found.Speaker,
-                r.IsDBNull(10) ? null : r.GetString(10), r.IsDBNull(11) ? null : r.GetString(11), found.Text));
+                r.IsDBNull(10) ? null : new HeadingId(r.GetString(10)), r.IsDBNull(11) ? null : r.GetString(11), found.Text));
         });
         var decisions = new Dictionary<long, ImmutableArray<string>.Builder>();
         Each("SELECT interview_id, decision FROM decisions ORDER BY interview_id, position", r => Add(decisions, r.GetInt64(0), r.GetString(1)));

@@ -1,5 +1,6 @@
 using Microsoft.Data.Sqlite;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 
 namespace SwitchTag.Store;
 
@@ -32,11 +33,11 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
         var cue = Command("INSERT INTO cues VALUES ($i, $t, $c, $cs, $ce, $a, $b, $n)", "$t", "$c", "$cs", "$ce", "$a", "$b", "$n");
         foreach (var t in index.Turns)
         {
-            Run(turn, t.Index, t.Speaker, t.SpeakerLabel, t.Time.Start.Milliseconds, t.Time.End.Milliseconds, t.Text);
+            Run(turn, t.Id.Index, t.Speaker, t.SpeakerLabel, t.Time.Start.Milliseconds, t.Time.End.Milliseconds, t.Text);
             foreach (var c in t.Cues)
             {
                 var source = index.Transcript.Cues[c.CueIndex];
-                Run(cue, t.Index, c.CueIndex, c.CharStart, c.CharEnd, source.Time.Start.Milliseconds, source.Time.End.Milliseconds, source.At.Line);
+                Run(cue, t.Id.Index, c.CueIndex, c.CharStart, c.CharEnd, source.Time.Start.Milliseconds, source.Time.End.Milliseconds, source.At.Line);
             }
         }
     }
@@ -61,16 +62,16 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
         {
             var h = index.Headings[p];
             var place = h.Place;
-            Run(heading, h.Id, p, h.Label.ToString(), h.Name, place?.GeonameId, place?.Name, place?.Latitude, place?.Longitude,
+            Run(heading, h.Id.Value, p, h.Label.ToString(), h.Name, place?.GeonameId, place?.Name, place?.Latitude, place?.Longitude,
                 place?.Country, place?.Population, h.Confidence, h.Source.Name);
-            for (int v = 0; v < h.Variants.Length; v++) Run(variant, h.Id, v, h.Variants[v]);
+            for (int v = 0; v < h.Variants.Length; v++) Run(variant, h.Id.Value, v, h.Variants[v]);
         }
     }
 
     private void WriteMentions(InterviewIndex index)
     {
         var reasons = index.Review.ToDictionary(r => r.Mention, r => r.Reason);
-        var rank = new Dictionary<int, int>();
+        var rank = new Dictionary<MentionId, int>();
         foreach (var h in index.Headings)
             for (int r = 0; r < h.Mentions.Length; r++) rank[h.Mentions[r]] = r;
         var mention = Command("INSERT INTO mentions VALUES ($i, $m, $t, $cs, $ce, $a, $b, $x, $l, $la, $c, $s, $h, $r, $rv)",
@@ -78,8 +79,9 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
         for (int i = 0; i < index.Mentions.Length; i++)
         {
             var (m, time, headingId) = index.Mentions[i];
-            Run(mention, i, m.Turn, m.CharStart, m.CharEnd, time.Start.Milliseconds, time.End.Milliseconds, m.Text, m.Label.ToString(),
-                m.Language.Code, m.Confidence, m.Source.Name, headingId, rank.TryGetValue(i, out int r) ? r : null, reasons.GetValueOrDefault(i));
+            var id = new MentionId(i);
+            Run(mention, i, m.Turn.Index, m.CharStart, m.CharEnd, time.Start.Milliseconds, time.End.Milliseconds, m.Text, m.Label.ToString(),
+                m.Language.Code, m.Confidence, m.Source.Name, headingId?.Value, rank.TryGetValue(id, out int r) ? r : null, reasons.GetValueOrDefault(id));
         }
     }
 
@@ -89,7 +91,7 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
         for (int n = 0; n < index.Worklist.Length; n++)
         {
             var w = index.Worklist[n];
-            Run(item, n, w.Turn, w.CharStart, w.CharEnd, w.Time.Start.Milliseconds, w.Time.End.Milliseconds, w.Speaker, w.Language.Code, w.Confidence, w.Text);
+            Run(item, n, w.Turn.Index, w.CharStart, w.CharEnd, w.Time.Start.Milliseconds, w.Time.End.Milliseconds, w.Speaker, w.Language.Code, w.Confidence, w.Text);
         }
     }
 
@@ -101,12 +103,12 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
                           "VALUES ($i, $k, $h, $t, $cs, $ce, $l, $a, $b, $x, $terms)", "$k", "$h", "$t", "$cs", "$ce", "$l", "$a", "$b", "$x", "$terms");
         foreach (var h in index.Headings)
             foreach (var name in h.Variants.Prepend(h.Name).Distinct(StringComparer.Ordinal))
-                Run(row, "heading", h.Id, null, null, null, null, null, null, name, SearchTerms.Of(name));
+                Run(row, "heading", h.Id.Value, null, null, null, null, null, null, name, SearchTerms.Of(name));
         foreach (var turn in index.Turns)
         {
             // Cues and language spans are both in text order, spans disjoint: the spans a cue meets
             // start where the previous cue's left off, so one long turn is not cues x spans.
-            var spans = index.Spans[turn.Index];
+            var spans = index.Spans[turn.Id.Index];
             int first = 0;
             foreach (var c in turn.Cues)
             {
@@ -120,7 +122,7 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
                     string piece = turn.Text[from..to];
                     string terms = SearchTerms.Of(piece);
                     if (terms.Length == 0) continue;
-                    Run(row, "text", null, turn.Index, from, to, span.Language.Code, cueTime.Start.Milliseconds, cueTime.End.Milliseconds, piece, terms);
+                    Run(row, "text", null, turn.Id.Index, from, to, span.Language.Code, cueTime.Start.Milliseconds, cueTime.End.Milliseconds, piece, terms);
                 }
             }
         }

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
 
@@ -22,10 +23,10 @@ public sealed record SearchHit(
     string Text,
     string Match,
     LanguageCode Language,
-    int Turn,
+    TurnId Turn,
     int CharStart,
     int CharEnd,
-    string? HeadingId,
+    HeadingId? HeadingId,
     string? Heading,
     PlaceLink? Place,
     double? DistanceKm)
@@ -47,10 +48,10 @@ public sealed record SearchHit(
             w.WriteString("text", Text);
             w.WriteString("match", Match);
             w.WriteString("language", Language.Code);
-            w.WriteNumber("turn", Turn);
+            w.WriteNumber("turn", Turn.Index);
             w.WriteNumber("charStart", CharStart);
             w.WriteNumber("charEnd", CharEnd);
-            w.WriteString("heading", HeadingId);
+            w.WriteString("heading", HeadingId?.Value);
             w.WriteString("headingName", Heading);
             if (Place is null) w.WriteNull("place");
             else

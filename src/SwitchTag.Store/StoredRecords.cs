@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
 
@@ -20,8 +21,8 @@ public sealed record CollectionInterview(string Name, string Folder, LanguageCod
     ImmutableArray<StoredMention> Mentions, ImmutableArray<string> Decisions);
 
 /// <summary>One heading of one interview with the start times of its mentions, in time order, and its variants.</summary>
-public sealed record CollectionHeadingUse(string Id, NameLabel Label, string Name, PlaceLink? Place, ImmutableArray<Timecode> Times, ImmutableArray<string> Variants);
+public sealed record CollectionHeadingUse(HeadingId Id, NameLabel Label, string Name, PlaceLink? Place, ImmutableArray<Timecode> Times, ImmutableArray<string> Variants);
 
 /// <summary>One mention in index order, with its turn's whole text (one string per turn, shared by its
 /// mentions) so a caller can cut the sentence around it.</summary>
-public sealed record StoredMention(Timecode Time, Mention Mention, string? Speaker, string? HeadingId, string? ReviewReason, string TurnText);
+public sealed record StoredMention(Timecode Time, Mention Mention, string? Speaker, HeadingId? HeadingId, string? ReviewReason, string TurnText);

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Stages;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
@@ -44,11 +45,11 @@ public sealed class NameTagger(NameSources sources, NamePrecedence? precedence =
     public static IReadOnlyList<IMentionVeto> ShippedVetoes(Lexicon.Gazetteer gazetteer, NameListSet lists) =>
         [new NotPlaceWordVeto(lists.NotPlaces), new OrdinaryWordVeto(gazetteer, lists.Prepositions)];
 
-    public ImmutableArray<Mention> Tag(int turnIndex, string turnText, ImmutableArray<LanguageSpan> spans)
+    public ImmutableArray<Mention> Tag(TurnId turn, string turnText, ImmutableArray<LanguageSpan> spans)
     {
         if (string.IsNullOrEmpty(turnText)) return [];
         if (spans.IsDefault) spans = [];
-        var standing = _precedence.Resolve(sources.SelectMany(s => s.Find(turnIndex, turnText, spans)));
+        var standing = _precedence.Resolve(sources.SelectMany(s => s.Find(turn, turnText, spans)));
         if (_vetoes.Count == 0) return standing;
         return [.. standing.Where(m => m.Source == MentionSource.Authority || m.Source == MentionSource.Cue || !_vetoes.Any(v => v.Vetoes(m, turnText)))];
     }

@@ -61,6 +61,17 @@ public class LanguageCodeTests
     }
 
     [Fact]
+    public void No_string_becomes_a_code_without_the_constructor_or_TryParse()
+    {
+        // A C# implicit conversion compiles to a static method op_Implicit (C# language reference,
+        // "User-defined explicit and implicit conversion operators"): none may take a string, so a
+        // misspelt code cannot slip in unchecked where a LanguageCode is wanted.
+        Assert.DoesNotContain(typeof(LanguageCode).GetMethods(), m => m.Name is "op_Implicit" or "op_Explicit"
+            && m.ReturnType == typeof(LanguageCode) && m.GetParameters().Single().ParameterType == typeof(string));
+        Assert.Throws<ArgumentException>(() => new LanguageCode("english"));
+    }
+
+    [Fact]
     public void Json_carries_the_plain_code()
     {
         Assert.Equal("\"hsb\"", JsonSerializer.Serialize(new LanguageCode("hsb")));

@@ -1,11 +1,13 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing.Decisions;
 using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output.IndexJson;
 using Xunit;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests;
 
@@ -38,7 +40,7 @@ public class DecisionsTests
         Assert.DoesNotContain(index.Headings, h => h.Label == NameLabel.ORG);
         Assert.Contains(index.Headings, h => h.Label == NameLabel.PER && h.Variants.Contains("Kowalski"));
         Assert.Contains(index.Headings, h => h.Label == NameLabel.LOC && h.Variants.Contains("Florence"));
-        Assert.DoesNotContain(index.Mentions, m => m.Mention.Turn == 2 && m.Mention.Text == "Paris");
+        Assert.DoesNotContain(index.Mentions, m => m.Mention.Turn == new TurnId(2) && m.Mention.Text == "Paris");
         Assert.DoesNotContain(index.Headings, h => h.Name == "Cracow");
     }
 
@@ -51,6 +53,32 @@ public class DecisionsTests
         // The same rows twice in one file: the second copy finds nothing left to do and changes nothing.
         var (doubled, _) = DecisionsFile.Parse("decisions.csv", File + string.Join("\r\n", File.Split("\r\n").Skip(1)));
         Assert.Equal(once, Json(Fixture.Run(doubled)));
+    }
+
+    [Fact]
+    public void Mention_ids_name_the_same_mentions_after_a_rejected_heading_drops_some()
+    {
+        // SCHEMA.md: headings[].mentions are "indices into mentions", review[].mention an "index into
+        // mentions", mentions[].heading "the heading id, or null when held for review". Warsaw is named
+        // first in the fixture, so rejecting it moves every later mention's id.
+        var before = Fixture.Run();
+        var (decisions, problems) = DecisionsFile.Parse("d.csv", "action,interview,label,name,turn,char,value\r\nreject-heading,,LOC,Warsaw,,,\r\n");
+        Assert.Empty(problems);
+        var after = Fixture.Run(decisions);
+        var dropped = before.Headings.Single(h => h.Place?.GeonameId == Fixture.Warsaw.GeonameId).Mentions;
+        Assert.Contains(before.Headings.SelectMany(h => h.Mentions).Concat(before.Review.Select(r => r.Mention)), m => m > dropped.Min() && !dropped.Contains(m));
+        Assert.NotEmpty(before.Review);
+        Assert.Equal(before.Mentions.Length - dropped.Length, after.Mentions.Length);
+
+        static (string, Timecode) Said(InterviewIndex index, MentionId id) => (index.MentionAt(id).Mention.Text, index.MentionAt(id).Time.Start);
+        Assert.Equal(before.Headings.Length - 1, after.Headings.Length);
+        foreach (var h in after.Headings)
+        {
+            Assert.Equal(before.Headings.Single(b => b.Id == h.Id).Mentions.Select(m => Said(before, m)), h.Mentions.Select(m => Said(after, m)));
+            Assert.All(h.Mentions, m => Assert.Equal(h.Id, after.MentionAt(m).HeadingId));
+        }
+        Assert.Equal(before.Review.Select(r => (Said(before, r.Mention), r.Reason)), after.Review.Select(r => (Said(after, r.Mention), r.Reason)));
+        Assert.All(after.Review, r => Assert.Null(after.MentionAt(r.Mention).HeadingId));
     }
 
     [Fact]
@@ -75,7 +103,7 @@ public class DecisionsTests
     [Fact]
     public void A_mention_decision_by_time_survives_renumbered_turns_where_one_by_turn_and_char_does_not()
     {
-        var paris = Fixture.Run().Mentions.Single(m => m.Mention.Turn == 2 && m.Mention.Text == "Paris");
+        var paris = Fixture.Run().Mentions.Single(m => m.Mention.Turn == new TurnId(2) && m.Mention.Text == "Paris");
         string seconds = paris.Time.Start.ToSecondsString();
         var (decisions, problems) = DecisionsFile.Parse("d.csv",
             $"action,interview,label,name,time,turn,char,value\r\nreject-mention,anna-nowak,,paris,{seconds},,,\r\nreject-mention,anna-nowak,,Paris,,2,{paris.Mention.CharStart},\r\n");
@@ -85,7 +113,7 @@ public class DecisionsTests
         var transcript = Fixture.Transcript();
         var opening = transcript.Cues[0] with { Time = new TimeRange(new Timecode(0), new Timecode(900)), Speaker = "Archivist", SpeakerLabel = "Archivist", Text = "Recording begins." };
         var shifted = transcript with { Cues = transcript.Cues.Insert(0, opening) };
-        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new IndexBuilder(Fixture.Lexicon(), decisions)).Run(shifted, "en");
+        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new IndexBuilder(Fixture.Lexicon(), decisions)).Run(shifted, new LanguageCode("en"));
 
         Assert.DoesNotContain(index.Mentions, m => m.Mention.Text == "Paris" && m.Time.Start == paris.Time.Start);
         Assert.Equal(1, index.Decisions[0].Applied);
@@ -99,7 +127,7 @@ public class DecisionsTests
     public void A_timed_mention_decision_matches_within_two_seconds(long offsetMs, int applied)
     {
         // The fixture names Paris again in the next turn, about a second later: only the closest one is meant.
-        var paris = Fixture.Run().Mentions.Single(m => m.Mention.Turn == 2 && m.Mention.Text == "Paris");
+        var paris = Fixture.Run().Mentions.Single(m => m.Mention.Turn == new TurnId(2) && m.Mention.Text == "Paris");
         string seconds = (paris.Time.Start + new Duration(offsetMs)).ToSecondsString();
         var (decisions, _) = DecisionsFile.Parse("d.csv", $"action,interview,label,name,time,value\nreject-mention,anna-nowak,,Paris,{seconds},\n");
         var index = Fixture.Run(decisions);

@@ -1,10 +1,12 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing;
 using SwitchTag.Indexing.Tests.Fakes;
 using Xunit;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests;
 
@@ -12,9 +14,9 @@ public class HeadingBuilderTests
 {
     private static HeadingResult Build(IHeadingLexicon lexicon, params (string Text, NameLabel Label, string Language)[] names)
     {
-        var mentions = names.Select((n, i) => new Mention(0, new CharSpan(i * 20, i * 20 + n.Text.Length), n.Text, n.Label, n.Language, 0.9, MentionSource.Model)).ToImmutableArray();
+        var mentions = names.Select((n, i) => new Mention(new TurnId(0), new CharSpan(i * 20, i * 20 + n.Text.Length), n.Text, n.Label, new LanguageCode(n.Language), 0.9, MentionSource.Model)).ToImmutableArray();
         var times = names.Select((_, i) => new TimeRange(new Timecode(i * 1000), new Timecode(i * 1000 + 500))).ToImmutableArray();
-        var turn = new Turn(0, "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(100_000)), new string(' ', names.Length * 20 + 40), []);
+        var turn = new Turn(new TurnId(0), "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(100_000)), new string(' ', names.Length * 20 + 40), []);
         return new HeadingBuilder(lexicon).Build(mentions, times, [turn]);
     }
 
@@ -105,11 +107,11 @@ public class HeadingBuilderTests
     {
         // English grammar (from memory): "her" is a pronoun; capitalised only at a sentence start.
         var mentions = ImmutableArray.Create(
-            new Mention(0, new CharSpan(0, 3), "Her", NameLabel.PER, "en", 0.9, MentionSource.Model),
-            new Mention(0, new CharSpan(26, 31), "Irena", NameLabel.PER, "en", 0.9, MentionSource.Model));
+            new Mention(new TurnId(0), new CharSpan(0, 3), "Her", NameLabel.PER, new LanguageCode("en"), 0.9, MentionSource.Model),
+            new Mention(new TurnId(0), new CharSpan(26, 31), "Irena", NameLabel.PER, new LanguageCode("en"), 0.9, MentionSource.Model));
         var times = ImmutableArray.Create(new TimeRange(Timecode.Zero, new Timecode(500)), new TimeRange(new Timecode(1000), new Timecode(1500)));
         const string text = "Her mother knew her well. Irena";
-        var turn = new Turn(0, "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);
+        var turn = new Turn(new TurnId(0), "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);
         var result = new HeadingBuilder(Fixture.Lexicon()).Build(mentions, times, [turn]);
         Assert.Equal("\"Her\" is also used as an ordinary word in this interview (\"her\")", Assert.Single(result.Review).Reason);
         Assert.Equal("Irena", Assert.Single(result.Headings).Name);
@@ -155,7 +157,7 @@ public class HeadingBuilderTests
     {
         // GeoNames cities15000 row 3089658 (Oświęcim, PL); Auschwitz lay beside it (known from memory).
         var lexicon = GeoNamesFixture.Lexicon();
-        var oswiecim = lexicon.Places("Oświęcim", "pl").Single(p => p.Country == "PL");
+        var oswiecim = lexicon.Places("Oświęcim", new LanguageCode("pl")).Single(p => p.Country == "PL");
         Assert.Equal(3089658, oswiecim.GeonameId);
         var camps = new FakeLexicon(GeoNamesFixture.Places, listed: new Dictionary<string, ListedPlace>
         {
@@ -197,10 +199,10 @@ public class HeadingBuilderTests
         const string text = "Mia madre diceva sempre: la madre mia. Santa Maria";
         int santa = text.IndexOf("Santa", StringComparison.Ordinal);
         var mentions = ImmutableArray.Create(
-            new Mention(0, new CharSpan(0, 9), "Mia madre", NameLabel.LOC, "it", 0.9, MentionSource.Model),
-            new Mention(0, new CharSpan(santa, santa + 11), "Santa Maria", NameLabel.LOC, "it", 0.9, MentionSource.Model));
+            new Mention(new TurnId(0), new CharSpan(0, 9), "Mia madre", NameLabel.LOC, new LanguageCode("it"), 0.9, MentionSource.Model),
+            new Mention(new TurnId(0), new CharSpan(santa, santa + 11), "Santa Maria", NameLabel.LOC, new LanguageCode("it"), 0.9, MentionSource.Model));
         var times = ImmutableArray.Create(new TimeRange(Timecode.Zero, new Timecode(500)), new TimeRange(new Timecode(1000), new Timecode(1500)));
-        var turn = new Turn(0, "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);
+        var turn = new Turn(new TurnId(0), "narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);
         var result = new HeadingBuilder(Fixture.Lexicon()).Build(mentions, times, [turn]);
         Assert.Equal("\"Mia madre\" opens a sentence and its words are used as ordinary words in this interview", Assert.Single(result.Review).Reason);
         Assert.Equal("Santa Maria", Assert.Single(result.Headings).Name);
@@ -222,7 +224,7 @@ public class HeadingBuilderTests
         var heading = Assert.Single(Build(lexicon, ("Veneto", NameLabel.LOC, "it")).Headings);
         Assert.Equal("IT-34", heading.Place!.Region);
         Assert.False(heading.Place.HasCoordinates);
-        Assert.Equal("loc-r-it-34", heading.Id);
+        Assert.Equal(new HeadingId("loc-r-it-34"), heading.Id);
         Assert.Equal([Venice], heading.Alternatives.ToArray());
     }
 

@@ -1,10 +1,12 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing.Decisions;
 using SwitchTag.Indexing.Tests.Fakes;
 using Xunit;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests;
 
@@ -26,11 +28,11 @@ public class PersonMergeTests
         {
             int at = text.IndexOf(name, from, StringComparison.Ordinal);
             Assert.True(at >= 0, name);
-            mentions.Add(new Mention(0, new CharSpan(at, at + name.Length), name, NameLabel.PER, "en", 0.9, MentionSource.Model));
+            mentions.Add(new Mention(new TurnId(0), new CharSpan(at, at + name.Length), name, NameLabel.PER, new LanguageCode("en"), 0.9, MentionSource.Model));
             from = at + name.Length;
         }
         var times = mentions.Select((_, i) => new TimeRange(new Timecode(i * 1000), new Timecode(i * 1000 + 500))).ToImmutableArray();
-        var turn = new Turn(0, speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(100_000)), text, []);
+        var turn = new Turn(new TurnId(0), speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(100_000)), text, []);
         return new HeadingBuilder(Lexicon).Build(mentions.ToImmutable(), times, [turn]);
     }
 

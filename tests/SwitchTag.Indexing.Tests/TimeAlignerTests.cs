@@ -64,7 +64,7 @@ public class TimeAlignerTests
         Assert.NotEmpty(index.Mentions);
         foreach (var m in index.Mentions)
         {
-            var turn = index.Turns[m.Mention.Turn];
+            var turn = index.TurnAt(m.Mention.Turn);
             Assert.True(turn.Time.Contains(m.Time.Start) && turn.Time.Contains(m.Time.End), $"{m.Mention.Text} {m.Time}");
             var cue = turn.Cues.First(c => m.Mention.CharStart < c.CharEnd);
             var cueTime = index.Transcript.Cues[cue.CueIndex].Time;

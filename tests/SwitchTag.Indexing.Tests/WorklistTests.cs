@@ -1,6 +1,7 @@
 using SwitchTag.Core.Text;
 using SwitchTag.Indexing.Tests.Fakes;
 using Xunit;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests;
 
@@ -13,7 +14,7 @@ public class WorklistTests
         // The fixture's Polish and German words (see Fixture.Segmenter), in order; "in" between German
         // words is English, so "Wir waren" ends there.
         Assert.Equal(["<script>alert(1)</script>", "Urodziłam się w Warszawie. Mama mówiła: dziecko.", "Wir waren"], index.Worklist.Select(w => w.Text));
-        Assert.Equal(["pl", "pl", "de"], index.Worklist.Select(w => w.Language));
+        Assert.Equal(["pl", "pl", "de"], index.Worklist.Select(w => w.Language.Code));
         var polish = index.Worklist[1];
         Assert.Equal("Anna Nowak", polish.Speaker);
         // The whole of cue 3 (11.000-16.000) is Polish.
@@ -35,8 +36,8 @@ public class WorklistTests
     [Fact]
     public void Undetermined_and_main_language_stretches_are_not_work()
     {
-        Assert.False(WorklistBuilder.IsForeign("und", "en"));
-        Assert.False(WorklistBuilder.IsForeign("en", "en"));
-        Assert.True(WorklistBuilder.IsForeign("pl", "en"));
+        Assert.False(WorklistBuilder.IsForeign(new LanguageCode("und"), new LanguageCode("en")));
+        Assert.False(WorklistBuilder.IsForeign(new LanguageCode("en"), new LanguageCode("en")));
+        Assert.True(WorklistBuilder.IsForeign(new LanguageCode("pl"), new LanguageCode("en")));
     }
 }

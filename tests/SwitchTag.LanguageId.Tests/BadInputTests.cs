@@ -12,7 +12,7 @@ public sealed class BadInputTests(ModelFixture fixture)
     {
         var guess = fixture.Segmenter.Identify("");
         Assert.Equal((LanguageCode.Undetermined, 0.0), (guess.Language, guess.Confidence));
-        Assert.Empty(fixture.Segmenter.Segment("", "en"));
+        Assert.Empty(fixture.Segmenter.Segment("", new LanguageCode("en")));
     }
 
     [Theory]
@@ -23,7 +23,7 @@ public sealed class BadInputTests(ModelFixture fixture)
     public void PunctuationDigitsOrMarksAloneAreOneUndeterminedSpan(string text)
     {
         Assert.Equal("und", fixture.Segmenter.Identify(text).Language);
-        var spans = fixture.Segmenter.Segment(text, "en");
+        var spans = fixture.Segmenter.Segment(text, new LanguageCode("en"));
         Assert.Equal((0, text.Length, LanguageCode.Undetermined), (spans.Single().CharStart, spans.Single().CharEnd, spans.Single().Language));
     }
 
@@ -31,9 +31,9 @@ public sealed class BadInputTests(ModelFixture fixture)
     public void MixedScriptsGiveBothLanguages()
     {
         const string text = "We always said добрый вечер and sat down at the table";
-        var languages = fixture.Segmenter.Segment(text, "en").Select(s => s.Language).ToHashSet();
-        Assert.Contains("en", languages);
-        Assert.Contains("ru", languages);
+        var languages = fixture.Segmenter.Segment(text, new LanguageCode("en")).Select(s => s.Language).ToHashSet();
+        Assert.Contains(new LanguageCode("en"), languages);
+        Assert.Contains(new LanguageCode("ru"), languages);
     }
 
     [Fact]
@@ -43,7 +43,7 @@ public sealed class BadInputTests(ModelFixture fixture)
         while (sb.Length < 1 << 20) sb.Append("We walked along the river every evening after supper. ");
         var text = sb.ToString();
         Assert.Equal("en", fixture.Segmenter.Identify(text).Language);
-        var spans = fixture.Segmenter.Segment(text, "en");
+        var spans = fixture.Segmenter.Segment(text, new LanguageCode("en"));
         Assert.Equal(text.Length, spans[^1].CharEnd);
     }
 
@@ -56,7 +56,7 @@ public sealed class BadInputTests(ModelFixture fixture)
     {
         var guess = fixture.Segmenter.Identify(text);
         Assert.InRange(guess.Confidence, 0, 1);
-        var spans = fixture.Segmenter.Segment(text, "en");
+        var spans = fixture.Segmenter.Segment(text, new LanguageCode("en"));
         Assert.Equal(text.Length, spans[^1].CharEnd);
     }
 
@@ -74,8 +74,8 @@ public sealed class BadInputTests(ModelFixture fixture)
         var b = fixture.Segmenter.Identify(nfd);
         Assert.Equal(a.Language, b.Language);
         Assert.Equal(a.Confidence, b.Confidence, 3);
-        Assert.Equal(fixture.Segmenter.Segment(nfc, "en").Select(s => s.Language), fixture.Segmenter.Segment(nfd, "en").Select(s => s.Language));
-        Assert.Equal(nfd.Length, fixture.Segmenter.Segment(nfd, "en")[^1].CharEnd);
+        Assert.Equal(fixture.Segmenter.Segment(nfc, new LanguageCode("en")).Select(s => s.Language), fixture.Segmenter.Segment(nfd, new LanguageCode("en")).Select(s => s.Language));
+        Assert.Equal(nfd.Length, fixture.Segmenter.Segment(nfd, new LanguageCode("en"))[^1].CharEnd);
     }
 
     [Fact]
@@ -83,6 +83,6 @@ public sealed class BadInputTests(ModelFixture fixture)
     {
         const string text = ", \u0301\u0301 word\u20DD and \u200D\u200C more";
         Assert.InRange(fixture.Segmenter.Identify(text).Confidence, 0, 1);
-        Assert.Equal(text.Length, fixture.Segmenter.Segment(text, "xx")[^1].CharEnd);
+        Assert.Equal(text.Length, fixture.Segmenter.Segment(text, new LanguageCode("xx"))[^1].CharEnd);
     }
 }

@@ -1,4 +1,5 @@
 using SwitchTag.LanguageId.Training;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Tests;
 
@@ -18,7 +19,7 @@ public sealed class InterviewProfileTests(ModelFixture fixture)
     {
         var turns = Interleave(HeldOut("es", 60), HeldOut("en", 60));
         var result = fixture.Segmenter.SegmentInterview(turns);
-        Assert.Equal(["en", "es"], result.Profile.Spoken.Select(s => s.Language).Order());
+        Assert.Equal(["en", "es"], result.Profile.Spoken.Select(s => s.Language.Code).Order());
         Assert.All(result.Profile.Spoken, s => Assert.InRange(s.Share, 0.3, 0.7));
     }
 

@@ -1,8 +1,10 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 using SwitchTag.LanguageId.Interview;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Tests;
 
@@ -17,10 +19,10 @@ public sealed class MainLanguageChooserTests
         int at = 0;
         foreach (var (language, chars) in parts)
         {
-            spans.Add(new LanguageSpan(new CharSpan(at, at + chars), language, 0.9));
+            spans.Add(new LanguageSpan(new CharSpan(at, at + chars), new LanguageCode(language), 0.9));
             at += chars;
         }
-        var turn = new Turn(0, speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(seconds * 1000L)), new string('x', at), []);
+        var turn = new Turn(new TurnId(0), speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(seconds * 1000L)), new string('x', at), []);
         return (turn, spans.ToImmutable());
     }
 

@@ -1,4 +1,4 @@
-using SwitchTag.LanguageId.Profiles;
+using SwitchTag.LanguageId.Text;
 
 namespace SwitchTag.LanguageId.Tests;
 

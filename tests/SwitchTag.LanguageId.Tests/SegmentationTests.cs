@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Tests;
 
@@ -10,7 +11,7 @@ namespace SwitchTag.LanguageId.Tests;
 public sealed class SegmentationTests(ModelFixture fixture)
 {
     private ImmutableArray<LanguageSpan> Segment(string text, INameLexicon? names = null) =>
-        (names is null ? fixture.Segmenter : new Segmentation.CodeSwitchSegmenter(fixture.Segmenter.Model, names)).Segment(text, "en");
+        (names is null ? fixture.Segmenter : new Segmentation.CodeSwitchSegmenter(fixture.Segmenter.Model, names)).Segment(text, new LanguageCode("en"));
 
     private static string LanguageOf(ImmutableArray<LanguageSpan> spans, string text, string word)
     {

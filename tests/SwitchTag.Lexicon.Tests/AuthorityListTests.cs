@@ -1,5 +1,6 @@
 using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Lexicon.Tests;
 
@@ -60,7 +61,7 @@ public class AuthorityListTests
     {
         var list = Parse("label,name,variants\nLOC,Kraków,Krakow|Cracow\nPER,Anna Kowalczyk,\n");
         const string text = "Urodziłam się w Krakowie, a Anna Kowalczyk też.";
-        var matches = list.Find(text, "pl");
+        var matches = list.Find(text, new LanguageCode("pl"));
         Assert.Equal(2, matches.Length);
         Assert.Equal("Krakowie", text[matches[0].CharStart..matches[0].CharEnd]);
         Assert.Equal("Kraków", matches[0].Canonical);
@@ -74,7 +75,7 @@ public class AuthorityListTests
     {
         var list = Parse("label,name,variants\nLOC,Warszawa,Warsaw\n");
         const string text = "We lived in Warsaw, w Warszawie, you know.";
-        var matches = list.Find(text, "en");
+        var matches = list.Find(text, new LanguageCode("en"));
         Assert.Equal(["Warsaw", "Warszawie"], matches.Select(m => text[m.CharStart..m.CharEnd]));
     }
 
@@ -83,7 +84,7 @@ public class AuthorityListTests
     {
         var list = Parse("label,name,variants\nLOC,Nowy Sącz,\nLOC,Sącz,\nPER,Jan,\n");
         const string text = "W Nowym Sączu mieszkał Janek, nie Jan.";
-        var matches = list.Find(text, "pl");
+        var matches = list.Find(text, new LanguageCode("pl"));
         Assert.Equal(["Nowym Sączu", "Jan"], matches.Select(m => text[m.CharStart..m.CharEnd]));
     }
 
@@ -91,8 +92,8 @@ public class AuthorityListTests
     public void One_word_entries_need_a_capital()
     {
         var list = Parse("label,name,variants\nPER,Rose,\n");
-        Assert.Empty(list.Find("the rose garden", "en"));
-        Assert.Single(list.Find("Rose said so", "en"));
+        Assert.Empty(list.Find("the rose garden", new LanguageCode("en")));
+        Assert.Single(list.Find("Rose said so", new LanguageCode("en")));
     }
 
     [Fact]
@@ -100,7 +101,7 @@ public class AuthorityListTests
     {
         var list = Parse("label,name,variants\nPER,Paris Hilton,\nLOC,Paris,\nPER,Jordan,\nORG,Lech Poznań,Lech\n");
         const string text = "Paris Hilton flew to Paris; Jordan met Lech fans.";
-        var matches = list.Find(text, "en");
+        var matches = list.Find(text, new LanguageCode("en"));
         Assert.Equal(
             [("Paris Hilton", NameLabel.PER), ("Paris", NameLabel.LOC), ("Jordan", NameLabel.PER), ("Lech", NameLabel.ORG)],
             matches.Select(m => (text[m.CharStart..m.CharEnd], m.Label)));
@@ -112,7 +113,7 @@ public class AuthorityListTests
     {
         var (list, problems) = AuthorityList.Parse("label,name,variants\nPER,Jordan,\nLOC,Jordan,\n", "list.csv");
         Assert.Equal("list.csv:3", Assert.Single(problems).At.ToString());
-        Assert.Equal(NameLabel.PER, Assert.Single(list.Find("Jordan", "en")).Label);
+        Assert.Equal(NameLabel.PER, Assert.Single(list.Find("Jordan", new LanguageCode("en"))).Label);
     }
 
     [Fact]
@@ -141,10 +142,10 @@ public class AuthorityListTests
     public void Multi_word_names_may_span_a_line_break_but_not_a_comma()
     {
         var list = Parse("label,name,variants\nLOC,Nowy Sącz,\nLOC,St. Louis,\n");
-        Assert.Single(list.Find("born in Nowy\nSącz", "pl"));         // a cue's lines are joined by '\n'
-        Assert.Empty(list.Find("Nowy, Sącz", "pl"));
+        Assert.Single(list.Find("born in Nowy\nSącz", new LanguageCode("pl")));         // a cue's lines are joined by '\n'
+        Assert.Empty(list.Find("Nowy, Sącz", new LanguageCode("pl")));
         const string text = "then St. Louis";
-        var m = Assert.Single(list.Find(text, "en"));
+        var m = Assert.Single(list.Find(text, new LanguageCode("en")));
         Assert.Equal("St. Louis", text[m.CharStart..m.CharEnd]);
     }
 }

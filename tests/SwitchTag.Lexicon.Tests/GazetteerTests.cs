@@ -1,6 +1,7 @@
 using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
 using SwitchTag.Tests.Shared;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Lexicon.Tests;
 
@@ -32,7 +33,7 @@ public class GazetteerTests(GeoNamesFixture data) : IClassFixture<GeoNamesFixtur
     public void Warsaw_is_found_under_its_names_and_case_forms(string name, string language)
     {
         var warsaw = GeoNamesFixture.Row(GeoNamesFixture.IdOf("Warsaw"));
-        var top = _g.Lookup(name, language)[0];
+        var top = _g.Lookup(name, new LanguageCode(language))[0];
         Assert.Equal(warsaw.Id, top.GeonameId);
         Assert.Equal(warsaw.Lat, top.Latitude);
         Assert.Equal(warsaw.Lon, top.Longitude);
@@ -50,7 +51,7 @@ public class GazetteerTests(GeoNamesFixture data) : IClassFixture<GeoNamesFixtur
     {
         var lviv = GeoNamesFixture.Row(GeoNamesFixture.IdOf("L'viv"));
         Assert.Equal("UA", lviv.Country);
-        Assert.Contains(_g.Lookup(name, language), p => p.GeonameId == lviv.Id);
+        Assert.Contains(_g.Lookup(name, new LanguageCode(language)), p => p.GeonameId == lviv.Id);
     }
 
     [Theory]
@@ -65,15 +66,15 @@ public class GazetteerTests(GeoNamesFixture data) : IClassFixture<GeoNamesFixtur
     public void Inflected_forms_find_the_city(string form, string language, string mainName)
     {
         long id = GeoNamesFixture.IdOf(mainName);
-        Assert.Equal(id, _g.Lookup(form, language)[0].GeonameId);
-        Assert.Equal(MatchKind.Inflected, _g.Candidates(form, language)[0].Kind);
+        Assert.Equal(id, _g.Lookup(form, new LanguageCode(language))[0].GeonameId);
+        Assert.Equal(MatchKind.Inflected, _g.Candidates(form, new LanguageCode(language))[0].Kind);
     }
 
     [Fact]
     public void Lookup_returns_every_candidate_most_populous_first()
     {
         // GeoNames has several populated places named Paris (France, Texas, ...).
-        var all = _g.Lookup("Paris", "en");
+        var all = _g.Lookup("Paris", new LanguageCode("en"));
         Assert.True(all.Count > 1);
         Assert.Equal(GeoNamesFixture.IdOf("Paris"), all[0].GeonameId);
         Assert.Equal(all.OrderByDescending(p => p.Population).Select(p => p.Population), all.Select(p => p.Population));
@@ -82,16 +83,16 @@ public class GazetteerTests(GeoNamesFixture data) : IClassFixture<GeoNamesFixtur
     [Fact]
     public void Lookup_of_nonsense_is_empty()
     {
-        Assert.Empty(_g.Lookup("Xqzvwk", "pl"));
-        Assert.Empty(_g.Lookup("", "pl"));
-        Assert.Empty(_g.Lookup("  ,. ", "en"));
+        Assert.Empty(_g.Lookup("Xqzvwk", new LanguageCode("pl")));
+        Assert.Empty(_g.Lookup("", new LanguageCode("pl")));
+        Assert.Empty(_g.Lookup("  ,. ", new LanguageCode("en")));
     }
 
     [Fact]
     public void Find_tags_capitalised_place_names_with_offsets()
     {
         const string text = "After the war we moved from Warszawa to Nowy Sącz, then to New York.";
-        var matches = _g.Find(text, "pl");
+        var matches = _g.Find(text, new LanguageCode("pl"));
         Assert.Equal(["Warszawa", "Nowy Sącz", "New York"], matches.Select(m => text[m.CharStart..m.CharEnd]));
         Assert.All(matches, m => Assert.Equal(NameLabel.LOC, m.Label));
         Assert.All(matches, m => Assert.Equal(MentionSource.Gazetteer, m.Source));
@@ -102,7 +103,7 @@ public class GazetteerTests(GeoNamesFixture data) : IClassFixture<GeoNamesFixtur
     public void Find_follows_case_endings_of_the_text_language()
     {
         const string text = "Mieszkaliśmy w Warszawie, potem w Krakowie.";
-        var found = _g.Find(text, "pl").Select(m => (text[m.CharStart..m.CharEnd], m.Canonical)).ToList();
+        var found = _g.Find(text, new LanguageCode("pl")).Select(m => (text[m.CharStart..m.CharEnd], m.Canonical)).ToList();
         Assert.Equal([("Warszawie", "Warsaw"), ("Krakowie", "Kraków")], found);
     }
 
@@ -110,23 +111,23 @@ public class GazetteerTests(GeoNamesFixture data) : IClassFixture<GeoNamesFixtur
     public void Find_skips_stop_words_lower_case_words_and_common_words_at_sentence_start()
     {
         // "Of" (Turkey) and "Nice" (France) are GeoNames places; "nice" is a common English word.
-        Assert.Contains(_g.Lookup("Of", "en"), p => p.Country == "TR");
-        Assert.Contains(_g.Lookup("Nice", "en"), p => p.Country == "FR");
+        Assert.Contains(_g.Lookup("Of", new LanguageCode("en")), p => p.Country == "TR");
+        Assert.Contains(_g.Lookup("Nice", new LanguageCode("en")), p => p.Country == "FR");
         Assert.True(_g.Cautions["nice"].HasFlag(NameCaution.CommonWord));
-        Assert.Empty(_g.Find("Nice to meet you. Of course.", "en"));
-        Assert.Empty(_g.Find("we went to paris", "en"));
+        Assert.Empty(_g.Find("Nice to meet you. Of course.", new LanguageCode("en")));
+        Assert.Empty(_g.Find("we went to paris", new LanguageCode("en")));
         const string text = "We spent a week in Nice.";
-        Assert.Equal("Nice", Assert.Single(_g.Find(text, "en")).Canonical);
+        Assert.Equal("Nice", Assert.Single(_g.Find(text, new LanguageCode("en"))).Canonical);
     }
 
     [Fact]
     public void Person_names_that_are_also_places_are_not_tagged_alone()
     {
         // David (Panama) is a GeoNames city; "David" is tagged PER in the NER training splits.
-        Assert.Contains(_g.Lookup("David", "en"), p => p.Country == "PA");
+        Assert.Contains(_g.Lookup("David", new LanguageCode("en")), p => p.Country == "PA");
         Assert.True(_g.Cautions["david"].HasFlag(NameCaution.PersonName));
         const string text = "Ruth and David went to Tel Aviv.";
-        Assert.Equal(["Tel Aviv"], _g.Find(text, "en").Select(m => text[m.CharStart..m.CharEnd]));
+        Assert.Equal(["Tel Aviv"], _g.Find(text, new LanguageCode("en")).Select(m => text[m.CharStart..m.CharEnd]));
         Assert.True(_g.IsKnownName("David")); // still a name, whatever the language around it
     }
 
@@ -155,7 +156,7 @@ public class GazetteerTests(GeoNamesFixture data) : IClassFixture<GeoNamesFixtur
             var damaged = Gazetteer.Load(junk);
             Assert.Empty(damaged.Places);
             Assert.Single(damaged.Problems);
-            Assert.Empty(damaged.Lookup("Warsaw", "en"));
+            Assert.Empty(damaged.Lookup("Warsaw", new LanguageCode("en")));
         }
         finally { File.Delete(junk); }
     }

@@ -1,4 +1,5 @@
 using SwitchTag.Lexicon;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Lexicon.Tests;
 
@@ -43,6 +44,6 @@ public class NameFoldingTests
         // A lone high surrogate (U+D800) is not valid UTF-16 (Unicode §3.9); it is replaced by U+FFFD.
         Assert.Equal("a\uFFFDb", NameFolding.Fold("a\uD800b"));
         var (list, _) = AuthorityList.Parse("label,name,variants\nLOC,Kraków,\n", "list.csv");
-        Assert.Single(list.Find("\uDC00Kraków \uD800", "pl"));
+        Assert.Single(list.Find("\uDC00Kraków \uD800", new LanguageCode("pl")));
     }
 }

@@ -1,4 +1,5 @@
 using SwitchTag.Lexicon;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Lexicon.Tests;
 
@@ -23,7 +24,7 @@ public class StemmingTests
     [InlineData("Gdyni", "Gdynia")]
     [InlineData("Łodzi", "Łódź")]
     public void Polish_keys_agree(string inflected, string name) =>
-        Assert.Equal(NameFolding.Key(name, "pl"), NameFolding.Key(inflected, "pl"));
+        Assert.Equal(NameFolding.Key(name, new LanguageCode("pl")), NameFolding.Key(inflected, new LanguageCode("pl")));
 
     // (from memory) Russian: Москва loc. Москве, gen. Москвы, acc. Москву, instr. Москвой;
     // Казань gen. Казани; Санкт-Петербург loc. Санкт-Петербурге.
@@ -35,7 +36,7 @@ public class StemmingTests
     [InlineData("Казани", "Казань")]
     [InlineData("Санкт-Петербурге", "Санкт-Петербург")]
     public void Russian_keys_agree(string inflected, string name) =>
-        Assert.Equal(NameFolding.Key(name, "ru"), NameFolding.Key(inflected, "ru"));
+        Assert.Equal(NameFolding.Key(name, new LanguageCode("ru")), NameFolding.Key(inflected, new LanguageCode("ru")));
 
     // (from memory) Czech: Praha gen. Prahy, instr. Prahou; Brno loc. Brně; Ostrava loc. Ostravě.
     // Slovak: Bratislava loc. Bratislave; Košice loc. Košiciach.
@@ -47,7 +48,7 @@ public class StemmingTests
     [InlineData("Bratislave", "Bratislava", "sk")]
     [InlineData("Košiciach", "Košice", "sk")]
     public void Czech_and_Slovak_keys_agree(string inflected, string name, string language) =>
-        Assert.Equal(NameFolding.Key(name, language), NameFolding.Key(inflected, language));
+        Assert.Equal(NameFolding.Key(name, new LanguageCode(language)), NameFolding.Key(inflected, new LanguageCode(language)));
 
     // (from memory) Lithuanian: Vilnius gen. Vilniaus, loc. Vilniuje, acc. Vilnių; Kaunas loc.
     // Kaune, gen. Kauno; Klaipėda loc. Klaipėdoje. Latvian: Rīga loc. Rīgā, gen. Rīgas, acc. Rīgu.
@@ -62,7 +63,7 @@ public class StemmingTests
     [InlineData("Rīgas", "Rīga", "lv")]
     [InlineData("Rīgu", "Rīga", "lv")]
     public void Baltic_keys_agree(string inflected, string name, string language) =>
-        Assert.Equal(NameFolding.Key(name, language), NameFolding.Key(inflected, language));
+        Assert.Equal(NameFolding.Key(name, new LanguageCode(language)), NameFolding.Key(inflected, new LanguageCode(language)));
 
     // (from memory) Hungarian: Budapest superessive Budapesten, sublative Budapestre, delative
     // Budapestről, inessive-type town suffixes -ban/-ben; German genitive: Berlins, Hamburgs.
@@ -73,7 +74,7 @@ public class StemmingTests
     [InlineData("Berlins", "Berlin", "de")]
     [InlineData("Hamburgs", "Hamburg", "de")]
     public void Hungarian_and_German_keys_agree(string inflected, string name, string language) =>
-        Assert.Equal(NameFolding.Key(name, language), NameFolding.Key(inflected, language));
+        Assert.Equal(NameFolding.Key(name, new LanguageCode(language)), NameFolding.Key(inflected, new LanguageCode(language)));
 
     // Forms whose stem changes before the ending: the primary key differs, but the inflection
     // check undoes the change. (from memory) Polish Praga loc. Pradze, Wiedeń gen. Wiednia;
@@ -95,7 +96,7 @@ public class StemmingTests
     [InlineData("Vilniuje", "Vilnius", "lt")]
     [InlineData("Москве", "Москва", "ru")]
     public void Inflection_check_undoes_stem_changes(string inflected, string name, string language) =>
-        Assert.True(NameFolding.IsInflectionOf(inflected, name, language));
+        Assert.True(NameFolding.IsInflectionOf(inflected, name, new LanguageCode(language)));
 
     [Theory]
     [InlineData("Ufa", "pl", "ufa")]          // stripping "-a" would leave 2 letters
@@ -103,43 +104,43 @@ public class StemmingTests
     [InlineData("Bari", "en", "bari")]         // English has no rule: identity
     [InlineData("Paris", "fr", "paris")]
     public void Stem_keeps_at_least_three_letters_and_leaves_other_languages_alone(string word, string language, string stem) =>
-        Assert.Equal(stem, NameFolding.Stem(word, language));
+        Assert.Equal(stem, NameFolding.Stem(word, new LanguageCode(language)));
 
     [Fact]
     public void Nominative_endings_are_not_stripped_from_dictionary_forms()
     {
         // "-om" is an instrumental/dative ending, not a nominative one: Bytom (a Polish town) must
         // not meet "Byty" through a shared "byt".
-        Assert.False(NameFolding.IsInflectionOf("Byty", "Bytom", "pl"));
-        Assert.True(NameFolding.IsInflectionOf("Bytomiu", "Bytom", "pl")); // (from memory) loc. Bytomiu
+        Assert.False(NameFolding.IsInflectionOf("Byty", "Bytom", new LanguageCode("pl")));
+        Assert.True(NameFolding.IsInflectionOf("Bytomiu", "Bytom", new LanguageCode("pl"))); // (from memory) loc. Bytomiu
     }
 
     [Fact]
     public void Language_without_rules_falls_back_to_every_rule()
     {
-        Assert.True(NameFolding.IsInflectionOf("Krakowie", "Kraków", "en"));
-        Assert.True(NameFolding.IsInflectionOf("Krakowie", "Kraków", "und"));
+        Assert.True(NameFolding.IsInflectionOf("Krakowie", "Kraków", new LanguageCode("en")));
+        Assert.True(NameFolding.IsInflectionOf("Krakowie", "Kraków", new LanguageCode("und")));
         // A language with rules of its own uses only those: Polish has no "-en" ending.
-        Assert.False(NameFolding.IsInflectionOf("Budapesten", "Budapest", "pl"));
+        Assert.False(NameFolding.IsInflectionOf("Budapesten", "Budapest", new LanguageCode("pl")));
     }
 
     [Fact]
     public void Language_codes_accept_iso_639_3_and_regions()
     {
         // ISO 639-2/3: pol = Polish, ces/cze = Czech, hun = Hungarian.
-        Assert.Equal(NameFolding.Stem("Warszawie", "pl"), NameFolding.Stem("Warszawie", "pol"));
+        Assert.Equal(NameFolding.Stem("Warszawie", new LanguageCode("pl")), NameFolding.Stem("Warszawie", new LanguageCode("pol")));
         // BCP 47 (RFC 5646): a region subtag after the language code does not change the language.
         Assert.Same(StemRules.For("pl"), StemRules.For("pl-PL"));
-        Assert.Equal(NameFolding.Stem("Budapesten", "hu"), NameFolding.Stem("Budapesten", "hun"));
+        Assert.Equal(NameFolding.Stem("Budapesten", new LanguageCode("hu")), NameFolding.Stem("Budapesten", new LanguageCode("hun")));
     }
 
     [Fact]
     public void SameName_links_mentions_across_languages()
     {
         // (from memory) Polish genitive of Anna is Anny; of Kowalczyk, Kowalczyka.
-        Assert.True(NameFolding.SameName("Anny", "pl", "Anna", "en"));
-        Assert.True(NameFolding.SameName("Anna", "en", "Anny", "pl"));
-        Assert.True(NameFolding.SameName("Kowalczyka", "pl", "Kowalczyk", "en"));
-        Assert.False(NameFolding.SameName("Anna", "en", "Hanna", "pl"));
+        Assert.True(NameFolding.SameName("Anny", new LanguageCode("pl"), "Anna", new LanguageCode("en")));
+        Assert.True(NameFolding.SameName("Anna", new LanguageCode("en"), "Anny", new LanguageCode("pl")));
+        Assert.True(NameFolding.SameName("Kowalczyka", new LanguageCode("pl"), "Kowalczyk", new LanguageCode("en")));
+        Assert.False(NameFolding.SameName("Anna", new LanguageCode("en"), "Hanna", new LanguageCode("pl")));
     }
 }

@@ -5,6 +5,7 @@ using SwitchTag.Indexing;
 using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output.AnnotatedVtt;
 using Xunit;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.Tests;
 
@@ -25,7 +26,7 @@ public class AnnotatedVttRoundTripTests
         Assert.Equal("only\r\rbetween", transcript.Cues[0].Text);
         Assert.Equal("first\n \nafter a whitespace line", transcript.Cues[1].Text);
 
-        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new IndexBuilder(Fixture.Lexicon())).Run(transcript, "en");
+        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new IndexBuilder(Fixture.Lexicon())).Run(transcript, new LanguageCode("en"));
         string written = AnnotatedVttWriter.Render(index);
         Assert.Contains("plain\nsecond line", written); // a break between two lines of text stays a line break
         var reread = TranscriptFile.Parse("annotated.vtt", written, TranscriptFormat.WebVtt);

@@ -37,7 +37,7 @@ public class CsvFormulaTests
     {
         // Issue reproduction: a speaker label or text starting with = reached mentions.csv as a live formula.
         var index = Fixture.Run();
-        var turn = index.Turns[index.Mentions[0].Mention.Turn];
+        var turn = index.TurnAt(index.Mentions[0].Mention.Turn);
         index = index with
         {
             Turns = [.. index.Turns.Select(t => t == turn ? t with { Speaker = "=cmd|' /C calc'!A0" } : t)],

@@ -15,6 +15,7 @@ using SwitchTag.Output.Report;
 using SwitchTag.Output.Text;
 using SwitchTag.Output.WorklistCsv;
 using Xunit;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.Tests;
 
@@ -145,7 +146,7 @@ public class OutputTests
             Assert.Equal("Point", geometry.GetProperty("type").GetString());
             var position = geometry.GetProperty("coordinates").EnumerateArray().Select(e => e.GetDouble()).ToArray();
             Assert.Equal(2, position.Length);
-            var heading = index.Headings.Single(h => h.Id == f.GetProperty("id").GetString());
+            var heading = index.Headings.Single(h => h.Id.Value == f.GetProperty("id").GetString());
             // Section 3.1.1: longitude first, then latitude.
             Assert.Equal(heading.Place!.Longitude, position[0]);
             Assert.Equal(heading.Place.Latitude, position[1]);
@@ -167,13 +168,13 @@ public class OutputTests
         index = index with { Headings = index.Headings.Replace(first, first with { Place = region }) };
 
         using var geo = JsonDocument.Parse(Bytes(s => PlacesGeoJsonWriter.Write(index, s)));
-        var feature = geo.RootElement.GetProperty("features").EnumerateArray().Single(f => f.GetProperty("id").GetString() == first.Id);
+        var feature = geo.RootElement.GetProperty("features").EnumerateArray().Single(f => f.GetProperty("id").GetString() == first.Id.Value);
         // RFC 7946 section 3.2: "in the case that the Feature is unlocated", geometry is a JSON null.
         Assert.Equal(JsonValueKind.Null, feature.GetProperty("geometry").ValueKind);
         Assert.Equal("IT-78", feature.GetProperty("properties").GetProperty("region").GetString());
 
         using var json = JsonDocument.Parse(Bytes(s => IndexJsonWriter.Write(index, s)));
-        var place = json.RootElement.GetProperty("headings").EnumerateArray().Single(h => h.GetProperty("id").GetString() == first.Id).GetProperty("place");
+        var place = json.RootElement.GetProperty("headings").EnumerateArray().Single(h => h.GetProperty("id").GetString() == first.Id.Value).GetProperty("place");
         Assert.Equal(JsonValueKind.Null, place.GetProperty("lat").ValueKind);
         Assert.Equal(JsonValueKind.Null, place.GetProperty("lon").ValueKind);
         Assert.Equal("IT", place.GetProperty("country").GetString());
@@ -216,7 +217,7 @@ public class OutputTests
         const string speaker = "Inter\u202Eweiv\u202C\u001B[31mer";
         var t = Fixture.Transcript();
         t = t with { Cues = t.Cues.SetItem(0, t.Cues[0] with { Speaker = speaker, SpeakerLabel = speaker }) };
-        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new SwitchTag.Indexing.IndexBuilder(Fixture.Lexicon(), default)).Run(t, "en");
+        var index = new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new SwitchTag.Indexing.IndexBuilder(Fixture.Lexicon(), default)).Run(t, new LanguageCode("en"));
         var entries = new[] { CollectionEntry.From(index, "anna-nowak") };
         var reports = new Dictionary<string, string>
         {

@@ -6,6 +6,7 @@ using SwitchTag.Indexing.Tests.Fakes;
 using SwitchTag.Output.IndexJson;
 using SwitchTag.Tests.Shared;
 using Xunit;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.Tests;
 
@@ -27,9 +28,9 @@ public class SchemaTests
         {
             Headings = headings,
             Media = "../media/anna-nowak.mp3",
-            LanguageProfile = [new LanguageFraction("en", 0.8), new LanguageFraction("pl", 0.2)],
+            LanguageProfile = [new LanguageFraction(new LanguageCode("en"), 0.8), new LanguageFraction(new LanguageCode("pl"), 0.2)],
             MainLanguageDecision = new MainLanguageDecision("narrator-talk", "seconds",
-                [new LanguageFraction("en", 0.7), new LanguageFraction("pl", 0.3)], [new LanguageFraction("en", 1)], ["Anna Nowak"]),
+                [new LanguageFraction(new LanguageCode("en"), 0.7), new LanguageFraction(new LanguageCode("pl"), 0.3)], [new LanguageFraction(new LanguageCode("en"), 1)], ["Anna Nowak"]),
         }, stream);
         return JsonDocument.Parse(stream.ToArray());
     }

@@ -60,8 +60,8 @@ public sealed record GoldScore(int Gold, int Found, int Produced, int Wrong, int
 
         var personSurfaces = persons.SelectMany(g => gold[g].Surfaces).ToList();
         var personForms = persons.SelectMany(g => gold[g].Forms).ToHashSet(StringComparer.Ordinal);
-        var asPlaces = heads.Where(h => h.Label == NameLabel.LOC).SelectMany(h => h.Mentions).Select(m => index.Mentions[m].Mention)
-            .Where(m => personForms.Contains(NameFolding.Fold(m.Text)) || personSurfaces.Any(s => Covers(index.Turns[m.Turn].Text, s, m.CharStart, m.CharEnd)))
+        var asPlaces = heads.Where(h => h.Label == NameLabel.LOC).SelectMany(h => h.Mentions).Select(m => index.MentionAt(m).Mention)
+            .Where(m => personForms.Contains(NameFolding.Fold(m.Text)) || personSurfaces.Any(s => Covers(index.TurnAt(m.Turn).Text, s, m.CharStart, m.CharEnd)))
             .ToList();
         lines.AddRange(asPlaces.Select(m => $"PER->LOC \"{m.Text}\" in turn {m.Turn}"));
         return new GoldScore(gold.Count, hits.Count, heads.Length, wrong.Count, persons.Count, merged, places.Count, links, asPlaces.Count, lines);

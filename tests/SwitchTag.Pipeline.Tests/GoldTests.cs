@@ -1,5 +1,6 @@
 using System.Text.Json;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 using SwitchTag.Formats;
 using SwitchTag.Lexicon;
@@ -45,7 +46,7 @@ public class GoldTests(ITestOutputHelper output)
             h.TryGetProperty("country", out var c) ? c.GetString() : null)).ToList();
 
         int found = 0, countryRight = 0, withCountry = 0;
-        var matched = new HashSet<string>();
+        var matched = new HashSet<HeadingId>();
         foreach (var g in headings)
         {
             var surfaces = g.Surfaces.Append(g.Name).Select(NameFolding.Fold).ToHashSet(StringComparer.Ordinal);
@@ -103,14 +104,14 @@ public class GoldTests(ITestOutputHelper output)
             var index = Pipeline.Value.Run(read.Transcript);
             foreach (var m in index.Mentions)
             {
-                var turn = index.Turns[m.Mention.Turn];
+                var turn = index.TurnAt(m.Mention.Turn);
                 var first = turn.Cues.First(c => m.Mention.CharStart < c.CharEnd);
                 var last = turn.Cues.Last(c => m.Mention.CharEnd > c.CharStart);
                 Assert.True(Within(index.Transcript.Cues[first.CueIndex].Time, m.Time.Start), $"{file}: {m.Mention.Text} at {m.Time}");
                 Assert.True(Within(index.Transcript.Cues[last.CueIndex].Time, m.Time.End), $"{file}: {m.Mention.Text} at {m.Time}");
             }
             foreach (var w in index.Worklist)
-                Assert.True(Within(index.Turns[w.Turn].Time, w.Time.Start) && Within(index.Turns[w.Turn].Time, w.Time.End), $"{file}: {w.Text}");
+                Assert.True(Within(index.TurnAt(w.Turn).Time, w.Time.Start) && Within(index.TurnAt(w.Turn).Time, w.Time.End), $"{file}: {w.Text}");
         }
     }
 }

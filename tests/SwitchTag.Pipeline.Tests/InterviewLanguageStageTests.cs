@@ -7,6 +7,7 @@ using SwitchTag.LanguageId.Training;
 using SwitchTag.Tagging;
 using SwitchTag.Tests.Shared;
 using Xunit;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Pipeline.Tests;
 
@@ -72,7 +73,7 @@ public sealed class InterviewLanguageStageTests(ModelFixture fixture)
     public void An_unsupported_main_language_is_a_usage_error_naming_the_code()
     {
         // "eu" is the ISO 639-1 code of Basque (from memory); models/langid.md lists it as unsupported.
-        Assert.DoesNotContain("eu", fixture.Segmenter.Languages);
+        Assert.DoesNotContain(new LanguageCode("eu"), fixture.Segmenter.Languages);
         string dir = Path.Combine(Path.GetTempPath(), "switchtag-main-" + Guid.NewGuid().ToString("N"));
         try
         {

@@ -3,6 +3,7 @@ using SwitchTag.Pipeline;
 using SwitchTag.Tagging;
 using Xunit;
 using SwitchTag.Tests.Shared;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Pipeline.Tests;
 
@@ -18,7 +19,7 @@ public class NerReportTests
     [InlineData("/tmp/switchtag-ner-test/GermEval2014/de-test.tsv", "GermEval2014", "de")]
     [InlineData("/d/ner-extra/factrueval2016/factrueval-test.tsv", "factrueval2016", "und")]
     public void SourceIsTheFolderAndLanguageTheFirstTwoLetterToken(string path, string source, string language) =>
-        Assert.Equal(new GoldFileLabel(source, language), GoldFileLabel.Of(path));
+        Assert.Equal(new GoldFileLabel(source, new LanguageCode(language)), GoldFileLabel.Of(path));
 
     [Fact]
     public void GroupsPoolTheirOwnFilesOnly()
@@ -26,9 +27,9 @@ public class NerReportTests
         GoldSentence S(params string[] tags) => new([.. tags.Select((_, i) => "w" + i)], tags, 1);
         var files = new List<(GoldFileLabel, IReadOnlyList<GoldSentence>)>
         {
-            (new("A", "de"), [S("B-PER", "I-PER", "O"), S("B-LOC")]),
-            (new("B", "de"), [S("B-ORG", "O")]),
-            (new("A", "pl"), [S("O", "B-LOC")]),
+            (new("A", new LanguageCode("de")), [S("B-PER", "I-PER", "O"), S("B-LOC")]),
+            (new("B", new LanguageCode("de")), [S("B-ORG", "O")]),
+            (new("A", new LanguageCode("pl")), [S("O", "B-LOC")]),
         };
         IReadOnlyList<string>[] predicted =
         [

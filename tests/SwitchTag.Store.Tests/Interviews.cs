@@ -3,6 +3,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing.Tests.Fakes;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Store.Tests;
 
@@ -22,6 +23,6 @@ public static class Interviews
             WordTimes = c.WordTimes.Select(w => w with { Time = w.Time + new Duration(r * shift) }).ToImmutableArray(),
         })).ToImmutableArray();
         var transcript = one with { Source = one.Source with { Path = "fixture/large.vtt" }, Cues = cues };
-        return new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new SwitchTag.Indexing.IndexBuilder(Fixture.Lexicon(), default)).Run(transcript, "en");
+        return new InterviewPipeline(Fixture.Segmenter(), Fixture.Tagger(), new SwitchTag.Indexing.IndexBuilder(Fixture.Lexicon(), default)).Run(transcript, new LanguageCode("en"));
     }
 }

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using SwitchTag.Core.Ids;
 using Xunit;
 
 namespace SwitchTag.Store.Tests;
@@ -29,7 +30,7 @@ public class SearchCommandTests
         var (exit, output) = Run("Warszawie", "--in", dir.Path, "--json");
         Assert.Equal(0, exit);
         var lines = output.Split('\n', StringSplitOptions.RemoveEmptyEntries);
-        Assert.Equal(index.Headings.Single(h => h.Id == "loc-g756135").Mentions.Length, lines.Length);
+        Assert.Equal(index.Headings.Single(h => h.Id == new HeadingId("loc-g756135")).Mentions.Length, lines.Length);
         foreach (var line in lines)
         {
             using var json = JsonDocument.Parse(line);

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using SwitchTag.Core.Ids;
 using Xunit;
 
 namespace SwitchTag.Store.Tests;
@@ -17,7 +18,7 @@ public class SearchRunTests
         var query = SearchQuery.From("Warszawie", null, null, null, null, null, out _)!;
         Assert.Equal(SearchRunResult.Searched, SearchRun.Execute(dir.Path, query, json: true, output, TextWriter.Null));
         var lines = output.ToString().Split('\n', StringSplitOptions.RemoveEmptyEntries);
-        Assert.Equal(index.Headings.Single(h => h.Id == "loc-g756135").Mentions.Length, lines.Length);
+        Assert.Equal(index.Headings.Single(h => h.Id == new HeadingId("loc-g756135")).Mentions.Length, lines.Length);
         foreach (var line in lines)
         {
             using var json = JsonDocument.Parse(line);

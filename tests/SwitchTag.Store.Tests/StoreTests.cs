@@ -2,6 +2,7 @@ using SwitchTag.Core.Time;
 using System.Text.Json;
 using Microsoft.Data.Sqlite;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Output;
 using Xunit;
 
@@ -87,8 +88,8 @@ public class StoreTests
         // Polish grammar (from memory): "Warszawie" is the locative of "Warszawa"; "Krakowie" of "Kraków".
         var index = Interviews.Small();
         var warsaw = store.Search(new SearchQuery("Warszawie"));
-        int warsawMentions = index.Headings.Single(h => h.Id == "loc-g756135").Mentions.Length;
-        Assert.Equal(warsawMentions, warsaw.Count(h => h.Label == NameLabel.LOC && h.HeadingId == "loc-g756135"));
+        int warsawMentions = index.Headings.Single(h => h.Id == new HeadingId("loc-g756135")).Mentions.Length;
+        Assert.Equal(warsawMentions, warsaw.Count(h => h.Label == NameLabel.LOC && h.HeadingId == new HeadingId("loc-g756135")));
         Assert.True(warsawMentions >= 4);
         Assert.Contains(warsaw, h => h.Match == "Varsovie");
         var krakow = Assert.Single(store.Search(new SearchQuery("Krakowie")));
@@ -121,12 +122,12 @@ public class StoreTests
         store.Save(Interviews.Small(), "anna-nowak", "m1", [], DateTimeOffset.UnixEpoch);
         // Warsaw-Kraków is about 250 km, Kraków-Paris about 1,275 km (great circle, from memory).
         var within300 = store.Search(new SearchQuery("", Near: new NearPlace("Kraków", 300)));
-        Assert.Contains(within300, h => h.HeadingId == "loc-g756135");
-        Assert.DoesNotContain(within300, h => h.HeadingId == "loc-g2988507");
-        var warsawHit = within300.First(h => h.HeadingId == "loc-g756135");
+        Assert.Contains(within300, h => h.HeadingId == new HeadingId("loc-g756135"));
+        Assert.DoesNotContain(within300, h => h.HeadingId == new HeadingId("loc-g2988507"));
+        var warsawHit = within300.First(h => h.HeadingId == new HeadingId("loc-g756135"));
         Assert.InRange(warsawHit.DistanceKm!.Value, 240, 260);
         var within100 = store.Search(new SearchQuery("", Near: new NearPlace("Krakowie", 100)));
-        Assert.All(within100, h => Assert.Equal("loc-g3094802", h.HeadingId));
+        Assert.All(within100, h => Assert.Equal(new HeadingId("loc-g3094802"), h.HeadingId));
         Assert.NotEmpty(within100);
     }
 

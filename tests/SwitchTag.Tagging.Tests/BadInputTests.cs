@@ -1,8 +1,10 @@
 using System.Collections.Immutable;
 using System.Text;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Tagging;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Tagging.Tests;
 
@@ -12,7 +14,7 @@ public class BadInputTests
     private static readonly NameTagger Tagger = NameTagger.Create(Models.Ner);
 
     private static ImmutableArray<Mention> Tag(string text) =>
-        Tagger.Tag(0, text, [new LanguageSpan(new CharSpan(0, text.Length), "und", 0.5)]);
+        Tagger.Tag(new TurnId(0), text, [new LanguageSpan(new CharSpan(0, text.Length), new LanguageCode("und"), 0.5)]);
 
     private static void AssertWellFormed(string text, ImmutableArray<Mention> mentions)
     {
@@ -30,9 +32,9 @@ public class BadInputTests
     [Fact]
     public void EmptyAndWhitespaceGiveNoMentions()
     {
-        Assert.Empty(Tagger.Tag(0, "", []));
-        Assert.Empty(Tagger.Tag(0, " \t\r\n", []));
-        Assert.Empty(Tagger.Tag(0, null!, default));
+        Assert.Empty(Tagger.Tag(new TurnId(0), "", []));
+        Assert.Empty(Tagger.Tag(new TurnId(0), " \t\r\n", []));
+        Assert.Empty(Tagger.Tag(new TurnId(0), null!, default));
     }
 
     [Fact]

@@ -1,6 +1,8 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Tagging.Sources;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Tagging.Tests;
 
@@ -10,7 +12,7 @@ namespace SwitchTag.Tagging.Tests;
 public class NamePrecedenceTests
 {
     private static Mention M(int start, int end, MentionSource source, NameLabel label = NameLabel.LOC) =>
-        new(0, new CharSpan(start, end), new string('x', end - start), label, "en", 0.9, source);
+        new(new TurnId(0), new CharSpan(start, end), new string('x', end - start), label, new LanguageCode("en"), 0.9, source);
 
     [Fact]
     public void AnAuthoritySpanIsNeverOverwritten()

@@ -1,8 +1,10 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Lexicon;
 using SwitchTag.Tagging;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Tagging.Tests;
 
@@ -12,7 +14,7 @@ public class NameTaggerTests
 {
     private static AuthorityList Authority(string csv) => AuthorityList.Parse(csv, "test.csv").List;
 
-    private static ImmutableArray<LanguageSpan> English(string text) => [new LanguageSpan(new CharSpan(0, text.Length), "en", 1.0)];
+    private static ImmutableArray<LanguageSpan> English(string text) => [new LanguageSpan(new CharSpan(0, text.Length), new LanguageCode("en"), 1.0)];
 
     [Fact]
     public void ListedPersonIsNeverAPlaceOrOrganisation()
@@ -21,7 +23,7 @@ public class NameTaggerTests
         var list = Authority("label,name,variants\nPER,Washington,\nPER,Georgia Brown,Georgia\n");
         var tagger = NameTagger.Create(Models.Ner, list);
         const string text = "Washington said that Georgia moved to Washington with the Red Cross.";
-        var mentions = tagger.Tag(0, text, English(text));
+        var mentions = tagger.Tag(new TurnId(0), text, English(text));
         var listed = mentions.Where(m => m.Text is "Washington" or "Georgia").ToList();
         Assert.Equal(3, listed.Count);
         Assert.All(listed, m => { Assert.Equal(NameLabel.PER, m.Label); Assert.Equal(MentionSource.Authority, m.Source); });
@@ -34,12 +36,12 @@ public class NameTaggerTests
         var list = Authority("label,name,variants\nLOC,Paris,\nORG,Ford,\n");
         var tagger = NameTagger.Create(Models.Ner, list);
         const string text = "Paris Hilton told Henry Ford about Paris.";
-        var mentions = tagger.Tag(3, text, English(text));
+        var mentions = tagger.Tag(new TurnId(3), text, English(text));
         Assert.All(mentions.Where(m => text[m.CharStart..m.CharEnd].Contains("Paris")), m => Assert.Equal(NameLabel.LOC, m.Label));
         Assert.All(mentions.Where(m => text[m.CharStart..m.CharEnd].Contains("Ford")), m => Assert.Equal(NameLabel.ORG, m.Label));
         // The model may not widen a protected match: no mention covers "Paris Hilton" or "Henry Ford".
         Assert.DoesNotContain(mentions, m => m.Text is "Paris Hilton" or "Henry Ford");
-        Assert.All(mentions, m => Assert.Equal(3, m.Turn));
+        Assert.All(mentions, m => Assert.Equal(new TurnId(3), m.Turn));
     }
 
     [Fact]
@@ -48,7 +50,7 @@ public class NameTaggerTests
         var list = Authority("label,name,variants\nPER,Maria Kowalska,\n");
         var tagger = NameTagger.Create(Models.Ner, list, mode: TaggingMode.RulesOnly);
         const string text = "Maria Kowalska met John Smith in Chicago.";
-        var mentions = tagger.Tag(0, text, English(text));
+        var mentions = tagger.Tag(new TurnId(0), text, English(text));
         var only = Assert.Single(mentions);
         Assert.Equal((0, 14, MentionSource.Authority), (only.CharStart, only.CharEnd, only.Source));
     }
@@ -58,8 +60,8 @@ public class NameTaggerTests
     {
         var tagger = NameTagger.Create(Models.Ner);
         const string text = "My father worked in Chicago, and then jsme se vrátili do Prahy.";
-        ImmutableArray<LanguageSpan> spans = [new(new CharSpan(0, 36), "en", 0.9), new(new CharSpan(36, text.Length), "cs", 0.8)];
-        var mentions = tagger.Tag(0, text, spans);
+        ImmutableArray<LanguageSpan> spans = [new(new CharSpan(0, 36), new LanguageCode("en"), 0.9), new(new CharSpan(36, text.Length), new LanguageCode("cs"), 0.8)];
+        var mentions = tagger.Tag(new TurnId(0), text, spans);
         Assert.NotEmpty(mentions);
         foreach (var m in mentions)
         {
@@ -76,7 +78,7 @@ public class NameTaggerTests
     [InlineData("מיר זײַנען געקומען קיין ווילנע מיט משה ראָזענבערג.", "yi", "ווילנע")]
     public void ModelMentionsInCyrillicAndHebrewAreKept(string text, string language, string name)
     {
-        var mentions = NameTagger.Create(Models.Ner).Tag(0, text, [new LanguageSpan(new CharSpan(0, text.Length), language, 1.0)]);
+        var mentions = NameTagger.Create(Models.Ner).Tag(new TurnId(0), text, [new LanguageSpan(new CharSpan(0, text.Length), new LanguageCode(language), 1.0)]);
         Assert.Contains(mentions, m => m.Source == MentionSource.Model && m.Text.Contains(name));
     }
 }

@@ -1,9 +1,10 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Tagging.Sources.Vetoes;
-using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Tagging.Tests;
 
@@ -23,7 +24,7 @@ public class OrdinaryWordVetoTests
     private static Mention Las(string text, MentionSource source)
     {
         int at = text.IndexOf("Las", StringComparison.Ordinal);
-        return new Mention(0, new CharSpan(at, at + 3), "Las", NameLabel.LOC, "es", 0.9, source);
+        return new Mention(new TurnId(0), new CharSpan(at, at + 3), "Las", NameLabel.LOC, new LanguageCode("es"), 0.9, source);
     }
 
     [Fact]
@@ -48,7 +49,7 @@ public class OrdinaryWordVetoTests
     private static Mention Word(string text, string word, string language)
     {
         int at = text.IndexOf(word, StringComparison.Ordinal);
-        return new Mention(0, new CharSpan(at, at + word.Length), word, NameLabel.LOC, language, 0.9, MentionSource.Model);
+        return new Mention(new TurnId(0), new CharSpan(at, at + word.Length), word, NameLabel.LOC, new LanguageCode(language), 0.9, MentionSource.Model);
     }
 
     [Fact]
@@ -59,7 +60,7 @@ public class OrdinaryWordVetoTests
         // inflected form (Nazca, PE: issue 10).
         const string text = "Nasci em Arcozelo, perto do Porto.";
         var gazetteer = Gazetteer.Load(Path.Combine(Models.Directory, Gazetteer.FileName));
-        var candidates = gazetteer.Candidates("Nasci", "pt");
+        var candidates = gazetteer.Candidates("Nasci", new LanguageCode("pt"));
         Assert.NotEmpty(candidates);
         Assert.All(candidates, c => Assert.Equal(MatchKind.Inflected, c.Kind));
         Assert.True(Veto.Value.Vetoes(Word(text, "Nasci", "pt"), text));

@@ -1,4 +1,5 @@
 using SwitchTag.Tagging.Sources.Organisations;
+using SwitchTag.Core.Ids;
 using Xunit;
 
 namespace SwitchTag.Tagging.Tests;
@@ -9,7 +10,7 @@ namespace SwitchTag.Tagging.Tests;
 public class OrganisationCueSourceTests
 {
     private static string[] Organisations(string text) =>
-        [.. new OrganisationCueSource().Find(0, text, []).Select(m => m.Text)];
+        [.. new OrganisationCueSource().Find(new TurnId(0), text, []).Select(m => m.Text)];
 
     [Theory]
     [InlineData("I worked in a textile factory,\nthe Fiação Santa Rita, in Brás.", "Fiação Santa Rita")]

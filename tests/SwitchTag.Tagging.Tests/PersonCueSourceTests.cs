@@ -1,6 +1,7 @@
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Tagging.Sources.Cues;
+using SwitchTag.Core.Ids;
 using Xunit;
 
 namespace SwitchTag.Tagging.Tests;
@@ -13,7 +14,7 @@ public class PersonCueSourceTests
     private static readonly NameListSet Lists = NameListSet.Load(Path.Combine(Models.Directory, NameListSet.FolderName));
 
     private static string[] Persons(string text) =>
-        [.. new PersonCueSource(Lists.Cues, Lists.NotPlaces, Gazetteer.Empty).Find(0, text, []).Select(m => m.Text)];
+        [.. new PersonCueSource(Lists.Cues, Lists.NotPlaces, Gazetteer.Empty).Find(new TurnId(0), text, []).Select(m => m.Text)];
 
     [Theory]
     [InlineData("Our teacher was Lidiya Petrovna, very strict.", "Lidiya Petrovna")]

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
@@ -35,7 +36,7 @@ public readonly record struct MentionSource(string Name)
 
 /// <summary>A name found in a turn: offsets into <see cref="Turn.Text"/>.</summary>
 public sealed record Mention(
-    int Turn,
+    TurnId Turn,
     CharSpan Chars,
     string Text,
     NameLabel Label,

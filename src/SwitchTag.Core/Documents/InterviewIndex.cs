@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
@@ -21,27 +22,27 @@ public sealed record PlaceLink(long GeonameId, string Name, double? Latitude, do
 }
 
 /// <summary>One index entry: every mention of one person, place or organisation.</summary>
-/// <param name="Mentions">Indices into <see cref="InterviewIndex.Mentions"/>, in time order.</param>
+/// <param name="Mentions">Mentions of <see cref="InterviewIndex.Mentions"/>, in time order.</param>
 /// <param name="Alternatives">Other gazetteer places the name could mean, kept for the reviewer.</param>
 public sealed record Heading(
-    string Id,
+    HeadingId Id,
     NameLabel Label,
     string Name,
     ImmutableArray<string> Variants,
     PlaceLink? Place,
     ImmutableArray<PlaceLink> Alternatives,
-    ImmutableArray<int> Mentions,
+    ImmutableArray<MentionId> Mentions,
     ImmutableArray<string> Speakers,
     double Confidence,
     MentionSource Source)
 {
     /// <summary>Ids of person headings that are probably the same person (a cross-language equivalent
     /// or a spelling fold without other evidence), shown to the reviewer, never merged silently.</summary>
-    public ImmutableArray<string> PossiblySame { get; init; } = [];
+    public ImmutableArray<HeadingId> PossiblySame { get; init; } = [];
 }
 
 /// <summary>A mention placed in time and filed under a heading (null while under review).</summary>
-public sealed record IndexedMention(Mention Mention, TimeRange Time, string? HeadingId);
+public sealed record IndexedMention(Mention Mention, TimeRange Time, HeadingId? HeadingId);
 
 /// <summary>A stretch outside the interview's main language, for the translators. <see cref="Check"/>:
 /// its language is too uncertain to claim, so a person should check the language first.</summary>
@@ -51,7 +52,7 @@ public sealed record WorklistItem(
     LanguageCode Language,
     double Confidence,
     string Text,
-    int Turn,
+    TurnId Turn,
     CharSpan Chars,
     int Words,
     bool Check = false)
@@ -65,14 +66,14 @@ public sealed record LanguageShare(LanguageCode Language, double Seconds, int Wo
 
 /// <summary>A language span outside the interview's main language (<c>und</c> excluded), offsets into
 /// its turn's text: what the annotated transcript marks.</summary>
-public sealed record ForeignSpan(int Turn, CharSpan Chars, LanguageCode Language)
+public sealed record ForeignSpan(TurnId Turn, CharSpan Chars, LanguageCode Language)
 {
     public int CharStart => Chars.Start;
     public int CharEnd => Chars.End;
 }
 
 /// <summary>A mention held back from the index for a person to decide.</summary>
-public sealed record ReviewItem(int Mention, string Reason);
+public sealed record ReviewItem(MentionId Mention, string Reason);
 
 /// <summary>Everything known about one interview after the whole pipeline has run.</summary>
 /// <param name="Languages">Seconds and words per language, most seconds first.</param>
@@ -101,4 +102,8 @@ public sealed record InterviewIndex(
 
     /// <summary>How <see cref="MainLanguage"/> was chosen; null when not recorded.</summary>
     public MainLanguageDecision? MainLanguageDecision { get; init; }
+
+    public Turn TurnAt(TurnId turn) => Turns[turn.Index];
+
+    public IndexedMention MentionAt(MentionId mention) => Mentions[mention.Index];
 }

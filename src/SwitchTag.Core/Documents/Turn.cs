@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 
@@ -12,9 +13,10 @@ public sealed record TurnCue(int CueIndex, CharSpan Chars)
 }
 
 /// <summary>Consecutive cues of one speaker. <see cref="Text"/> is the cues' plain texts joined by
-/// one space; every char offset of later stages is into this text.</summary>
+/// one space; every char offset of later stages is into this text. <see cref="Id"/> is its place in
+/// the interview's list of turns.</summary>
 public sealed record Turn(
-    int Index,
+    TurnId Id,
     string? Speaker,
     string? SpeakerLabel,
     TimeRange Time,

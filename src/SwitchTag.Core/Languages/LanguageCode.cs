@@ -53,9 +53,10 @@ public readonly struct LanguageCode : IEquatable<LanguageCode>, IComparable<Lang
     public static bool operator ==(LanguageCode a, LanguageCode b) => a.Equals(b);
     public static bool operator !=(LanguageCode a, LanguageCode b) => !a.Equals(b);
 
-    // Bridge for this round (see DEVELOPERS.md): branches written against string codes keep
-    // compiling after they merge. Comparisons with a string are ordinal on the code.
-    public static implicit operator LanguageCode(string code) => new(code);
+    // What is left of this round's bridge (see DEVELOPERS.md): a code still reads as its string and
+    // compares with one (ordinally), so branches written against string codes keep compiling after
+    // they merge. No string becomes a code without LanguageCode's constructor or TryParse, which
+    // refuse what is not a code.
     public static implicit operator string(LanguageCode code) => code.Code;
     public static bool operator ==(LanguageCode a, string? b) => string.Equals(a.Code, b, StringComparison.Ordinal);
     public static bool operator !=(LanguageCode a, string? b) => !(a == b);

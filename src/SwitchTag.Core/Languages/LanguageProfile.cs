@@ -9,7 +9,11 @@ namespace SwitchTag.Core.Languages;
 /// patronymic, lower case, in every script the language is written in) and <c>organisations.txt</c>
 /// (<c>heads:</c> words that make a capitalised run an organisation's name, <c>joins:</c> small
 /// words that may stand inside one) and <c>demonym-endings.txt</c> (endings of words for the people of
-/// a place: "Neapolitan", "Viennese"). Every file is optional.</summary>
+/// a place: "Neapolitan", "Viennese"); for language identification of speech, <c>hesitations.txt</c>
+/// (filled pauses and backchannels), <c>tags.txt</c> (transcriber notes written without brackets),
+/// <c>loanwords.txt</c> (foreign words in everyday use) and <c>interviewer-labels.txt</c> (speaker
+/// labels that mark the interviewer). The folder <c>mul</c> (ISO 639-2 "multiple languages") holds
+/// what holds in every language. Every file is optional; README.md in Languages/ says more.</summary>
 public sealed record LanguageProfile(
     LanguageCode Code,
     ImmutableArray<LanguageCode> Aliases,
@@ -20,7 +24,11 @@ public sealed record LanguageProfile(
     ImmutableArray<string> PatronymicEndings,
     ImmutableArray<string> OrganisationHeads,
     ImmutableArray<string> OrganisationJoins,
-    ImmutableArray<string> DemonymEndings);
+    ImmutableArray<string> DemonymEndings,
+    ImmutableArray<string> Hesitations,
+    ImmutableArray<string> TranscriberTags,
+    ImmutableArray<string> Loanwords,
+    ImmutableArray<string> InterviewerLabels);
 
 /// <summary>A language's case endings as <c>stemming.txt</c> writes them (<c>key: values</c> lines):
 /// <c>endings</c> a name may carry in running text, <c>nominative</c> endings of a dictionary form,

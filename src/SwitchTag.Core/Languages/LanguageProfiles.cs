@@ -24,7 +24,14 @@ public sealed class LanguageProfiles
         OrganisationJoins = all.SelectMany(p => p.OrganisationJoins).ToFrozenSet(StringComparer.Ordinal);
         DemonymEndings = [.. all.SelectMany(p => p.DemonymEndings).Distinct(StringComparer.Ordinal).OrderByDescending(e => e.Length)];
         PatronymicEndings = [.. all.SelectMany(p => p.PatronymicEndings).Distinct(StringComparer.Ordinal).OrderByDescending(e => e.Length)];
+        InterviewerLabels = all.SelectMany(p => p.InterviewerLabels).ToFrozenSet(StringComparer.OrdinalIgnoreCase);
     }
+
+    /// <summary>Code of the folder whose lists hold in every language (ISO 639-2 "multiple languages").</summary>
+    public static readonly LanguageCode Multiple = new("mul");
+
+    /// <summary>Speaker labels that mark the interviewer, every language, compared ignoring case.</summary>
+    public FrozenSet<string> InterviewerLabels { get; }
 
     /// <summary>Organisation head words and the small words inside such names, of every language
     /// (lower case): names are said across languages ("the Scuola Elementare Regina Margherita").</summary>
@@ -80,7 +87,8 @@ public sealed class LanguageProfiles
                 using var reader = new StreamReader(stream);
                 return reader.ReadToEnd();
             }
-            return ProfileText.Parse(g.Key, Read("aliases.txt"), Read("stopwords.txt"), Read("titles.txt"), Read("particles.txt"), Read("stemming.txt"), Read("patronymics.txt"), Read("organisations.txt"), Read("demonym-endings.txt"));
+            return ProfileText.Parse(g.Key, Read("aliases.txt"), Read("stopwords.txt"), Read("titles.txt"), Read("particles.txt"), Read("stemming.txt"), Read("patronymics.txt"), Read("organisations.txt"), Read("demonym-endings.txt"),
+                Read("hesitations.txt"), Read("tags.txt"), Read("loanwords.txt"), Read("interviewer-labels.txt"));
         });
         return new LanguageProfiles([.. profiles]);
     }

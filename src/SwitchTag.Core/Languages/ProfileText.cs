@@ -8,12 +8,12 @@ namespace SwitchTag.Core.Languages;
 internal static class ProfileText
 {
     public static LanguageProfile Parse(string code, string aliases, string stopWords, string titles, string particles, string stemming, string patronymics,
-        string organisations, string demonyms)
+        string organisations, string demonyms, string hesitations, string tags, string loanwords, string interviewerLabels)
     {
         var org = KeyValues(code, "organisations.txt", organisations);
         return new(new LanguageCode(code), [.. Words(aliases).Select(a => new LanguageCode(a))], Words(stopWords), Words(titles), Words(particles),
             stemming.Length == 0 ? null : Stemming(code, stemming), Words(patronymics), org.GetValueOrDefault("heads", []), org.GetValueOrDefault("joins", []),
-            Words(demonyms));
+            Words(demonyms), Words(hesitations), Words(tags), Words(loanwords), Words(interviewerLabels));
     }
 
     private static Dictionary<string, ImmutableArray<string>> KeyValues(string code, string file, string text)

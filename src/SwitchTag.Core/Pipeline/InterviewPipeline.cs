@@ -15,8 +15,8 @@ public sealed class InterviewPipeline(ILanguageSegmenter languages, INameTagger 
         var result = languages.SegmentInterview(turns, mainLanguage);
         var spans = result.Spans;
         var mentions = ImmutableArray.CreateBuilder<Mention>();
-        for (int t = 0; t < turns.Length; t++)
-            mentions.AddRange(names.Tag(t, turns[t].Text, spans[t]));
+        foreach (var turn in turns)
+            mentions.AddRange(names.Tag(turn.Id, turn.Text, spans[turn.Id.Index]));
         return index.Build(transcript, turns, result.MainLanguage, spans, mentions.ToImmutable()) with
         {
             LanguageProfile = result.Profile,

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using System.Text;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Text;
 
@@ -22,13 +23,13 @@ public static class TurnBuilder
             string? speaker = cues[i].Speaker;
             while (i + 1 < cues.Length && string.Equals(cues[i + 1].Speaker, speaker, StringComparison.Ordinal))
                 i++;
-            turns.Add(Join(turns.Count, cues, first, i));
+            turns.Add(Join(new TurnId(turns.Count), cues, first, i));
             i++;
         }
         return turns.ToImmutable();
     }
 
-    private static Turn Join(int index, ImmutableArray<Cue> cues, int first, int last)
+    private static Turn Join(TurnId id, ImmutableArray<Cue> cues, int first, int last)
     {
         var text = new StringBuilder();
         var parts = ImmutableArray.CreateBuilder<TurnCue>(last - first + 1);
@@ -43,6 +44,6 @@ public static class TurnBuilder
             end = Timecode.Max(end, cues[c].Time.End);
         }
         var head = cues[first];
-        return new Turn(index, head.Speaker, head.SpeakerLabel, new TimeRange(start, end), text.ToString(), parts.MoveToImmutable());
+        return new Turn(id, head.Speaker, head.SpeakerLabel, new TimeRange(start, end), text.ToString(), parts.MoveToImmutable());
     }
 }

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Languages;
 
@@ -42,7 +43,7 @@ public interface INameLexicon
 /// <summary>The tag stage: names in one turn, each span routed with its language.</summary>
 public interface INameTagger
 {
-    ImmutableArray<Mention> Tag(int turnIndex, string turnText, ImmutableArray<LanguageSpan> spans);
+    ImmutableArray<Mention> Tag(TurnId turn, string turnText, ImmutableArray<LanguageSpan> spans);
 }
 
 /// <summary>The time and index stages: from annotated turns to the finished interview index.</summary>

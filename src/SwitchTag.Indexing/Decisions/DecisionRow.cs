@@ -1,6 +1,7 @@
 using SwitchTag.Core.Decisions;
 using System.Globalization;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 
 namespace SwitchTag.Indexing.Decisions;
@@ -25,7 +26,7 @@ public sealed record DecisionRow(SourceLine At, string Action, string? Interview
         }
         if (!int.TryParse(Turn, out int turn) || !int.TryParse(Char, out int charAt) || turn < 0 || charAt < 0)
             return "a mention decision needs the time column (seconds), or the turn and char columns (whole numbers, from mentions.csv)";
-        target = new MentionAtPosition(turn, charAt);
+        target = new MentionAtPosition(new TurnId(turn), charAt);
         return null;
     }
 

@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 
 namespace SwitchTag.Indexing.Decisions;
@@ -16,14 +17,14 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
     public ImmutableArray<Decision> Mine { get; } = decisions.IsDefault ? [] :
         decisions.Where(d => d.Interview is null || string.Equals(d.Interview, interview, StringComparison.OrdinalIgnoreCase)).ToImmutableArray();
 
-    /// <summary>Rejected mentions removed, relabelled ones changed; <c>Accepted</c> holds the indices
-    /// (into the returned list) of every mention a decision touched.</summary>
-    public (ImmutableArray<Mention> Mentions, IReadOnlySet<int> Accepted, ImmutableArray<DecisionOutcome> Applied) ApplyToMentions(
+    /// <summary>Rejected mentions removed, relabelled ones changed; <c>Accepted</c> holds the ids
+    /// (positions in the returned list) of every mention a decision touched.</summary>
+    public (ImmutableArray<Mention> Mentions, IReadOnlySet<MentionId> Accepted, ImmutableArray<DecisionOutcome> Applied) ApplyToMentions(
         ImmutableArray<Mention> mentions, Func<Mention, TimeRange> timeOf)
     {
         var counts = new int[Mine.Length];
         var kept = ImmutableArray.CreateBuilder<Mention>();
-        var accepted = new HashSet<int>();
+        var accepted = new HashSet<MentionId>();
         var times = mentions.Select(timeOf).ToArray();
         // A decision looks only at the mentions of its own text (any case), so many decisions on
         // many mentions cost no scan of every mention per decision.
@@ -49,20 +50,21 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
                 if (((MentionDecision)Mine[d]).Apply(current) is { } next) current = next; else rejected = true;
             }
             if (rejected) continue;
-            if (decided) accepted.Add(kept.Count);
+            if (decided) accepted.Add(new MentionId(kept.Count));
             kept.Add(current);
         }
         return (kept.ToImmutable(), accepted, Outcomes(counts));
     }
 
     /// <summary>Applies the heading decisions; returns the final mentions (those of rejected headings
-    /// dropped), their times, headings and review items, every index renumbered to match.</summary>
+    /// dropped), their times, headings and review items, every mention id renumbered to match
+    /// (<see cref="MentionRenumbering"/>).</summary>
     public (ImmutableArray<Mention> Mentions, ImmutableArray<TimeRange> Times, HeadingResult Headings, ImmutableArray<DecisionOutcome> Applied) ApplyToHeadings(
         ImmutableArray<Mention> mentions, ImmutableArray<TimeRange> times, HeadingResult result)
     {
         var counts = new int[Mine.Length];
         var drafts = result.Headings.Select(h => new HeadingDraft(h)).ToList();
-        var draftOf = drafts.ToDictionary(h => h.Id, StringComparer.Ordinal);
+        var draftOf = drafts.ToDictionary(h => h.Id);
         foreach (var (draft, heading) in drafts.Zip(result.Headings))
             draft.PossiblySame.AddRange(heading.PossiblySame.Select(id => draftOf[id]));
         var edit = new HeadingEdit(drafts, new bool[mentions.Length], mentions.Select(m => m.Label).ToArray(), times);
@@ -79,23 +81,24 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
             if (targets.Count > 0) byName = null;
         }
 
-        var newIndex = new int[mentions.Length];
-        var keptMentions = ImmutableArray.CreateBuilder<Mention>();
-        var keptTimes = ImmutableArray.CreateBuilder<TimeRange>();
+        var renumbering = new MentionRenumbering(edit.Dropped);
+        var keptMentions = ImmutableArray.CreateBuilder<Mention>(renumbering.KeptCount);
+        var keptTimes = ImmutableArray.CreateBuilder<TimeRange>(renumbering.KeptCount);
         for (int i = 0; i < mentions.Length; i++)
         {
-            if (edit.Dropped[i]) { newIndex[i] = -1; continue; }
-            newIndex[i] = keptMentions.Count;
+            if (edit.Dropped[i]) continue;
             keptMentions.Add(mentions[i] with { Label = edit.Labels[i] });
             keptTimes.Add(times[i]);
         }
-        var headingOf = new string?[keptMentions.Count];
+        var headingOf = new HeadingId?[renumbering.KeptCount];
         var live = edit.Drafts.ToHashSet();
-        var headings = HeadingOrder.Sort(edit.Drafts.Select(h => h.ToHeading(newIndex, live)));
+        var headings = HeadingOrder.Sort(edit.Drafts.Select(h => h.ToHeading(renumbering, live)));
         foreach (var h in headings)
-            foreach (int i in h.Mentions) headingOf[i] = h.Id;
-        var review = result.Review.Where(r => !edit.Dropped[r.Mention]).Select(r => r with { Mention = newIndex[r.Mention] }).ToImmutableArray();
-        return (keptMentions.ToImmutable(), keptTimes.ToImmutable(), new HeadingResult(headings, [.. headingOf], review), Outcomes(counts));
+            foreach (var m in h.Mentions) headingOf[m.Index] = h.Id;
+        var review = ImmutableArray.CreateBuilder<ReviewItem>();
+        foreach (var r in result.Review)
+            if (renumbering.Map(r.Mention) is { } kept) review.Add(r with { Mention = kept });
+        return (keptMentions.MoveToImmutable(), keptTimes.MoveToImmutable(), new HeadingResult(headings, [.. headingOf], review.ToImmutable()), Outcomes(counts));
     }
 
     /// <summary>The drafts under each of their names (id, name, variants; any case), each list in
@@ -104,7 +107,7 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
     {
         var byName = new Dictionary<string, List<HeadingDraft>>(StringComparer.OrdinalIgnoreCase);
         foreach (var h in drafts)
-            foreach (var name in h.Variants.Prepend(h.Name).Prepend(h.Id))
+            foreach (var name in h.Variants.Prepend(h.Name).Prepend(h.Id.Value))
             {
                 if (!byName.TryGetValue(name, out var list)) byName[name] = list = [];
                 if (list.Count == 0 || list[^1] != h) list.Add(h);

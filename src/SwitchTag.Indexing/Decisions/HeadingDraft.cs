@@ -1,20 +1,21 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 
 namespace SwitchTag.Indexing.Decisions;
 
-/// <summary>A heading while heading decisions change it; <see cref="Members"/> index the mentions
+/// <summary>A heading while heading decisions change it; <see cref="Members"/> are ids of the mentions
 /// as grouped, before rejected ones are dropped.</summary>
 internal sealed class HeadingDraft(Heading h)
 {
-    public string Id { get; set; } = h.Id;
+    public HeadingId Id { get; set; } = h.Id;
     public NameLabel Label { get; set; } = h.Label;
     public string Name { get; set; } = h.Name;
     public List<string> Variants { get; } = [.. h.Variants];
     public PlaceLink? Place { get; private set; } = h.Place;
     public List<PlaceLink> Alternatives { get; } = [.. h.Alternatives];
-    public List<int> Members { get; private set; } = [.. h.Mentions];
+    public List<MentionId> Members { get; private set; } = [.. h.Mentions];
     public List<string> Speakers { get; } = [.. h.Speakers];
     public double Confidence { get; private set; } = h.Confidence;
     public MentionSource Source { get; } = h.Source;
@@ -27,14 +28,14 @@ internal sealed class HeadingDraft(Heading h)
     /// <paramref name="label"/> (null: any) means this heading.</summary>
     public bool Answers(NameLabel? label, string name) =>
         (label is null || Label == label) &&
-        (string.Equals(Id, name, StringComparison.OrdinalIgnoreCase) ||
+        (string.Equals(Id.Value, name, StringComparison.OrdinalIgnoreCase) ||
          string.Equals(Name, name, StringComparison.OrdinalIgnoreCase) ||
          Variants.Any(v => string.Equals(v, name, StringComparison.OrdinalIgnoreCase)));
 
     public void Absorb(HeadingDraft other, ImmutableArray<TimeRange> times)
     {
         Confidence = Math.Round((Confidence * Members.Count + other.Confidence * other.Members.Count) / (Members.Count + other.Members.Count), 4);
-        Members = Members.Concat(other.Members).OrderBy(i => times[i].Start).ThenBy(i => i).ToList();
+        Members = Members.Concat(other.Members).OrderBy(m => times[m.Index].Start).ThenBy(m => m).ToList();
         foreach (var v in other.Variants) if (!Variants.Contains(v)) Variants.Add(v);
         foreach (var s in other.Speakers) if (!Speakers.Contains(s)) Speakers.Add(s);
         if (Place is null && other.Place is not null) Place = other.Place;
@@ -45,13 +46,15 @@ internal sealed class HeadingDraft(Heading h)
         PossiblySame.Remove(other);
     }
 
-    /// <summary>The finished heading; <paramref name="live"/> are the drafts still standing, the only
+    /// <summary>The finished heading; a kept heading never holds a dropped mention (rejecting a heading
+    /// drops it with its mentions). <paramref name="live"/> are the drafts still standing, the only
     /// ones a "possibly the same" link may name.</summary>
-    public Heading ToHeading(int[] newIndex, IReadOnlySet<HeadingDraft> live) => new(Id, Label, Name, [.. Variants], Place, [.. Alternatives],
-        Members.Select(i => newIndex[i]).ToImmutableArray(), [.. Speakers], Confidence, Source)
+    public Heading ToHeading(MentionRenumbering renumbering, IReadOnlySet<HeadingDraft> live) => new(Id, Label, Name, [.. Variants], Place, [.. Alternatives],
+        [.. Members.Select(m => renumbering.Map(m) ?? throw new InvalidOperationException($"heading {Id} holds the dropped mention {m}"))],
+        [.. Speakers], Confidence, Source)
     {
         PossiblySame = [.. PossiblySame.Where(p => p != this && live.Contains(p) && p.Label == NameLabel.PER && Label == NameLabel.PER)
-            .Select(p => p.Id).Distinct(StringComparer.Ordinal).Order(StringComparer.Ordinal)],
+            .Select(p => p.Id).Distinct().Order()],
     };
 }
 

@@ -1,5 +1,6 @@
 using System.Globalization;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 
 namespace SwitchTag.Indexing.Decisions;
@@ -31,12 +32,12 @@ public sealed record MentionAtTime(Timecode Time) : MentionTarget
 
 /// <summary>The mention at this turn and char offset (the first decisions format, from mentions.csv):
 /// matches only while the turns and offsets are unchanged.</summary>
-public sealed record MentionAtPosition(int Turn, int Char) : MentionTarget
+public sealed record MentionAtPosition(TurnId Turn, int Char) : MentionTarget
 {
     public override bool Matches(Mention mention, TimeRange time) => mention.Turn == Turn && mention.CharStart == Char;
 
     public override (string? Time, string? Turn, string? Char) Cells =>
-        (null, Turn.ToString(CultureInfo.InvariantCulture), Char.ToString(CultureInfo.InvariantCulture));
+        (null, Turn.ToString(), Char.ToString(CultureInfo.InvariantCulture));
 
     public override string ToString() => $"turn {Turn} char {Char}";
 }

@@ -1,14 +1,13 @@
 using System.Collections.Frozen;
-using SwitchTag.LanguageId.Profiles;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.LanguageId.Interview;
 
-/// <summary>Speaker labels that mark the interviewer, from the embedded
-/// <c>Profiles/&lt;code&gt;/interviewer-labels.txt</c> of every language.</summary>
+/// <summary>Speaker labels that mark the interviewer: <c>interviewer-labels.txt</c> of every
+/// language profile (SwitchTag.Core's Languages/&lt;code&gt;/).</summary>
 public static class InterviewerLabels
 {
-    private static readonly FrozenSet<string> Labels =
-        ProfileFiles.Read("interviewer-labels.txt").Select(e => e.Entry).ToFrozenSet(StringComparer.OrdinalIgnoreCase);
+    private static readonly FrozenSet<string> Labels = LanguageProfiles.Default.InterviewerLabels;
 
     /// <summary>True for "Interviewer", "INT", "Q", "Entrevistadora"... (surrounding spaces, colons
     /// and a trailing number such as "Interviewer 2" ignored).</summary>

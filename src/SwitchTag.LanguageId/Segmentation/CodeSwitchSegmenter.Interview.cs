@@ -47,7 +47,7 @@ public sealed partial class CodeSwitchSegmenter
         for (int c = 0; c < joined.Length; c++)
         {
             var code = _model.ClassCodes[c];
-            if (profile.Contains(code) || decoded.Words[c] / total < p.MinShare) continue;
+            if (profile.Contains(new LanguageCode(code)) || decoded.Words[c] / total < p.MinShare) continue;
             joined[c] = decoded.Words[c] / total;
             grew = true;
         }
@@ -65,7 +65,7 @@ public sealed partial class CodeSwitchSegmenter
         int classes = _model.ClassCount;
         var logPrior = new float[classes];
         for (int c = 0; c < classes; c++)
-            logPrior[c] = (float)Math.Log(profile.Contains(_model.ClassCodes[c]) ? Math.Max(classShare[c], p.OutsideShare) : p.OutsideShare);
+            logPrior[c] = (float)Math.Log(profile.Contains(new LanguageCode(_model.ClassCodes[c])) ? Math.Max(classShare[c], p.OutsideShare) : p.OutsideShare);
 
         var enter = new float[classes];
         for (int c = 0; c < classes; c++) enter[c] = p.SwitchCost - p.EnterWeight * logPrior[c];

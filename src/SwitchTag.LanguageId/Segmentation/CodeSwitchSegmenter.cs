@@ -3,7 +3,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Text;
 using SwitchTag.LanguageId.Model;
-using SwitchTag.LanguageId.Profiles;
+using SwitchTag.LanguageId.Text;
 using SwitchTag.LanguageId.Text;
 using SwitchTag.Core.Languages;
 
@@ -100,7 +100,7 @@ public sealed partial class CodeSwitchSegmenter : ILanguageSegmenter
         for (int c = 0; c < classes; c++)
         {
             enter[c] = parameters.SwitchCost;
-            bonus[c] = _model.ClassCodes[c] == mainLanguage ? parameters.MainLanguageBonus : 0;
+            bonus[c] = _model.ClassCodes[c] == mainLanguage.Code ? parameters.MainLanguageBonus : 0;
         }
         var labels = Decode(evidence, new DecoderPriors(start, enter, bonus));
         MergeShortIslands(text, evidence, labels, MinIslandWeight, (_, _) => true);

@@ -7,7 +7,7 @@ public enum TokenKind
     Word,
     /// <summary>Digits, possibly with inner separators ("1,944", "10:30").</summary>
     Number,
-    /// <summary>A filler of every language (uh, um, mhm, hmm...; Profiles/mul/hesitations.txt): neutral.</summary>
+    /// <summary>A filler of every language (uh, um, mhm, hmm...; the mul language profile's hesitations.txt): neutral.</summary>
     Hesitation,
     /// <summary>A transcriber tag in square brackets ([laughs], [inaudible]): neutral.</summary>
     Tag,

@@ -1,5 +1,4 @@
 using System.Globalization;
-using SwitchTag.LanguageId.Profiles;
 
 namespace SwitchTag.LanguageId.Text;
 
@@ -87,7 +86,7 @@ public static class Tokenizer
     private static TokenKind Classify(ReadOnlySpan<char> text, int start, int end)
     {
         int len = end - start;
-        // Fillers of every language (Profiles/mul/hesitations.txt); a language's own fillers are
+        // Fillers of every language (the mul language profile's hesitations.txt); a language's own fillers are
         // words here and are weighed by the segmenter in that language's context.
         if (len <= 6 && NeutralWords.Default.IsNeutralEverywhere(text[start..end]))
             return TokenKind.Hesitation;

@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Runtime.InteropServices;
+using SwitchTag.Core.Languages;
 using SwitchTag.LanguageId.Model;
 using SwitchTag.LanguageId.Segmentation;
 using SwitchTag.LanguageId.Text;
@@ -208,7 +209,7 @@ public static class ModelTrainer
             {
                 var p = model.Parameters with { SwitchCost = cost, EmissionCap = cap, MainLanguageBonus = bonus, NameWeight = name };
                 var score = new SwitchScore();
-                foreach (var turn in turns) score.Add(turn, segmenter.Segment(turn.Text, "en", p));
+                foreach (var turn in turns) score.Add(turn, segmenter.Segment(turn.Text, new LanguageCode("en"), p));
                 if (score.F1 > bestF1) { bestF1 = score.F1; best = p; }
             }
         log.WriteLine($"switch cost {best.SwitchCost}, emission cap {best.EmissionCap}, main-language bonus {best.MainLanguageBonus}, name weight {best.NameWeight}: calibration switch F1 {bestF1:F3}");

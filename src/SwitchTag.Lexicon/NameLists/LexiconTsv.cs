@@ -1,3 +1,5 @@
+using SwitchTag.Core.Languages;
+
 namespace SwitchTag.Lexicon.NameLists;
 
 /// <summary>Rows of a name-list file of models/lexicon (models/namelists.md): UTF-8, <c>#</c> header
@@ -17,11 +19,11 @@ internal static class LexiconTsv
     public static string[] Alternatives(string cell) => cell.Split('|', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
 
     /// <summary>The language folders present (ISO 639-1 codes).</summary>
-    public static IEnumerable<(string Language, string Folder)> Languages(string lexiconDir)
+    public static IEnumerable<(LanguageCode Language, string Folder)> Languages(string lexiconDir)
     {
         var root = Path.Combine(lexiconDir, "Languages");
         if (!Directory.Exists(root)) yield break;
         foreach (var folder in Directory.GetDirectories(root).Order(StringComparer.Ordinal))
-            yield return (Path.GetFileName(folder), folder);
+            yield return (new LanguageCode(Path.GetFileName(folder)), folder);
     }
 }

@@ -1,4 +1,5 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
 using SwitchTag.Output.Text;
 using SwitchTag.Core.Time;
@@ -29,10 +30,10 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
     /// <summary>The file, written to <paramref name="sb"/> cue by cue.</summary>
     public static void Render(InterviewIndex index, TextWriter sb)
     {
-        var cueTurn = new Dictionary<int, (Turn Turn, TurnCue Part, int TurnIndex)>();
+        var cueTurn = new Dictionary<int, (Turn Turn, TurnCue Part, TurnId TurnId)>();
         for (int t = 0; t < index.Turns.Length; t++)
             foreach (var part in index.Turns[t].Cues)
-                cueTurn[part.CueIndex] = (index.Turns[t], part, t);
+                cueTurn[part.CueIndex] = (index.Turns[t], part, new TurnId(t));
         var foreign = index.ForeignSpans.GroupBy(f => f.Turn).ToDictionary(g => g.Key, g => g.OrderBy(f => f.CharStart).ToArray());
 
         sb.Append("WEBVTT\n\nNOTE\nMachine annotation of ").Append(Escape(Path.GetFileName(index.Transcript.Source.Path)))
@@ -48,7 +49,7 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
             sb.Append('\n');
             if (cue.SpeakerLabel is { Length: > 0 } label)
                 sb.Append("<v ").Append(Escape(label.TrimEnd(':').Trim())).Append('>');
-            var spans = cueTurn.TryGetValue(c, out var place) ? CueSpans(foreign.GetValueOrDefault(place.TurnIndex, []), place.Part) : [];
+            var spans = cueTurn.TryGetValue(c, out var place) ? CueSpans(foreign.GetValueOrDefault(place.TurnId, []), place.Part) : [];
             AppendText(sb, cue, spans);
             sb.Append("\n\n");
         }

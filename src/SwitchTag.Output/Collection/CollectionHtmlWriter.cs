@@ -59,7 +59,7 @@ public sealed class CollectionHtmlWriter : ICollectionWriter
         {
             var variants = row.Uses.SelectMany(u => u.Heading.Variants.IsDefault ? [] : u.Heading.Variants).Distinct(StringComparer.Ordinal).ToList();
             string filterText = string.Join(' ', [row.Name, row.Label.ToString(), row.Place?.Country ?? "", .. variants, .. row.Uses.Select(u => u.Entry.Interview)]).ToLowerInvariant();
-            b.Append("<tr class=\"row\" id=\"").Append(Esc("c-" + row.Id)).Append("\" data-text=\"").Append(Esc(filterText)).Append("\"><td>").Append(Said(row.Name))
+            b.Append("<tr class=\"row\" id=\"").Append(Esc("c-" + row.Id.Value)).Append("\" data-text=\"").Append(Esc(filterText)).Append("\"><td>").Append(Said(row.Name))
              .Append("</td><td>").Append(row.Label).Append("</td><td class=\"variants\">").Append(string.Join(", ", variants.Select(Said)))
              .Append("</td><td class=\"n\">").Append(row.Uses.Sum(u => u.Heading.Times.Length)).Append("</td><td>")
              .Append(string.Join("<br>", row.Uses.Select(u =>
@@ -73,5 +73,5 @@ public sealed class CollectionHtmlWriter : ICollectionWriter
 
     private static List<MapPlace> Places(List<CollectionRows.Row> rows) =>
         rows.Where(r => r.Place is { HasCoordinates: true })
-            .Select(r => new MapPlace(r.Id, r.Name, r.Place!.Latitude!.Value, r.Place.Longitude!.Value, "#" + "c-" + r.Id)).ToList();
+            .Select(r => new MapPlace(r.Id.Value, r.Name, r.Place!.Latitude!.Value, r.Place.Longitude!.Value, "#" + "c-" + r.Id.Value)).ToList();
 }

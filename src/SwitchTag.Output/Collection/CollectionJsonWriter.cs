@@ -36,7 +36,7 @@ public sealed class CollectionJsonWriter : ICollectionWriter
         foreach (var row in CollectionRows.Of(entries))
         {
             w.WriteStartObject();
-            w.WriteString("id", row.Id);
+            w.WriteString("id", row.Id.Value);
             w.WriteString("label", row.Label.ToString());
             w.WriteString("name", row.Name);
             if (row.Place is null) w.WriteNull("place");

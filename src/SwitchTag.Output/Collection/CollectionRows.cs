@@ -1,4 +1,5 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 
 namespace SwitchTag.Output.Collection;
 
@@ -6,11 +7,11 @@ namespace SwitchTag.Output.Collection;
 /// Headings share an id across interviews when they link to one gazetteer place or fold to one key.</summary>
 internal static class CollectionRows
 {
-    public sealed record Row(string Id, NameLabel Label, string Name, PlaceLink? Place, List<(CollectionEntry Entry, CollectionHeading Heading)> Uses);
+    public sealed record Row(HeadingId Id, NameLabel Label, string Name, PlaceLink? Place, List<(CollectionEntry Entry, CollectionHeading Heading)> Uses);
 
     public static List<Row> Of(IReadOnlyList<CollectionEntry> entries)
     {
-        var rows = new Dictionary<string, Row>(StringComparer.Ordinal);
+        var rows = new Dictionary<HeadingId, Row>();
         foreach (var e in entries)
             foreach (var h in e.Headings)
             {

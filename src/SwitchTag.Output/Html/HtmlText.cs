@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Net;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 
@@ -53,7 +54,7 @@ public static class HtmlText
     }
 
     /// <summary>An element id from a heading id (ids are slugs, but escaping costs nothing).</summary>
-    public static string HeadingAnchor(string headingId) => "h-" + headingId;
+    public static string HeadingAnchor(HeadingId headingId) => "h-" + headingId.Value;
 
     public static string Number(double value, string format) => value.ToString(format, CultureInfo.InvariantCulture);
 }

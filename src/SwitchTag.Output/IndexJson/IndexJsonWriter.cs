@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Time;
 using SwitchTag.Output.Text;
 
@@ -69,7 +70,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
         foreach (var r in index.Review)
         {
             w.WriteStartObject();
-            w.WriteNumber("mention", r.Mention);
+            w.WriteNumber("mention", r.Mention.Index);
             w.WriteString("reason", r.Reason);
             w.WriteEndObject();
         }
@@ -173,7 +174,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteStartObject();
             w.WriteString("text", m.Text);
             w.WriteString("label", m.Label.ToString());
-            w.WriteNumber("turn", m.Turn);
+            w.WriteNumber("turn", m.Turn.Index);
             w.WriteNumber("charStart", m.CharStart);
             w.WriteNumber("charEnd", m.CharEnd);
             Seconds(w, "start", time.Start);
@@ -181,9 +182,9 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteString("language", m.Language.Code);
             w.WriteNumber("confidence", Math.Round(m.Confidence, 4));
             w.WriteString("source", m.Source.Name);
-            w.WriteString("heading", heading);
-            w.WriteString("speaker", index.Turns[m.Turn].Speaker);
-            w.WriteString("review", reasons.GetValueOrDefault(i));
+            w.WriteString("heading", heading?.Value);
+            w.WriteString("speaker", index.TurnAt(m.Turn).Speaker);
+            w.WriteString("review", reasons.GetValueOrDefault(new MentionId(i)));
             w.WriteEndObject();
             Spill(w);
         }
@@ -196,7 +197,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
         foreach (var h in index.Headings)
         {
             w.WriteStartObject();
-            w.WriteString("id", h.Id);
+            w.WriteString("id", h.Id.Value);
             w.WriteString("label", h.Label.ToString());
             w.WriteString("name", h.Name);
             w.WriteStartArray("variants");
@@ -209,16 +210,17 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteEndArray();
             w.WriteNumber("count", h.Mentions.Length);
             if (h.Mentions.IsEmpty) w.WriteNull("firstMention");
-            else Seconds(w, "firstMention", index.Mentions[h.Mentions[0]].Time.Start);
+            else Seconds(w, "firstMention", index.MentionAt(h.Mentions[0]).Time.Start);
             w.WriteStartArray("mentions");
-            foreach (int i in h.Mentions) { w.WriteNumberValue(i); Spill(w); }
+            foreach (var m in h.Mentions) { w.WriteNumberValue(m.Index); Spill(w); }
             w.WriteEndArray();
             w.WriteStartArray("times");
-            foreach (int i in h.Mentions)
+            foreach (var m in h.Mentions)
             {
+                var time = index.MentionAt(m).Time;
                 w.WriteStartObject();
-                Seconds(w, "start", index.Mentions[i].Time.Start);
-                Seconds(w, "end", index.Mentions[i].Time.End);
+                Seconds(w, "start", time.Start);
+                Seconds(w, "end", time.End);
                 w.WriteEndObject();
                 Spill(w);
             }
@@ -228,7 +230,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteEndArray();
             w.WriteNumber("confidence", h.Confidence);
             w.WriteStartArray("possiblySame");
-            foreach (var id in h.PossiblySame) w.WriteStringValue(id);
+            foreach (var id in h.PossiblySame) w.WriteStringValue(id.Value);
             w.WriteEndArray();
             w.WriteString("source", h.Source.Name);
             w.WriteEndObject();
@@ -261,7 +263,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteString("language", item.Language.Code);
             w.WriteNumber("confidence", item.Confidence);
             w.WriteString("text", item.Text);
-            w.WriteNumber("turn", item.Turn);
+            w.WriteNumber("turn", item.Turn.Index);
             w.WriteNumber("charStart", item.CharStart);
             w.WriteNumber("charEnd", item.CharEnd);
             w.WriteNumber("words", item.Words);

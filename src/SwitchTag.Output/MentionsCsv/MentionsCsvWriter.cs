@@ -1,4 +1,5 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Output.Text;
 
 namespace SwitchTag.Output.MentionsCsv;
@@ -30,9 +31,9 @@ public sealed class MentionsCsvWriter : IInterviewWriter
         {
             var (m, time, heading) = index.Mentions[i];
             csv.Row(time.Start.ToString(), time.End.ToString(), time.Start.ToSecondsString(), time.End.ToSecondsString(),
-                index.Turns[m.Turn].Speaker, m.Text, m.Label.ToString(), heading,
-                heading is null ? null : names.GetValueOrDefault(heading), m.Language, Numbers.Confidence(m.Confidence),
-                m.Source.Name, reasons.GetValueOrDefault(i), Numbers.Integer(m.Turn), Numbers.Integer(m.CharStart),
+                index.TurnAt(m.Turn).Speaker, m.Text, m.Label.ToString(), heading?.Value,
+                heading is { } id ? names.GetValueOrDefault(id) : null, m.Language.Code, Numbers.Confidence(m.Confidence),
+                m.Source.Name, reasons.GetValueOrDefault(new MentionId(i)), Numbers.Integer(m.Turn.Index), Numbers.Integer(m.CharStart),
                 Numbers.Integer(m.CharEnd));
         }
         return csv;

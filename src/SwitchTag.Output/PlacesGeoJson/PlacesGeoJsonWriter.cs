@@ -23,7 +23,7 @@ public sealed class PlacesGeoJsonWriter : IInterviewWriter
             if (h.Place is null) continue;
             w.WriteStartObject();
             w.WriteString("type", "Feature");
-            w.WriteString("id", h.Id);
+            w.WriteString("id", h.Id.Value);
             // RFC 7946 section 3.2: an unlocated feature (a region without coordinates) has a null geometry.
             if (h.Place is { Longitude: { } lon, Latitude: { } lat })
             {
@@ -38,7 +38,7 @@ public sealed class PlacesGeoJsonWriter : IInterviewWriter
             else w.WriteNull("geometry");
             w.WriteStartObject("properties");
             w.WriteString("interview", index.Transcript.Id);
-            w.WriteString("heading", h.Id);
+            w.WriteString("heading", h.Id.Value);
             w.WriteString("name", h.Name);
             if (h.Place.HasGeonameId) w.WriteNumber("geonameId", h.Place.GeonameId); else w.WriteNull("geonameId");
             w.WriteString("country", h.Place.Country);
@@ -48,7 +48,7 @@ public sealed class PlacesGeoJsonWriter : IInterviewWriter
             w.WriteEndArray();
             w.WriteNumber("count", h.Mentions.Length);
             w.WriteStartArray("times");
-            foreach (int i in h.Mentions) w.WriteStringValue(index.Mentions[i].Time.Start.ToString());
+            foreach (var m in h.Mentions) w.WriteStringValue(index.MentionAt(m).Time.Start.ToString());
             w.WriteEndArray();
             w.WriteEndObject();
             w.WriteEndObject();

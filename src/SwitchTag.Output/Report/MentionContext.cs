@@ -9,7 +9,7 @@ public sealed record MentionContext(string Before, string Name, string After)
 {
     public const int MaxSide = 110;
 
-    public static MentionContext Of(InterviewIndex index, IndexedMention mention) => Of(index.Turns[mention.Mention.Turn].Text, mention.Mention);
+    public static MentionContext Of(InterviewIndex index, IndexedMention mention) => Of(index.TurnAt(mention.Mention.Turn).Text, mention.Mention);
 
     public static MentionContext Of(string text, Mention m)
     {

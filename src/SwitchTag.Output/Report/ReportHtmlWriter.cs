@@ -1,4 +1,5 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Output.Html;
 using SwitchTag.Output.Map;
 using SwitchTag.Output.Text;
@@ -61,7 +62,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
     /// <summary>One marker per heading linked to a place, linking to the heading's mentions.</summary>
     public static List<MapPlace> Places(InterviewIndex index) =>
         index.Headings.Where(h => h.Place is { HasCoordinates: true })
-            .Select(h => new MapPlace(h.Id, h.Name, h.Place!.Latitude!.Value, h.Place.Longitude!.Value, "#" + HeadingAnchor(h.Id))).ToList();
+            .Select(h => new MapPlace(h.Id.Value, h.Name, h.Place!.Latitude!.Value, h.Place.Longitude!.Value, "#" + HeadingAnchor(h.Id))).ToList();
 
     private static void Facts(TextWriter b, InterviewIndex index)
     {
@@ -115,7 +116,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
             b.Append("<tr><td><a class=\"heading\" href=\"#").Append(Esc(HeadingAnchor(h.Id))).Append("\">").Append(Said(h.Name)).Append("</a>")
              .Append(PossiblySame(index, h)).Append("</td><td>")
              .Append(string.Join(", ", h.Variants.Select(Said))).Append("</td><td class=\"n\">").Append(h.Mentions.Length).Append("</td><td>")
-             .Append(h.Mentions.IsEmpty ? "" : TimeLink(index.Mentions[h.Mentions[0]].Time.Start, index.Media)).Append("</td><td>")
+             .Append(h.Mentions.IsEmpty ? "" : TimeLink(index.MentionAt(h.Mentions[0]).Time.Start, index.Media)).Append("</td><td>")
              .Append(string.Join(", ", h.Speakers.Select(Said))).Append("</td><td>").Append(Place(h)).Append("</td><td>")
              .Append(Band(h.Confidence)).Append("</td></tr>\n");
         }
@@ -125,7 +126,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
             b.Append("<section class=\"heading\" id=\"").Append(Esc(HeadingAnchor(h.Id))).Append("\">\n<h3>").Append(Said(h.Name))
              .Append(" <span class=\"muted\">").Append(h.Label).Append(", ").Append(h.Mentions.Length).Append(h.Mentions.Length == 1 ? " mention" : " mentions")
              .Append("</span></h3>\n<ol class=\"mentions\">\n");
-            foreach (int i in h.Mentions) Mention(b, index, i);
+            foreach (var m in h.Mentions) Mention(b, index, m);
             b.Append("</ol>\n</section>\n");
         }
         b.Append("</section>\n");
@@ -141,11 +142,11 @@ public sealed class ReportHtmlWriter : IInterviewWriter
             $"<a href=\"#{Esc(HeadingAnchor(o.Id))}\">{Said(o.Name)}</a>")) + "</span>";
     }
 
-    private static void Mention(TextWriter b, InterviewIndex index, int i)
+    private static void Mention(TextWriter b, InterviewIndex index, MentionId id)
     {
-        var m = index.Mentions[i];
-        b.Append("<li class=\"mention\" id=\"m-").Append(i).Append("\">").Append(TimeLink(m.Time.Start, index.Media)).Append(' ');
-        if (index.Turns[m.Mention.Turn].Speaker is { } speaker) b.Append("<span class=\"speaker\">").Append(Said(speaker)).Append("</span> ");
+        var m = index.MentionAt(id);
+        b.Append("<li class=\"mention\" id=\"m-").Append(id.Index).Append("\">").Append(TimeLink(m.Time.Start, index.Media)).Append(' ');
+        if (index.TurnAt(m.Mention.Turn).Speaker is { } speaker) b.Append("<span class=\"speaker\">").Append(Said(speaker)).Append("</span> ");
         b.Append(Context(index, m)).Append("</li>\n");
     }
 
@@ -174,9 +175,9 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         b.Append("<table>\n<tr><th>Time</th><th>Speaker</th><th>Mention in context</th><th>Label</th><th>Reason</th></tr>\n");
         foreach (var r in index.Review)
         {
-            var m = index.Mentions[r.Mention];
-            b.Append("<tr id=\"m-").Append(r.Mention).Append("\"><td>").Append(TimeLink(m.Time.Start, index.Media)).Append("</td><td>")
-             .Append(Said(index.Turns[m.Mention.Turn].Speaker)).Append("</td><td>").Append(Context(index, m)).Append("</td><td>")
+            var m = index.MentionAt(r.Mention);
+            b.Append("<tr id=\"m-").Append(r.Mention.Index).Append("\"><td>").Append(TimeLink(m.Time.Start, index.Media)).Append("</td><td>")
+             .Append(Said(index.TurnAt(m.Mention.Turn).Speaker)).Append("</td><td>").Append(Context(index, m)).Append("</td><td>")
              .Append(m.Mention.Label).Append("</td><td>").Append(Said(r.Reason)).Append("</td></tr>\n");
         }
         b.Append("</table>\n</section>\n");

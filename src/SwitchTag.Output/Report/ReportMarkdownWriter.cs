@@ -71,11 +71,11 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
             "| --- | --- | ---: | --- | --- | --- | --- | ---: |");
         foreach (var h in headings)
         {
-            var times = h.Mentions.Select(i => index.Mentions[i].Time.Start.ToString());
+            var times = h.Mentions.Select(m => index.MentionAt(m).Time.Start.ToString());
             table.Row().Append("| **").Append(MarkdownText.Escape(h.Name)).Append("**").Append(PossiblySame(index, h)).Append(" | ")
               .Append(string.Join(", ", h.Variants.Select(MarkdownText.Escape))).Append(" | ")
               .Append(h.Mentions.Length).Append(" | ")
-              .Append(h.Mentions.IsEmpty ? "" : index.Mentions[h.Mentions[0]].Time.Start.ToString()).Append(" | ")
+              .Append(h.Mentions.IsEmpty ? "" : index.MentionAt(h.Mentions[0]).Time.Start.ToString()).Append(" | ")
               .Append(string.Join(", ", times)).Append(" | ")
               .Append(string.Join(", ", h.Speakers.Select(MarkdownText.Escape))).Append(" | ")
               .Append(Place(h)).Append(" | ")
@@ -110,9 +110,9 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         var table = new MarkdownTable(md, "| Time | Speaker | Text | Label | Turn | Char | Reason |", "| --- | --- | --- | --- | ---: | ---: | --- |");
         foreach (var r in index.Review)
         {
-            var (m, time, _) = index.Mentions[r.Mention];
-            table.Row().Append("| ").Append(time.Start).Append(" | ").Append(MarkdownText.Escape(index.Turns[m.Turn].Speaker)).Append(" | ")
-              .Append(MarkdownText.Escape(m.Text)).Append(" | ").Append(m.Label).Append(" | ").Append(m.Turn).Append(" | ")
+            var (m, time, _) = index.MentionAt(r.Mention);
+            table.Row().Append("| ").Append(time.Start).Append(" | ").Append(MarkdownText.Escape(index.TurnAt(m.Turn).Speaker)).Append(" | ")
+              .Append(MarkdownText.Escape(m.Text)).Append(" | ").Append(m.Label).Append(" | ").Append(m.Turn.Index).Append(" | ")
               .Append(m.CharStart).Append(" | ").Append(MarkdownText.Escape(r.Reason)).Append(" |\n");
         }
         md.Append('\n');

@@ -54,9 +54,9 @@ public sealed class ReviewHtmlWriter : ICollectionWriter
         b.Append("<table>\n<tr><th>Heading</th><th>Label</th><th>Variants</th><th>Mentions</th><th>Decide</th><th>Decided</th></tr>\n");
         foreach (var h in e.Headings)
         {
-            b.Append("<tr class=\"heading\" data-id=\"").Append(Attr(h.Id)).Append("\" data-original=\"").Append(Attr(h.Id)).Append("\" data-name=\"").Append(Attr(h.Name))
+            b.Append("<tr class=\"heading\" data-id=\"").Append(Attr(h.Id.Value)).Append("\" data-original=\"").Append(Attr(h.Id.Value)).Append("\" data-name=\"").Append(Attr(h.Name))
              .Append("\" data-label=\"").Append(h.Label)
-             .Append("\"><td>").Append(Said(h.Name)).Append(" <span class=\"muted\">").Append(Esc(h.Id)).Append("</span></td><td>").Append(h.Label).Append("</td><td>")
+             .Append("\"><td>").Append(Said(h.Name)).Append(" <span class=\"muted\">").Append(Esc(h.Id.Value)).Append("</span></td><td>").Append(h.Label).Append("</td><td>")
              .Append(string.Join(", ", (h.Variants.IsDefault ? [] : h.Variants).Select(Said))).Append("</td><td class=\"n\">").Append(h.Times.Length).Append("</td><td>")
              .Append("<button data-act=\"accept\">Accept</button><button data-act=\"reject\">Reject</button>").Append(LabelSelect("relabel…"))
              .Append("<input data-act=\"rename\" placeholder=\"rename to…\" size=\"14\"><select data-act=\"merge\"><option value=\"\">merge into…</option></select></td><td class=\"status\"></td></tr>\n<tr class=\"mentions\"><td colspan=\"6\"><details><summary>")

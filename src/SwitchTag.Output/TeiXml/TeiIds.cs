@@ -1,5 +1,6 @@
 using System.Text;
 using System.Xml;
+using SwitchTag.Core.Ids;
 
 namespace SwitchTag.Output.TeiXml;
 
@@ -8,15 +9,15 @@ namespace SwitchTag.Output.TeiXml;
 /// their first turn.</summary>
 internal sealed class TeiIds
 {
-    private readonly Dictionary<string, string> _headings = new(StringComparer.Ordinal);
+    private readonly Dictionary<HeadingId, string> _headings = [];
     private readonly Dictionary<string, string> _speakers = new(StringComparer.Ordinal);
     private readonly HashSet<string> _used = new(StringComparer.Ordinal);
 
-    public string Heading(string headingId)
+    public string Heading(HeadingId headingId)
     {
         if (_headings.TryGetValue(headingId, out var id)) return id;
         var sb = new StringBuilder("h-");
-        foreach (char c in headingId) sb.Append(XmlConvert.IsNCNameChar(c) && c != ':' ? c : '_');
+        foreach (char c in headingId.Value) sb.Append(XmlConvert.IsNCNameChar(c) && c != ':' ? c : '_');
         id = sb.ToString();
         for (int k = 2; !_used.Add(id); k++) id = $"{sb}-{k}";
         _headings[headingId] = id;

@@ -1,4 +1,5 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Output.TeiXml;
@@ -9,19 +10,19 @@ namespace SwitchTag.Output.TeiXml;
 /// Offsets are into the turn's text.</summary>
 internal static class TeiInline
 {
-    public sealed record Element(int Start, int End, string Kind, LanguageCode? Language, int Mention);
+    public sealed record Element(int Start, int End, string Kind, LanguageCode? Language, MentionId? Mention);
 
-    /// <param name="mentions">the indices into <c>index.Mentions</c> of this turn's mentions, in index order</param>
-    public static List<Element> Layout(InterviewIndex index, int turn, IEnumerable<int> mentions)
+    /// <param name="mentions">this turn's mentions, in index order</param>
+    public static List<Element> Layout(InterviewIndex index, TurnId turn, IEnumerable<MentionId> mentions)
     {
         var names = new List<Element>();
         // One flag per char held by a name already laid: a name is checked over its own chars only,
         // so a turn of many thousand names costs no comparison of every name with every other.
         var ofTurn = mentions.ToList();
-        var held = new bool[ofTurn.Select(i => index.Mentions[i].Mention.CharEnd).Append(index.Turns[turn].Text.Length).Max()];
-        foreach (int i in ofTurn)
+        var held = new bool[ofTurn.Select(i => index.MentionAt(i).Mention.CharEnd).Append(index.TurnAt(turn).Text.Length).Max()];
+        foreach (var i in ofTurn)
         {
-            var (m, _, heading) = index.Mentions[i];
+            var (m, _, heading) = index.MentionAt(i);
             if (m.Turn != turn || heading is null || m.CharEnd <= m.CharStart) continue;
             if (held.AsSpan(m.CharStart, m.CharEnd - m.CharStart).Contains(true)) continue;
             held.AsSpan(m.CharStart, m.CharEnd - m.CharStart).Fill(true);
@@ -30,7 +31,7 @@ internal static class TeiInline
         // The names do not overlap, so ordered by start they are ordered by end too.
         var byStart = Enumerable.Range(0, names.Count).OrderBy(k => names[k].Start).ToArray();
         var foreign = new List<Element>();
-        foreach (var (span, _) in index.Spans[turn])
+        foreach (var (span, _) in index.Spans[turn.Index])
         {
             if (span.Language == index.MainLanguage || span.Language.IsUndetermined) continue;
             var pieces = new List<(int Start, int End)> { (span.CharStart, span.CharEnd) };
@@ -38,8 +39,8 @@ internal static class TeiInline
             foreach (var n in Overlapping(names, byStart, span.CharStart, span.CharEnd))
                 pieces = pieces.SelectMany(p => Cut(p, n)).ToList();
             foreach (var (start, end) in pieces)
-                if (end > start && index.Turns[turn].Text.AsSpan(start, end - start).Trim().Length > 0)
-                    foreign.Add(new Element(start, end, "foreign", span.Language, -1));
+                if (end > start && index.TurnAt(turn).Text.AsSpan(start, end - start).Trim().Length > 0)
+                    foreign.Add(new Element(start, end, "foreign", span.Language, null));
         }
         return foreign.Concat(names).OrderBy(e => e.Start).ThenByDescending(e => e.End).ThenBy(e => e.Kind == "name").ToList();
     }

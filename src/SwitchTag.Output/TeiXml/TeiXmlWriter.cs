@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using System.Xml;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Output.Report;
 using SwitchTag.Core.Languages;
 
@@ -48,10 +49,10 @@ public sealed class TeiXmlWriter : IInterviewWriter
         Timeline(w, index);
         // Each turn's mentions and each heading by id, gathered once: a per-turn or per-name scan of
         // them all would make a long interview quadratic.
-        var mentionsOf = index.Mentions.Select((m, i) => (m.Mention.Turn, i)).ToLookup(x => x.Turn, x => x.i);
-        var headings = new Dictionary<string, Heading>(StringComparer.Ordinal);
+        var mentionsOf = index.Mentions.Select((m, i) => (m.Mention.Turn, Id: new MentionId(i))).ToLookup(x => x.Turn, x => x.Id);
+        var headings = new Dictionary<HeadingId, Heading>();
         foreach (var h in index.Headings) headings.TryAdd(h.Id, h);
-        foreach (var turn in index.Turns) Utterance(w, index, turn, ids, mentionsOf[turn.Index], headings);
+        foreach (var turn in index.Turns) Utterance(w, index, turn, ids, mentionsOf[turn.Id], headings);
         w.WriteEndElement();
         w.WriteEndElement();
         w.WriteEndElement();
@@ -202,22 +203,22 @@ public sealed class TeiXmlWriter : IInterviewWriter
         w.WriteEndElement();
     }
 
-    private static void Utterance(XmlWriter w, InterviewIndex index, Turn turn, TeiIds ids, IEnumerable<int> mentions, Dictionary<string, Heading> headings)
+    private static void Utterance(XmlWriter w, InterviewIndex index, Turn turn, TeiIds ids, IEnumerable<MentionId> mentions, Dictionary<HeadingId, Heading> headings)
     {
         w.WriteStartElement("u");
         if (turn.Speaker is not null) w.WriteAttributeString("who", "#" + ids.Speaker(turn.Speaker));
         w.WriteAttributeString("start", "#" + TeiIds.When(turn.Time.Start.Milliseconds));
         w.WriteAttributeString("end", "#" + TeiIds.When(turn.Time.End.Milliseconds));
-        w.WriteAttributeString("n", turn.Index.ToString(CultureInfo.InvariantCulture));
+        w.WriteAttributeString("n", turn.Id.Index.ToString(CultureInfo.InvariantCulture));
         // An empty string marks the content as mixed, so the indenting writer adds no whitespace inside.
         w.WriteString("");
         var anchors = turn.Cues.Skip(1).Select(c => (c.CharStart, Ms: index.Transcript.Cues[c.CueIndex].Time.Start.Milliseconds)).ToList();
-        new UtteranceContent(w, index, turn, anchors, ids, headings).Write(0, turn.Text.Length, TeiInline.Layout(index, turn.Index, mentions));
+        new UtteranceContent(w, index, turn, anchors, ids, headings).Write(0, turn.Text.Length, TeiInline.Layout(index, turn.Id, mentions));
         w.WriteEndElement();
     }
 
     private sealed class UtteranceContent(XmlWriter w, InterviewIndex index, Turn turn, List<(int At, long Ms)> anchors, TeiIds ids,
-        Dictionary<string, Heading> headings)
+        Dictionary<HeadingId, Heading> headings)
     {
         public void Write(int from, int to, List<TeiInline.Element> inner)
         {
@@ -245,8 +246,8 @@ public sealed class TeiXmlWriter : IInterviewWriter
                 w.WriteAttributeString("xml", "lang", XmlNs, e.Language?.Code);
                 return;
             }
-            var (mention, _, headingId) = index.Mentions[e.Mention];
-            var heading = headings[headingId!];
+            var (mention, _, headingId) = index.MentionAt(e.Mention!.Value);
+            var heading = headings[headingId!.Value];
             w.WriteStartElement(mention.Label switch { NameLabel.PER => "persName", NameLabel.LOC => "placeName", _ => "orgName" });
             string reference = "#" + ids.Heading(heading.Id);
             if (heading.Place is { HasGeonameId: true } place)

@@ -52,7 +52,7 @@ public static class LanguageTimeline
             {
                 double x = X(span.Time.Start.Milliseconds), w = Math.Max(1.2, X(span.Time.End.Milliseconds) - x);
                 var language = span.Value.Language;
-                svg.Append("<rect class=\"band\" data-lang=\"").Append(HtmlText.Esc(language)).Append("\" x=\"").Append(N(x)).Append("\" y=\"").Append(N(y))
+                svg.Append("<rect class=\"band\" data-lang=\"").Append(HtmlText.Esc(language.Code)).Append("\" x=\"").Append(N(x)).Append("\" y=\"").Append(N(y))
                    .Append("\" width=\"").Append(N(w)).Append("\" height=\"").Append(N(Row - 6)).Append("\" fill=\"").Append(colours[language]).Append("\"><title>")
                    .Append(HtmlText.Esc(LanguageNames.Of(language))).Append(' ').Append(HtmlText.Clock(span.Time.Start)).Append('–').Append(HtmlText.Clock(span.Time.End))
                    .Append("</title></rect>\n");

@@ -28,7 +28,7 @@ public sealed class WorklistCsvWriter : IInterviewWriter
             csv.Row(item.Time.Start.ToString(), item.Time.End.ToString(), item.Time.Start.ToSecondsString(), item.Time.End.ToSecondsString(),
                 item.Speaker, item.Language.Code, LanguageNames.Of(item.Language), Numbers.Confidence(item.Confidence), item.Check ? "yes" : "no",
                 Numbers.Integer(item.Words), item.Text,
-                Numbers.Integer(item.Turn), Numbers.Integer(item.CharStart), Numbers.Integer(item.CharEnd));
+                Numbers.Integer(item.Turn.Index), Numbers.Integer(item.CharStart), Numbers.Integer(item.CharEnd));
         return csv;
     }
 }

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 
 namespace SwitchTag.Tagging.Sources;
 
@@ -16,5 +17,5 @@ public interface INameSource
 
     /// <summary>Mentions in <paramref name="turnText"/> (offsets into it) of turn <paramref name="turn"/>,
     /// each with the language of the span it starts in.</summary>
-    ImmutableArray<Mention> Find(int turn, string turnText, ImmutableArray<LanguageSpan> spans);
+    ImmutableArray<Mention> Find(TurnId turn, string turnText, ImmutableArray<LanguageSpan> spans);
 }

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Lexicon;
 using SwitchTag.Core.Languages;
 using SwitchTag.Core.Text;
@@ -11,7 +12,7 @@ namespace SwitchTag.Tagging.Sources;
 /// matches first, non-overlapping; each found with confidence 1.</summary>
 public static class RuleMatching
 {
-    public static ImmutableArray<Mention> Find(int turn, string text, ImmutableArray<LanguageSpan> spans,
+    public static ImmutableArray<Mention> Find(TurnId turn, string text, ImmutableArray<LanguageSpan> spans,
         Func<string, LanguageCode, ImmutableArray<NameMatch>> find)
     {
         if (string.IsNullOrEmpty(text)) return [];

@@ -13,7 +13,7 @@ public sealed class FakeSegmenter(IReadOnlyDictionary<string, string> words, str
 {
     public IReadOnlyList<LanguageCode> Languages => [new("en"), new("pl"), new("de")];
 
-    public LanguageGuess Identify(ReadOnlySpan<char> text) => new(main, 0.9);
+    public LanguageGuess Identify(ReadOnlySpan<char> text) => new(new LanguageCode(main), 0.9);
 
     public ImmutableArray<LanguageSpan> Segment(string text, LanguageCode mainLanguage)
     {

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Languages;
 using SwitchTag.Core.Text;
@@ -10,7 +11,7 @@ namespace SwitchTag.Indexing.Tests.Fakes;
 /// confidence per surface; the language is that of the span the name starts in.</summary>
 public sealed class FakeTagger(IReadOnlyList<(string Surface, NameLabel Label, double Confidence)> names) : INameTagger
 {
-    public ImmutableArray<Mention> Tag(int turnIndex, string turnText, ImmutableArray<LanguageSpan> spans)
+    public ImmutableArray<Mention> Tag(TurnId turn, string turnText, ImmutableArray<LanguageSpan> spans)
     {
         var found = ImmutableArray.CreateBuilder<Mention>();
         var taken = new bool[turnText.Length];
@@ -23,7 +24,7 @@ public sealed class FakeTagger(IReadOnlyList<(string Surface, NameLabel Label, d
                 if (!word || taken.AsSpan(at, surface.Length).Contains(true)) continue;
                 taken.AsSpan(at, surface.Length).Fill(true);
                 var language = spans.FirstOrDefault(s => s.Chars.Contains(at))?.Language ?? LanguageCode.Undetermined;
-                found.Add(new Mention(turnIndex, new CharSpan(at, end), surface, label, language, confidence, MentionSource.Model));
+                found.Add(new Mention(turn, new CharSpan(at, end), surface, label, language, confidence, MentionSource.Model));
             }
         }
         return found.ToImmutable();

@@ -5,6 +5,7 @@ using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing;
 using SwitchTag.Core.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Indexing.Tests.Fakes;
 
@@ -54,7 +55,7 @@ public static class Fixture
     }
 
     public static InterviewIndex Run(ImmutableArray<Decision> decisions = default) =>
-        new InterviewPipeline(Segmenter(), Tagger(), new IndexBuilder(Lexicon(), decisions)).Run(Transcript(), "en");
+        new InterviewPipeline(Segmenter(), Tagger(), new IndexBuilder(Lexicon(), decisions)).Run(Transcript(), new LanguageCode("en"));
 
     private static Cue Cue(long start, long end, string speaker, string text, int line, (int Offset, long Ms)[]? words = null) => new(
         new TimeRange(new Timecode(start), new Timecode(end)), speaker, speaker, text,

@@ -11,7 +11,7 @@ public sealed record RejectHeading(SourceLine At, string? Interview, NameLabel? 
 
     internal override bool Apply(HeadingDraft heading, HeadingEdit edit)
     {
-        foreach (int i in heading.Members) edit.Dropped[i] = true;
+        foreach (var m in heading.Members) edit.Dropped[m.Index] = true;
         edit.Drafts.Remove(heading);
         return true;
     }

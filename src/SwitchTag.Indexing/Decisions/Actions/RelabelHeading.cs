@@ -16,8 +16,8 @@ public sealed record RelabelHeading(SourceLine At, string? Interview, NameLabel?
     {
         if (heading.Label == NewLabel) return false;
         heading.Label = NewLabel;
-        heading.Id = HeadingBuilder.IdPrefix(NewLabel) + heading.Id[heading.Id.IndexOf('-')..];
-        foreach (int i in heading.Members) edit.Labels[i] = NewLabel;
+        heading.Id = heading.Id.WithLabel(NewLabel);
+        foreach (var m in heading.Members) edit.Labels[m.Index] = NewLabel;
         return true;
     }
 

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Lexicon;
 
 namespace SwitchTag.Tagging.Sources.Authority;
@@ -9,6 +10,6 @@ public sealed class AuthorityListSource(AuthorityList list) : INameSource
 {
     public MentionSource Source => MentionSource.Authority;
 
-    public ImmutableArray<Mention> Find(int turn, string turnText, ImmutableArray<LanguageSpan> spans) =>
+    public ImmutableArray<Mention> Find(TurnId turn, string turnText, ImmutableArray<LanguageSpan> spans) =>
         RuleMatching.Find(turn, turnText, spans, list.Find);
 }

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Core.Languages;
@@ -20,7 +21,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
 
     public MentionSource Source => MentionSource.Cue;
 
-    public ImmutableArray<Mention> Find(int turn, string turnText, ImmutableArray<LanguageSpan> spans)
+    public ImmutableArray<Mention> Find(TurnId turn, string turnText, ImmutableArray<LanguageSpan> spans)
     {
         if (string.IsNullOrEmpty(turnText)) return [];
         if (spans.IsDefault) spans = [];

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Tagging.Sources.PlaceEvidence;
 
 namespace SwitchTag.Tagging.Sources.Gazetteer;
@@ -15,7 +16,7 @@ public sealed class GazetteerSource(Lexicon.Gazetteer gazetteer, PlaceContext? c
     /// <summary>Both ranks this source proposes at.</summary>
     public ImmutableArray<MentionSource> Proposes => context is null ? [MentionSource.Gazetteer] : [MentionSource.PlaceEvidence, MentionSource.Gazetteer];
 
-    public ImmutableArray<Mention> Find(int turn, string turnText, ImmutableArray<LanguageSpan> spans)
+    public ImmutableArray<Mention> Find(TurnId turn, string turnText, ImmutableArray<LanguageSpan> spans)
     {
         var found = RuleMatching.Find(turn, turnText, spans, gazetteer.Find);
         return context is null ? found : [.. found.Select(m => context.Supports(m, turnText) ? m with { Source = MentionSource.PlaceEvidence } : m)];

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Languages;
 using SwitchTag.Core.Text;
 using SwitchTag.Lexicon;
@@ -16,7 +17,7 @@ public sealed class NameModelSource(NerModel model) : INameSource
 
     public MentionSource Source => MentionSource.Model;
 
-    public ImmutableArray<Mention> Find(int turn, string turnText, ImmutableArray<LanguageSpan> spans)
+    public ImmutableArray<Mention> Find(TurnId turn, string turnText, ImmutableArray<LanguageSpan> spans)
     {
         if (string.IsNullOrEmpty(turnText)) return [];
         if (spans.IsDefault) spans = [];

@@ -1,14 +1,17 @@
 using System.Collections.Frozen;
 
-namespace SwitchTag.LanguageId.Profiles;
+using SwitchTag.Core.Languages;
+
+namespace SwitchTag.LanguageId.Text;
 
 /// <summary>Hesitations, backchannels, unbracketed transcriber notes and loanwords in common use,
-/// read from the embedded <c>Profiles/&lt;code&gt;/hesitations.txt</c>, <c>tags.txt</c> and <c>loanwords.txt</c>. Words of the <c>mul</c> folder are
+/// from the language profiles' <c>hesitations.txt</c>, <c>tags.txt</c> and <c>loanwords.txt</c>
+/// (SwitchTag.Core's Languages/&lt;code&gt;/). Words of the <c>mul</c> profile are
 /// neutral in every language; a word listed for some languages is neutral only towards those (it
 /// carries no evidence against them, but ordinary evidence for or against every other one).</summary>
 public sealed class NeutralWords
 {
-    public const string AllLanguages = "mul";
+    private static readonly string AllLanguages = LanguageProfiles.Multiple.Code;
 
     private readonly FrozenSet<string>.AlternateLookup<ReadOnlySpan<char>> _everywhere;
     private readonly FrozenDictionary<string, string[]>.AlternateLookup<ReadOnlySpan<char>> _byWord;
@@ -23,8 +26,9 @@ public sealed class NeutralWords
             .GetAlternateLookup<ReadOnlySpan<char>>();
     }
 
-    /// <summary>The lists shipped in this assembly.</summary>
-    public static NeutralWords Default { get; } = new(ProfileFiles.Read("hesitations.txt").Concat(ProfileFiles.Read("tags.txt")).Concat(ProfileFiles.Read("loanwords.txt")));
+    /// <summary>The lists of the shipped language profiles.</summary>
+    public static NeutralWords Default { get; } = new(LanguageProfiles.Default.All.SelectMany(p =>
+        p.Hesitations.Concat(p.TranscriberTags).Concat(p.Loanwords).Select(w => (p.Code.Code, w))));
 
     /// <summary>A filler in every language: never language evidence.</summary>
     public bool IsNeutralEverywhere(ReadOnlySpan<char> word) => _everywhere.Contains(word);
