@@ -161,12 +161,7 @@ public sealed class IndexPipelineBuilder
                 model = ShippedModels.LoadNameModel(_models, out var error);
                 if (model is null) return PipelineBuild.Failed(error!.ToString());
             }
-            var sources = new NameSources()
-                .Add(new AuthorityListSource(authority ?? AuthorityList.Empty))
-                .Add(new OrganisationCueSource())
-                .Add(new PersonCueSource(lists.Cues, lists.NotPlaces, gazetteer))
-                .Add(new GazetteerSource(gazetteer, new PlaceContext(gazetteer, lists.Prepositions, lists.Cues)));
-            if (model is not null) sources.Add(new NameModelSource(model));
+            var sources = NameTagger.ShippedSources(model, authority, gazetteer, lists);
             foreach (var source in _nameSources) sources.Add(source);
             tagger = new NameTagger(sources, _precedence, NameTagger.ShippedVetoes(gazetteer, lists));
         }

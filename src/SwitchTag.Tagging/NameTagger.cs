@@ -11,6 +11,7 @@ using SwitchTag.Tagging.Sources.Gazetteer;
 using SwitchTag.Tagging.Sources.Model;
 using SwitchTag.Tagging.Sources.Organisations;
 using SwitchTag.Tagging.Sources.PlaceEvidence;
+using SwitchTag.Tagging.Sources.Regions;
 using SwitchTag.Tagging.Sources.Vetoes;
 
 namespace SwitchTag.Tagging;
@@ -24,20 +25,30 @@ public sealed class NameTagger(NameSources sources, NamePrecedence? precedence =
     private readonly IReadOnlyList<IMentionVeto> _vetoes = vetoes ?? [];
 
     /// <summary>The shipped cascade: the authority list, person cues, the gazetteer (with place
-    /// evidence) and the vetoes of <paramref name="lists"/>, and in
+    /// evidence), first-level regions said as places and the vetoes of <paramref name="lists"/>, and in
     /// <see cref="TaggingMode.RulesThenModel"/> the model when there is one.</summary>
     public static NameTagger Create(NerModel? model = null, AuthorityList? authority = null, Lexicon.Gazetteer? gazetteer = null,
         TaggingMode mode = TaggingMode.RulesThenModel, NameListSet? lists = null)
     {
         gazetteer ??= Lexicon.Gazetteer.Empty;
         lists ??= NameListSet.Empty;
+        var sources = ShippedSources(mode == TaggingMode.RulesThenModel ? model : null, authority, gazetteer, lists);
+        return new NameTagger(sources, null, ShippedVetoes(gazetteer, lists));
+    }
+
+    /// <summary>The sources of the shipped cascade: the authority list, organisation and person cues,
+    /// the gazetteer (with place evidence), first-level regions said as places, and the model when
+    /// there is one.</summary>
+    public static NameSources ShippedSources(NerModel? model, AuthorityList? authority, Lexicon.Gazetteer gazetteer, NameListSet lists)
+    {
         var sources = new NameSources()
             .Add(new AuthorityListSource(authority ?? AuthorityList.Empty))
             .Add(new OrganisationCueSource())
             .Add(new PersonCueSource(lists.Cues, lists.NotPlaces, gazetteer))
-            .Add(new GazetteerSource(gazetteer, new PlaceContext(gazetteer, lists.Prepositions, lists.Cues)));
-        if (mode == TaggingMode.RulesThenModel && model is not null) sources.Add(new NameModelSource(model));
-        return new NameTagger(sources, null, ShippedVetoes(gazetteer, lists));
+            .Add(new GazetteerSource(gazetteer, new PlaceContext(gazetteer, lists.Prepositions, lists.Cues)))
+            .Add(new RegionSource(lists.Regions, lists.Prepositions));
+        if (model is not null) sources.Add(new NameModelSource(model));
+        return sources;
     }
 
     /// <summary>The vetoes of the shipped cascade: words that are never names, and ordinary words
