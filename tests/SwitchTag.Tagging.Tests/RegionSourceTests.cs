@@ -37,4 +37,11 @@ public class RegionSourceTests
         // Georgia: a US state (US-GA) and a given name; nothing here says place.
         Assert.Empty(Found("Georgia smiled and Asturias was not mentioned again."));
     }
+
+    [Fact]
+    public void A_region_name_inside_a_longer_name_is_not_a_region()
+    {
+        // CM-SU is the Cameroonian region "South" (iso-codes); here it is part of a continent's name.
+        Assert.Empty(Found("Then we went to South America by ship."));
+    }
 }

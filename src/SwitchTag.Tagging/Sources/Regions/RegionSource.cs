@@ -10,7 +10,8 @@ namespace SwitchTag.Tagging.Sources.Regions;
 /// <summary>First-level regions (states, voivodeships, provinces: models/lexicon/regions.tsv) said
 /// with context that makes them places: the whole name of two or more capitalised words ("Minas
 /// Gerais", "New South Wales"), or one word right after a locative preposition ("from Asturias",
-/// "nach Bayern"). Proposed as <see cref="MentionSource.PlaceEvidence"/>, like a gazetteer town in
+/// "nach Bayern"); never a part of a longer capitalised name ("to South America" is not the
+/// Cameroonian region South, "New York City" not the state). Proposed as <see cref="MentionSource.PlaceEvidence"/>, like a gazetteer town in
 /// such a context. The city gazetteer has no regions, so without this source only the model could
 /// find them. Longest names first, non-overlapping; names are matched as written (folded), without
 /// case endings.</summary>
@@ -34,6 +35,7 @@ public sealed class RegionSource(FirstLevelRegions regions, PlacePrepositions pr
                 if (!Capitalised(turnText, words[j]) || !Joined(turnText, words, i, j)) continue;
                 int start = words[i].Start, end = words[j].End;
                 if (j == i && !prepositions.Precedes(turnText, start)) continue;
+                if (j + 1 < words.Count && Capitalised(turnText, words[j + 1]) && Joined(turnText, words, j, j + 1)) continue;
                 if (regions.Find(turnText[start..end]).IsEmpty) continue;
                 found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.LOC, SpanLanguage.At(spans.IsDefault ? [] : spans, start), 1.0, Source));
                 i = j;
