@@ -342,7 +342,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// another heading's given name (Stanisław beside Stanley Kowalczyk) is a probable link: it is
     /// merged only when that is the one heading it could mean and the interview ties the two, saying
     /// them in one turn at most <see cref="TieWords"/> words apart ("Stanisław, he became Stanley.
-    /// Stanley Kowalczyk"); otherwise both headings name each other as "possibly the same person".</summary>
+    /// Stanley Kowalczyk"), or at most <see cref="TieReachWords"/> with no other person named between; otherwise both headings name each other as "possibly the same person".</summary>
     private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, ImmutableArray<Turn> turns)
     {
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
@@ -406,6 +406,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// equivalent of must be said for the interview to tie them.</summary>
     public const int TieWords = 12;
 
+    /// <summary>Farther apart, up to this many words of one turn, the two still tie when no other
+    /// person is named between them: the later name then takes up the only person in play ("Her name
+    /// was Giuseppina Russo. She came from Italy ... everybody called her Josefina").</summary>
+    public const int TieReachWords = 40;
+
     private static bool Tied(Group a, Group b, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns)
     {
         foreach (int i in a.Members)
@@ -414,8 +419,20 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 if (mentions[i].Turn != mentions[j].Turn) continue;
                 var text = turns[mentions[i].Turn.Index].Text;
                 int from = Math.Min(mentions[i].CharEnd, mentions[j].CharEnd), to = Math.Max(mentions[i].CharStart, mentions[j].CharStart);
-                if (from >= to || Words(text[from..to]).Length <= TieWords) return true;
+                if (from >= to) return true;
+                int between = Words(text[from..to]).Length;
+                if (between <= TieWords) return true;
+                if (between <= TieReachWords && !OtherPersonBetween(mentions, a, b, mentions[i].Turn, from, to)) return true;
             }
+        return false;
+    }
+
+    private static bool OtherPersonBetween(ImmutableArray<Mention> mentions, Group a, Group b, TurnId turn, int from, int to)
+    {
+        for (int k = 0; k < mentions.Length; k++)
+            if (mentions[k].Turn == turn && mentions[k].Label == NameLabel.PER && mentions[k].CharStart >= from && mentions[k].CharEnd <= to
+                && !a.Members.Contains(k) && !b.Members.Contains(k))
+                return true;
         return false;
     }
 

@@ -61,7 +61,7 @@ public class PersonMergeTests
     [Fact]
     public void An_untied_equivalent_is_only_possibly_the_same_person_and_stays_so_through_decisions()
     {
-        var text = "My brother Stanisław. " + Filler(HeadingBuilder.TieWords + 10) + " Stanley Kowalczyk sold cars.";
+        var text = "My brother Stanisław. " + Filler(HeadingBuilder.TieReachWords + 10) + " Stanley Kowalczyk sold cars.";
         var result = Build("Irena", text, "Stanisław", "Stanley Kowalczyk");
         Assert.Equal(2, result.Headings.Length);
         var stanislaw = result.Headings.Single(h => h.Name == "Stanisław");
@@ -75,5 +75,18 @@ public class PersonMergeTests
         var (_, _, after, _) = new DecisionStage([], "x").ApplyToHeadings(mentions, times, result);
         Assert.Equal([stanley.Id], after.Headings.Single(h => h.Name == "Stanisław").PossiblySame.ToArray());
         Assert.Equal([stanislaw.Id], after.Headings.Single(h => h.Name == "Stanley Kowalczyk").PossiblySame.ToArray());
+    }
+
+    [Fact]
+    public void A_farther_equivalent_ties_only_when_no_other_person_is_named_between()
+    {
+        var alone = "Stanley Kowalczyk came back. " + Filler(HeadingBuilder.TieWords + 10) + " We still called him Stanisław.";
+        Assert.Single(Build("Irena", alone, "Stanley Kowalczyk", "Stanisław").Headings);
+
+        var between = "Stanley Kowalczyk came back. " + Filler(HeadingBuilder.TieWords + 4) + " Then Marek came. We called him Stanisław.";
+        var result = Build("Irena", between, "Stanley Kowalczyk", "Marek", "Stanisław");
+        Assert.Equal(3, result.Headings.Length);
+        var stanley = result.Headings.Single(h => h.Name == "Stanley Kowalczyk");
+        Assert.Equal([stanley.Id], result.Headings.Single(h => h.Name == "Stanisław").PossiblySame.ToArray());
     }
 }

@@ -5,7 +5,7 @@ namespace SwitchTag.Lexicon.Tests;
 
 /// <summary>Given-name relations read from the shipped lists (models/lexicon: name-equivalents.tsv and
 /// Languages/*/hypocoristics.tsv, written by hand). The pairs checked are common usage known from
-/// memory (Stanisław / Stanley, Giuseppina / Josefina, Staszek as a Polish diminutive of Stanisław).</summary>
+/// memory (Stanisław / Stanley, Giuseppina / Josefina (feminine forms of Joseph), Staszek as a Polish diminutive of Stanisław).</summary>
 public class NameVariantsTests
 {
     private static readonly NameVariants Variants = NameListSet.Load(Path.Combine(TestPaths.RepoRoot, "models", "lexicon")).Variants;
@@ -15,6 +15,7 @@ public class NameVariantsTests
     [InlineData("Stanisław", "Stanley")]
     [InlineData("Joseph", "Józef")]
     [InlineData("Stanley", "Staszek")]
+    [InlineData("Giuseppina", "Josefina")]
     public void Listed_equivalents_are_equivalent(string a, string b) => Assert.True(Variants.Equivalent(a, b), $"{a} / {b}");
 
     [Theory]
