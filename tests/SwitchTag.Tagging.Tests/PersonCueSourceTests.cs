@@ -26,4 +26,28 @@ public class PersonCueSourceTests
     [Fact]
     public void A_word_ending_like_a_patronymic_alone_is_no_cue() =>
         Assert.Empty(Persons("We went to Baranovichi and then to Kyiv."));
+
+    private static readonly Lazy<Gazetteer> Places = new(() => Gazetteer.Load(Path.Combine(Models.Directory, Gazetteer.FileName)));
+
+    private static string[] PersonsWithPlaces(string text) =>
+        [.. new PersonCueSource(Lists.Cues, Lists.NotPlaces, Places.Value).Find(new TurnId(0), text, []).Select(m => m.Text)];
+
+    [Theory]
+    [InlineData("My mother, Assunta, she made the bread for half the village.", "Assunta")]
+    [InlineData("My father, Samuel Lindner, came from Lemberg.", "Samuel Lindner")]
+    [InlineData("And my grandmother, Rivka.", "Rivka")]
+    public void A_name_set_off_by_commas_after_a_kinship_word_is_a_person(string text, string person) =>
+        Assert.Equal([person], PersonsWithPlaces(text));
+
+    [Fact]
+    public void Towns_listed_after_a_kinship_word_are_no_persons()
+    {
+        // Kraków and Tarnów are GeoNames towns of the shipped gazetteer; "father" is in the English kinship list.
+        Assert.Empty(PersonsWithPlaces("We travelled with my father, Kraków, Tarnów, everywhere."));
+        // A name the gazetteer also holds is left to the other sources ("Stanisław" is an old name of
+        // Ivano-Frankivsk, UA, in GeoNames).
+        Assert.Empty(PersonsWithPlaces("And my brother, Stanisław."));
+        // No comma after the name: the clause goes on, so nothing marks the word as a name in apposition.
+        Assert.Empty(PersonsWithPlaces("I asked my mother, Where is the bread?"));
+    }
 }

@@ -14,7 +14,9 @@ namespace SwitchTag.Tagging.Sources.Cues;
 /// left out of the span, so "Mister Hnatyuk" joins the heading of Mykola Hnatyuk. A marker that
 /// starts a multi-word place name ("Prince Edward Island", "General Santos") is no marker.
 /// A given name followed by a patronymic (the language profiles' <c>patronymics.txt</c>: "Lidiya
-/// Petrovna", "Иван Петрович"), with a capitalised surname after it when there is one, is a person too.</summary>
+/// Petrovna", "Иван Петрович"), with a capitalised surname after it when there is one, is a person too;
+/// so is a name set off by commas after a kinship word ("My mother, Assunta, she made the bread"),
+/// unless the gazetteer reaches over it (a list of towns after "my father,").</summary>
 public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Lexicon.Gazetteer gazetteer) : INameSource
 {
     private const int MaxNameWords = 3;
@@ -49,6 +51,21 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
         }
         for (int i = 0; i + 1 < words.Count; i++)
         {
+            if (!IsKinship(WordAt(turnText, words[i])) || turnText.AsSpan(words[i].End, words[i + 1].Start - words[i].End) is not ", "
+                || !IsNameWord(turnText, words[i + 1])) continue;
+            int first = i + 1, last = first;
+            while (last + 1 < words.Count && last + 1 - first < MaxNameWords && Joined(turnText, words[last], words[last + 1], allowDot: false)
+                   && IsNameWord(turnText, words[last + 1]))
+                last++;
+            int start = words[first].Start, end = words[last].End;
+            if (!ClosesApposition(turnText, end) || found.Any(m => m.CharStart < end && start < m.CharEnd)) continue;
+            places ??= new RangeReach(RuleMatching.Find(turn, turnText, spans, gazetteer.Find).Select(p => (p.CharStart, p.CharEnd)));
+            if (places.Overlaps(start, end) || (first == last && InflectedTown(words[first], turnText, spans))) continue;
+            found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
+            i = last;
+        }
+        for (int i = 0; i + 1 < words.Count; i++)
+        {
             if (!IsNameWord(turnText, words[i]) || !Joined(turnText, words[i], words[i + 1], allowDot: false) || !IsPatronymic(turnText, words[i + 1])) continue;
             int last = i + 1;
             if (last + 1 < words.Count && Joined(turnText, words[last], words[last + 1], allowDot: false) && IsNameWord(turnText, words[last + 1])) last++;
@@ -59,6 +76,14 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
         }
         return found.ToImmutable();
     }
+
+    private bool IsKinship(string word) =>
+        cues.Kinship.Contains(word) || (word.Length > 0 && cues.Kinship.Contains(char.ToLowerInvariant(word[0]) + word[1..]));
+
+    /// <summary>A name in apposition ends the clause part: a comma, a full stop, a colon or the end of
+    /// the turn right after it ("My mother, Assunta, she made the bread").</summary>
+    private static bool ClosesApposition(string text, int end) =>
+        end == text.Length || text[end] is ',' or '.' or ';' or ':' or '!' or '?';
 
     private static bool IsPatronymic(string text, (int Start, int End) word)
     {
