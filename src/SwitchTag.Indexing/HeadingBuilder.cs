@@ -362,6 +362,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname));
         }
 
+        List<HashSet<string>>? speakers = null;
+        PersonPositions? persons = null;
+        var namesSpeaker = new Dictionary<Group, bool>();
         var lone = new List<(Group Group, string Name, LanguageCode Language)>();
         var loneByKey = new Dictionary<string, Group>(StringComparer.Ordinal);
         foreach (int i in single)
@@ -371,7 +374,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 || f.Surname == lexicon.SurnameKey(m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
             if (owners.Count == 0)
                 owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
-            if (owners.Count > 1 && SpeakerOwner(owners, mentions, turns) is { } speaker) owners = [speaker];
+            if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
             if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)) is { Group: not null } kin)
             {
@@ -387,7 +390,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             var probable = full.Where(f => lexicon.EquivalentGivenNames(f.First, l.Name)).Select(f => f.Group)
                 .Concat(lone.Where(o => o.Group != l.Group && o.Group.Members.Count > 0 && lexicon.EquivalentGivenNames(o.Name, l.Name)).Select(o => o.Group))
                 .Distinct().ToList();
-            if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns))
+            if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns, persons ??= new PersonPositions(mentions)))
             {
                 only.Members.AddRange(l.Group.Members);
                 l.Group.Members.Clear();
@@ -411,46 +414,82 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// was Giuseppina Russo. She came from Italy ... everybody called her Josefina").</summary>
     public const int TieReachWords = 40;
 
-    private static bool Tied(Group a, Group b, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns)
+    /// <summary>Chars between two names beyond which no tie is looked for (far more than
+    /// <see cref="TieReachWords"/> words), so a name said thousands of times costs no scan of its text.</summary>
+    private const int TieReachChars = 2_000;
+
+    /// <summary>Whether some mention of <paramref name="a"/> and the nearest mention of <paramref name="b"/>
+    /// on either side of it in its turn are tied. Each member costs two binary searches.</summary>
+    private static bool Tied(Group a, Group b, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns, PersonPositions persons)
     {
+        var others = b.Members.GroupBy(j => mentions[j].Turn)
+            .ToDictionary(g => g.Key, g => g.OrderBy(j => mentions[j].CharStart).ToArray());
+        var starts = others.ToDictionary(p => p.Key, p => p.Value.Select(j => mentions[j].CharStart).ToArray());
+        var either = a.Members.Concat(b.Members).ToHashSet();
         foreach (int i in a.Members)
-            foreach (int j in b.Members)
+        {
+            if (!others.TryGetValue(mentions[i].Turn, out var sameTurn)) continue;
+            int at = Array.BinarySearch(starts[mentions[i].Turn], mentions[i].CharStart);
+            if (at < 0) at = ~at;
+            foreach (int k in new[] { at - 1, at })
             {
-                if (mentions[i].Turn != mentions[j].Turn) continue;
+                if (k < 0 || k >= sameTurn.Length) continue;
+                int j = sameTurn[k];
                 var text = turns[mentions[i].Turn.Index].Text;
                 int from = Math.Min(mentions[i].CharEnd, mentions[j].CharEnd), to = Math.Max(mentions[i].CharStart, mentions[j].CharStart);
                 if (from >= to) return true;
+                if (to - from > TieReachChars) continue;
                 int between = Words(text[from..to]).Length;
                 if (between <= TieWords) return true;
-                if (between <= TieReachWords && !OtherPersonBetween(mentions, a, b, mentions[i].Turn, from, to)) return true;
+                if (between <= TieReachWords && !persons.AnyBetween(mentions[i].Turn, from, to, k2 => !either.Contains(k2))) return true;
             }
+        }
         return false;
     }
 
-    private static bool OtherPersonBetween(ImmutableArray<Mention> mentions, Group a, Group b, TurnId turn, int from, int to)
+    /// <summary>The person mentions of an interview by turn, in text order, to ask which lie between two offsets.</summary>
+    private sealed class PersonPositions(ImmutableArray<Mention> mentions)
     {
-        for (int k = 0; k < mentions.Length; k++)
-            if (mentions[k].Turn == turn && mentions[k].Label == NameLabel.PER && mentions[k].CharStart >= from && mentions[k].CharEnd <= to
-                && !a.Members.Contains(k) && !b.Members.Contains(k))
-                return true;
-        return false;
+        private readonly Dictionary<TurnId, (int Start, int Index)[]> _byTurn = Enumerable.Range(0, mentions.Length)
+            .Where(k => mentions[k].Label == NameLabel.PER)
+            .GroupBy(k => mentions[k].Turn)
+            .ToDictionary(g => g.Key, g => g.Select(k => (mentions[k].CharStart, k)).OrderBy(x => x.CharStart).ToArray());
+
+        public bool AnyBetween(TurnId turn, int from, int to, Func<int, bool> counts)
+        {
+            if (!_byTurn.TryGetValue(turn, out var list)) return false;
+            int lo = 0, hi = list.Length;
+            while (lo < hi) { int mid = (lo + hi) >>> 1; if (list[mid].Start < from) lo = mid + 1; else hi = mid; }
+            for (int k = lo; k < list.Length && list[k].Start < to; k++)
+                if (mentions[list[k].Index].CharEnd <= to && counts(list[k].Index)) return true;
+            return false;
+        }
     }
 
     /// <summary>Of several person headings a one-word name could mean, the one naming a speaker of the
     /// interview (every word of the speaker's label is a word of its name), when exactly one does: a
-    /// surname alone is said most often to or of the person being interviewed.</summary>
-    private Group? SpeakerOwner(List<Group> owners, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns)
+    /// surname alone is said most often to or of the person being interviewed. Whether a heading names
+    /// a speaker is worked out once per heading (<paramref name="known"/>).</summary>
+    private Group? SpeakerOwner(List<Group> owners, ImmutableArray<Mention> mentions, List<HashSet<string>> speakers, Dictionary<Group, bool> known)
     {
-        var speakers = turns.Select(t => t.Speaker).OfType<string>().Distinct(StringComparer.Ordinal)
-            .Select(s => Words(s).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal))
-            .Where(s => s.Count > 0).ToList();
-        var named = owners.Where(g => g.Members.Any(i =>
+        var named = owners.Where(g =>
         {
-            var words = Words(mentions[i].Text).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal);
-            return speakers.Any(s => s.IsSubsetOf(words));
-        })).ToList();
+            if (!known.TryGetValue(g, out bool names))
+                known[g] = names = speakers.Count > 0 && g.Members.Select(i => mentions[i].Text).Distinct(StringComparer.Ordinal).Any(text =>
+                {
+                    var words = Words(text).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal);
+                    return speakers.Any(sp => sp.IsSubsetOf(words));
+                });
+            return names;
+        }).ToList();
         return named is [var one] ? one : null;
     }
+
+    /// <summary>The folded words of each distinct speaker label of the interview.</summary>
+    private List<HashSet<string>> SpeakerWords(ImmutableArray<Turn> turns) =>
+        turns.Select(t => t.Speaker).OfType<string>().Distinct(StringComparer.Ordinal)
+            .Select(sp => Words(sp).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal))
+            .Where(sp => sp.Count > 0).ToList();
 
     private static void GroupByKey(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, NameLabel label)
     {
