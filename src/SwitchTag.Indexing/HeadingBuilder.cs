@@ -363,7 +363,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         }
 
         List<HashSet<string>>? speakers = null;
-        PersonPositions? persons = null;
+        TurnPositions? persons = null;
         var namesSpeaker = new Dictionary<Group, bool>();
         var lone = new List<(Group Group, string Name, LanguageCode Language)>();
         var loneByKey = new Dictionary<string, Group>(StringComparer.Ordinal);
@@ -390,7 +390,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             var probable = full.Where(f => lexicon.EquivalentGivenNames(f.First, l.Name)).Select(f => f.Group)
                 .Concat(lone.Where(o => o.Group != l.Group && o.Group.Members.Count > 0 && lexicon.EquivalentGivenNames(o.Name, l.Name)).Select(o => o.Group))
                 .Distinct().ToList();
-            if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns, persons ??= new PersonPositions(mentions)))
+            if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns, persons ??= new TurnPositions(mentions, Enumerable.Range(0, mentions.Length).Where(k => mentions[k].Label == NameLabel.PER))))
             {
                 only.Members.AddRange(l.Group.Members);
                 l.Group.Members.Clear();
@@ -420,47 +420,52 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
     /// <summary>Whether some mention of <paramref name="a"/> and the nearest mention of <paramref name="b"/>
     /// on either side of it in its turn are tied. Each member costs two binary searches.</summary>
-    private static bool Tied(Group a, Group b, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns, PersonPositions persons)
+    private static bool Tied(Group a, Group b, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns, TurnPositions persons)
     {
-        var others = b.Members.GroupBy(j => mentions[j].Turn)
-            .ToDictionary(g => g.Key, g => g.OrderBy(j => mentions[j].CharStart).ToArray());
-        var starts = others.ToDictionary(p => p.Key, p => p.Value.Select(j => mentions[j].CharStart).ToArray());
+        var others = new TurnPositions(mentions, b.Members);
         var either = a.Members.Concat(b.Members).ToHashSet();
         foreach (int i in a.Members)
         {
-            if (!others.TryGetValue(mentions[i].Turn, out var sameTurn)) continue;
-            int at = Array.BinarySearch(starts[mentions[i].Turn], mentions[i].CharStart);
-            if (at < 0) at = ~at;
+            var turn = mentions[i].Turn;
+            var sameTurn = others.In(turn);
+            int at = TurnPositions.FirstAtOrAfter(sameTurn, mentions[i].CharStart);
             foreach (int k in new[] { at - 1, at })
             {
                 if (k < 0 || k >= sameTurn.Length) continue;
-                int j = sameTurn[k];
-                var text = turns[mentions[i].Turn.Index].Text;
+                int j = sameTurn[k].Index;
                 int from = Math.Min(mentions[i].CharEnd, mentions[j].CharEnd), to = Math.Max(mentions[i].CharStart, mentions[j].CharStart);
                 if (from >= to) return true;
                 if (to - from > TieReachChars) continue;
-                int between = Words(text[from..to]).Length;
+                int between = Words(turns[turn.Index].Text[from..to]).Length;
                 if (between <= TieWords) return true;
-                if (between <= TieReachWords && !persons.AnyBetween(mentions[i].Turn, from, to, k2 => !either.Contains(k2))) return true;
+                if (between <= TieReachWords && !persons.AnyWithin(turn, from, to, k2 => !either.Contains(k2))) return true;
             }
         }
         return false;
     }
 
-    /// <summary>The person mentions of an interview by turn, in text order, to ask which lie between two offsets.</summary>
-    private sealed class PersonPositions(ImmutableArray<Mention> mentions)
+    /// <summary>Some mentions of an interview by turn, in text order, for binary searches by offset.</summary>
+    private sealed class TurnPositions(ImmutableArray<Mention> mentions, IEnumerable<int> indices)
     {
-        private readonly Dictionary<TurnId, (int Start, int Index)[]> _byTurn = Enumerable.Range(0, mentions.Length)
-            .Where(k => mentions[k].Label == NameLabel.PER)
+        private readonly Dictionary<TurnId, (int Start, int Index)[]> _byTurn = indices
             .GroupBy(k => mentions[k].Turn)
             .ToDictionary(g => g.Key, g => g.Select(k => (mentions[k].CharStart, k)).OrderBy(x => x.CharStart).ToArray());
 
-        public bool AnyBetween(TurnId turn, int from, int to, Func<int, bool> counts)
+        public (int Start, int Index)[] In(TurnId turn) => _byTurn.GetValueOrDefault(turn, []);
+
+        /// <summary>The first position whose start is at or after <paramref name="offset"/>.</summary>
+        public static int FirstAtOrAfter((int Start, int Index)[] list, int offset)
         {
-            if (!_byTurn.TryGetValue(turn, out var list)) return false;
             int lo = 0, hi = list.Length;
-            while (lo < hi) { int mid = (lo + hi) >>> 1; if (list[mid].Start < from) lo = mid + 1; else hi = mid; }
-            for (int k = lo; k < list.Length && list[k].Start < to; k++)
+            while (lo < hi) { int mid = (lo + hi) >>> 1; if (list[mid].Start < offset) lo = mid + 1; else hi = mid; }
+            return lo;
+        }
+
+        /// <summary>Whether a mention lying wholly within [from, to) of the turn passes <paramref name="counts"/>.</summary>
+        public bool AnyWithin(TurnId turn, int from, int to, Func<int, bool> counts)
+        {
+            var list = In(turn);
+            for (int k = FirstAtOrAfter(list, from); k < list.Length && list[k].Start < to; k++)
                 if (mentions[list[k].Index].CharEnd <= to && counts(list[k].Index)) return true;
             return false;
         }

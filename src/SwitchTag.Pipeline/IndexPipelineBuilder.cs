@@ -10,12 +10,6 @@ using SwitchTag.Output;
 using SwitchTag.Pipeline.Models;
 using SwitchTag.Tagging;
 using SwitchTag.Tagging.Sources;
-using SwitchTag.Tagging.Sources.Authority;
-using SwitchTag.Tagging.Sources.Cues;
-using SwitchTag.Tagging.Sources.Gazetteer;
-using SwitchTag.Tagging.Sources.Model;
-using SwitchTag.Tagging.Sources.Organisations;
-using SwitchTag.Tagging.Sources.PlaceEvidence;
 using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Pipeline;

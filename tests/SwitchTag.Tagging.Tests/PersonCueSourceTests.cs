@@ -13,8 +13,12 @@ public class PersonCueSourceTests
 {
     private static readonly NameListSet Lists = NameListSet.Load(Path.Combine(Models.Directory, NameListSet.FolderName));
 
-    private static string[] Persons(string text) =>
-        [.. new PersonCueSource(Lists.Cues, Lists.NotPlaces, Gazetteer.Empty).Find(new TurnId(0), text, []).Select(m => m.Text)];
+    private static readonly Lazy<Gazetteer> Places = new(() => Gazetteer.Load(Path.Combine(Models.Directory, Gazetteer.FileName)));
+
+    private static string[] Persons(string text, Gazetteer? places = null) =>
+        [.. new PersonCueSource(Lists.Cues, Lists.NotPlaces, places ?? Gazetteer.Empty).Find(new TurnId(0), text, []).Select(m => m.Text)];
+
+    private static string[] PersonsWithPlaces(string text) => Persons(text, Places.Value);
 
     [Theory]
     [InlineData("Our teacher was Lidiya Petrovna, very strict.", "Lidiya Petrovna")]
@@ -26,11 +30,6 @@ public class PersonCueSourceTests
     [Fact]
     public void A_word_ending_like_a_patronymic_alone_is_no_cue() =>
         Assert.Empty(Persons("We went to Baranovichi and then to Kyiv."));
-
-    private static readonly Lazy<Gazetteer> Places = new(() => Gazetteer.Load(Path.Combine(Models.Directory, Gazetteer.FileName)));
-
-    private static string[] PersonsWithPlaces(string text) =>
-        [.. new PersonCueSource(Lists.Cues, Lists.NotPlaces, Places.Value).Find(new TurnId(0), text, []).Select(m => m.Text)];
 
     [Theory]
     [InlineData("My mother, Assunta, she made the bread for half the village.", "Assunta")]

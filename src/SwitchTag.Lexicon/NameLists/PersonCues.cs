@@ -12,9 +12,13 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
     public static PersonCues Empty { get; } = new(FrozenSet<string>.Empty, FrozenSet<string>.Empty, FrozenSet<string>.Empty, FrozenSet<string>.Empty);
 
     /// <summary>Whether a word, as written, marks the next name as a person.</summary>
-    public bool IsMarker(string word) =>
-        Titles.Contains(word) || Kinship.Contains(word)
-        || (word.Length > 0 && char.IsUpper(word[0]) && (Titles.Contains(Lowered(word)) || Kinship.Contains(Lowered(word))));
+    public bool IsMarker(string word) => In(Titles, word) || IsKinship(word);
+
+    /// <summary>Whether a word, as written or capitalised at a sentence start, is a kinship word.</summary>
+    public bool IsKinship(string word) => In(Kinship, word);
+
+    private static bool In(FrozenSet<string> words, string word) =>
+        words.Contains(word) || (word.Length > 0 && char.IsUpper(word[0]) && words.Contains(Lowered(word)));
 
     /// <summary>Whether the word is a title listed with a dot ("Mr.", "Dr."), so "Mr. Roth" is one name.</summary>
     public bool IsAbbreviation(string word) => Abbreviations.Contains(word) || Abbreviations.Contains(Lowered(word));

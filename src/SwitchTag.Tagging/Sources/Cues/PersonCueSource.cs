@@ -51,7 +51,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
         }
         for (int i = 0; i + 1 < words.Count; i++)
         {
-            if (!IsKinship(WordAt(turnText, words[i])) || turnText.AsSpan(words[i].End, words[i + 1].Start - words[i].End) is not ", "
+            if (!cues.IsKinship(WordAt(turnText, words[i])) || turnText.AsSpan(words[i].End, words[i + 1].Start - words[i].End) is not ", "
                 || !IsNameWord(turnText, words[i + 1])) continue;
             int first = i + 1, last = first;
             while (last + 1 < words.Count && last + 1 - first < MaxNameWords && Joined(turnText, words[last], words[last + 1], allowDot: false)
@@ -76,9 +76,6 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
         }
         return found.ToImmutable();
     }
-
-    private bool IsKinship(string word) =>
-        cues.Kinship.Contains(word) || (word.Length > 0 && cues.Kinship.Contains(char.ToLowerInvariant(word[0]) + word[1..]));
 
     /// <summary>A name in apposition ends the clause part: a comma, a full stop, a colon or the end of
     /// the turn right after it ("My mother, Assunta, she made the bread").</summary>

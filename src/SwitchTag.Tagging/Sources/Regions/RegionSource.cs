@@ -25,7 +25,8 @@ public sealed class RegionSource(FirstLevelRegions regions, PlacePrepositions pr
     public ImmutableArray<Mention> Find(TurnId turn, string turnText, ImmutableArray<LanguageSpan> spans)
     {
         if (string.IsNullOrEmpty(turnText) || regions.ByName.Count == 0) return [];
-        var words = NameWords.Split(turnText);
+        // Offsets only: folding every word of a long turn would be work and memory for nothing.
+        var words = NameWords.Bounds(turnText);
         var found = ImmutableArray.CreateBuilder<Mention>();
         for (int i = 0; i < words.Count; i++)
         {
@@ -45,10 +46,10 @@ public sealed class RegionSource(FirstLevelRegions regions, PlacePrepositions pr
         return found.ToImmutable();
     }
 
-    private static bool Capitalised(string text, NameWord w) => NameWords.StartsUpper(text.AsSpan(w.Start, w.End - w.Start));
+    private static bool Capitalised(string text, (int Start, int End) w) => NameWords.StartsUpper(text.AsSpan(w.Start, w.End - w.Start));
 
     /// <summary>Words i..j form one name: only spaces or hyphens between them, no sentence break.</summary>
-    private static bool Joined(string text, List<NameWord> words, int i, int j)
+    private static bool Joined(string text, List<(int Start, int End)> words, int i, int j)
     {
         for (int k = i + 1; k <= j; k++)
             if (!NameWords.IsNameGap(text.AsSpan(words[k - 1].End, words[k].Start - words[k - 1].End))) return false;
