@@ -207,10 +207,9 @@ public static class IndexRun
     private static Done Work(Planned plan, IndexRequest request, IndexPipeline? pipeline, FolderSwap swap)
     {
         if (plan.Unchanged) return new Done(plan, [], false, null);
-        var read = pipeline!.Read(plan.File);
-        var log = read.Diagnostics.Select(d => d.ToString()).ToImmutableArray();
-        if (read.Transcript is null) return new Done(plan, log, true, null);
-        var index = pipeline.Run(read.Transcript with { Id = plan.Id }) with { Media = request.MediaOf(plan.Id) };
+        var (transcript, log) = Read(pipeline!, plan.File);
+        if (transcript is null) return new Done(plan, log, true, null);
+        var index = pipeline.Run(transcript with { Id = plan.Id }) with { Media = request.MediaOf(plan.Id) };
         try
         {
             swap.Replace(Path.Combine(request.OutDir, plan.Folder), folder => pipeline.Write(index, folder));
@@ -220,6 +219,15 @@ public static class IndexRun
             return new Done(plan, log.Add(new Diagnostic(new SourceLine(plan.File, 0), Severity.Error, $"cannot write the outputs: {e.Message}").ToString()), true, null);
         }
         return new Done(plan, log, false, index);
+    }
+
+    /// <summary>The file's transcript and its diagnostics as log lines. The read result, which holds the
+    /// file's whole text, ends here rather than staying in the caller's frame while the interview is
+    /// indexed and written.</summary>
+    private static (Transcript? Transcript, ImmutableArray<string> Log) Read(IndexPipeline pipeline, string file)
+    {
+        var read = pipeline.Read(file);
+        return (read.Transcript, read.Diagnostics.Select(d => d.ToString()).ToImmutableArray());
     }
 
     /// <summary>The decisions a skipped interview had applied when it was indexed, matched back to
