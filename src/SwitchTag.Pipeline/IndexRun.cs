@@ -87,6 +87,11 @@ public static class IndexRun
             PruneOrReport(store, request, pipeline?.Writers ?? OutputWriters.Default, log);
             try
             {
+                // Every interview's index is garbage by now, but after a long interview the GC has
+                // not yet taken it back (some 400 MB after one 200k-cue turn), and the collection
+                // pages read every mention back on top of it. One full collection first, once per
+                // run: that turn's peak 992 -> 791 MB for a fraction of a second.
+                GC.Collect();
                 (pipeline?.Writers ?? builder.Writers).WriteCollection(StoreEntries.Of(store, request.Decisions), request.OutDir);
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException)
