@@ -334,7 +334,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// heading whose surname has its spelling key (Szwarc / Schwarz, Feigl / Feigel) and whose given
     /// name is the same, a diminutive of the same full name (Hanka / Hanna) or a listed equivalent
     /// (Stanisław / Stanley: with the same surname, two pieces of evidence). A one-word name joins the
-    /// one full-name heading having it as first or last word, else the one whose given name it is a
+    /// one full-name heading having it as first or last word (of several, the one whose first word is a
+    /// listed first name, when only one is), else the one whose given name it is a
     /// diminutive of (Irenko / Irena Kowalczyk); one-word names that are diminutives of each other
     /// join (Ilona / Ilonka). A one-word name several full names have as a word joins the one of them
     /// that names a speaker of the interview ("Mister Lindner" beside Walter and Samuel Lindner, said
@@ -342,7 +343,12 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// another heading's given name (Stanisław beside Stanley Kowalczyk) is a probable link: it is
     /// merged only when that is the one heading it could mean and the interview ties the two, saying
     /// them in one turn at most <see cref="TieWords"/> words apart ("Stanisław, he became Stanley.
-    /// Stanley Kowalczyk"), or at most <see cref="TieReachWords"/> with no other person named between; otherwise both headings name each other as "possibly the same person".</summary>
+    /// Stanley Kowalczyk"), or at most <see cref="TieReachWords"/> with no other person named between; otherwise both headings name each other as "possibly the same person".
+    /// A full name whose first word is no listed first name is read as a nickname before a surname
+    /// ("El Gordo Gallardo, they called him"): it joins the one full name with that surname and a
+    /// listed first name when the two are said at most <see cref="TieWords"/> words apart in one turn,
+    /// and is otherwise only possibly that person. Two listed first names with one surname are two
+    /// persons (siblings) and never merge this way.</summary>
     private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, ImmutableArray<Turn> turns)
     {
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
@@ -362,8 +368,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname));
         }
 
-        List<HashSet<string>>? speakers = null;
         TurnPositions? persons = null;
+        List<HashSet<string>>? speakers = null;
         var namesSpeaker = new Dictionary<Group, bool>();
         var lone = new List<(Group Group, string Name, LanguageCode Language)>();
         var loneByKey = new Dictionary<string, Group>(StringComparer.Ordinal);
@@ -374,6 +380,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 || f.Surname == lexicon.SurnameKey(m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
             if (owners.Count == 0)
                 owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
+            if (owners.Count > 1 && owners.Where(g => full.Any(f => f.Group == g && lexicon.IsFirstName(f.First))).ToList() is [var named]) owners = [named];
             if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
             if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)) is { Group: not null } kin)
@@ -385,12 +392,27 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (group.Members.Count == 1) lone.Add((group, m.Text, m.Language));
         }
 
+        foreach (var nick in full.Where(f => !lexicon.IsFirstName(f.First)).ToList())
+        {
+            var named = full.Where(f => f.Group != nick.Group && f.Surname == nick.Surname && lexicon.IsFirstName(f.First)).Select(f => f.Group).Distinct().ToList();
+            if (named is not [var only]) continue;
+            if (Tied(nick.Group, only, mentions, turns, persons ??= PersonPositions(mentions), TieWords))
+            {
+                only.Members.AddRange(nick.Group.Members);
+                groups.Remove(nick.Group);
+                full.Remove(nick);
+                continue;
+            }
+            nick.Group.Possible.Add(only);
+            only.Possible.Add(nick.Group);
+        }
+
         foreach (var l in lone)
         {
             var probable = full.Where(f => lexicon.EquivalentGivenNames(f.First, l.Name)).Select(f => f.Group)
                 .Concat(lone.Where(o => o.Group != l.Group && o.Group.Members.Count > 0 && lexicon.EquivalentGivenNames(o.Name, l.Name)).Select(o => o.Group))
                 .Distinct().ToList();
-            if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns, persons ??= new TurnPositions(mentions, Enumerable.Range(0, mentions.Length).Where(k => mentions[k].Label == NameLabel.PER))))
+            if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns, persons ??= PersonPositions(mentions), TieReachWords))
             {
                 only.Members.AddRange(l.Group.Members);
                 l.Group.Members.Clear();
@@ -418,9 +440,13 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// <see cref="TieReachWords"/> words), so a name said thousands of times costs no scan of its text.</summary>
     private const int TieReachChars = 2_000;
 
+    private static TurnPositions PersonPositions(ImmutableArray<Mention> mentions) =>
+        new(mentions, Enumerable.Range(0, mentions.Length).Where(k => mentions[k].Label == NameLabel.PER));
+
     /// <summary>Whether some mention of <paramref name="a"/> and the nearest mention of <paramref name="b"/>
-    /// on either side of it in its turn are tied. Each member costs two binary searches.</summary>
-    private static bool Tied(Group a, Group b, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns, TurnPositions persons)
+    /// on either side of it in its turn are tied: at most <see cref="TieWords"/> words apart, or at most
+    /// <paramref name="reach"/> with no other person named between. Each member costs two binary searches.</summary>
+    private static bool Tied(Group a, Group b, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns, TurnPositions persons, int reach)
     {
         var others = new TurnPositions(mentions, b.Members);
         var either = a.Members.Concat(b.Members).ToHashSet();
@@ -438,7 +464,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 if (to - from > TieReachChars) continue;
                 int between = Words(turns[turn.Index].Text[from..to]).Length;
                 if (between <= TieWords) return true;
-                if (between <= TieReachWords && !persons.AnyWithin(turn, from, to, k2 => !either.Contains(k2))) return true;
+                if (between <= reach && !persons.AnyWithin(turn, from, to, k2 => !either.Contains(k2))) return true;
             }
         }
         return false;
