@@ -38,10 +38,13 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));
 
+    /// <summary>Listed diminutives, stems and keys; or a productive diminutive that is not itself a
+    /// listed first name (Irenka of Irena, but not Marek of Mara nor Paulina of Paula).</summary>
     public bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
         _lists.Variants.SameGivenName(a, b)
         || _lists.Variants.SameGivenName(NameFolding.Stem(a, languageA), NameFolding.Stem(b, languageB))
-        || Key(a, languageA) == Key(b, languageB);
+        || Key(a, languageA) == Key(b, languageB)
+        || _lists.Variants.DiminutiveOf(a, b) is { } form && !IsFirstName(form);
 
     public bool EquivalentGivenNames(string a, string b) => _lists.Variants.Equivalent(a, b);
 }
