@@ -216,7 +216,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         public PlaceLink? Place { get; set; }
 
         /// <summary>A camp or historical place: the heading keeps the name said, the place is where it lies.</summary>
-        public bool KeepsSpokenName { get; init; }
+        public bool KeepsSpokenName { get; set; }
+
+        /// <summary>The place is where the talk was, not the name's own gazetteer entry.</summary>
+        public bool PlaceFromContext { get; set; }
         public List<int> Members { get; } = [];
         public HashSet<Group> Possible { get; } = [];
     }
@@ -286,6 +289,34 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
             group.Members.Add(i);
         }
+
+        var linkedAt = new Dictionary<int, PlaceLink>();
+        foreach (var g in byPlace.Values)
+            if (g.Place is { HasGeonameId: true } p)
+                foreach (int i in g.Members) linkedAt[i] = p;
+        foreach (var g in byKey.Values)
+            if (!lexicon.IsWorldRegion(mentions[g.Members[0]].Text, mentions[g.Members[0]].Language) && SettingOf(g.Members.Min(), mentions, linkedAt) is { } setting)
+            {
+                g.Place = setting;
+                g.KeepsSpokenName = true;
+                g.PlaceFromContext = true;
+            }
+    }
+
+    /// <summary>How many turns back the talk's last linked place still sets the scene for a place the
+    /// gazetteer lacks.</summary>
+    public const int SettingTurns = 2;
+
+    /// <summary>The place the talk was last at before mention <paramref name="first"/> (a town or
+    /// country linked by name, in its turn or at most <see cref="SettingTurns"/> turns before): a
+    /// district, street, park or village the gazetteer lacks is shown there ("in Podgórze, across the
+    /// river" after Kraków), marked as placed by context.</summary>
+    private static PlaceLink? SettingOf(int first, ImmutableArray<Mention> mentions, Dictionary<int, PlaceLink> linkedAt)
+    {
+        int turn = mentions[first].Turn.Index;
+        for (int j = first - 1; j >= 0 && mentions[j].Turn.Index >= turn - SettingTurns; j--)
+            if (linkedAt.TryGetValue(j, out var place)) return place;
+        return null;
     }
 
     /// <summary>The place a LOC mention is linked to. A first-level region of the name (which the lists
@@ -556,7 +587,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var source = members.Any(i => mentions[i].Source == MentionSource.Authority) ? MentionSource.Authority
             : g.Place is not null ? MentionSource.Gazetteer
             : mentions[members[0]].Source;
-        return new Heading(UniqueId(g, usedIds), g.Label, name, variants, g.Place, alternatives, [.. members.Select(i => new MentionId(i))], speakers, confidence, source);
+        return new Heading(UniqueId(g, usedIds), g.Label, name, variants, g.Place, alternatives, [.. members.Select(i => new MentionId(i))], speakers, confidence, source)
+        {
+            PlaceFromContext = g.PlaceFromContext,
+        };
     }
 
     /// <summary>The most frequent surface (a multi-word one for persons when there is one), ties to

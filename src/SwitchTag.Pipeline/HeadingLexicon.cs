@@ -34,6 +34,8 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
         return new ListedPlace(listed.Name, listed.Kind, listed.IsSite, at, listed.Countries);
     }
 
+    public bool IsWorldRegion(string name, LanguageCode language) => _lists.WorldRegions.Contains(name, language);
+
     public bool IsFirstName(string word) => _lists.Cues.IsFirstName(NameFolding.Fold(word));
 
     public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));
