@@ -379,25 +379,57 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// ("El Gordo Gallardo, they called him"): it joins the one full name with that surname and a
     /// listed first name when the two are said at most <see cref="TieWords"/> words apart in one turn,
     /// and is otherwise only possibly that person. Two listed first names with one surname are two
-    /// persons (siblings) and never merge this way.</summary>
+    /// persons (siblings) and never merge this way. A given name with a patronymic ("Ivan Petrovych")
+    /// joins the one full name with that given name and patronymic ("Ivan Petrovych Hnatyuk"), and is
+    /// otherwise possibly the one full name with that given name.</summary>
     private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, ImmutableArray<Turn> turns)
     {
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
-        var full = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname)>();
+        var full = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)>();
         var single = new List<int>();
-        for (int i = 0; i < mentions.Length; i++)
+        var patronymic = new List<int>();
+        void AddFull(int i, string[] words)
         {
-            if (held[i] || mentions[i].Label != NameLabel.PER) continue;
             var m = mentions[i];
-            var words = Words(m.Text);
-            if (words.Length < 2) { single.Add(i); continue; }
             string first = words[0], last = words[^1], surname = lexicon.SurnameKey(last, m.Language);
             var known = full.FirstOrDefault(f => f.Surname == surname
                 && (lexicon.SameGivenName(f.First, f.Language, first, m.Language) || lexicon.EquivalentGivenNames(f.First, first)));
-            if (known.Group is not null) { known.Group.Members.Add(i); continue; }
+            if (known.Group is not null) { known.Group.Members.Add(i); return; }
             var group = Add(byKey, groups, NameLabel.PER, lexicon.Key(first, m.Language) + " " + lexicon.Key(last, m.Language), i);
-            if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname));
+            if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname, words.Length > 2 ? words[1] : null));
         }
+
+        for (int i = 0; i < mentions.Length; i++)
+        {
+            if (held[i] || mentions[i].Label != NameLabel.PER) continue;
+            var words = Words(mentions[i].Text);
+            if (words.Length < 2) single.Add(i);
+            else if (words.Length == 2 && lexicon.IsPatronymic(words[1])) patronymic.Add(i);
+            else AddFull(i, words);
+        }
+
+        var patronymicNames = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)>();
+        // A patronymic-looking second word that some full name has as its surname is that surname
+        // (Rabinovich, Abramovich are surnames too).
+        foreach (int i in patronymic)
+        {
+            var m = mentions[i];
+            var words = Words(m.Text);
+            if (full.Any(f => f.Surname == lexicon.SurnameKey(words[1], m.Language))) { AddFull(i, words); continue; }
+            var sameGiven = full.Where(f => lexicon.SameGivenName(f.First, f.Language, words[0], m.Language)).ToList();
+            var named = sameGiven.Where(f => f.Middle is not null && lexicon.Key(f.Middle, f.Language) == lexicon.Key(words[1], m.Language)).Select(f => f.Group).Distinct().ToList();
+            if (named is [var owner]) { owner.Members.Add(i); continue; }
+            var group = Add(byKey, groups, NameLabel.PER, lexicon.Key(words[0], m.Language) + " " + lexicon.Key(words[1], m.Language), i);
+            if (group.Members.Count > 1) continue;
+            if (sameGiven.Select(f => f.Group).Distinct().ToList() is [var only])
+            {
+                group.Possible.Add(only);
+                only.Possible.Add(group);
+            }
+            patronymicNames.Add((group, words[0], words[1], m.Language, lexicon.SurnameKey(words[1], m.Language), null));
+        }
+        // Now a name a lone given name or patronymic may belong to.
+        full.AddRange(patronymicNames);
 
         TurnPositions? persons = null;
         List<HashSet<string>>? speakers = null;
