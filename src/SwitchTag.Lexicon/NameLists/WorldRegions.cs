@@ -8,13 +8,23 @@ namespace SwitchTag.Lexicon.NameLists;
 /// town, so the talk's setting never places it.</summary>
 public sealed class WorldRegions(FrozenSet<string> folded)
 {
+    /// <summary>The names by their first three letters: a case form keeps its name's start, so a
+    /// query tries the inflection rules on a handful of names, not all of them.</summary>
+    private readonly FrozenDictionary<string, string[]> _byStart = folded.GroupBy(Start, StringComparer.Ordinal)
+        .ToFrozenDictionary(g => g.Key, g => g.ToArray(), StringComparer.Ordinal);
+
     public static WorldRegions Empty { get; } = new(FrozenSet<string>.Empty);
 
     /// <summary>Whether the name, as written or as a case form in <paramref name="language"/>
-    /// (Hungarian "Európát"), names a continent or world region. A scan of the list: asked once per
-    /// place heading the gazetteer lacks, not per mention.</summary>
-    public bool Contains(string name, LanguageCode language) =>
-        folded.Contains(NameFolding.FoldedWords(name)) || folded.Any(n => NameFolding.IsInflectionOf(name, n, language));
+    /// (Hungarian "Európát"), names a continent or world region.</summary>
+    public bool Contains(string name, LanguageCode language)
+    {
+        var words = NameFolding.FoldedWords(name);
+        return folded.Contains(words)
+            || _byStart.TryGetValue(Start(words), out var near) && near.Any(n => NameFolding.IsInflectionOf(name, n, language));
+    }
+
+    private static string Start(string folded) => folded.Length <= 3 ? folded : folded[..3];
 
     internal static WorldRegions Load(string lexiconDir) =>
         new(LexiconTsv.Rows(Path.Combine(lexiconDir, "territories.tsv"))
