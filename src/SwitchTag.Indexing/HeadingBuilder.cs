@@ -461,8 +461,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (named is not [var only]) continue;
             if (Tied(nick.Group, only, mentions, turns, persons ??= PersonPositions(mentions), TieWords))
             {
-                only.Members.AddRange(nick.Group.Members);
-                groups.Remove(nick.Group);
+                MergeInto(nick.Group, only, groups);
                 full.Remove(nick);
                 continue;
             }
@@ -477,9 +476,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 .Distinct().ToList();
             if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns, persons ??= PersonPositions(mentions), TieReachWords))
             {
-                only.Members.AddRange(l.Group.Members);
-                l.Group.Members.Clear();
-                groups.Remove(l.Group);
+                MergeInto(l.Group, only, groups);
                 continue;
             }
             foreach (var other in probable)
@@ -488,6 +485,23 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 other.Possible.Add(l.Group);
             }
         }
+    }
+
+    /// <summary>Moves a group's mentions into another and drops it; "possibly the same person" links
+    /// to the dropped group now point at the one that took its mentions.</summary>
+    private static void MergeInto(Group from, Group into, List<Group> groups)
+    {
+        into.Members.AddRange(from.Members);
+        from.Members.Clear();
+        foreach (var other in from.Possible)
+        {
+            other.Possible.Remove(from);
+            if (other == into) continue;
+            other.Possible.Add(into);
+            into.Possible.Add(other);
+        }
+        into.Possible.Remove(from);
+        groups.Remove(from);
     }
 
     /// <summary>How close, in words of one turn, a one-word name and a full name it is a listed
