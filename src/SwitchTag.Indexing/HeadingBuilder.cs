@@ -295,13 +295,18 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (g.Place is { HasGeonameId: true } p)
                 foreach (int i in g.Members) linkedAt[i] = p;
         foreach (var g in byKey.Values)
-            if (!lexicon.IsWorldRegion(mentions[g.Members[0]].Text, mentions[g.Members[0]].Language) && SettingOf(g.Members.Min(), mentions, linkedAt) is { } setting)
+            if (Placeable(mentions[g.Members[0]]) && SettingOf(g.Members.Min(), mentions, linkedAt) is { } setting)
             {
                 g.Place = setting;
                 g.KeepsSpokenName = true;
                 g.PlaceFromContext = true;
             }
     }
+
+    /// <summary>Whether the talk may place a name the gazetteer lacks: not a continent, nor a lone
+    /// listed first name (a person read as a place must not get a map point).</summary>
+    private bool Placeable(Mention m) =>
+        !lexicon.IsWorldRegion(m.Text, m.Language) && !(Words(m.Text).Length == 1 && lexicon.IsFirstName(m.Text));
 
     /// <summary>How many turns back the talk's last linked place still sets the scene for a place the
     /// gazetteer lacks.</summary>

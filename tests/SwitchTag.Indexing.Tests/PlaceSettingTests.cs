@@ -19,6 +19,7 @@ public class PlaceSettingTests
         public string Key(string name, LanguageCode language) => inner.Key(name, language);
         public ImmutableArray<PlaceLink> Places(string name, LanguageCode language) => inner.Places(name, language);
         public bool IsWorldRegion(string name, LanguageCode language) => name == "Europe";
+        public bool IsFirstName(string word) => word == "Roza";
     }
 
     /// <summary>One turn per string; each name is a LOC mention at its first occurrence in its turn.</summary>
@@ -62,12 +63,16 @@ public class PlaceSettingTests
     }
 
     [Fact]
-    public void A_place_said_first_or_a_continent_is_never_placed_so()
+    public void A_place_said_first_a_continent_or_a_first_name_is_never_placed_so()
     {
         var first = Build(("Ironbound, then Kraków.", ["Ironbound", "Kraków"]));
         Assert.Null(first.Headings.Single(h => h.Name == "Ironbound").Place);
 
         var continent = Build(("From Kraków to Europe.", ["Kraków", "Europe"]));
         Assert.Null(continent.Headings.Single(h => h.Name == "Europe").Place);
+
+        // A first name the tagger called a place gets no map point from its neighbour.
+        var person = Build(("In Kraków, Roza was waiting.", ["Kraków", "Roza"]));
+        Assert.Null(person.Headings.Single(h => h.Name == "Roza").Place);
     }
 }
