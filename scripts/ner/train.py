@@ -319,7 +319,7 @@ def main():
     ap.add_argument("--splits-out", default="/tmp/switchtag-ner-test",
                     help="held-out test parts are written here as SOURCE/LANG-test.tsv for `switchtag eval ner`")
     ap.add_argument("--word-dropout", type=float, default=0.25)
-    ap.add_argument("--lower-share", type=float, default=0.12, help="share of training sentences lower-cased each epoch (speech-recognition text is often lower case)")
+    ap.add_argument("--lower-share", type=float, default=0.20, help="share of training sentences lower-cased each epoch (speech-recognition text is often lower case)")
     ap.add_argument("--dropout-count", type=int, default=50, help="words seen more often are dropped less")
     ap.add_argument("--dilations", default="1,2,4,8,1", help="receptive field = sum, at most the C# window overlap (16)")
     ap.add_argument("--per-loc-penalty", type=float, default=1.0,

@@ -448,7 +448,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 || f.Surname == lexicon.SurnameKey(m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
             if (owners.Count == 0)
                 owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
-            if (owners.Count > 1 && owners.Where(g => full.Any(f => f.Group == g && lexicon.IsFirstName(f.First))).ToList() is [var named]) owners = [named];
+            if (owners.Count > 1 && owners.Where(g => full.Any(f => f.Group == g && GivenName(f.First))).ToList() is [var named]) owners = [named];
             if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
             if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)) is { Group: not null } kin)
@@ -460,9 +460,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (group.Members.Count == 1) lone.Add((group, m.Text, m.Language));
         }
 
-        foreach (var nick in full.Where(f => !lexicon.IsFirstName(f.First)).ToList())
+        foreach (var nick in full.Where(f => !GivenName(f.First)).ToList())
         {
-            var named = full.Where(f => f.Group != nick.Group && f.Surname == nick.Surname && lexicon.IsFirstName(f.First)).Select(f => f.Group).Distinct().ToList();
+            var named = full.Where(f => f.Group != nick.Group && f.Surname == nick.Surname && GivenName(f.First)).Select(f => f.Group).Distinct().ToList();
             if (named is not [var only]) continue;
             if (Tied(nick.Group, only, mentions, turns, persons ??= PersonPositions(mentions), TieWords))
             {
@@ -491,6 +491,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
         }
     }
+
+    /// <summary>Whether a name's first word is a given name: a listed first name that is no stop word or
+    /// title of any language ("El" of "El Gordo Gallardo" is listed as a French first name).</summary>
+    private bool GivenName(string word) =>
+        lexicon.IsFirstName(word) && !LanguageProfiles.Default.StopWords.Contains(word.ToLowerInvariant());
 
     /// <summary>Moves a group's mentions into another and drops it; "possibly the same person" links
     /// to the dropped group now point at the one that took its mentions.</summary>

@@ -17,7 +17,7 @@ namespace SwitchTag.Indexing.Tests;
 public class PersonMergeTests
 {
     private static readonly FakeLexicon Lexicon = new(new Dictionary<string, ImmutableArray<PlaceLink>>(), equivalents: [("Stanisław", "Stanley")],
-        firstNames: new HashSet<string> { "Ernesto", "Pedro", "Walter", "Samuel", "Stanley", "Ivan", "Anna" }, patronymicEndings: ["ovych"]);
+        firstNames: new HashSet<string> { "Ernesto", "Pedro", "Walter", "Samuel", "Stanley", "Ivan", "Anna", "El" }, patronymicEndings: ["ovych"]);
 
     /// <summary>One turn of <paramref name="text"/> said by <paramref name="speaker"/>; each name is
     /// a PER mention at its n-th occurrence in the text (names in order of appearance).</summary>
@@ -58,6 +58,12 @@ public class PersonMergeTests
         var result = Build("Manuel", text, "Ernesto Gallardo", "Ernesto", "Gallardo", "Gordo Gallardo");
         var heading = Assert.Single(result.Headings);
         Assert.Equal(["Ernesto Gallardo", "Ernesto", "Gallardo", "Gordo Gallardo"], heading.Variants.ToArray());
+
+        // With its article, though "El" is listed as a first name (as the shipped French list has it):
+        // a stop word of a language profile (SwitchTag.Core/Languages/es/stopwords.txt) is no given name.
+        const string withArticle = "A friend from the factory, Ernesto Gallardo. Ernesto, Gallardo, yes. El Gordo Gallardo, they called him.";
+        var article = Build("Manuel", withArticle, "Ernesto Gallardo", "Ernesto", "Gallardo", "El Gordo Gallardo");
+        Assert.Equal(["Ernesto Gallardo", "Ernesto", "Gallardo", "El Gordo Gallardo"], Assert.Single(article.Headings).Variants.ToArray());
     }
 
     [Fact]
