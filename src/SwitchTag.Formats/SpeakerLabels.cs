@@ -1,4 +1,5 @@
 using System.Text;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Formats;
 
@@ -25,6 +26,7 @@ public static class SpeakerLabels
             sb.Append(wordStart ? Rune.ToUpperInvariant(rune).ToString() : Rune.ToLowerInvariant(rune).ToString());
             wordStart = rune.Value is '-' or '(';
         }
-        return sb.ToString().Normalize(NormalizationForm.FormC);
+        // Every cue carries its speaker: one string per speaker, not one per cue.
+        return SharedStrings.Of(sb.ToString().Normalize(NormalizationForm.FormC));
     }
 }

@@ -145,8 +145,8 @@ public static class TranscriptFile
         }
         if (cues is null) return new ReadResult(null, diagnostics.ToImmutable());
         var all = diagnostics.ToImmutable();
-        var transcript = new Transcript(new SourceInfo(path, format, sha256), text, cues.Value, all);
-        return new ReadResult(transcript, all);
+        var transcript = new Transcript(new SourceInfo(path, format, sha256), cues.Value, all);
+        return new ReadResult(transcript, all, text);
     }
 
     private static ReadResult Rejected(string path, int line, string message) =>

@@ -70,10 +70,12 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var places = new ImmutableArray<PlaceLink>[n];
         var respelled = new PlaceLink?[n];
         var placeCache = new Dictionary<(string, LanguageCode), ImmutableArray<PlaceLink>>();
+        // One key string per name said, not per mention: a long turn says the same few names 100k times.
+        var keyCache = new Dictionary<(string, LanguageCode), string>();
         for (int i = 0; i < n; i++)
         {
             var m = mentions[i];
-            keys[i] = lexicon.Key(m.Text, m.Language);
+            if (!keyCache.TryGetValue((m.Text, m.Language), out keys[i]!)) keyCache[(m.Text, m.Language)] = keys[i] = lexicon.Key(m.Text, m.Language);
             var found = CachedPlaces(placeCache, m.Text, m.Language);
             places[i] = found.RemoveAll(p => Respelling.MarksConflict(m.Text, p.Name));
             if (places[i].IsEmpty && !found.IsEmpty) respelled[i] = found[0];

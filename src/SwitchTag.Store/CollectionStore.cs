@@ -172,6 +172,8 @@ public sealed class CollectionStore : IDisposable
             using var r = turnQuery.ExecuteReader();
             return r.Read() ? (r.IsDBNull(0) ? null : r.GetString(0), r.GetString(1)) : null;
         }
+        // The cells that repeat from row to row (a name, its heading, language, source, review reason)
+        // are shared strings: read as they are, one long turn's 571k mentions held some 100 MB of copies.
         Each("SELECT interview_id, turn, char_start, char_end, start_ms, text, label, language, confidence, source, heading, review " +
              "FROM mentions ORDER BY interview_id, mention", r =>
         {
@@ -179,10 +181,10 @@ public sealed class CollectionStore : IDisposable
             int turn = r.GetInt32(1);
             if (!turns.TryGetValue((interview, turn), out var t)) turns[(interview, turn)] = t = TurnOf(interview, turn);
             if (t is not { } found) return; // a mention without its turn is left out
-            var mention = new Mention(new TurnId(turn), new CharSpan(r.GetInt32(2), r.GetInt32(3)), r.GetString(5), Enum.Parse<NameLabel>(r.GetString(6)),
-                new LanguageCode(r.GetString(7)), r.GetDouble(8), new MentionSource(r.GetString(9)));
+            var mention = new Mention(new TurnId(turn), new CharSpan(r.GetInt32(2), r.GetInt32(3)), Shared(r, 5), Enum.Parse<NameLabel>(r.GetString(6)),
+                new LanguageCode(Shared(r, 7)), r.GetDouble(8), new MentionSource(Shared(r, 9)));
             Add(mentions, interview, new StoredMention(new Timecode(r.GetInt64(4)), mention, found.Speaker,
-                r.IsDBNull(10) ? null : new HeadingId(r.GetString(10)), r.IsDBNull(11) ? null : r.GetString(11), found.Text));
+                r.IsDBNull(10) ? null : new HeadingId(Shared(r, 10)), r.IsDBNull(11) ? null : Shared(r, 11), found.Text));
         });
         var decisions = new Dictionary<long, ImmutableArray<string>.Builder>();
         Each("SELECT interview_id, decision FROM decisions ORDER BY interview_id, position", r => Add(decisions, r.GetInt64(0), r.GetString(1)));
@@ -197,6 +199,8 @@ public sealed class CollectionStore : IDisposable
         });
         return interviews;
     }
+
+    private static string Shared(SqliteDataReader r, int column) => SharedStrings.Of(r.GetString(column));
 
     private static void Add<TKey, T>(Dictionary<TKey, ImmutableArray<T>.Builder> lists, TKey key, T item) where TKey : notnull
     {

@@ -38,7 +38,7 @@ public class BadInputTests
             byte[] bytes = [.. encoding.GetPreamble(), .. encoding.GetBytes(Samples.Srt)];
             var result = TranscriptFile.Read(Reads.TempFile(bytes, ".srt"));
             Assert.NotNull(result.Transcript);
-            Assert.Equal(Samples.Srt, result.Transcript!.OriginalText);
+            Assert.Equal(Samples.Srt, result.Text);
             Assert.Equal(4, result.Transcript.Cues.Length);
         }
     }

@@ -48,7 +48,7 @@ public class GeneratedRoundTripTests
             file.Append(voice).Append(string.Join('\n', c.Lines.Select(WebVttText.Escape))).Append("\n\n");
         }
         // Some cues carry no voice: in a file that uses voices, such a cue has no speaker.
-        Compare(cues, Reads.Accepted($"gen-{seed}.vtt", file.ToString()), speakerContinues: false);
+        Compare(cues, Reads.AcceptedRead($"gen-{seed}.vtt", file.ToString()), speakerContinues: false);
     }
 
     [Theory]
@@ -72,7 +72,7 @@ public class GeneratedRoundTripTests
             previous = c.Speaker ?? previous;
             file.Append(prefix).Append(string.Join('\n', c.Lines)).Append("\n\n");
         }
-        Compare(AsLabelsRead(cues), Reads.Accepted($"gen-{seed}.srt", file.ToString()), speakerContinues: true);
+        Compare(AsLabelsRead(cues), Reads.AcceptedRead($"gen-{seed}.srt", file.ToString()), speakerContinues: true);
     }
 
     [Theory]
@@ -95,7 +95,7 @@ public class GeneratedRoundTripTests
             file.Append(stamp).Append(' ').Append(prefix).Append(string.Join('\n', c.Lines)).Append('\n');
         }
         file.Append('[').Append(Loose(cues[^1].Time.End)).Append("]\n");
-        Compare(cues, Reads.Accepted($"gen-{seed}.txt", file.ToString(), TranscriptFormat.Text), speakerContinues: true);
+        Compare(cues, Reads.AcceptedRead($"gen-{seed}.txt", file.ToString(), TranscriptFormat.Text), speakerContinues: true);
     }
 
     /// <summary>FORMATS.md, "Speakers": in a caption file, prefixes name speakers only where one label is
@@ -121,8 +121,9 @@ public class GeneratedRoundTripTests
         return plain;
     }
 
-    private static void Compare(List<Generated> expected, Transcript actual, bool speakerContinues)
+    private static void Compare(List<Generated> expected, ReadResult read, bool speakerContinues)
     {
+        var actual = read.Transcript!;
         Assert.Empty(actual.Diagnostics);
         Assert.Equal(expected.Count, actual.Cues.Length);
         string? current = null;
@@ -136,7 +137,7 @@ public class GeneratedRoundTripTests
             Assert.Equal(current, a.SpeakerLabel);
             Assert.Equal(SpeakerLabels.Normalise(current), a.Speaker);
         }
-        InvariantTests.CheckCues(actual);
+        InvariantTests.CheckCues(read);
         InvariantTests.CheckTurns(actual);
     }
 

@@ -12,7 +12,7 @@ public class InvariantTests
 
     [Theory]
     [MemberData(nameof(Names))]
-    public void Raw_ranges_lie_inside_the_original_text_at_the_cue_line(string name) => CheckCues(Samples.Read(name));
+    public void Raw_ranges_lie_inside_the_original_text_at_the_cue_line(string name) => CheckCues(Samples.ReadWithText(name));
 
     [Theory]
     [MemberData(nameof(Names))]
@@ -21,26 +21,29 @@ public class InvariantTests
     [Fact]
     public void Demo_transcripts_keep_the_invariants()
     {
-        foreach (var t in DemoTranscripts.ReadAll())
+        foreach (var file in DemoTranscripts.Files())
         {
-            CheckCues(t);
-            CheckTurns(t);
+            var read = TranscriptFile.Read(file);
+            CheckCues(read);
+            CheckTurns(read.Transcript!);
         }
     }
 
-    internal static void CheckCues(Transcript t)
+    internal static void CheckCues(ReadResult read)
     {
+        var t = read.Transcript!;
+        string text = read.Text!;
         int lastStart = -1;
         foreach (var cue in t.Cues)
         {
-            Assert.InRange(cue.RawStart, 0, t.OriginalText.Length);
-            Assert.InRange(cue.RawEnd, cue.RawStart, t.OriginalText.Length);
+            Assert.InRange(cue.RawStart, 0, text.Length);
+            Assert.InRange(cue.RawEnd, cue.RawStart, text.Length);
             Assert.True(cue.RawStart >= lastStart, $"{cue.At}: raw ranges out of file order");
             lastStart = cue.RawStart;
             // The raw range starts at the beginning of the line the cue names.
-            int line = 1 + t.OriginalText.AsSpan(0, cue.RawStart).Count('\n');
-            if (!t.OriginalText.Contains('\r')) Assert.Equal(cue.At.Line, line);
-            Assert.True(cue.RawStart == 0 || t.OriginalText[cue.RawStart - 1] is '\n' or '\r', $"{cue.At}: raw start not at a line start");
+            int line = 1 + text.AsSpan(0, cue.RawStart).Count('\n');
+            if (!text.Contains('\r')) Assert.Equal(cue.At.Line, line);
+            Assert.True(cue.RawStart == 0 || text[cue.RawStart - 1] is '\n' or '\r', $"{cue.At}: raw start not at a line start");
             Assert.True(cue.Time.End >= cue.Time.Start);
             foreach (var w in cue.WordTimes) Assert.InRange(w.CharOffset, 0, cue.Text.Length);
             Assert.Equal(SpeakerLabels.Normalise(cue.SpeakerLabel), cue.Speaker);

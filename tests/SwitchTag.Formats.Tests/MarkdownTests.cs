@@ -28,9 +28,9 @@ public class MarkdownTests
     [Fact]
     public void Raw_range_of_a_cue_covers_its_source_lines()
     {
-        var t = Samples.Read("markdown");
-        var cue = t.Cues[1];
-        string raw = t.OriginalText[cue.RawStart..cue.RawEnd];
+        var read = Samples.ReadWithText("markdown");
+        var cue = read.Transcript!.Cues[1];
+        string raw = read.Text![cue.RawStart..cue.RawEnd];
         Assert.StartsWith("**[00:00:04] MARIA:**", raw);
         Assert.EndsWith("Maria &amp; her brother.", raw);
     }
@@ -83,6 +83,6 @@ public class MarkdownTests
         var w = Assert.Single(result.Diagnostics);
         Assert.Equal(10, w.At.Line);
         Assert.Contains("an html block", w.Message);
-        InvariantTests.CheckCues(t);
+        InvariantTests.CheckCues(result);
     }
 }

@@ -30,7 +30,7 @@ public partial class NothingLostTests
         {
             var result = TranscriptFile.Read(file);
             Assert.NotNull(result.Transcript);
-            Check(result, result.Transcript!.OriginalText);
+            Check(result, result.Text!);
         }
     }
 

@@ -111,12 +111,13 @@ public class ReaderGapTests
     {
         // Unicode UAX #15: "o" + U+0301 COMBINING ACUTE ACCENT composes to U+00F3 in NFC.
         const string nfd = "Krako\u0301w";
-        var t = Reads.Accepted("nfd.vtt", $"WEBVTT\n\n00:01.000 --> 00:03.000\n<v Anna>{nfd} <00:00:02.000>jest <lang pl>pie\u0300kny</lang>\n");
+        var read = Reads.AcceptedRead("nfd.vtt", $"WEBVTT\n\n00:01.000 --> 00:03.000\n<v Anna>{nfd} <00:00:02.000>jest <lang pl>pie\u0300kny</lang>\n");
+        var t = read.Transcript!;
         var cue = Assert.Single(t.Cues);
         Assert.Equal("Kraków jest piękny".Replace("ę", "e\u0300".Normalize(NormalizationForm.FormC)), cue.Text);
         Assert.True(cue.Text.IsNormalized(NormalizationForm.FormC));
         Assert.Equal(7, Assert.Single(cue.WordTimes).CharOffset); // "jest" starts at 7 in NFC, 8 in NFD
-        Assert.Contains(nfd, t.OriginalText); // the file's own form stays in the original text
+        Assert.Contains(nfd, read.Text); // the file's own form stays in the file's text
         Assert.Equal(Reads.Accepted("nfc.txt", "[00:00:01] KRAKÓW: x").Cues[0].Speaker,
             Reads.Accepted("nfd.txt", "[00:00:01] KRAKO\u0301W: x").Cues[0].Speaker);
     }
@@ -183,7 +184,7 @@ public class ReaderGapTests
             byte[] bytes = [.. encoding.GetPreamble(), .. encoding.GetBytes(Samples.Srt)];
             var r = TranscriptFile.Read(Reads.TempFile(bytes, ".srt"));
             Assert.True(r.Accepted, string.Join("; ", r.Diagnostics));
-            Assert.Equal(Samples.Srt, r.Transcript!.OriginalText);
+            Assert.Equal(Samples.Srt, r.Text);
         }
     }
 

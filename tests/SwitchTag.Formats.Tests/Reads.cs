@@ -6,12 +6,15 @@ namespace SwitchTag.Formats.Tests;
 /// <summary>Small helpers around <see cref="TranscriptFile"/> for the tests.</summary>
 public static class Reads
 {
-    public static Transcript Accepted(string path, string text, TranscriptFormat? forced = null)
+    public static Transcript Accepted(string path, string text, TranscriptFormat? forced = null) => AcceptedRead(path, text, forced).Transcript!;
+
+    /// <summary>The whole read result, for checks against the file's text.</summary>
+    public static ReadResult AcceptedRead(string path, string text, TranscriptFormat? forced = null)
     {
         var result = TranscriptFile.Parse(path, text, forced);
         Assert.True(result.Transcript is not null, "rejected: " + string.Join("; ", result.Diagnostics));
         Assert.DoesNotContain(result.Diagnostics, d => d.Severity == Severity.Error);
-        return result.Transcript!;
+        return result;
     }
 
     public static Diagnostic SingleError(ReadResult result)

@@ -260,9 +260,11 @@ public static class Samples
         return (s.Path, s.Text);
     }
 
-    public static Transcript Read(string name)
+    public static Transcript Read(string name) => ReadWithText(name).Transcript!;
+
+    public static ReadResult ReadWithText(string name)
     {
         var (path, text) = Get(name);
-        return Reads.Accepted(path, text);
+        return Reads.AcceptedRead(path, text);
     }
 }

@@ -146,10 +146,11 @@ public class WebVttTests
     {
         // (W3C WebVTT, from memory: a line ends at CRLF, LF or CR)
         string text = Samples.SpecComments.ReplaceLineEndings(newline);
-        var t = Reads.Accepted("nl.vtt", text);
+        var read = Reads.AcceptedRead("nl.vtt", text);
+        var t = read.Transcript!;
         Assert.Equal(2, t.Cues.Length);
         Assert.Equal("— It will perforate your stomach.\n— You could die.", t.Cues[1].Text);
-        Assert.Equal(text, t.OriginalText);
+        Assert.Equal(text, read.Text);
         Assert.Equal(12, t.Cues[0].At.Line);
     }
 
@@ -168,7 +169,7 @@ public class WebVttTests
         var bytes = new byte[] { 0xEF, 0xBB, 0xBF }.Concat(System.Text.Encoding.UTF8.GetBytes(Samples.SpecKaraoke)).ToArray();
         var result = TranscriptFile.Read(Reads.TempFile(bytes, ".vtt"));
         Assert.NotNull(result.Transcript);
-        Assert.Equal(Samples.SpecKaraoke, result.Transcript!.OriginalText);
+        Assert.Equal(Samples.SpecKaraoke, result.Text);
         Assert.Equal(3, result.Transcript.Cues.Length);
     }
 

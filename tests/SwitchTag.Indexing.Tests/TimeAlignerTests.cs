@@ -14,7 +14,7 @@ public class TimeAlignerTests
     {
         var cue = new Cue(new TimeRange(new Timecode(start), new Timecode(end)), "a", "A", text,
             words.Select(w => new WordTime(w.Item1, new Timecode(w.Item2))).ToImmutableArray(), new SourceLine("t.vtt", 1), new CharSpan(0, 0));
-        var transcript = new Transcript(new SourceInfo("t.vtt", TranscriptFormat.WebVtt, ""), "", [cue], []);
+        var transcript = new Transcript(new SourceInfo("t.vtt", TranscriptFormat.WebVtt, ""), [cue], []);
         return (new TimeAligner(transcript), TurnBuilder.Build(transcript)[0]);
     }
 
@@ -48,7 +48,7 @@ public class TimeAlignerTests
     {
         var c1 = new Cue(new TimeRange(new Timecode(0), new Timecode(4_000)), "a", "A", "abcd", [], new SourceLine("t", 1), new CharSpan(0, 0));
         var c2 = new Cue(new TimeRange(new Timecode(5_000), new Timecode(9_000)), "a", "A", "efgh", [], new SourceLine("t", 4), new CharSpan(0, 0));
-        var transcript = new Transcript(new SourceInfo("t", TranscriptFormat.Srt, ""), "", [c1, c2], []);
+        var transcript = new Transcript(new SourceInfo("t", TranscriptFormat.Srt, ""), [c1, c2], []);
         var turn = TurnBuilder.Build(transcript)[0]; // "abcd efgh": cue 2 holds chars [5, 9)
         var time = new TimeAligner(transcript).Align(turn, 2, 7);
         Assert.Equal(new Timecode(2_000), time.Start); // 0 + 4 s * 2/4

@@ -40,7 +40,7 @@ public sealed record WordTime(int CharOffset, Timecode Time);
 /// <param name="Speaker">Normalised speaker label (case, spacing and trailing colon folded), or null.</param>
 /// <param name="SpeakerLabel">The label exactly as written in the file, or null.</param>
 /// <param name="Text">Plain text: markup removed, character references decoded, lines joined by '\n'.</param>
-/// <param name="Raw">Its lines in <see cref="Transcript.OriginalText"/>: from the first line's start to just past the last line.</param>
+/// <param name="Raw">Its lines in the file's decoded text (SwitchTag.Formats <c>ReadResult.Text</c>): from the first line's start to just past the last line.</param>
 public sealed record Cue(
     TimeRange Time,
     string? Speaker,
@@ -56,10 +56,11 @@ public sealed record Cue(
     public int RawEnd => Raw.End;
 }
 
-/// <summary>A whole transcript file as read: the verbatim text and every cue found in it.</summary>
+/// <summary>A whole transcript file as read: every cue found in it. The file's text stays with the
+/// read (SwitchTag.Formats <c>ReadResult.Text</c>): nothing after reading needs it, and an interview
+/// is carried to its last output, where the text of a 20 MB file would take 40 MB.</summary>
 public sealed record Transcript(
     SourceInfo Source,
-    string OriginalText,
     ImmutableArray<Cue> Cues,
     ImmutableArray<Diagnostic> Diagnostics)
 {

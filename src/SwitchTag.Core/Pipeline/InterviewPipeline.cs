@@ -17,7 +17,8 @@ public sealed class InterviewPipeline(ILanguageSegmenter languages, INameTagger 
         var mentions = ImmutableArray.CreateBuilder<Mention>();
         foreach (var turn in turns)
             mentions.AddRange(names.Tag(turn.Id, turn.Text, spans[turn.Id.Index]));
-        return index.Build(transcript, turns, result.MainLanguage, spans, mentions.ToImmutable()) with
+        // Drained: the builder lets go of its array, which would otherwise stay beside the list while the index is built.
+        return index.Build(transcript, turns, result.MainLanguage, spans, mentions.DrainToImmutable()) with
         {
             LanguageProfile = result.Profile,
             MainLanguageDecision = result.MainBasis,

@@ -86,7 +86,7 @@ public sealed class SrtReader : ITranscriptReader
             string plain = cue.Text;
             if (votes.TryMatch(plain, out int ls, out int le, out int ts))
             {
-                label = plain[ls..le];
+                label = SharedStrings.Of(plain.AsSpan(ls, le - ls));
                 plain = plain[ts..];
             }
             yield return cue with { Speaker = SpeakerLabels.Normalise(label), SpeakerLabel = label, Text = plain };

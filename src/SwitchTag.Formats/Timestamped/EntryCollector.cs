@@ -133,7 +133,7 @@ internal sealed class EntryCollector(SourceText src, Diagnostics diagnostics)
                 text.Append(l.Text);
             }
             int firstLine = p == 0 ? entry.Line : lines[0].Line;
-            cues.Add(new Cue(time, SpeakerLabels.Normalise(partLabel), partLabel, text.ToString(), [],
+            cues.Add(new Cue(time, SpeakerLabels.Normalise(partLabel), partLabel is null ? null : SharedStrings.Of(partLabel), text.ToString(), [],
                 src.At(firstLine), new CharSpan(src[firstLine - 1].Start, src[lines[^1].Line - 1].End)));
         }
         return label;

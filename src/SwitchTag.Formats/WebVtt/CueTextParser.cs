@@ -4,6 +4,7 @@ using SwitchTag.Core.Documents;
 using SwitchTag.Core.Time;
 using SwitchTag.Formats.Reading;
 using SwitchTag.Formats.Text;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Formats.WebVtt;
 
@@ -111,7 +112,7 @@ internal static class CueTextParser
                 case "v":
                     if (annotation.Length == 0) break;
                     voices++;
-                    if (voice is null) voice = annotation;
+                    if (voice is null) voice = SharedStrings.Of(annotation);
                     else if (voices == 2 && annotation != voice)
                         diagnostics.Warn(tagLine, $"cue has more than one voice (\"{voice}\", \"{annotation}\"); its speaker is the first");
                     break;

@@ -168,6 +168,6 @@ public sealed class WebVttReader : ITranscriptReader
     private static (string? Label, string Text, int Shift) CutPrefix(SpeakerVotes votes, string text)
     {
         if (!votes.TryMatch(text, out int labelStart, out int labelEnd, out int textStart)) return (null, text, 0);
-        return (text[labelStart..labelEnd], text[textStart..], textStart);
+        return (SharedStrings.Of(text.AsSpan(labelStart, labelEnd - labelStart)), text[textStart..], textStart);
     }
 }

@@ -23,8 +23,10 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
         ImmutableArray<Mention> mentions, Func<Mention, TimeRange> timeOf)
     {
         var counts = new int[Mine.Length];
-        var kept = ImmutableArray.CreateBuilder<Mention>();
         var accepted = new HashSet<MentionId>();
+        // Without mention decisions the list stands as it is: no copy, no time per mention.
+        if (!Mine.Any(d => d is MentionDecision)) return (mentions, accepted, Outcomes(counts));
+        var kept = ImmutableArray.CreateBuilder<Mention>();
         var times = mentions.Select(timeOf).ToArray();
         // A decision looks only at the mentions of its own text (any case), so many decisions on
         // many mentions cost no scan of every mention per decision.
@@ -87,7 +89,8 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
         for (int i = 0; i < mentions.Length; i++)
         {
             if (edit.Dropped[i]) continue;
-            keptMentions.Add(mentions[i] with { Label = edit.Labels[i] });
+            // A copy only where a decision relabelled the mention: one long turn holds hundreds of thousands.
+            keptMentions.Add(mentions[i].Label == edit.Labels[i] ? mentions[i] : mentions[i] with { Label = edit.Labels[i] });
             keptTimes.Add(times[i]);
         }
         var headingOf = new HeadingId?[renumbering.KeptCount];

@@ -21,7 +21,7 @@ public static class RuleMatching
         var matches = new List<NameMatch>();
         foreach (var language in languages)
             matches.AddRange(find(text, language).Where(m => spans.IsEmpty || SpanLanguage.At(spans, m.CharStart) == language));
-        return [.. NameMatchSelection.LongestFirst(matches).Select(r => new Mention(turn, new CharSpan(r.CharStart, r.CharEnd), text[r.CharStart..r.CharEnd],
+        return [.. NameMatchSelection.LongestFirst(matches).Select(r => new Mention(turn, new CharSpan(r.CharStart, r.CharEnd), SharedStrings.Of(text.AsSpan(r.CharStart, r.CharEnd - r.CharStart)),
             r.Label, SpanLanguage.At(spans, r.CharStart), 1.0, r.Source))];
     }
 }

@@ -50,7 +50,7 @@ public static class Fixture
             Cue(11000, 16000, "Anna Nowak", "Urodziłam się w Warszawie. Mama mówiła: dziecko.", 8),
             Cue(16500, 21000, "Interviewer", "The Germans said Warschau, the French Varsovie, and Kowalski said Paris.", 11),
             Cue(21000, 26000, "Anna Nowak", "Wir waren in Paris, then Kraków, with Nowak and Florence, on the Atlantic Line.", 14));
-        return new Transcript(new SourceInfo("fixture/anna-nowak.vtt", TranscriptFormat.WebVtt, new string('0', 64)), "", cues,
+        return new Transcript(new SourceInfo("fixture/anna-nowak.vtt", TranscriptFormat.WebVtt, new string('0', 64)), cues,
             [new Diagnostic(new SourceLine("fixture/anna-nowak.vtt", 7), Severity.Warning, "text outside any cue was kept as a note")]);
     }
 

@@ -46,7 +46,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             if (places.Reaches(words[i].Start, words[i].End)) continue;
             if (first == last && InflectedTown(words[first], turnText, spans)) continue;
             int start = words[first].Start, end = words[last].End;
-            found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
+            found.Add(new Mention(turn, new CharSpan(start, end), SharedStrings.Of(turnText.AsSpan(start, end - start)), NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
             i = last;
         }
         for (int i = 0; i + 1 < words.Count; i++)
@@ -61,7 +61,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             if (!ClosesApposition(turnText, end) || found.Any(m => m.CharStart < end && start < m.CharEnd)) continue;
             places ??= new RangeReach(RuleMatching.Find(turn, turnText, spans, gazetteer.Find).Select(p => (p.CharStart, p.CharEnd)));
             if (places.Overlaps(start, end) || (first == last && InflectedTown(words[first], turnText, spans))) continue;
-            found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
+            found.Add(new Mention(turn, new CharSpan(start, end), SharedStrings.Of(turnText.AsSpan(start, end - start)), NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
             i = last;
         }
         for (int i = 0; i + 1 < words.Count; i++)
@@ -71,7 +71,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             if (last + 1 < words.Count && Joined(turnText, words[last], words[last + 1], allowDot: false) && IsNameWord(turnText, words[last + 1])) last++;
             int start = words[i].Start, end = words[last].End;
             if (found.Any(m => m.CharStart < end && start < m.CharEnd)) continue;
-            found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
+            found.Add(new Mention(turn, new CharSpan(start, end), SharedStrings.Of(turnText.AsSpan(start, end - start)), NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
             i = last;
         }
         return found.ToImmutable();

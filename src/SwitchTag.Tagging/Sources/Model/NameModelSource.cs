@@ -29,7 +29,7 @@ public sealed class NameModelSource(NerModel model) : INameSource
             {
                 int start = words[from].Start, end = words[to - 1].End;
                 if (!TrainedScripts.Covers(turnText.AsSpan(start, end - start))) continue;
-                mentions.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], s.Label, SpanLanguage.At(spans, start), s.Confidence, MentionSource.Model));
+                mentions.Add(new Mention(turn, new CharSpan(start, end), SharedStrings.Of(turnText.AsSpan(start, end - start)), s.Label, SpanLanguage.At(spans, start), s.Confidence, MentionSource.Model));
             }
         }
         return mentions.ToImmutable();

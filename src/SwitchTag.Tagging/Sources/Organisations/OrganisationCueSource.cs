@@ -48,7 +48,7 @@ public sealed class OrganisationCueSource : INameSource
             }
             if (first == i && last == i) continue;
             int start = words[first].Start, end = words[last].End;
-            found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.ORG, SpanLanguage.At(spans, start), 1.0, Organisation));
+            found.Add(new Mention(turn, new CharSpan(start, end), SharedStrings.Of(turnText.AsSpan(start, end - start)), NameLabel.ORG, SpanLanguage.At(spans, start), 1.0, Organisation));
             i = last;
         }
         return found.ToImmutable();

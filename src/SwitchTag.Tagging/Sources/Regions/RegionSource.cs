@@ -37,8 +37,8 @@ public sealed class RegionSource(FirstLevelRegions regions, PlacePrepositions pr
                 int start = words[i].Start, end = words[j].End;
                 if (j == i && !prepositions.Precedes(turnText, start)) continue;
                 if (j + 1 < words.Count && Capitalised(turnText, words[j + 1]) && Joined(turnText, words, j, j + 1)) continue;
-                if (regions.Find(turnText[start..end]).IsEmpty) continue;
-                found.Add(new Mention(turn, new CharSpan(start, end), turnText[start..end], NameLabel.LOC, SpanLanguage.At(spans.IsDefault ? [] : spans, start), 1.0, Source));
+                if (regions.Find(SharedStrings.Of(turnText.AsSpan(start, end - start))).IsEmpty) continue;
+                found.Add(new Mention(turn, new CharSpan(start, end), SharedStrings.Of(turnText.AsSpan(start, end - start)), NameLabel.LOC, SpanLanguage.At(spans.IsDefault ? [] : spans, start), 1.0, Source));
                 i = j;
                 break;
             }
