@@ -48,21 +48,23 @@ public static class TranscriptFile
     }
 
     /// <summary>The file's bytes, or one byte more than the limit when it is larger (the stated length
-    /// is not trusted: a file can grow while it is read).</summary>
+    /// is not trusted: a file can grow while it is read). Read into an array of the stated length, so
+    /// a file that keeps its length is held once, not in a growing buffer and again in its copy.</summary>
     private static byte[] ReadBounded(string path, long maxBytes)
     {
         using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
         long length = stream.Length;
         if (length > maxBytes) return new byte[checked((int)Math.Min(maxBytes + 1, int.MaxValue))];
-        using var buffer = new MemoryStream((int)Math.Max(length, 0) + 1);
+        var bytes = new byte[length];
+        int filled = stream.ReadAtLeast(bytes, bytes.Length, throwOnEndOfStream: false);
+        if (filled < bytes.Length) return bytes[..filled];
+        // Whatever came after the stated length, up to one byte past the limit.
+        using var rest = new MemoryStream();
         var chunk = new byte[81920];
         int read;
-        while ((read = stream.Read(chunk, 0, (int)Math.Min(chunk.Length, maxBytes + 1 - buffer.Length))) > 0)
-        {
-            buffer.Write(chunk, 0, read);
-            if (buffer.Length > maxBytes) break;
-        }
-        return buffer.ToArray();
+        while (length + rest.Length <= maxBytes && (read = stream.Read(chunk, 0, (int)Math.Min(chunk.Length, maxBytes + 1 - length - rest.Length))) > 0)
+            rest.Write(chunk, 0, read);
+        return rest.Length == 0 ? bytes : [.. bytes, .. rest.ToArray()];
     }
 
     /// <summary>Parses text already in memory; the recorded SHA-256 is of its UTF-8 encoding.</summary>

@@ -214,7 +214,7 @@ public static class IndexRun
         if (plan.Unchanged) return new Done(plan, [], false, null);
         var (transcript, log) = Read(pipeline!, plan.File);
         if (transcript is null) return new Done(plan, log, true, null);
-        var index = pipeline.Run(transcript with { Id = plan.Id }) with { Media = request.MediaOf(plan.Id) };
+        var index = pipeline!.Run(transcript with { Id = plan.Id }) with { Media = request.MediaOf(plan.Id) };
         try
         {
             swap.Replace(Path.Combine(request.OutDir, plan.Folder), folder => pipeline.Write(index, folder));

@@ -1,4 +1,3 @@
-using System.Buffers;
 using System.Text;
 using System.Text.Unicode;
 
@@ -32,11 +31,11 @@ internal static class TextDecoding
                 ? $"binary or UTF-16 text without a byte-order mark (NUL byte at byte offset {nul + bom}); save it as UTF-8 or UTF-16 with a BOM"
                 : $"binary file (NUL byte at byte offset {nul + bom})");
 
-        var chars = new char[body.Length];
-        var status = Utf8.ToUtf16(body, chars, out int read, out int written, replaceInvalidSequences: false);
-        if (status != OperationStatus.Done)
-            return new Decoded(null, LineOfByte(body, read), $"invalid UTF-8 at byte offset {read + bom} (byte 0x{body[read]:X2}); the file must be UTF-8 or UTF-16 with a BOM");
-        return new Decoded(new string(chars, 0, written), 0, null);
+        // Valid text is decoded straight into its string: through a char buffer, a 20 MB file took
+        // 40 MB more for the length of the read. Only a rejected file is decoded again, to say where.
+        if (Utf8.IsValid(body)) return new Decoded(Encoding.UTF8.GetString(body), 0, null);
+        Utf8.ToUtf16(body, new char[body.Length], out int read, out _, replaceInvalidSequences: false);
+        return new Decoded(null, LineOfByte(body, read), $"invalid UTF-8 at byte offset {read + bom} (byte 0x{body[read]:X2}); the file must be UTF-8 or UTF-16 with a BOM");
     }
 
     private static Decoded Wide(ReadOnlySpan<byte> body, Encoding encoding, string name, int unit)
