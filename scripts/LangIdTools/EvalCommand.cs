@@ -44,15 +44,18 @@ public static class EvalCommand
         return 0;
     }
 
-    /// <summary>Lists the held-out lines of one language that the model gets wrong.</summary>
-    public static int Errors(string dataRoot, string modelPath, string code)
+    /// <summary>Lists the texts of one language (lines, first two words, single words) of a held-out
+    /// split that the model gets wrong: the evaluation split to report, the calibration split to tune on.</summary>
+    public static int Errors(string dataRoot, string modelPath, string code, Split split)
     {
         var ours = CodeSwitchSegmenter.Load(modelPath);
-        foreach (var line in LidCorpus.Load(dataRoot).Where(l => l.Split == Split.Evaluation && l.Code == code))
-        {
-            var guess = ours.Identify(line.Text);
-            if (guess.Language != code) Console.WriteLine($"{guess.Language}\t{guess.Confidence:F2}\t{line.Text}");
-        }
+        var corpus = LidCorpus.Load(dataRoot).Select(l => l with { Split = l.Split == split ? Split.Evaluation : Split.Training }).ToList();
+        foreach (var set in HeldOutSets.Build(corpus).Where(s => s.Code == code))
+            foreach (var text in set.Lines.Concat(set.Pairs).Concat(set.Words))
+            {
+                var guess = ours.Identify(text);
+                if (guess.Language != code) Console.WriteLine($"{guess.Language}\t{guess.Confidence:F2}\t{text}");
+            }
         return 0;
     }
 

@@ -145,10 +145,10 @@ def predict(model, featurizer, sents, bs=64):
     return res
 
 
-def augment(rng, words):
+def augment(rng, words, lower_share):
     r = rng.random()
-    if r < 0.12: return [fx.lower(w) for w in words]
-    if r < 0.17: return [w.upper() for w in words]
+    if r < lower_share: return [fx.lower(w) for w in words]
+    if r < lower_share + 0.05: return [w.upper() for w in words]
     return words
 
 
@@ -244,7 +244,7 @@ def run(args, data, sp, lexicon, drop_groups, dim, dilations, epochs, log):
     for ep in range(epochs):
         model.train()
         sample = [s for n in sorted(train) for s in draw(rng, train[n], plan[n])]
-        sample = [(augment(rng, w), t) for w, t in sample]
+        sample = [(augment(rng, w, args.lower_share), t) for w, t in sample]
         sample.sort(key=lambda s: len(s[0]))
         batches = [sample[i:i + 32] for i in range(0, len(sample), 32)]
         rng.shuffle(batches)
@@ -319,6 +319,7 @@ def main():
     ap.add_argument("--splits-out", default="/tmp/switchtag-ner-test",
                     help="held-out test parts are written here as SOURCE/LANG-test.tsv for `switchtag eval ner`")
     ap.add_argument("--word-dropout", type=float, default=0.25)
+    ap.add_argument("--lower-share", type=float, default=0.20, help="share of training sentences lower-cased each epoch (speech-recognition text is often lower case)")
     ap.add_argument("--dropout-count", type=int, default=50, help="words seen more often are dropped less")
     ap.add_argument("--dilations", default="1,2,4,8,1", help="receptive field = sum, at most the C# window overlap (16)")
     ap.add_argument("--per-loc-penalty", type=float, default=1.0,

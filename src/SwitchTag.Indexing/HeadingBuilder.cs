@@ -218,7 +218,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         public PlaceLink? Place { get; set; }
 
         /// <summary>A camp or historical place: the heading keeps the name said, the place is where it lies.</summary>
-        public bool KeepsSpokenName { get; init; }
+        public bool KeepsSpokenName { get; set; }
+
+        /// <summary>The place is where the talk was, not the name's own gazetteer entry.</summary>
+        public bool PlaceFromContext { get; set; }
         public List<int> Members { get; } = [];
         public HashSet<Group> Possible { get; } = [];
     }
@@ -288,6 +291,39 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
             group.Members.Add(i);
         }
+
+        var linkedAt = new Dictionary<int, PlaceLink>();
+        foreach (var g in byPlace.Values)
+            if (g.Place is { HasGeonameId: true } p)
+                foreach (int i in g.Members) linkedAt[i] = p;
+        foreach (var g in byKey.Values)
+            if (Placeable(mentions[g.Members[0]]) && SettingOf(g.Members.Min(), mentions, linkedAt) is { } setting)
+            {
+                g.Place = setting;
+                g.KeepsSpokenName = true;
+                g.PlaceFromContext = true;
+            }
+    }
+
+    /// <summary>Whether the talk may place a name the gazetteer lacks: not a continent, nor a lone
+    /// listed first name (a person read as a place must not get a map point).</summary>
+    private bool Placeable(Mention m) =>
+        !lexicon.IsWorldRegion(m.Text, m.Language) && !(Words(m.Text).Length == 1 && lexicon.IsFirstName(m.Text));
+
+    /// <summary>How many turns back the talk's last linked place still sets the scene for a place the
+    /// gazetteer lacks.</summary>
+    public const int SettingTurns = 2;
+
+    /// <summary>The place the talk was last at before mention <paramref name="first"/> (a town or
+    /// country linked by name, in its turn or at most <see cref="SettingTurns"/> turns before): a
+    /// district, street, park or village the gazetteer lacks is shown there ("in Podgórze, across the
+    /// river" after Kraków), marked as placed by context.</summary>
+    private static PlaceLink? SettingOf(int first, ImmutableArray<Mention> mentions, Dictionary<int, PlaceLink> linkedAt)
+    {
+        int turn = mentions[first].Turn.Index;
+        for (int j = first - 1; j >= 0 && mentions[j].Turn.Index >= turn - SettingTurns; j--)
+            if (linkedAt.TryGetValue(j, out var place)) return place;
+        return null;
     }
 
     /// <summary>The place a LOC mention is linked to. A first-level region of the name (which the lists
@@ -336,7 +372,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// heading whose surname has its spelling key (Szwarc / Schwarz, Feigl / Feigel) and whose given
     /// name is the same, a diminutive of the same full name (Hanka / Hanna) or a listed equivalent
     /// (Stanisław / Stanley: with the same surname, two pieces of evidence). A one-word name joins the
-    /// one full-name heading having it as first or last word, else the one whose given name it is a
+    /// one full-name heading having it as first or last word (of several, the one whose first word is a
+    /// listed first name, when only one is), else the one whose given name it is a
     /// diminutive of (Irenko / Irena Kowalczyk); one-word names that are diminutives of each other
     /// join (Ilona / Ilonka). A one-word name several full names have as a word joins the one of them
     /// that names a speaker of the interview ("Mister Lindner" beside Walter and Samuel Lindner, said
@@ -344,28 +381,65 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// another heading's given name (Stanisław beside Stanley Kowalczyk) is a probable link: it is
     /// merged only when that is the one heading it could mean and the interview ties the two, saying
     /// them in one turn at most <see cref="TieWords"/> words apart ("Stanisław, he became Stanley.
-    /// Stanley Kowalczyk"), or at most <see cref="TieReachWords"/> with no other person named between; otherwise both headings name each other as "possibly the same person".</summary>
+    /// Stanley Kowalczyk"), or at most <see cref="TieReachWords"/> with no other person named between; otherwise both headings name each other as "possibly the same person".
+    /// A full name whose first word is no listed first name is read as a nickname before a surname
+    /// ("El Gordo Gallardo, they called him"): it joins the one full name with that surname and a
+    /// listed first name when the two are said at most <see cref="TieWords"/> words apart in one turn,
+    /// and is otherwise only possibly that person. Two listed first names with one surname are two
+    /// persons (siblings) and never merge this way. A given name with a patronymic ("Ivan Petrovych")
+    /// joins the one full name with that given name and patronymic ("Ivan Petrovych Hnatyuk"), and is
+    /// otherwise possibly the one full name with that given name.</summary>
     private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, ImmutableArray<Turn> turns)
     {
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
-        var full = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname)>();
+        var full = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)>();
         var single = new List<int>();
-        for (int i = 0; i < mentions.Length; i++)
+        var patronymic = new List<int>();
+        void AddFull(int i, string[] words)
         {
-            if (held[i] || mentions[i].Label != NameLabel.PER) continue;
             var m = mentions[i];
-            var words = Words(m.Text);
-            if (words.Length < 2) { single.Add(i); continue; }
             string first = words[0], last = words[^1], surname = lexicon.SurnameKey(last, m.Language);
             var known = full.FirstOrDefault(f => f.Surname == surname
                 && (lexicon.SameGivenName(f.First, f.Language, first, m.Language) || lexicon.EquivalentGivenNames(f.First, first)));
-            if (known.Group is not null) { known.Group.Members.Add(i); continue; }
+            if (known.Group is not null) { known.Group.Members.Add(i); return; }
             var group = Add(byKey, groups, NameLabel.PER, lexicon.Key(first, m.Language) + " " + lexicon.Key(last, m.Language), i);
-            if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname));
+            if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname, words.Length > 2 ? words[1] : null));
         }
 
-        List<HashSet<string>>? speakers = null;
+        for (int i = 0; i < mentions.Length; i++)
+        {
+            if (held[i] || mentions[i].Label != NameLabel.PER) continue;
+            var words = Words(mentions[i].Text);
+            if (words.Length < 2) single.Add(i);
+            else if (words.Length == 2 && lexicon.IsPatronymic(words[1])) patronymic.Add(i);
+            else AddFull(i, words);
+        }
+
+        var patronymicNames = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)>();
+        // A patronymic-looking second word that some full name has as its surname is that surname
+        // (Rabinovich, Abramovich are surnames too).
+        foreach (int i in patronymic)
+        {
+            var m = mentions[i];
+            var words = Words(m.Text);
+            if (full.Any(f => f.Surname == lexicon.SurnameKey(words[1], m.Language))) { AddFull(i, words); continue; }
+            var sameGiven = full.Where(f => lexicon.SameGivenName(f.First, f.Language, words[0], m.Language)).ToList();
+            var named = sameGiven.Where(f => f.Middle is not null && lexicon.Key(f.Middle, f.Language) == lexicon.Key(words[1], m.Language)).Select(f => f.Group).Distinct().ToList();
+            if (named is [var owner]) { owner.Members.Add(i); continue; }
+            var group = Add(byKey, groups, NameLabel.PER, lexicon.Key(words[0], m.Language) + " " + lexicon.Key(words[1], m.Language), i);
+            if (group.Members.Count > 1) continue;
+            if (sameGiven.Select(f => f.Group).Distinct().ToList() is [var only])
+            {
+                group.Possible.Add(only);
+                only.Possible.Add(group);
+            }
+            patronymicNames.Add((group, words[0], words[1], m.Language, lexicon.SurnameKey(words[1], m.Language), null));
+        }
+        // Now a name a lone given name or patronymic may belong to.
+        full.AddRange(patronymicNames);
+
         TurnPositions? persons = null;
+        List<HashSet<string>>? speakers = null;
         var namesSpeaker = new Dictionary<Group, bool>();
         var lone = new List<(Group Group, string Name, LanguageCode Language)>();
         var loneByKey = new Dictionary<string, Group>(StringComparer.Ordinal);
@@ -376,6 +450,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 || f.Surname == lexicon.SurnameKey(m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
             if (owners.Count == 0)
                 owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
+            if (owners.Count > 1 && owners.Where(g => full.Any(f => f.Group == g && GivenName(f.First))).ToList() is [var named]) owners = [named];
             if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
             if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)) is { Group: not null } kin)
@@ -387,16 +462,28 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (group.Members.Count == 1) lone.Add((group, m.Text, m.Language));
         }
 
+        foreach (var nick in full.Where(f => !GivenName(f.First)).ToList())
+        {
+            var named = full.Where(f => f.Group != nick.Group && f.Surname == nick.Surname && GivenName(f.First)).Select(f => f.Group).Distinct().ToList();
+            if (named is not [var only]) continue;
+            if (Tied(nick.Group, only, mentions, turns, persons ??= PersonPositions(mentions), TieWords))
+            {
+                MergeInto(nick.Group, only, groups);
+                full.Remove(nick);
+                continue;
+            }
+            nick.Group.Possible.Add(only);
+            only.Possible.Add(nick.Group);
+        }
+
         foreach (var l in lone)
         {
             var probable = full.Where(f => lexicon.EquivalentGivenNames(f.First, l.Name)).Select(f => f.Group)
                 .Concat(lone.Where(o => o.Group != l.Group && o.Group.Members.Count > 0 && lexicon.EquivalentGivenNames(o.Name, l.Name)).Select(o => o.Group))
                 .Distinct().ToList();
-            if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns, persons ??= new TurnPositions(mentions, Enumerable.Range(0, mentions.Length).Where(k => mentions[k].Label == NameLabel.PER))))
+            if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns, persons ??= PersonPositions(mentions), TieReachWords))
             {
-                only.Members.AddRange(l.Group.Members);
-                l.Group.Members.Clear();
-                groups.Remove(l.Group);
+                MergeInto(l.Group, only, groups);
                 continue;
             }
             foreach (var other in probable)
@@ -405,6 +492,28 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 other.Possible.Add(l.Group);
             }
         }
+    }
+
+    /// <summary>Whether a name's first word is a given name: a listed first name that is no stop word or
+    /// title of any language ("El" of "El Gordo Gallardo" is listed as a French first name).</summary>
+    private bool GivenName(string word) =>
+        lexicon.IsFirstName(word) && !LanguageProfiles.Default.StopWords.Contains(word.ToLowerInvariant());
+
+    /// <summary>Moves a group's mentions into another and drops it; "possibly the same person" links
+    /// to the dropped group now point at the one that took its mentions.</summary>
+    private static void MergeInto(Group from, Group into, List<Group> groups)
+    {
+        into.Members.AddRange(from.Members);
+        from.Members.Clear();
+        foreach (var other in from.Possible)
+        {
+            other.Possible.Remove(from);
+            if (other == into) continue;
+            other.Possible.Add(into);
+            into.Possible.Add(other);
+        }
+        into.Possible.Remove(from);
+        groups.Remove(from);
     }
 
     /// <summary>How close, in words of one turn, a one-word name and a full name it is a listed
@@ -420,9 +529,13 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// <see cref="TieReachWords"/> words), so a name said thousands of times costs no scan of its text.</summary>
     private const int TieReachChars = 2_000;
 
+    private static TurnPositions PersonPositions(ImmutableArray<Mention> mentions) =>
+        new(mentions, Enumerable.Range(0, mentions.Length).Where(k => mentions[k].Label == NameLabel.PER));
+
     /// <summary>Whether some mention of <paramref name="a"/> and the nearest mention of <paramref name="b"/>
-    /// on either side of it in its turn are tied. Each member costs two binary searches.</summary>
-    private static bool Tied(Group a, Group b, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns, TurnPositions persons)
+    /// on either side of it in its turn are tied: at most <see cref="TieWords"/> words apart, or at most
+    /// <paramref name="reach"/> with no other person named between. Each member costs two binary searches.</summary>
+    private static bool Tied(Group a, Group b, ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns, TurnPositions persons, int reach)
     {
         var others = new TurnPositions(mentions, b.Members);
         var either = a.Members.Concat(b.Members).ToHashSet();
@@ -440,7 +553,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 if (to - from > TieReachChars) continue;
                 int between = Words(turns[turn.Index].Text[from..to]).Length;
                 if (between <= TieWords) return true;
-                if (between <= TieReachWords && !persons.AnyWithin(turn, from, to, k2 => !either.Contains(k2))) return true;
+                if (between <= reach && !persons.AnyWithin(turn, from, to, k2 => !either.Contains(k2))) return true;
             }
         }
         return false;
@@ -532,7 +645,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var source = members.Any(i => mentions[i].Source == MentionSource.Authority) ? MentionSource.Authority
             : g.Place is not null ? MentionSource.Gazetteer
             : mentions[members[0]].Source;
-        return new Heading(UniqueId(g, usedIds), g.Label, name, variants, g.Place, alternatives, [.. members.Select(i => new MentionId(i))], speakers, confidence, source);
+        return new Heading(UniqueId(g, usedIds), g.Label, name, variants, g.Place, alternatives, [.. members.Select(i => new MentionId(i))], speakers, confidence, source)
+        {
+            PlaceFromContext = g.PlaceFromContext,
+        };
     }
 
     /// <summary>The most frequent surface (a multi-word one for persons when there is one), ties to

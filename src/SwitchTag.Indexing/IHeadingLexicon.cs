@@ -19,6 +19,12 @@ public interface IHeadingLexicon
     /// gazetteer link would replace; null when the name is none.</summary>
     ListedPlace? Listed(string name, LanguageCode language) => null;
 
+    /// <summary>Whether the name is a continent or world region (Europe, South America): no town's part.</summary>
+    bool IsWorldRegion(string name, LanguageCode language) => false;
+
+    /// <summary>Whether a word is a patronymic (Петрович, Petrivna), not a surname.</summary>
+    bool IsPatronymic(string word) => false;
+
     /// <summary>Whether a word is a listed first name of some language.</summary>
     bool IsFirstName(string word) => false;
 

@@ -34,14 +34,21 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
         return new ListedPlace(listed.Name, listed.Kind, listed.IsSite, at, listed.Countries);
     }
 
+    public bool IsWorldRegion(string name, LanguageCode language) => _lists.WorldRegions.Contains(name, language);
+
+    public bool IsPatronymic(string word) => _lists.Variants.IsPatronymic(word);
+
     public bool IsFirstName(string word) => _lists.Cues.IsFirstName(NameFolding.Fold(word));
 
     public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));
 
+    /// <summary>Listed diminutives, stems and keys; or a productive diminutive that is not itself a
+    /// listed first name (Irenka of Irena, but not Marek of Mara nor Paulina of Paula).</summary>
     public bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
         _lists.Variants.SameGivenName(a, b)
         || _lists.Variants.SameGivenName(NameFolding.Stem(a, languageA), NameFolding.Stem(b, languageB))
-        || Key(a, languageA) == Key(b, languageB);
+        || Key(a, languageA) == Key(b, languageB)
+        || _lists.Variants.DiminutiveOf(a, b) is { } form && !IsFirstName(form);
 
     public bool EquivalentGivenNames(string a, string b) => _lists.Variants.Equivalent(a, b);
 }

@@ -54,7 +54,7 @@ public sealed class NameTagger(NameSources sources, NamePrecedence? precedence =
     /// <summary>The vetoes of the shipped cascade: words that are never names, and ordinary words
     /// the model calls places at a sentence start.</summary>
     public static IReadOnlyList<IMentionVeto> ShippedVetoes(Lexicon.Gazetteer gazetteer, NameListSet lists) =>
-        [new NotPlaceWordVeto(lists.NotPlaces), new OrdinaryWordVeto(gazetteer, lists.Prepositions)];
+        [new NotPlaceWordVeto(lists.NotPlaces), new OrdinaryWordVeto(gazetteer, lists.Prepositions), new BarePlaceVeto(gazetteer, lists.Prepositions)];
 
     public ImmutableArray<Mention> Tag(TurnId turn, string turnText, ImmutableArray<LanguageSpan> spans)
     {

@@ -16,7 +16,8 @@ namespace SwitchTag.Indexing.Tests;
 /// models/lexicon/name-equivalents.tsv).</summary>
 public class PersonMergeTests
 {
-    private static readonly FakeLexicon Lexicon = new(new Dictionary<string, ImmutableArray<PlaceLink>>(), equivalents: [("Stanisław", "Stanley")]);
+    private static readonly FakeLexicon Lexicon = new(new Dictionary<string, ImmutableArray<PlaceLink>>(), equivalents: [("Stanisław", "Stanley")],
+        firstNames: new HashSet<string> { "Ernesto", "Pedro", "Walter", "Samuel", "Stanley", "Ivan", "Anna", "El" }, patronymicEndings: ["ovych"]);
 
     /// <summary>One turn of <paramref name="text"/> said by <paramref name="speaker"/>; each name is
     /// a PER mention at its n-th occurrence in the text (names in order of appearance).</summary>
@@ -48,6 +49,63 @@ public class PersonMergeTests
 
         // Said by someone the full names do not name: the surname is not guessed onto either.
         Assert.Equal(3, Build("Miriam", text, "Walter Lindner", "Samuel Lindner", "Lindner").Headings.Length);
+    }
+
+    [Fact]
+    public void A_nickname_before_a_surname_said_close_to_the_full_name_joins_it()
+    {
+        const string text = "A friend from the factory, Ernesto Gallardo. Ernesto, Gallardo, yes. El Gordo Gallardo, they called him.";
+        var result = Build("Manuel", text, "Ernesto Gallardo", "Ernesto", "Gallardo", "Gordo Gallardo");
+        var heading = Assert.Single(result.Headings);
+        Assert.Equal(["Ernesto Gallardo", "Ernesto", "Gallardo", "Gordo Gallardo"], heading.Variants.ToArray());
+
+        // With its article, though "El" is listed as a first name (as the shipped French list has it):
+        // a stop word of a language profile (SwitchTag.Core/Languages/es/stopwords.txt) is no given name.
+        const string withArticle = "A friend from the factory, Ernesto Gallardo. Ernesto, Gallardo, yes. El Gordo Gallardo, they called him.";
+        var article = Build("Manuel", withArticle, "Ernesto Gallardo", "Ernesto", "Gallardo", "El Gordo Gallardo");
+        Assert.Equal(["Ernesto Gallardo", "Ernesto", "Gallardo", "El Gordo Gallardo"], Assert.Single(article.Headings).Variants.ToArray());
+    }
+
+    [Fact]
+    public void A_nickname_far_from_the_full_name_is_only_possibly_that_person()
+    {
+        var text = "Ernesto Gallardo worked with me. " + Filler(HeadingBuilder.TieReachWords + 10) + " Gordo Gallardo came too.";
+        var result = Build("Manuel", text, "Ernesto Gallardo", "Gordo Gallardo");
+        Assert.Equal(2, result.Headings.Length);
+        var ernesto = result.Headings.Single(h => h.Name == "Ernesto Gallardo");
+        var gordo = result.Headings.Single(h => h.Name == "Gordo Gallardo");
+        Assert.Equal([gordo.Id], ernesto.PossiblySame.ToArray());
+        Assert.Equal([ernesto.Id], gordo.PossiblySame.ToArray());
+    }
+
+    [Fact]
+    public void Two_first_names_with_one_surname_said_together_are_two_persons()
+    {
+        var result = Build("Manuel", "My uncles Ernesto Gallardo and Pedro Gallardo.", "Ernesto Gallardo", "Pedro Gallardo");
+        Assert.Equal(2, result.Headings.Length);
+        Assert.All(result.Headings, h => Assert.Empty(h.PossiblySame));
+    }
+
+    /// <summary>Ukrainian patronymics end in -ovych (standard grammar, known from memory).</summary>
+    [Fact]
+    public void A_given_name_with_a_patronymic_joins_the_full_name_holding_both()
+    {
+        var result = Build("Ivan", "My father was Ivan Petrovych Hnatyuk. Ivan Petrovych, everybody called him.", "Ivan Petrovych Hnatyuk", "Ivan Petrovych");
+        Assert.Equal(["Ivan Petrovych Hnatyuk", "Ivan Petrovych"], Assert.Single(result.Headings).Variants.ToArray());
+
+        // Beside a full name without it, the patronymic form is only possibly that person.
+        var apart = Build("Ivan", "My father was Ivan Hnatyuk. Ivan Petrovych, everybody called him.", "Ivan Hnatyuk", "Ivan Petrovych");
+        Assert.Equal(2, apart.Headings.Length);
+        var father = apart.Headings.Single(h => h.Name == "Ivan Hnatyuk");
+        Assert.Equal([apart.Headings.Single(h => h.Name == "Ivan Petrovych").Id], father.PossiblySame.ToArray());
+    }
+
+    [Fact]
+    public void A_patronymic_looking_word_another_name_has_as_surname_is_that_surname()
+    {
+        var result = Build("Ivan", "Anna Borysovych and Pedro Borysovych, her brother.", "Anna Borysovych", "Pedro Borysovych");
+        Assert.Equal(2, result.Headings.Length);
+        Assert.All(result.Headings, h => Assert.Empty(h.PossiblySame));
     }
 
     [Fact]

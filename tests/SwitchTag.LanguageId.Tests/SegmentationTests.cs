@@ -42,6 +42,19 @@ public sealed class SegmentationTests(ModelFixture fixture)
     }
 
     [Theory]
+    [InlineData("Yes ich weiß nicht mehr, wo er gewohnt hat", "Yes", "weiß", "de")]
+    [InlineData("Anyway nie pamiętam już, gdzie on mieszkał", "Anyway", "pamiętam", "pl")]
+    [InlineData("Well sabe usted, mi padre nunca hablaba de eso", "Well", "padre", "es")]
+    public void OneWordOfTheMainLanguageOpeningATurnStaysItsOwn(string text, string opening, string foreign, string code)
+    {
+        // A turn that opens with one English word and goes on in another language switches after
+        // that word: the word is not merged into the foreign run as if it were a loanword there.
+        var spans = Segment(text);
+        Assert.Equal("en", LanguageOf(spans, text, opening));
+        Assert.Equal(code, LanguageOf(spans, text, foreign));
+    }
+
+    [Theory]
     [InlineData("We moved to Szczebrzeszyn when I was seven years old")]
     [InlineData("My uncle Wojciech Przybylski worked in the mine for twenty years")]
     [InlineData("After the war we took the train through Székesfehérvár and then further west")]

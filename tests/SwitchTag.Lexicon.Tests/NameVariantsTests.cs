@@ -22,4 +22,37 @@ public class NameVariantsTests
     [InlineData("Stanley", "Joseph")]
     [InlineData("Walter", "Samuel")]
     public void Unrelated_names_are_not(string a, string b) => Assert.False(Variants.Equivalent(a, b), $"{a} / {b}");
+
+    /// <summary>Forms no hypocoristics.tsv lists (checked with grep on 3 December), derived by the
+    /// endings of Languages/*/diminutive-suffixes.txt: Slovak -ka, Ukrainian -ка, Portuguese -inha,
+    /// Bavarian and Austrian German -l (common usage, known from memory).</summary>
+    [Theory]
+    [InlineData("Zuzana", "Zuzanka")]
+    [InlineData("Оксана", "Оксанка")]
+    [InlineData("Rosinha", "Rosa")]
+    [InlineData("Kurt", "Kurtl")]
+    public void A_productive_diminutive_is_found_either_way_round(string a, string b)
+    {
+        var longer = a.Length > b.Length ? a : b;
+        Assert.Equal(longer, Variants.DiminutiveOf(a, b));
+        Assert.Equal(longer, Variants.DiminutiveOf(b, a));
+    }
+
+    [Theory]
+    [InlineData("Anna", "Hanna")]
+    [InlineData("Marta", "Martin")]
+    [InlineData("Al", "Alek")]
+    [InlineData("Irena", "Irena")]
+    public void Other_pairs_are_no_diminutives(string a, string b) => Assert.Null(Variants.DiminutiveOf(a, b));
+
+    /// <summary>Russian and Ukrainian patronymics and a case form of one (standard grammar, known from
+    /// memory), against Languages/ru and uk/patronymic-suffixes.txt.</summary>
+    [Theory]
+    [InlineData("Петрович", true)]
+    [InlineData("Петровича", true)]
+    [InlineData("Petrivna", true)]
+    [InlineData("Ivanovna", true)]
+    [InlineData("Petrović", false)]
+    [InlineData("Kowalczyk", false)]
+    public void Patronymics_are_told_from_other_words(string word, bool patronymic) => Assert.Equal(patronymic, Variants.IsPatronymic(word));
 }

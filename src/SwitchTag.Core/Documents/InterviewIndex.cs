@@ -39,6 +39,10 @@ public sealed record Heading(
     /// <summary>Ids of person headings that are probably the same person (a cross-language equivalent
     /// or a spelling fold without other evidence), shown to the reviewer, never merged silently.</summary>
     public ImmutableArray<HeadingId> PossiblySame { get; init; } = [];
+
+    /// <summary>The place is not the name's own gazetteer entry but the town the talk was at when the
+    /// name was said (a district, street or village the gazetteer lacks): a guess for the reviewer.</summary>
+    public bool PlaceFromContext { get; init; }
 }
 
 /// <summary>A mention placed in time and filed under a heading (null while under review).</summary>

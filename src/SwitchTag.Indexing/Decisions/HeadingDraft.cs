@@ -14,6 +14,7 @@ internal sealed class HeadingDraft(Heading h)
     public string Name { get; set; } = h.Name;
     public List<string> Variants { get; } = [.. h.Variants];
     public PlaceLink? Place { get; private set; } = h.Place;
+    public bool PlaceFromContext { get; private set; } = h.PlaceFromContext;
     public List<PlaceLink> Alternatives { get; } = [.. h.Alternatives];
     public List<MentionId> Members { get; private set; } = [.. h.Mentions];
     public List<string> Speakers { get; } = [.. h.Speakers];
@@ -38,7 +39,7 @@ internal sealed class HeadingDraft(Heading h)
         Members = Members.Concat(other.Members).OrderBy(m => times[m.Index].Start).ThenBy(m => m).ToList();
         foreach (var v in other.Variants) if (!Variants.Contains(v)) Variants.Add(v);
         foreach (var s in other.Speakers) if (!Speakers.Contains(s)) Speakers.Add(s);
-        if (Place is null && other.Place is not null) Place = other.Place;
+        if (Place is null && other.Place is not null) (Place, PlaceFromContext) = (other.Place, other.PlaceFromContext);
         else if (other.Place is not null && other.Place.GeonameId != Place!.GeonameId) Alternatives.Add(other.Place);
         foreach (var a in other.Alternatives)
             if (a.GeonameId != Place?.GeonameId && Alternatives.All(x => x.GeonameId != a.GeonameId)) Alternatives.Add(a);
@@ -55,6 +56,7 @@ internal sealed class HeadingDraft(Heading h)
     {
         PossiblySame = [.. PossiblySame.Where(p => p != this && live.Contains(p) && p.Label == NameLabel.PER && Label == NameLabel.PER)
             .Select(p => p.Id).Distinct().Order()],
+        PlaceFromContext = PlaceFromContext,
     };
 }
 

@@ -90,7 +90,7 @@ public sealed partial class CodeSwitchSegmenter
                 startPriors[previousCode] = start = StartPrior(logPrior, previousCode, p);
             var labels = Decode(ev, new DecoderPriors(start, enter, noBonus));
             // A lone name ("Irena Kowalczyk.") is no switch even into a language of the interview.
-            MergeShortIslands(text, ev, labels, p.MinIslandWeight, (code, namesOnly) => namesOnly || !profile.Contains(_codes[code]));
+            MergeShortIslands(text, ev, labels, p.MinIslandWeight, (code, namesOnly, _) => namesOnly || !profile.Contains(_codes[code]));
             if (p.KeepKnownWords) MergeKnownWords(text, ev, labels);
             for (int w = 0; w < labels.Length; w++) words[labels[w]] += ev.Weights[w];
             var posterior = CodePosterior(ev, 0, ev.Count, logPrior);

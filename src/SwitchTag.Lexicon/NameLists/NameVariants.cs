@@ -7,24 +7,71 @@ namespace SwitchTag.Lexicon.NameLists;
 /// Cyrillic, Greek and Hebrew-script Yiddish and folds the usual surname spellings (Szwarc / Schwarz,
 /// Feigl / Feigel, Иосиф / Iosif), diminutives and nicknames of given names (hypocoristics), and
 /// cross-language equivalents (Stanisław / Stanley). Lists: models/lexicon/Transliteration,
-/// Languages/*/hypocoristics.tsv and name-equivalents.tsv, all written by hand (models/namelists.md).</summary>
+/// Languages/*/hypocoristics.tsv, diminutive-suffixes.txt and name-equivalents.tsv, all written by hand (models/namelists.md).</summary>
 public sealed class NameVariants
 {
     private readonly (string From, string To)[] _letters;
     private readonly (string From, string To, bool AtEnd)[] _folds;
     private readonly FrozenDictionary<string, FrozenSet<string>> _fullNamesOf;
     private readonly FrozenDictionary<string, FrozenSet<int>> _groupsOf;
+    private readonly FrozenSet<string> _diminutiveEndings;
+    private readonly string[] _patronymicEndings;
 
     private NameVariants((string, string)[] letters, (string, string, bool)[] folds,
-        FrozenDictionary<string, FrozenSet<string>> fullNamesOf, FrozenDictionary<string, FrozenSet<int>> groupsOf)
+        FrozenDictionary<string, FrozenSet<string>> fullNamesOf, FrozenDictionary<string, FrozenSet<int>> groupsOf, FrozenSet<string> diminutiveEndings,
+        string[] patronymicEndings)
     {
+        _patronymicEndings = patronymicEndings;
         _letters = letters;
         _folds = folds;
         _fullNamesOf = fullNamesOf;
         _groupsOf = groupsOf;
+        _diminutiveEndings = diminutiveEndings;
     }
 
-    public static NameVariants Empty { get; } = new([], [], FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty);
+    public static NameVariants Empty { get; } = new([], [], FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty, []);
+
+    /// <summary>Whether a word is a patronymic (Петрович, Petrivna: Languages/*/patronymic-suffixes.txt),
+    /// in any case form whose ending the suffix is followed by at most two letters (Петровича, Petrovycha).</summary>
+    public bool IsPatronymic(string word)
+    {
+        var folded = NameFolding.Fold(word);
+        foreach (var ending in _patronymicEndings)
+        {
+            int at = folded.LastIndexOf(ending, StringComparison.Ordinal);
+            if (at >= 3 && folded.Length - at - ending.Length <= 2) return true;
+        }
+        return false;
+    }
+
+    /// <summary>Shortest stem a diminutive ending may follow: "Jan" + "ek", not "Al" + "ek".</summary>
+    private const int ShortestStem = 3;
+
+    /// <summary>Which of two given names is a productive diminutive of the other (Irena / Irenka, Ilona /
+    /// Ilonka, Pedro / Pedrito, Jonas / Jonukas): the longer one, when its key is the other's key with
+    /// its final vowel or its nominative ending (vowel and s) dropped, plus an ending of some language's
+    /// Languages/*/diminutive-suffixes.txt. Null when neither is. Endings of every language are tried,
+    /// since a name's language is often the turn's, not the name's.</summary>
+    public string? DiminutiveOf(string a, string b)
+    {
+        if (_diminutiveEndings.Count == 0) return null;
+        string ka = Key(a), kb = Key(b);
+        if (ka.Length == kb.Length) return null;
+        var (form, full, formKey, fullKey) = ka.Length > kb.Length ? (a, b, ka, kb) : (b, a, kb, ka);
+        foreach (var stem in Stems(fullKey))
+            if (stem.Length >= ShortestStem && formKey.StartsWith(stem, StringComparison.Ordinal) && _diminutiveEndings.Contains(formKey[stem.Length..]))
+                return form;
+        return null;
+    }
+
+    private static IEnumerable<string> Stems(string key)
+    {
+        yield return key;
+        if (key.Length > 1 && IsVowel(key[^1])) yield return key[..^1];
+        if (key.Length > 2 && key[^1] == 's' && IsVowel(key[^2])) yield return key[..^2];
+    }
+
+    private static bool IsVowel(char c) => "aeiouy".Contains(c);
 
     /// <summary>The spelling key of one name word: romanised (first spelling of each table), folded,
     /// spelling folds applied in order, doubled letters collapsed.</summary>
@@ -101,7 +148,7 @@ public sealed class NameVariants
             .Where(r => r.Length > 1)
             .Select(r => r[0].EndsWith('$') ? (r[0][..^1], r[1], true) : (r[0], r[1], false))
             .ToArray();
-        var partial = new NameVariants(letters, folds, FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty);
+        var partial = new NameVariants(letters, folds, FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty, []);
 
         var fullNamesOf = new Dictionary<string, HashSet<string>>(StringComparer.Ordinal);
         // Each form also under its stem in its language, so a case form stemmed the same way meets it
@@ -117,6 +164,13 @@ public sealed class NameVariants
                         set.Add(full);
                     }
             }
+
+        // Endings keyed like the names (romanised, folded), so "очка" meets a romanised Cyrillic key.
+        var endings = LexiconTsv.Languages(lexiconDir)
+            .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "diminutive-suffixes.txt")))
+            .Select(r => partial.Key(r[0].Trim()))
+            .Where(e => e.Length > 0)
+            .ToFrozenSet(StringComparer.Ordinal);
 
         var groupsOf = new Dictionary<string, HashSet<int>>(StringComparer.Ordinal);
         int group = 0;
@@ -134,6 +188,8 @@ public sealed class NameVariants
         }
         return new NameVariants(letters, folds,
             fullNamesOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(StringComparer.Ordinal), StringComparer.Ordinal),
-            groupsOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(), StringComparer.Ordinal));
+            groupsOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(), StringComparer.Ordinal), endings,
+            [.. LexiconTsv.Languages(lexiconDir).SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "patronymic-suffixes.txt")))
+                .Select(r => NameFolding.Fold(r[0].Trim())).Where(e => e.Length > 0).Distinct()]);
     }
 }

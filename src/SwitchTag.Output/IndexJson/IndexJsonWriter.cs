@@ -205,6 +205,7 @@ public sealed class IndexJsonWriter : IInterviewWriter
             w.WriteEndArray();
             if (h.Place is null) w.WriteNull("place");
             else { w.WritePropertyName("place"); WritePlace(w, h.Place); }
+            w.WriteBoolean("placeFromContext", h.PlaceFromContext);
             w.WriteStartArray("alternatives");
             foreach (var a in h.Alternatives) WritePlace(w, a);
             w.WriteEndArray();

@@ -42,6 +42,7 @@ public sealed class PlacesGeoJsonWriter : IInterviewWriter
             w.WriteString("name", h.Name);
             if (h.Place.HasGeonameId) w.WriteNumber("geonameId", h.Place.GeonameId); else w.WriteNull("geonameId");
             w.WriteString("country", h.Place.Country);
+            w.WriteBoolean("placeFromContext", h.PlaceFromContext);
             if (h.Place.Region is not null) w.WriteString("region", h.Place.Region);
             w.WriteStartArray("variants");
             foreach (var v in h.Variants) w.WriteStringValue(v);

@@ -164,7 +164,7 @@ public sealed class ReportHtmlWriter : IInterviewWriter
         if (h.Place is null)
             return h.Label != NameLabel.LOC ? "" : h.Alternatives.IsEmpty ? "<span class=\"muted\">not in the gazetteer</span>" : "<span class=\"muted\">not linked: may be a historical place</span>" + others;
         var p = h.Place;
-        return $"{(p.Name == h.Name ? "" : "at ")}{Esc(p.Name)}, {Esc(p.Country)} <span class=\"muted\">({Esc(PlaceSource.Describe(p))})</span>" + others;
+        return $"{PlaceSource.Relation(h)}{Esc(p.Name)}, {Esc(p.Country)} <span class=\"muted\">({Esc(PlaceSource.Describe(h))})</span>" + others;
     }
 
     private static void Review(TextWriter b, InterviewIndex index)

@@ -97,7 +97,7 @@ public sealed class ReportMarkdownWriter : IInterviewWriter
         if (h.Place is null)
             return h.Label != NameLabel.LOC ? "" : h.Alternatives.IsEmpty ? "not in the gazetteer" : "not linked: may be a historical place" + others;
         var p = h.Place;
-        var text = $"{(p.Name == h.Name ? "" : "at ")}{MarkdownText.Escape(p.Name)}, {MarkdownText.Escape(p.Country)} ({PlaceSource.Describe(p)})";
+        var text = $"{PlaceSource.Relation(h)}{MarkdownText.Escape(p.Name)}, {MarkdownText.Escape(p.Country)} ({PlaceSource.Describe(h)})";
         if (!h.Alternatives.IsEmpty)
             text += others;
         return text;

@@ -165,7 +165,10 @@ public sealed class TeiXmlWriter : IInterviewWriter
                         w.WriteElementString("geo", string.Create(CultureInfo.InvariantCulture, $"{lat} {lon}"));
                         w.WriteEndElement();
                     }
-                    if (place.HasGeonameId)
+                    // A place the talk put at a town carries the town's coordinates, never its GeoNames id.
+                    if (h.PlaceFromContext)
+                        w.WriteElementString("note", $"placed by the town named just before it: {Clean(place.Name)}, {place.Country}");
+                    else if (place.HasGeonameId)
                     {
                         w.WriteStartElement("idno");
                         w.WriteAttributeString("type", "geonames");
@@ -250,7 +253,7 @@ public sealed class TeiXmlWriter : IInterviewWriter
             var heading = headings[headingId!.Value];
             w.WriteStartElement(mention.Label switch { NameLabel.PER => "persName", NameLabel.LOC => "placeName", _ => "orgName" });
             string reference = "#" + ids.Heading(heading.Id);
-            if (heading.Place is { HasGeonameId: true } place)
+            if (heading.Place is { HasGeonameId: true } place && !heading.PlaceFromContext)
                 reference += " https://www.geonames.org/" + place.GeonameId.ToString(CultureInfo.InvariantCulture);
             w.WriteAttributeString("ref", reference);
         }

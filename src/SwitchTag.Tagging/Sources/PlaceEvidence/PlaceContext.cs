@@ -1,3 +1,4 @@
+using SwitchTag.Core.Text;
 using SwitchTag.Core.Documents;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
@@ -7,7 +8,8 @@ namespace SwitchTag.Tagging.Sources.PlaceEvidence;
 /// <summary>Whether a gazetteer match's context says "place": a multi-word name matched whole ("New
 /// Jersey", "Nowy Sącz"), a name right after a locative preposition ("w Tarnowie", "nach Wien"), or a
 /// case ending on a town ("Krakowie": a form the gazetteer reaches only by inflection, of a place of
-/// <see cref="TownPopulation"/> people or more). A one-word listed first name naming no city of
+/// <see cref="TownPopulation"/> people or more, not opening a sentence: on the Universal NER and NorNE
+/// dev files such a sentence-opening form was a place once in 15 times). A one-word listed first name naming no city of
 /// <see cref="CityPopulation"/> is never supported by its context alone: Polish "z Hanką" is "with
 /// Hanka", not "from Hanko" (but "to Milan" is Milano); nor is a word with a capitalised word right
 /// after it ("do Jana Kowalskiego": a person's full name after the preposition).</summary>
@@ -24,7 +26,8 @@ public sealed class PlaceContext(Lexicon.Gazetteer gazetteer, PlacePrepositions 
         if (largest < CityPopulation && (cues.IsFirstName(NameFolding.Fold(m.Text)) || cues.IsFirstName(NameFolding.Stem(m.Text, m.Language)))) return false;
         if (FollowedByCapitalised(turnText, m.CharEnd)) return false;
         if (prepositions.Precedes(turnText, m.CharStart)) return true;
-        return candidates.Count > 0 && candidates.All(c => c.Kind == MatchKind.Inflected) && largest >= TownPopulation;
+        return candidates.Count > 0 && candidates.All(c => c.Kind == MatchKind.Inflected) && largest >= TownPopulation
+            && !TextPosition.IsSentenceStart(turnText, m.CharStart);
     }
 
     private static bool FollowedByCapitalised(string text, int end) =>
