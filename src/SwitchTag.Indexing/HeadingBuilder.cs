@@ -394,7 +394,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
         var full = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)>();
         var single = new List<int>();
-        var patronymic = new List<int>();
+        var patronymic = new List<(int Index, string[] Words)>();
         void AddFull(int i, string[] words)
         {
             var m = mentions[i];
@@ -411,17 +411,16 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (held[i] || mentions[i].Label != NameLabel.PER) continue;
             var words = Words(mentions[i].Text);
             if (words.Length < 2) single.Add(i);
-            else if (words.Length == 2 && lexicon.IsPatronymic(words[1])) patronymic.Add(i);
+            else if (words.Length == 2 && LanguageProfiles.Default.IsPatronymic(words[1], CaseLetters)) patronymic.Add((i, words));
             else AddFull(i, words);
         }
 
         var patronymicNames = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)>();
         // A patronymic-looking second word that some full name has as its surname is that surname
         // (Rabinovich, Abramovich are surnames too).
-        foreach (int i in patronymic)
+        foreach (var (i, words) in patronymic)
         {
             var m = mentions[i];
-            var words = Words(m.Text);
             if (full.Any(f => f.Surname == lexicon.SurnameKey(words[1], m.Language))) { AddFull(i, words); continue; }
             var sameGiven = full.Where(f => lexicon.SameGivenName(f.First, f.Language, words[0], m.Language)).ToList();
             var named = sameGiven.Where(f => f.Middle is not null && lexicon.Key(f.Middle, f.Language) == lexicon.Key(words[1], m.Language)).Select(f => f.Group).Distinct().ToList();
@@ -493,6 +492,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
         }
     }
+
+    /// <summary>Final letters a patronymic may carry as a case ending ("Ivana Petrovicha").</summary>
+    private const int CaseLetters = 2;
 
     /// <summary>Whether a name's first word is a given name: a listed first name that is no stop word or
     /// title of any language ("El" of "El Gordo Gallardo" is listed as a French first name).</summary>

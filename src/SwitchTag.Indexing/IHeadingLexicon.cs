@@ -22,9 +22,6 @@ public interface IHeadingLexicon
     /// <summary>Whether the name is a continent or world region (Europe, South America): no town's part.</summary>
     bool IsWorldRegion(string name, LanguageCode language) => false;
 
-    /// <summary>Whether a word is a patronymic (Петрович, Petrivna), not a surname.</summary>
-    bool IsPatronymic(string word) => false;
-
     /// <summary>Whether a word is a listed first name of some language.</summary>
     bool IsFirstName(string word) => false;
 

@@ -36,8 +36,6 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public bool IsWorldRegion(string name, LanguageCode language) => _lists.WorldRegions.Contains(name, language);
 
-    public bool IsPatronymic(string word) => _lists.Variants.IsPatronymic(word);
-
     public bool IsFirstName(string word) => _lists.Cues.IsFirstName(NameFolding.Fold(word));
 
     public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));

@@ -17,7 +17,7 @@ namespace SwitchTag.Indexing.Tests;
 public class PersonMergeTests
 {
     private static readonly FakeLexicon Lexicon = new(new Dictionary<string, ImmutableArray<PlaceLink>>(), equivalents: [("Stanisław", "Stanley")],
-        firstNames: new HashSet<string> { "Ernesto", "Pedro", "Walter", "Samuel", "Stanley", "Ivan", "Anna", "El" }, patronymicEndings: ["ovych"]);
+        firstNames: new HashSet<string> { "Ernesto", "Pedro", "Walter", "Samuel", "Stanley", "Ivan", "Anna", "El" });
 
     /// <summary>One turn of <paramref name="text"/> said by <paramref name="speaker"/>; each name is
     /// a PER mention at its n-th occurrence in the text (names in order of appearance).</summary>
@@ -86,7 +86,8 @@ public class PersonMergeTests
         Assert.All(result.Headings, h => Assert.Empty(h.PossiblySame));
     }
 
-    /// <summary>Ukrainian patronymics end in -ovych (standard grammar, known from memory).</summary>
+    /// <summary>Ukrainian patronymics end in -ovych (standard grammar, known from memory; listed in
+    /// SwitchTag.Core/Languages/uk/patronymics.txt).</summary>
     [Fact]
     public void A_given_name_with_a_patronymic_joins_the_full_name_holding_both()
     {

@@ -46,6 +46,21 @@ public sealed class LanguageProfiles
     /// an English turn is as much a patronymic as "Петровна" in a Russian one.</summary>
     public ImmutableArray<string> PatronymicEndings { get; }
 
+    /// <summary>Whether a word ends in a patronymic ending after a stem of two letters or more, or does
+    /// so once at most <paramref name="caseLetters"/> final letters are set aside (a case form,
+    /// "Петровича").</summary>
+    public bool IsPatronymic(ReadOnlySpan<char> word, int caseLetters = 0)
+    {
+        var lower = word.ToString().ToLowerInvariant();
+        for (int k = 0; k <= caseLetters && k < lower.Length; k++)
+        {
+            if (k > 0 && !char.IsLetter(lower[^k])) break;
+            var head = lower[..^k];
+            if (PatronymicEndings.Any(e => head.Length >= e.Length + 2 && head.EndsWith(e, StringComparison.Ordinal))) return true;
+        }
+        return false;
+    }
+
     public static LanguageProfiles Default { get; } = FromResources(typeof(LanguageProfiles).Assembly);
 
     /// <summary>Every profile, ordered by code.</summary>

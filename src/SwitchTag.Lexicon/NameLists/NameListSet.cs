@@ -17,7 +17,9 @@ public sealed record NameListSet(PersonCues Cues, NotPlaceWords NotPlaces, Place
     {
         var cues = PersonCues.Load(lexiconDir);
         var places = SpokenPlaces.Load(lexiconDir);
-        return new NameListSet(cues, NotPlaceWords.Load(lexiconDir, cues, places), PlacePrepositions.Load(lexiconDir), NameVariants.Load(lexiconDir), places,
-            FirstLevelRegions.Load(lexiconDir), WorldRegions.Load(lexiconDir));
+        // Read once: countries and continents are never "not a place", and continents are world regions.
+        var territories = LexiconTsv.Rows(Path.Combine(lexiconDir, "territories.tsv")).Where(r => r.Length > 1).ToList();
+        return new NameListSet(cues, NotPlaceWords.Load(lexiconDir, cues, places, territories), PlacePrepositions.Load(lexiconDir), NameVariants.Load(lexiconDir), places,
+            FirstLevelRegions.Load(lexiconDir), WorldRegions.From(territories));
     }
 }

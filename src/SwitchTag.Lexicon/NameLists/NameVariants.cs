@@ -15,13 +15,10 @@ public sealed class NameVariants
     private readonly FrozenDictionary<string, FrozenSet<string>> _fullNamesOf;
     private readonly FrozenDictionary<string, FrozenSet<int>> _groupsOf;
     private readonly FrozenSet<string> _diminutiveEndings;
-    private readonly string[] _patronymicEndings;
 
     private NameVariants((string, string)[] letters, (string, string, bool)[] folds,
-        FrozenDictionary<string, FrozenSet<string>> fullNamesOf, FrozenDictionary<string, FrozenSet<int>> groupsOf, FrozenSet<string> diminutiveEndings,
-        string[] patronymicEndings)
+        FrozenDictionary<string, FrozenSet<string>> fullNamesOf, FrozenDictionary<string, FrozenSet<int>> groupsOf, FrozenSet<string> diminutiveEndings)
     {
-        _patronymicEndings = patronymicEndings;
         _letters = letters;
         _folds = folds;
         _fullNamesOf = fullNamesOf;
@@ -29,20 +26,7 @@ public sealed class NameVariants
         _diminutiveEndings = diminutiveEndings;
     }
 
-    public static NameVariants Empty { get; } = new([], [], FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty, []);
-
-    /// <summary>Whether a word is a patronymic (Петрович, Petrivna: Languages/*/patronymic-suffixes.txt),
-    /// in any case form whose ending the suffix is followed by at most two letters (Петровича, Petrovycha).</summary>
-    public bool IsPatronymic(string word)
-    {
-        var folded = NameFolding.Fold(word);
-        foreach (var ending in _patronymicEndings)
-        {
-            int at = folded.LastIndexOf(ending, StringComparison.Ordinal);
-            if (at >= 3 && folded.Length - at - ending.Length <= 2) return true;
-        }
-        return false;
-    }
+    public static NameVariants Empty { get; } = new([], [], FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty);
 
     /// <summary>Shortest stem a diminutive ending may follow: "Jan" + "ek", not "Al" + "ek".</summary>
     private const int ShortestStem = 3;
@@ -148,7 +132,7 @@ public sealed class NameVariants
             .Where(r => r.Length > 1)
             .Select(r => r[0].EndsWith('$') ? (r[0][..^1], r[1], true) : (r[0], r[1], false))
             .ToArray();
-        var partial = new NameVariants(letters, folds, FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty, []);
+        var partial = new NameVariants(letters, folds, FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty);
 
         var fullNamesOf = new Dictionary<string, HashSet<string>>(StringComparer.Ordinal);
         // Each form also under its stem in its language, so a case form stemmed the same way meets it
@@ -188,8 +172,6 @@ public sealed class NameVariants
         }
         return new NameVariants(letters, folds,
             fullNamesOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(StringComparer.Ordinal), StringComparer.Ordinal),
-            groupsOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(), StringComparer.Ordinal), endings,
-            [.. LexiconTsv.Languages(lexiconDir).SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "patronymic-suffixes.txt")))
-                .Select(r => NameFolding.Fold(r[0].Trim())).Where(e => e.Length > 0).Distinct()]);
+            groupsOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(), StringComparer.Ordinal), endings);
     }
 }

@@ -16,7 +16,7 @@ public sealed record NotPlaceWords(FrozenSet<string> Words)
     /// <summary>Whether the whole name (folded words) is one of the words.</summary>
     public bool Contains(string name) => Words.Contains(NameFolding.FoldedWords(name));
 
-    internal static NotPlaceWords Load(string lexiconDir, PersonCues cues, SpokenPlaces places)
+    internal static NotPlaceWords Load(string lexiconDir, PersonCues cues, SpokenPlaces places, IEnumerable<string[]> territories)
     {
         var words = new HashSet<string>(StringComparer.Ordinal);
         foreach (var (_, folder) in LexiconTsv.Languages(lexiconDir))
@@ -29,8 +29,7 @@ public sealed record NotPlaceWords(FrozenSet<string> Words)
         words.UnionWith(cues.Titles.Select(NameFolding.FoldedWords));
         words.UnionWith(cues.Kinship.Select(NameFolding.FoldedWords));
         words.ExceptWith(places.Names);
-        words.ExceptWith(LexiconTsv.Rows(Path.Combine(lexiconDir, "territories.tsv")).Where(r => r.Length > 1)
-            .SelectMany(r => LexiconTsv.Alternatives(r[1])).Select(NameFolding.FoldedWords));
+        words.ExceptWith(territories.SelectMany(r => LexiconTsv.Alternatives(r[1])).Select(NameFolding.FoldedWords));
         words.Remove("");
         return new NotPlaceWords(words.ToFrozenSet(StringComparer.Ordinal));
     }

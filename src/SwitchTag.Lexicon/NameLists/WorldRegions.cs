@@ -26,9 +26,10 @@ public sealed class WorldRegions(FrozenSet<string> folded)
 
     private static string Start(string folded) => folded.Length <= 3 ? folded : folded[..3];
 
-    internal static WorldRegions Load(string lexiconDir) =>
-        new(LexiconTsv.Rows(Path.Combine(lexiconDir, "territories.tsv"))
-            .Where(r => r.Length > 1 && r[0].Length > 0 && r[0].All(char.IsAsciiDigit))
+    /// <summary>From the rows of territories.tsv (code, names).</summary>
+    internal static WorldRegions From(IEnumerable<string[]> territories) =>
+        new(territories
+            .Where(r => r[0].Length > 0 && r[0].All(char.IsAsciiDigit))
             .SelectMany(r => LexiconTsv.Alternatives(r[1]))
             .Select(NameFolding.FoldedWords)
             .Where(n => n.Length > 0)

@@ -10,13 +10,11 @@ namespace SwitchTag.Indexing.Tests.Fakes;
 /// <summary>A lexicon with a fixed place list (keyed by folded name or key) and a crude fold (lower case, marks removed, one Polish
 /// case ending stripped), so heading tests do not move when the real lexicon changes; <paramref name="diminutives"/> maps a
 /// diminutive to its full given name, <paramref name="listed"/> the camps and historical places by the name said, <paramref name="equivalents"/>
-/// the given-name pairs listed as cross-language equivalents, <paramref name="firstNames"/> the words listed as first names, <paramref name="patronymicEndings"/> the endings of patronymics.</summary>
+/// the given-name pairs listed as cross-language equivalents, <paramref name="firstNames"/> the words listed as first names.</summary>
 public sealed class FakeLexicon(IReadOnlyDictionary<string, ImmutableArray<PlaceLink>> places, IReadOnlyDictionary<string, string>? diminutives = null,
     IReadOnlyDictionary<string, ListedPlace>? listed = null, IReadOnlyList<(string, string)>? equivalents = null,
-    IReadOnlySet<string>? firstNames = null, IReadOnlyList<string>? patronymicEndings = null) : IHeadingLexicon
+    IReadOnlySet<string>? firstNames = null) : IHeadingLexicon
 {
-    public bool IsPatronymic(string word) => patronymicEndings?.Any(e => word.EndsWith(e, StringComparison.Ordinal)) == true;
-
     public bool IsFirstName(string word) => firstNames?.Contains(word) == true;
 
     public bool EquivalentGivenNames(string a, string b) =>

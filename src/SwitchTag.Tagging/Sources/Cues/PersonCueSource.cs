@@ -82,12 +82,8 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
     private static bool ClosesApposition(string text, int end) =>
         end == text.Length || text[end] is ',' or '.' or ';' or ':' or '!' or '?';
 
-    private static bool IsPatronymic(string text, (int Start, int End) word)
-    {
-        if (!char.IsUpper(text[word.Start])) return false;
-        var lower = text[word.Start..word.End].ToLowerInvariant();
-        return LanguageProfiles.Default.PatronymicEndings.Any(e => lower.Length >= e.Length + 2 && lower.EndsWith(e, StringComparison.Ordinal));
-    }
+    private static bool IsPatronymic(string text, (int Start, int End) word) =>
+        char.IsUpper(text[word.Start]) && LanguageProfiles.Default.IsPatronymic(text.AsSpan(word.Start, word.End - word.Start));
 
     private bool IsNameWord(string text, (int Start, int End) word) =>
         char.IsUpper(text[word.Start]) && word.End - word.Start > 1 && !notPlaces.Words.Contains(NameFolding.Fold(WordAt(text, word)));
