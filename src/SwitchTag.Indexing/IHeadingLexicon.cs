@@ -28,6 +28,10 @@ public interface IHeadingLexicon
     /// <summary>A surname's spelling key: equal for Szwarc and Schwarz, Feigl and Feigel.</summary>
     string SurnameKey(string word, LanguageCode language) => Key(word, language);
 
+    /// <summary>Whether two surnames can be one family's name, a woman's form beside the family form
+    /// included (Nováková / Novák, Orlova / Orlov): weaker than equal surname keys.</summary>
+    bool SameFamilyName(string a, LanguageCode languageA, string b, LanguageCode languageB) => SurnameKey(a, languageA) == SurnameKey(b, languageB);
+
     /// <summary>Whether two given names are one (equal keys), or diminutives of one full name (Irena /
     /// Irenko, Hanna / Hanka): certain evidence for a merge within one interview.</summary>
     bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) => Key(a, languageA) == Key(b, languageB);

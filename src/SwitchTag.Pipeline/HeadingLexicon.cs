@@ -40,6 +40,10 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));
 
+    public bool SameFamilyName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
+        SurnameKey(a, languageA) == SurnameKey(b, languageB)
+        || _lists.Variants.FamilyKeys(a).Intersect(_lists.Variants.FamilyKeys(b), StringComparer.Ordinal).Any();
+
     /// <summary>Listed diminutives, stems and keys; or a productive diminutive that is not itself a
     /// listed first name (Irenka of Irena, but not Marek of Mara nor Paulina of Paula).</summary>
     public bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>

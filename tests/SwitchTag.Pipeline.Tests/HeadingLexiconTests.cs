@@ -1,4 +1,10 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
+using SwitchTag.Core.Time;
+using SwitchTag.Indexing;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Pipeline.Models;
@@ -10,7 +16,10 @@ namespace SwitchTag.Pipeline.Tests;
 /// <summary>Given names as heading building sees them, on the shipped lists: a productive diminutive
 /// is the same given name unless it is a listed first name of its own. Marek is listed as a first name
 /// in models/lexicon/Languages/pl/first-names.tsv (from @faker-js/faker, checked with grep); Slovak
-/// Zuzanka for Zuzana is common usage (known from memory) and listed in no hypocoristics.tsv.</summary>
+/// Zuzanka for Zuzana is common usage (known from memory) and listed in no hypocoristics.tsv.
+/// Feminine surnames follow the standard Czech, Slovak, Polish and Russian grammars (-ová, -ska, -ova
+/// beside the family form; known from memory); Piet for Pieter and Eve for Eva are common usage (known
+/// from memory). The persons are invented.</summary>
 public class HeadingLexiconTests
 {
     private static readonly Lazy<(HeadingLexicon Lexicon, NameListSet Lists)> Loaded = new(() =>
@@ -20,7 +29,55 @@ public class HeadingLexiconTests
         return (new HeadingLexicon(ShippedModels.LoadGazetteer(at), lists), lists);
     });
 
-    private static readonly LanguageCode Slovak = new("sk"), Polish = new("pl");
+    private static readonly LanguageCode Slovak = new("sk"), Polish = new("pl"), Czech = new("cs"), Russian = new("ru"), English = new("en"), Dutch = new("nl");
+
+    /// <summary>Headings of one turn said by <paramref name="speaker"/>, each name a PER mention 20
+    /// characters after the previous one.</summary>
+    private static HeadingResult Build(string speaker, params (string Text, LanguageCode Language)[] names)
+    {
+        var mentions = names.Select((n, i) => new Mention(new TurnId(0), new CharSpan(i * 20, i * 20 + n.Text.Length), n.Text, NameLabel.PER, n.Language, 0.9, MentionSource.Model)).ToImmutableArray();
+        var times = names.Select((_, i) => new TimeRange(new Timecode(i * 1000), new Timecode(i * 1000 + 500))).ToImmutableArray();
+        var turn = new Turn(new TurnId(0), speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(100_000)), new string(' ', names.Length * 20 + 40), []);
+        return new HeadingBuilder(Loaded.Value.Lexicon).Build(mentions, times, [turn]);
+    }
+
+    private static string[][] Variants(HeadingResult result) =>
+        [.. result.Headings.OrderBy(h => h.Name, StringComparer.Ordinal).Select(h => h.Variants.ToArray())];
+
+    [Theory]
+    [InlineData("Nováková", "cs", "Novák", "en")]
+    [InlineData("Hudecová", "sk", "Hudec", "sk")]
+    [InlineData("Kowalska", "pl", "Kowalski", "en")]
+    [InlineData("Orlova", "en", "Orlov", "en")]
+    [InlineData("Орлова", "ru", "Orlov", "en")]
+    public void A_womans_surname_and_its_family_form_are_one_family(string a, string languageA, string b, string languageB) =>
+        Assert.True(Loaded.Value.Lexicon.SameFamilyName(a, new LanguageCode(languageA), b, new LanguageCode(languageB)), $"{a} / {b}");
+
+    [Fact]
+    public void Other_surnames_are_not_one_family() =>
+        Assert.False(Loaded.Value.Lexicon.SameFamilyName("Nováková", Czech, "Novotný", Czech));
+
+    [Fact]
+    public void A_woman_under_the_family_form_of_her_surname_abroad_is_one_person()
+    {
+        Assert.Equal([["Eva Kleinová", "Eve Klein"]], Variants(Build("Marta", ("Eva Kleinová", Slovak), ("Eve Klein", English))));
+        // Husband and wife: a stem shared by the given names is not enough.
+        Assert.Equal(2, Build("Marta", ("Jan Novák", Czech), ("Jana Nováková", Czech)).Headings.Length);
+    }
+
+    [Fact]
+    public void A_surname_said_in_another_language_joins_the_woman_it_names_not_her_father()
+    {
+        var result = Build("Marta", ("Marta Hudecová", English), ("Ondrej Hudec", English), ("Hudecová", Slovak));
+        Assert.Equal([["Marta Hudecová", "Hudecová"], ["Ondrej Hudec"]], Variants(result));
+    }
+
+    [Fact]
+    public void A_dutch_short_form_and_a_surname_after_particles_join_their_full_names()
+    {
+        var result = Build("Johanna", ("Johanna van den Berg", English), ("Pieter van den Berg", Dutch), ("Piet", English), ("Van den Berg", Dutch));
+        Assert.Equal([["Johanna van den Berg", "Van den Berg"], ["Pieter van den Berg", "Piet"]], Variants(result));
+    }
 
     [Fact]
     public void A_derived_diminutive_is_the_same_given_name()
