@@ -491,8 +491,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             only.Possible.Add(nick.Group);
         }
 
+        JoinBirthNames(mentions, held, groups, turns, full);
+
         foreach (var l in lone)
         {
+            if (l.Group.Members.Count == 0) continue;
             var probable = full.Where(f => lexicon.EquivalentGivenNames(f.First, l.Name)).Select(f => f.Group)
                 .Concat(lone.Where(o => o.Group != l.Group && o.Group.Members.Count > 0 && lexicon.EquivalentGivenNames(o.Name, l.Name)).Select(o => o.Group))
                 .Distinct().ToList();
@@ -523,6 +526,50 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// not a given name and a surname.</summary>
     private static bool SurnameAfterParticles(string[] words) =>
         words.Length > 1 && words[..^1].All(w => LanguageProfiles.Default.NameParticles.Contains(w.ToLowerInvariant()));
+
+    /// <summary>Chars before a name searched for a birth-name marker ("nazwisko panieńskie, ").</summary>
+    private const int MarkerChars = 32;
+
+    /// <summary>A name after a birth-name marker ("Anna Nowak, z domu Wiśniewska"; "I was born Ruth
+    /// Stein") is the woman named before it under the name she was born with. A surname alone joins
+    /// the nearest full name before it in its turn, at most <see cref="TieWords"/> words back; a full
+    /// name joins the one full name of another surname with her given name (the same name, a
+    /// diminutive or a listed equivalent), its heading's other mentions with it.</summary>
+    private void JoinBirthNames(ImmutableArray<Mention> mentions, bool[] held, List<Group> groups, ImmutableArray<Turn> turns,
+        List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)> full)
+    {
+        Dictionary<int, Group>? groupOf = null;
+        for (int i = 0; i < mentions.Length; i++)
+        {
+            var m = mentions[i];
+            if (held[i] || m.Label != NameLabel.PER || m.CharStart == 0) continue;
+            var text = turns[m.Turn.Index].Text;
+            int from = Math.Max(0, m.CharStart - MarkerChars);
+            if (!lexicon.EndsWithBirthNameMarker(text[from..m.CharStart])) continue;
+            groupOf ??= groups.Where(g => g.Label == NameLabel.PER).SelectMany(g => g.Members.Select(k => (k, g))).ToDictionary(x => x.k, x => x.g);
+            if (!groupOf.TryGetValue(i, out var own)) continue;
+            var words = Words(m.Text);
+            if (words.Length > 1)
+            {
+                var hers = full.Where(f => f.Group != own && groups.Contains(f.Group) && f.Surname != lexicon.SurnameKey(words[^1], m.Language)
+                    && (lexicon.SameGivenName(f.First, f.Language, words[0], m.Language) || lexicon.EquivalentGivenNames(f.First, words[0])))
+                    .Select(f => f.Group).Distinct().ToList();
+                if (hers is not [var woman]) continue;
+                foreach (int k in own.Members) groupOf[k] = woman;
+                MergeInto(own, woman, groups);
+                full.RemoveAll(f => f.Group == own);
+                continue;
+            }
+            int before = Enumerable.Range(0, i).Reverse().TakeWhile(j => mentions[j].Turn == m.Turn)
+                .FirstOrDefault(j => !held[j] && mentions[j].Label == NameLabel.PER && Words(mentions[j].Text).Length > 1, -1);
+            if (before < 0 || !groupOf.TryGetValue(before, out var named) || named == own
+                || Words(text[mentions[before].CharEnd..m.CharStart]).Length > TieWords) continue;
+            own.Members.Remove(i);
+            if (own.Members.Count == 0) groups.Remove(own);
+            named.Members.Add(i);
+            groupOf[i] = named;
+        }
+    }
 
     /// <summary>Final letters a patronymic may carry as a case ending ("Ivana Petrovicha").</summary>
     private const int CaseLetters = 2;

@@ -32,6 +32,10 @@ public interface IHeadingLexicon
     /// included (Nováková / Novák, Orlova / Orlov): weaker than equal surname keys.</summary>
     bool SameFamilyName(string a, LanguageCode languageA, string b, LanguageCode languageB) => SurnameKey(a, languageA) == SurnameKey(b, languageB);
 
+    /// <summary>Whether the text right before a name ends with a word that introduces a woman's birth
+    /// name ("née", "geb.", "z domu").</summary>
+    bool EndsWithBirthNameMarker(string before) => false;
+
     /// <summary>Whether two given names are one (equal keys), or diminutives of one full name (Irena /
     /// Irenko, Hanna / Hanka): certain evidence for a merge within one interview.</summary>
     bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) => Key(a, languageA) == Key(b, languageB);

@@ -44,6 +44,8 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
         SurnameKey(a, languageA) == SurnameKey(b, languageB)
         || _lists.Variants.FamilyKeys(a).Intersect(_lists.Variants.FamilyKeys(b), StringComparer.Ordinal).Any();
 
+    public bool EndsWithBirthNameMarker(string before) => _lists.Cues.EndsWithBirthNameMarker(before);
+
     /// <summary>Listed diminutives, stems and keys; or a productive diminutive that is not itself a
     /// listed first name (Irenka of Irena, but not Marek of Mara nor Paulina of Paula).</summary>
     public bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>

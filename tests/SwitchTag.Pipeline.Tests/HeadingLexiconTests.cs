@@ -41,6 +41,41 @@ public class HeadingLexiconTests
         return new HeadingBuilder(Loaded.Value.Lexicon).Build(mentions, times, [turn]);
     }
 
+    /// <summary>Headings of one turn of <paramref name="text"/>; each name a PER mention at its next
+    /// occurrence in the text.</summary>
+    private static HeadingResult BuildText(string text, params (string Text, LanguageCode Language)[] names)
+    {
+        var mentions = ImmutableArray.CreateBuilder<Mention>();
+        int from = 0;
+        foreach (var (name, language) in names)
+        {
+            int at = text.IndexOf(name, from, StringComparison.Ordinal);
+            Assert.True(at >= 0, name);
+            mentions.Add(new Mention(new TurnId(0), new CharSpan(at, at + name.Length), name, NameLabel.PER, language, 0.9, MentionSource.Model));
+            from = at + name.Length;
+        }
+        var times = mentions.Select((_, i) => new TimeRange(new Timecode(i * 1000), new Timecode(i * 1000 + 500))).ToImmutableArray();
+        var turn = new Turn(new TurnId(0), "Narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(100_000)), text, []);
+        return new HeadingBuilder(Loaded.Value.Lexicon).Build(mentions.ToImmutable(), times, [turn]);
+    }
+
+    /// <summary>Birth-name markers of Languages/*/birth-name-markers.txt: Polish "z domu" and English
+    /// "born" before a maiden name (common usage, known from memory).</summary>
+    [Fact]
+    public void A_name_after_a_birth_name_marker_is_the_woman_named_before_it()
+    {
+        var polish = BuildText("My mother was Anna Nowak, z domu Wiśniewska, from Lublin. Her brother Jan Wiśniewski stayed there.",
+            ("Anna Nowak", English), ("Wiśniewska", Polish), ("Jan Wiśniewski", English));
+        Assert.Equal([["Anna Nowak", "Wiśniewska"], ["Jan Wiśniewski"]], Variants(polish));
+
+        var english = BuildText("After the wedding I was Ruth Adler. But I was born Ruth Stein, in Vienna.", ("Ruth Adler", English), ("Ruth Stein", English));
+        Assert.Equal([["Ruth Adler", "Ruth Stein"]], Variants(english));
+
+        // Without the marker two women of one given name stay two headings.
+        var cousins = BuildText("After the wedding I was Ruth Adler. My cousin Ruth Stein lived in Vienna.", ("Ruth Adler", English), ("Ruth Stein", English));
+        Assert.Equal(2, cousins.Headings.Length);
+    }
+
     private static string[][] Variants(HeadingResult result) =>
         [.. result.Headings.OrderBy(h => h.Name, StringComparer.Ordinal).Select(h => h.Variants.ToArray())];
 
