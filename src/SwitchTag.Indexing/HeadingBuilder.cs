@@ -574,10 +574,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// <summary>Final letters a patronymic may carry as a case ending ("Ivana Petrovicha").</summary>
     private const int CaseLetters = 2;
 
-    /// <summary>Whether a name's first word is a given name: a listed first name that is no stop word or
-    /// title of any language ("El" of "El Gordo Gallardo" is listed as a French first name).</summary>
+    /// <summary>Whether a name's first word is a given name: a listed first name, or a given name or
+    /// form the name-variant lists know ("Giorgos" is no nickname before Stavrou), that is no stop word
+    /// or title of any language ("El" of "El Gordo Gallardo" is listed as a French first name).</summary>
     private bool GivenName(string word) =>
-        lexicon.IsFirstName(word) && !LanguageProfiles.Default.StopWords.Contains(word.ToLowerInvariant());
+        (lexicon.IsFirstName(word) || lexicon.KnowsGivenName(word)) && !LanguageProfiles.Default.StopWords.Contains(word.ToLowerInvariant());
 
     /// <summary>Moves a group's mentions into another and drops it; "possibly the same person" links
     /// to the dropped group now point at the one that took its mentions.</summary>

@@ -25,6 +25,10 @@ public interface IHeadingLexicon
     /// <summary>Whether a word is a listed first name of some language.</summary>
     bool IsFirstName(string word) => false;
 
+    /// <summary>Whether the hypocoristics or equivalents lists know the word as a given name or one of
+    /// its forms; they hold romanised forms ("Giorgos") the first-name lists have only in their own script.</summary>
+    bool KnowsGivenName(string word) => false;
+
     /// <summary>A surname's spelling key: equal for Szwarc and Schwarz, Feigl and Feigel.</summary>
     string SurnameKey(string word, LanguageCode language) => Key(word, language);
 

@@ -38,6 +38,8 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public bool IsFirstName(string word) => _lists.Cues.IsFirstName(NameFolding.Fold(word));
 
+    public bool KnowsGivenName(string word) => _lists.Variants.KnowsGivenName(word);
+
     public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));
 
     public bool SameFamilyName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>

@@ -5,7 +5,7 @@ namespace SwitchTag.Lexicon.Tests;
 
 /// <summary>Given-name relations read from the shipped lists (models/lexicon: name-equivalents.tsv and
 /// Languages/*/hypocoristics.tsv, written by hand). The pairs checked are common usage known from
-/// memory (Stanisław / Stanley, Giuseppina / Josefina (feminine forms of Joseph), Staszek as a Polish diminutive of Stanisław).</summary>
+/// memory (Stanisław / Stanley, Giuseppina / Josefina (feminine forms of Joseph), Staszek as a Polish diminutive of Stanisław, Hyman as the usual English form adopted for Yiddish Chaim).</summary>
 public class NameVariantsTests
 {
     private static readonly NameVariants Variants = NameListSet.Load(Path.Combine(TestPaths.RepoRoot, "models", "lexicon")).Variants;
@@ -16,6 +16,7 @@ public class NameVariantsTests
     [InlineData("Joseph", "Józef")]
     [InlineData("Stanley", "Staszek")]
     [InlineData("Giuseppina", "Josefina")]
+    [InlineData("Hyman", "Chaim")]
     public void Listed_equivalents_are_equivalent(string a, string b) => Assert.True(Variants.Equivalent(a, b), $"{a} / {b}");
 
     /// <summary>Feminine surname forms of Languages/*/feminine-surname-endings.tsv (standard Czech and

@@ -76,6 +76,17 @@ public class HeadingLexiconTests
         Assert.Equal(2, cousins.Headings.Length);
     }
 
+    /// <summary>Giorgos is listed only as a form in models/lexicon/Languages/el/hypocoristics.tsv (the
+    /// first-name list has Γιώργος); Lenio is listed there as a form of Eleni (common Greek usage,
+    /// known from memory).</summary>
+    [Fact]
+    public void A_romanised_given_name_the_variant_lists_know_is_no_nickname()
+    {
+        var result = BuildText("This is Eleni Stavrou. Everybody called me Lenio. My father, Giorgos Stavrou, had a boat.",
+            ("Eleni Stavrou", English), ("Lenio", English), ("Giorgos Stavrou", English));
+        Assert.Equal([["Eleni Stavrou", "Lenio"], ["Giorgos Stavrou"]], Variants(result));
+    }
+
     private static string[][] Variants(HeadingResult result) =>
         [.. result.Headings.OrderBy(h => h.Name, StringComparer.Ordinal).Select(h => h.Variants.ToArray())];
 

@@ -93,6 +93,14 @@ public sealed class NameVariants
     public IReadOnlySet<string> FullNames(string word) =>
         _fullNamesOf.TryGetValue(Key(word), out var set) ? set : FrozenSet<string>.Empty;
 
+    /// <summary>Whether the hypocoristics or equivalents lists know the word as a given name or one of
+    /// its forms (romanised forms too: "Giorgos", which the first-name lists have only as Γιώργος).</summary>
+    public bool KnowsGivenName(string word)
+    {
+        var key = Key(word);
+        return _fullNamesOf.ContainsKey(key) || _groupsOf.ContainsKey(key);
+    }
+
     /// <summary>Whether two given names are diminutives of one full name, or one of the other.</summary>
     public bool SameGivenName(string a, string b)
     {
