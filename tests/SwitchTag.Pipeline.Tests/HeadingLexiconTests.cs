@@ -131,6 +131,14 @@ public class HeadingLexiconTests
         Assert.True(Loaded.Value.Lexicon.SameGivenName("Zuzana", Slovak, "Zuzanka", Slovak));
     }
 
+    /// <summary>Slovak instrumental -om ("s Imrichom", with Imrich; standard grammar, from memory).</summary>
+    [Fact]
+    public void A_case_form_is_the_same_given_name_in_either_language()
+    {
+        Assert.True(Loaded.Value.Lexicon.SameGivenName("Imrich", Slovak, "Imrichom", Slovak));
+        Assert.True(Loaded.Value.Lexicon.SameGivenName("Imrich", English, "Imrichom", Slovak));
+    }
+
     [Fact]
     public void A_derived_form_that_is_a_first_name_of_its_own_is_not()
     {
