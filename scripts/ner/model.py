@@ -30,11 +30,15 @@ class Tagger(nn.Module):
             return F.embedding(ids, table.weight.half()).float().sum(2)
         return F.embedding(ids, table.weight, sparse=table.sparse).sum(2)
 
-    def forward(self, features, pieces):
+    def encode(self, features, pieces):
+        """Per-word hidden states before the output layer (pretrain.py puts its own head on them)."""
         mask = (features[:, :, 0] > 0).unsqueeze(-1).float()
         x = self.embed(self.hash, features) + self.embed(self.piece, pieces)
         x = self.drop(self.norm(x)) * mask
         for conv, norm in zip(self.convs, self.norms):
             y = F.relu(conv(x.transpose(1, 2))).transpose(1, 2)
             x = norm(x + self.drop(y)) * mask
-        return self.out(x)
+        return x
+
+    def forward(self, features, pieces):
+        return self.out(self.encode(features, pieces))

@@ -14,6 +14,7 @@ import torch
 import corpora
 import features as fx
 import lexicon as lx
+import pretrain as pt
 from model import LABELS, Tagger
 
 SEED = 20261201
@@ -152,13 +153,13 @@ def augment(rng, words, lower_share):
     return words
 
 
-def sample_plan(train, alpha, budget, max_repeat):
+def sample_plan(train, alpha, budget, max_repeat, weights=corpora.SAMPLING_WEIGHT):
     """Tokens each training set contributes per epoch: temperature sampling over sets,
     share_s ~ weight_s * tokens_s ** alpha (alpha < 1 lifts small sets and holds large ones back),
     scaled to `budget` tokens, never more than max_repeat passes over a set; silver or noisy sets
     (corpora.SAMPLING_WEIGHT) weigh half, English-EWT's train split twice (see there). Returns {name: sentences per epoch}."""
     tokens = {n: sum(len(w) for w, _ in s) for n, s in train.items()}
-    weight = {n: corpora.SAMPLING_WEIGHT.get(n, 1.0) * tokens[n] ** alpha for n in train}
+    weight = {n: weights.get(n, 1.0) * tokens[n] ** alpha for n in train}
     total = sum(weight.values())
     plan = {}
     for n, ss in train.items():
@@ -230,6 +231,10 @@ def run(args, data, sp, lexicon, drop_groups, dim, dilations, epochs, log):
     nrng = np.random.default_rng(SEED)
     feat = Featurizer(sp, lexicon, drop_groups)
     model = Tagger(fx.HASH_ROWS, sp.get_piece_size() + 1, dim, dilations)
+    if args.pretrain_epochs:
+        # The tables and convolutions start from masked-word pretraining; the output layer stays fresh.
+        secs = pt.pretrain(args, model, feat, data, SEED, log, sample_plan, draw, augment, batch_tensors)
+        log(f"pretraining {secs:.0f}s")
     tables = [model.hash.weight, model.piece.weight]
     opts = [torch.optim.SparseAdam(tables, lr=2e-3),
             torch.optim.Adam([p for p in model.parameters() if all(p is not t for t in tables)], lr=2e-3)]
@@ -324,6 +329,10 @@ def main():
     ap.add_argument("--dilations", default="1,2,4,8,1", help="receptive field = sum, at most the C# window overlap (16)")
     ap.add_argument("--per-loc-penalty", type=float, default=1.0,
                     help="weight of an extra loss on place tags given to gold person words (0: plain cross-entropy)")
+    ap.add_argument("--pretrain-epochs", type=int, default=0, help="epochs of masked-word pretraining before tagging (pretrain.py)")
+    ap.add_argument("--pretrain-budget", type=float, default=1.2e6, help="pretraining tokens per epoch")
+    ap.add_argument("--pretrain-vocab", type=int, default=10000, help="most frequent lower-cased words the pretraining head predicts")
+    ap.add_argument("--mask-share", type=float, default=0.15, help="share of words masked in pretraining")
     ap.add_argument("--threads", type=int, default=1)
     ap.add_argument("--ablations", action="store_true")
     ap.add_argument("--ablation-epochs", type=int, default=2)
