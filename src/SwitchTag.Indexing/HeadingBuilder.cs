@@ -371,7 +371,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// <summary>Persons, merged only on certain evidence. A full name (two or more words) joins a
     /// heading whose surname has its spelling key (Szwarc / Schwarz, Feigl / Feigel) and whose given
     /// name is the same, a diminutive of the same full name (Hanka / Hanna) or a listed equivalent
-    /// (Stanisław / Stanley: with the same surname, two pieces of evidence). A one-word name joins the
+    /// (Stanisław / Stanley: with the same surname, two pieces of evidence); a woman's surname form
+    /// and its family form (Eva Kleinová / Eve Klein) only with the very given name or a listed
+    /// equivalent. A surname after particles ("Van den Berg") is a one-word name. A one-word name joins the
     /// one full-name heading having it as first or last word (of several, the one whose first word is a
     /// listed first name, when only one is), else the one whose given name it is a
     /// diminutive of (Irenko / Irena Kowalczyk); one-word names that are diminutives of each other
@@ -401,6 +403,12 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             string first = words[0], last = words[^1], surname = lexicon.SurnameKey(last, m.Language);
             var known = full.FirstOrDefault(f => f.Surname == surname
                 && (lexicon.SameGivenName(f.First, f.Language, first, m.Language) || lexicon.EquivalentGivenNames(f.First, first)));
+            // A woman's surname beside the family form (Eva Kleinová / Eve Klein abroad) only with the
+            // very given name or a listed equivalent, never a stem or diminutive: Jan Novák and Jana
+            // Nováková are two people.
+            if (known.Group is null)
+                known = full.FirstOrDefault(f => f.Surname != surname && lexicon.SameFamilyName(f.Last, f.Language, last, m.Language)
+                    && (lexicon.Key(f.First, LanguageCode.Undetermined) == lexicon.Key(first, LanguageCode.Undetermined) || lexicon.EquivalentGivenNames(f.First, first)));
             if (known.Group is not null) { known.Group.Members.Add(i); return; }
             var group = Add(byKey, groups, NameLabel.PER, lexicon.Key(first, m.Language) + " " + lexicon.Key(last, m.Language), i);
             if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname, words.Length > 2 ? words[1] : null));
@@ -410,7 +418,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         {
             if (held[i] || mentions[i].Label != NameLabel.PER) continue;
             var words = Words(mentions[i].Text);
-            if (words.Length < 2) single.Add(i);
+            if (words.Length < 2 || SurnameAfterParticles(words)) single.Add(i);
             else if (words.Length == 2 && LanguageProfiles.Default.IsPatronymic(words[1], CaseLetters)) patronymic.Add((i, words));
             else AddFull(i, words);
         }
@@ -442,15 +450,23 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var namesSpeaker = new Dictionary<Group, bool>();
         var lone = new List<(Group Group, string Name, LanguageCode Language)>();
         var loneByKey = new Dictionary<string, Group>(StringComparer.Ordinal);
+        // The full names a one-word name may belong to, worked out once per distinct text and language.
+        var ownersOf = new Dictionary<(string, LanguageCode), List<Group>>();
         foreach (int i in single)
         {
             var m = mentions[i];
-            var owners = full.Where(f => lexicon.Key(f.First, f.Language) == keys[i] || lexicon.Key(f.Last, f.Language) == keys[i]
-                || f.Surname == lexicon.SurnameKey(m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
-            if (owners.Count == 0)
-                owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
-            if (owners.Count > 1 && owners.Where(g => full.Any(f => f.Group == g && GivenName(f.First))).ToList() is [var named]) owners = [named];
-            if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
+            if (!ownersOf.TryGetValue((m.Text, m.Language), out var owners))
+            {
+                // A surname after its particles ("Mrs. Van den Berg") is matched by its last word.
+                string word = Words(m.Text)[^1];
+                owners = full.Where(f => SameNameWord(f.First, f.Language, word, m.Language) || SameNameWord(f.Last, f.Language, word, m.Language)
+                    || SameSurname(f.Last, f.Language, word, m.Language)).Select(f => f.Group).Distinct().ToList();
+                if (owners.Count == 0)
+                    owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
+                if (owners.Count > 1 && owners.Where(g => full.Any(f => f.Group == g && GivenName(f.First))).ToList() is [var named]) owners = [named];
+                if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
+                ownersOf[(m.Text, m.Language)] = owners;
+            }
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
             if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)) is { Group: not null } kin)
             {
@@ -475,8 +491,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             only.Possible.Add(nick.Group);
         }
 
+        JoinBirthNames(mentions, held, groups, turns, full);
+
         foreach (var l in lone)
         {
+            if (l.Group.Members.Count == 0) continue;
             var probable = full.Where(f => lexicon.EquivalentGivenNames(f.First, l.Name)).Select(f => f.Group)
                 .Concat(lone.Where(o => o.Group != l.Group && o.Group.Members.Count > 0 && lexicon.EquivalentGivenNames(o.Name, l.Name)).Select(o => o.Group))
                 .Distinct().ToList();
@@ -493,13 +512,73 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         }
     }
 
+    /// <summary>Whether two name words are one name: equal keys when both are read in the language of
+    /// either. A name said in a Slovak and in an English sentence stems differently ("Hudecová" is
+    /// hudecov in Slovak, hudecova in English), yet it is the same word.</summary>
+    private bool SameNameWord(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
+        lexicon.Key(a, languageA) == lexicon.Key(b, languageA) || lexicon.Key(a, languageB) == lexicon.Key(b, languageB);
+
+    /// <summary><see cref="SameNameWord"/> with surname spelling keys (Szwarc / Schwarz).</summary>
+    private bool SameSurname(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
+        lexicon.SurnameKey(a, languageA) == lexicon.SurnameKey(b, languageA) || lexicon.SurnameKey(a, languageB) == lexicon.SurnameKey(b, languageB);
+
+    /// <summary>A surname after name particles only ("Van den Berg", "de Vries"): a one-word name,
+    /// not a given name and a surname.</summary>
+    private static bool SurnameAfterParticles(string[] words) =>
+        words.Length > 1 && words[..^1].All(w => LanguageProfiles.Default.NameParticles.Contains(w.ToLowerInvariant()));
+
+    /// <summary>Chars before a name searched for a birth-name marker ("nazwisko panieńskie, ").</summary>
+    private const int MarkerChars = 32;
+
+    /// <summary>A name after a birth-name marker ("Anna Nowak, z domu Wiśniewska"; "I was born Ruth
+    /// Stein") is the woman named before it under the name she was born with. A surname alone joins
+    /// the nearest full name before it in its turn, at most <see cref="TieWords"/> words back; a full
+    /// name joins the one full name of another surname with her given name (the same name, a
+    /// diminutive or a listed equivalent), its heading's other mentions with it.</summary>
+    private void JoinBirthNames(ImmutableArray<Mention> mentions, bool[] held, List<Group> groups, ImmutableArray<Turn> turns,
+        List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)> full)
+    {
+        Dictionary<int, Group>? groupOf = null;
+        for (int i = 0; i < mentions.Length; i++)
+        {
+            var m = mentions[i];
+            if (held[i] || m.Label != NameLabel.PER || m.CharStart == 0) continue;
+            var text = turns[m.Turn.Index].Text;
+            int from = Math.Max(0, m.CharStart - MarkerChars);
+            if (!lexicon.EndsWithBirthNameMarker(text[from..m.CharStart])) continue;
+            groupOf ??= groups.Where(g => g.Label == NameLabel.PER).SelectMany(g => g.Members.Select(k => (k, g))).ToDictionary(x => x.k, x => x.g);
+            if (!groupOf.TryGetValue(i, out var own)) continue;
+            var words = Words(m.Text);
+            if (words.Length > 1)
+            {
+                var hers = full.Where(f => f.Group != own && groups.Contains(f.Group) && f.Surname != lexicon.SurnameKey(words[^1], m.Language)
+                    && (lexicon.SameGivenName(f.First, f.Language, words[0], m.Language) || lexicon.EquivalentGivenNames(f.First, words[0])))
+                    .Select(f => f.Group).Distinct().ToList();
+                if (hers is not [var woman]) continue;
+                foreach (int k in own.Members) groupOf[k] = woman;
+                MergeInto(own, woman, groups);
+                full.RemoveAll(f => f.Group == own);
+                continue;
+            }
+            int before = Enumerable.Range(0, i).Reverse().TakeWhile(j => mentions[j].Turn == m.Turn)
+                .FirstOrDefault(j => !held[j] && mentions[j].Label == NameLabel.PER && Words(mentions[j].Text).Length > 1, -1);
+            if (before < 0 || !groupOf.TryGetValue(before, out var named) || named == own
+                || Words(text[mentions[before].CharEnd..m.CharStart]).Length > TieWords) continue;
+            own.Members.Remove(i);
+            if (own.Members.Count == 0) groups.Remove(own);
+            named.Members.Add(i);
+            groupOf[i] = named;
+        }
+    }
+
     /// <summary>Final letters a patronymic may carry as a case ending ("Ivana Petrovicha").</summary>
     private const int CaseLetters = 2;
 
-    /// <summary>Whether a name's first word is a given name: a listed first name that is no stop word or
-    /// title of any language ("El" of "El Gordo Gallardo" is listed as a French first name).</summary>
+    /// <summary>Whether a name's first word is a given name: a listed first name, or a given name or
+    /// form the name-variant lists know ("Giorgos" is no nickname before Stavrou), that is no stop word
+    /// or title of any language ("El" of "El Gordo Gallardo" is listed as a French first name).</summary>
     private bool GivenName(string word) =>
-        lexicon.IsFirstName(word) && !LanguageProfiles.Default.StopWords.Contains(word.ToLowerInvariant());
+        (lexicon.IsFirstName(word) || lexicon.KnowsGivenName(word)) && !LanguageProfiles.Default.StopWords.Contains(word.ToLowerInvariant());
 
     /// <summary>Moves a group's mentions into another and drops it; "possibly the same person" links
     /// to the dropped group now point at the one that took its mentions.</summary>

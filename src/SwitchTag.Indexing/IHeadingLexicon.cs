@@ -25,8 +25,20 @@ public interface IHeadingLexicon
     /// <summary>Whether a word is a listed first name of some language.</summary>
     bool IsFirstName(string word) => false;
 
+    /// <summary>Whether the hypocoristics or equivalents lists know the word as a given name or one of
+    /// its forms; they hold romanised forms ("Giorgos") the first-name lists have only in their own script.</summary>
+    bool KnowsGivenName(string word) => false;
+
     /// <summary>A surname's spelling key: equal for Szwarc and Schwarz, Feigl and Feigel.</summary>
     string SurnameKey(string word, LanguageCode language) => Key(word, language);
+
+    /// <summary>Whether two surnames can be one family's name, a woman's form beside the family form
+    /// included (Nováková / Novák, Orlova / Orlov): weaker than equal surname keys.</summary>
+    bool SameFamilyName(string a, LanguageCode languageA, string b, LanguageCode languageB) => SurnameKey(a, languageA) == SurnameKey(b, languageB);
+
+    /// <summary>Whether the text right before a name ends with a word that introduces a woman's birth
+    /// name ("née", "geb.", "z domu").</summary>
+    bool EndsWithBirthNameMarker(string before) => false;
 
     /// <summary>Whether two given names are one (equal keys), or diminutives of one full name (Irena /
     /// Irenko, Hanna / Hanka): certain evidence for a merge within one interview.</summary>

@@ -38,14 +38,24 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public bool IsFirstName(string word) => _lists.Cues.IsFirstName(NameFolding.Fold(word));
 
+    public bool KnowsGivenName(string word) => _lists.Variants.KnowsGivenName(word);
+
     public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));
 
-    /// <summary>Listed diminutives, stems and keys; or a productive diminutive that is not itself a
-    /// listed first name (Irenka of Irena, but not Marek of Mara nor Paulina of Paula).</summary>
+    public bool SameFamilyName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
+        SurnameKey(a, languageA) == SurnameKey(b, languageB)
+        || _lists.Variants.FamilyKeys(a).Intersect(_lists.Variants.FamilyKeys(b), StringComparer.Ordinal).Any();
+
+    public bool EndsWithBirthNameMarker(string before) => _lists.Cues.EndsWithBirthNameMarker(before);
+
+    /// <summary>Listed diminutives, stems and keys, or one a case form of the other (Slovak instrumental
+    /// "Imrichom" of "Imrich", whose own stem the Slovak endings cut too short); or a productive diminutive that is not itself a listed first name (Irenka of
+    /// Irena, but not Marek of Mara nor Paulina of Paula).</summary>
     public bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
         _lists.Variants.SameGivenName(a, b)
         || _lists.Variants.SameGivenName(NameFolding.Stem(a, languageA), NameFolding.Stem(b, languageB))
         || Key(a, languageA) == Key(b, languageB)
+        || NameFolding.SameName(a, languageA, b, languageB)
         || _lists.Variants.DiminutiveOf(a, b) is { } form && !IsFirstName(form);
 
     public bool EquivalentGivenNames(string a, string b) => _lists.Variants.Equivalent(a, b);

@@ -5,7 +5,7 @@ namespace SwitchTag.Lexicon.Tests;
 
 /// <summary>Given-name relations read from the shipped lists (models/lexicon: name-equivalents.tsv and
 /// Languages/*/hypocoristics.tsv, written by hand). The pairs checked are common usage known from
-/// memory (Stanisław / Stanley, Giuseppina / Josefina (feminine forms of Joseph), Staszek as a Polish diminutive of Stanisław).</summary>
+/// memory (Stanisław / Stanley, Giuseppina / Josefina (feminine forms of Joseph), Staszek as a Polish diminutive of Stanisław, Hyman as the usual English form adopted for Yiddish Chaim).</summary>
 public class NameVariantsTests
 {
     private static readonly NameVariants Variants = NameListSet.Load(Path.Combine(TestPaths.RepoRoot, "models", "lexicon")).Variants;
@@ -16,7 +16,18 @@ public class NameVariantsTests
     [InlineData("Joseph", "Józef")]
     [InlineData("Stanley", "Staszek")]
     [InlineData("Giuseppina", "Josefina")]
+    [InlineData("Hyman", "Chaim")]
     public void Listed_equivalents_are_equivalent(string a, string b) => Assert.True(Variants.Equivalent(a, b), $"{a} / {b}");
+
+    /// <summary>Feminine surname forms of Languages/*/feminine-surname-endings.tsv (standard Czech and
+    /// Russian grammar, known from memory) meet their family forms; unrelated surnames do not.</summary>
+    [Theory]
+    [InlineData("Nováková", "Novák", true)]
+    [InlineData("Orlova", "Orlov", true)]
+    [InlineData("Заславская", "Заславский", true)]
+    [InlineData("Nováková", "Novotný", false)]
+    public void A_feminine_surname_meets_its_family_form(string a, string b, bool same) =>
+        Assert.Equal(same, Variants.FamilyKeys(a).Intersect(Variants.FamilyKeys(b)).Any());
 
     [Theory]
     [InlineData("Stanley", "Joseph")]

@@ -1,4 +1,10 @@
+using System.Collections.Immutable;
+using SwitchTag.Core.Documents;
+using SwitchTag.Core.Ids;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
+using SwitchTag.Core.Time;
+using SwitchTag.Indexing;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Pipeline.Models;
@@ -10,7 +16,10 @@ namespace SwitchTag.Pipeline.Tests;
 /// <summary>Given names as heading building sees them, on the shipped lists: a productive diminutive
 /// is the same given name unless it is a listed first name of its own. Marek is listed as a first name
 /// in models/lexicon/Languages/pl/first-names.tsv (from @faker-js/faker, checked with grep); Slovak
-/// Zuzanka for Zuzana is common usage (known from memory) and listed in no hypocoristics.tsv.</summary>
+/// Zuzanka for Zuzana is common usage (known from memory) and listed in no hypocoristics.tsv.
+/// Feminine surnames follow the standard Czech, Slovak, Polish and Russian grammars (-ová, -ska, -ova
+/// beside the family form; known from memory); Piet for Pieter and Eve for Eva are common usage (known
+/// from memory). The persons are invented.</summary>
 public class HeadingLexiconTests
 {
     private static readonly Lazy<(HeadingLexicon Lexicon, NameListSet Lists)> Loaded = new(() =>
@@ -20,12 +29,114 @@ public class HeadingLexiconTests
         return (new HeadingLexicon(ShippedModels.LoadGazetteer(at), lists), lists);
     });
 
-    private static readonly LanguageCode Slovak = new("sk"), Polish = new("pl");
+    private static readonly LanguageCode Slovak = new("sk"), Polish = new("pl"), Czech = new("cs"), Russian = new("ru"), English = new("en"), Dutch = new("nl");
+
+    /// <summary>Headings of one turn said by <paramref name="speaker"/>, each name a PER mention 20
+    /// characters after the previous one.</summary>
+    private static HeadingResult Build(string speaker, params (string Text, LanguageCode Language)[] names)
+    {
+        var mentions = names.Select((n, i) => new Mention(new TurnId(0), new CharSpan(i * 20, i * 20 + n.Text.Length), n.Text, NameLabel.PER, n.Language, 0.9, MentionSource.Model)).ToImmutableArray();
+        var times = names.Select((_, i) => new TimeRange(new Timecode(i * 1000), new Timecode(i * 1000 + 500))).ToImmutableArray();
+        var turn = new Turn(new TurnId(0), speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(100_000)), new string(' ', names.Length * 20 + 40), []);
+        return new HeadingBuilder(Loaded.Value.Lexicon).Build(mentions, times, [turn]);
+    }
+
+    /// <summary>Headings of one turn of <paramref name="text"/>; each name a PER mention at its next
+    /// occurrence in the text.</summary>
+    private static HeadingResult BuildText(string text, params (string Text, LanguageCode Language)[] names)
+    {
+        var mentions = ImmutableArray.CreateBuilder<Mention>();
+        int from = 0;
+        foreach (var (name, language) in names)
+        {
+            int at = text.IndexOf(name, from, StringComparison.Ordinal);
+            Assert.True(at >= 0, name);
+            mentions.Add(new Mention(new TurnId(0), new CharSpan(at, at + name.Length), name, NameLabel.PER, language, 0.9, MentionSource.Model));
+            from = at + name.Length;
+        }
+        var times = mentions.Select((_, i) => new TimeRange(new Timecode(i * 1000), new Timecode(i * 1000 + 500))).ToImmutableArray();
+        var turn = new Turn(new TurnId(0), "Narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(100_000)), text, []);
+        return new HeadingBuilder(Loaded.Value.Lexicon).Build(mentions.ToImmutable(), times, [turn]);
+    }
+
+    /// <summary>Birth-name markers of Languages/*/birth-name-markers.txt: Polish "z domu" and English
+    /// "born" before a maiden name (common usage, known from memory).</summary>
+    [Fact]
+    public void A_name_after_a_birth_name_marker_is_the_woman_named_before_it()
+    {
+        var polish = BuildText("My mother was Anna Nowak, z domu Wiśniewska, from Lublin. Her brother Jan Wiśniewski stayed there.",
+            ("Anna Nowak", English), ("Wiśniewska", Polish), ("Jan Wiśniewski", English));
+        Assert.Equal([["Anna Nowak", "Wiśniewska"], ["Jan Wiśniewski"]], Variants(polish));
+
+        var english = BuildText("After the wedding I was Ruth Adler. But I was born Ruth Stein, in Vienna.", ("Ruth Adler", English), ("Ruth Stein", English));
+        Assert.Equal([["Ruth Adler", "Ruth Stein"]], Variants(english));
+
+        // Without the marker two women of one given name stay two headings.
+        var cousins = BuildText("After the wedding I was Ruth Adler. My cousin Ruth Stein lived in Vienna.", ("Ruth Adler", English), ("Ruth Stein", English));
+        Assert.Equal(2, cousins.Headings.Length);
+    }
+
+    /// <summary>Giorgos is listed only as a form in models/lexicon/Languages/el/hypocoristics.tsv (the
+    /// first-name list has Γιώργος); Lenio is listed there as a form of Eleni (common Greek usage,
+    /// known from memory).</summary>
+    [Fact]
+    public void A_romanised_given_name_the_variant_lists_know_is_no_nickname()
+    {
+        var result = BuildText("This is Eleni Stavrou. Everybody called me Lenio. My father, Giorgos Stavrou, had a boat.",
+            ("Eleni Stavrou", English), ("Lenio", English), ("Giorgos Stavrou", English));
+        Assert.Equal([["Eleni Stavrou", "Lenio"], ["Giorgos Stavrou"]], Variants(result));
+    }
+
+    private static string[][] Variants(HeadingResult result) =>
+        [.. result.Headings.OrderBy(h => h.Name, StringComparer.Ordinal).Select(h => h.Variants.ToArray())];
+
+    [Theory]
+    [InlineData("Nováková", "cs", "Novák", "en")]
+    [InlineData("Hudecová", "sk", "Hudec", "sk")]
+    [InlineData("Kowalska", "pl", "Kowalski", "en")]
+    [InlineData("Orlova", "en", "Orlov", "en")]
+    [InlineData("Орлова", "ru", "Orlov", "en")]
+    public void A_womans_surname_and_its_family_form_are_one_family(string a, string languageA, string b, string languageB) =>
+        Assert.True(Loaded.Value.Lexicon.SameFamilyName(a, new LanguageCode(languageA), b, new LanguageCode(languageB)), $"{a} / {b}");
+
+    [Fact]
+    public void Other_surnames_are_not_one_family() =>
+        Assert.False(Loaded.Value.Lexicon.SameFamilyName("Nováková", Czech, "Novotný", Czech));
+
+    [Fact]
+    public void A_woman_under_the_family_form_of_her_surname_abroad_is_one_person()
+    {
+        Assert.Equal([["Eva Kleinová", "Eve Klein"]], Variants(Build("Marta", ("Eva Kleinová", Slovak), ("Eve Klein", English))));
+        // Husband and wife: a stem shared by the given names is not enough.
+        Assert.Equal(2, Build("Marta", ("Jan Novák", Czech), ("Jana Nováková", Czech)).Headings.Length);
+    }
+
+    [Fact]
+    public void A_surname_said_in_another_language_joins_the_woman_it_names_not_her_father()
+    {
+        var result = Build("Marta", ("Marta Hudecová", English), ("Ondrej Hudec", English), ("Hudecová", Slovak));
+        Assert.Equal([["Marta Hudecová", "Hudecová"], ["Ondrej Hudec"]], Variants(result));
+    }
+
+    [Fact]
+    public void A_dutch_short_form_and_a_surname_after_particles_join_their_full_names()
+    {
+        var result = Build("Johanna", ("Johanna van den Berg", English), ("Pieter van den Berg", Dutch), ("Piet", English), ("Van den Berg", Dutch));
+        Assert.Equal([["Johanna van den Berg", "Van den Berg"], ["Pieter van den Berg", "Piet"]], Variants(result));
+    }
 
     [Fact]
     public void A_derived_diminutive_is_the_same_given_name()
     {
         Assert.True(Loaded.Value.Lexicon.SameGivenName("Zuzana", Slovak, "Zuzanka", Slovak));
+    }
+
+    /// <summary>Slovak instrumental -om ("s Imrichom", with Imrich; standard grammar, from memory).</summary>
+    [Fact]
+    public void A_case_form_is_the_same_given_name_in_either_language()
+    {
+        Assert.True(Loaded.Value.Lexicon.SameGivenName("Imrich", Slovak, "Imrichom", Slovak));
+        Assert.True(Loaded.Value.Lexicon.SameGivenName("Imrich", English, "Imrichom", Slovak));
     }
 
     [Fact]

@@ -30,4 +30,14 @@ public class ModelSpanPiecesTests
     [Fact]
     public void A_lone_stop_word_is_no_name() =>
         Assert.Equal(["Hnatyuk"], Pieces("Hnatyuk. I"));
+
+    /// <summary>Polish w, Slovak s and Russian в are one-letter prepositions (in, with, in; the
+    /// language profiles' stopwords.txt; from memory); "J. Smith" is an initial with its dot.</summary>
+    [Theory]
+    [InlineData("W Krakowie", "Krakowie")]
+    [InlineData("S Imrichom", "Imrichom")]
+    [InlineData("В Москве", "Москве")]
+    [InlineData("J. Smith", "J. Smith")]
+    public void A_one_letter_preposition_opening_a_span_is_left_out(string span, string name) =>
+        Assert.Equal([name], Pieces(span));
 }

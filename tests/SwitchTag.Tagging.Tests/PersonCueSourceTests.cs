@@ -27,6 +27,15 @@ public class PersonCueSourceTests
     public void A_given_name_with_a_patronymic_is_a_person(string text, string person) =>
         Assert.Equal([person], Persons(text));
 
+    /// <summary>Titles of the shipped lists (Mrs, Herr, pan) before names with particles (van den, von;
+    /// the language profiles' particles.txt); Polish "i" is "and" (known from memory).</summary>
+    [Theory]
+    [InlineData("Mrs. Van den Berg, where were you born?", "Van den Berg")]
+    [InlineData("Das war Herr von Braun aus Berlin.", "von Braun")]
+    [InlineData("Byli tam pan Kowalski i Nowak.", "Kowalski")]
+    public void A_titled_name_takes_its_particles_but_no_conjunction(string text, string person) =>
+        Assert.Equal([person], Persons(text));
+
     [Fact]
     public void A_word_ending_like_a_patronymic_alone_is_no_cue() =>
         Assert.Empty(Persons("We went to Baranovichi and then to Kyiv."));

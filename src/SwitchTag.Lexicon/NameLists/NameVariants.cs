@@ -6,8 +6,9 @@ namespace SwitchTag.Lexicon.NameLists;
 /// <summary>How one person's names relate across an interview: a spelling key that romanises
 /// Cyrillic, Greek and Hebrew-script Yiddish and folds the usual surname spellings (Szwarc / Schwarz,
 /// Feigl / Feigel, Иосиф / Iosif), diminutives and nicknames of given names (hypocoristics), and
-/// cross-language equivalents (Stanisław / Stanley). Lists: models/lexicon/Transliteration,
-/// Languages/*/hypocoristics.tsv, diminutive-suffixes.txt and name-equivalents.tsv, all written by hand (models/namelists.md).</summary>
+/// cross-language equivalents (Stanisław / Stanley), and a woman's surname beside its family form
+/// (Nováková / Novák). Lists: models/lexicon/Transliteration, Languages/*/hypocoristics.tsv,
+/// diminutive-suffixes.txt, feminine-surname-endings.tsv and name-equivalents.tsv, all written by hand (models/namelists.md).</summary>
 public sealed class NameVariants
 {
     private readonly (string From, string To)[] _letters;
@@ -15,18 +16,34 @@ public sealed class NameVariants
     private readonly FrozenDictionary<string, FrozenSet<string>> _fullNamesOf;
     private readonly FrozenDictionary<string, FrozenSet<int>> _groupsOf;
     private readonly FrozenSet<string> _diminutiveEndings;
+    private readonly (string Feminine, string Masculine)[] _feminineEndings;
 
     private NameVariants((string, string)[] letters, (string, string, bool)[] folds,
-        FrozenDictionary<string, FrozenSet<string>> fullNamesOf, FrozenDictionary<string, FrozenSet<int>> groupsOf, FrozenSet<string> diminutiveEndings)
+        FrozenDictionary<string, FrozenSet<string>> fullNamesOf, FrozenDictionary<string, FrozenSet<int>> groupsOf, FrozenSet<string> diminutiveEndings,
+        (string, string)[] feminineEndings)
     {
         _letters = letters;
         _folds = folds;
         _fullNamesOf = fullNamesOf;
         _groupsOf = groupsOf;
         _diminutiveEndings = diminutiveEndings;
+        _feminineEndings = feminineEndings;
     }
 
-    public static NameVariants Empty { get; } = new([], [], FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty);
+    public static NameVariants Empty { get; } = new([], [], FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty, []);
+
+    /// <summary>The spelling keys a surname may have as a family name: its own, and for every feminine
+    /// ending of some language it carries, the family form (Nováková: novakova, novak; Orlova: orlova,
+    /// orl, orlov). Two surnames are one family's when their sets meet. Endings of every language are
+    /// tried, since a name's language is often the turn's, not the name's.</summary>
+    public IEnumerable<string> FamilyKeys(string surname)
+    {
+        yield return Key(surname);
+        var folded = NameFolding.Fold(surname);
+        foreach (var (feminine, masculine) in _feminineEndings)
+            if (folded.Length - feminine.Length >= ShortestStem && folded.EndsWith(feminine, StringComparison.Ordinal))
+                yield return Key(folded[..^feminine.Length] + masculine);
+    }
 
     /// <summary>Shortest stem a diminutive ending may follow: "Jan" + "ek", not "Al" + "ek".</summary>
     private const int ShortestStem = 3;
@@ -75,6 +92,14 @@ public sealed class NameVariants
     /// maps to itself. Empty when the lists do not know the form.</summary>
     public IReadOnlySet<string> FullNames(string word) =>
         _fullNamesOf.TryGetValue(Key(word), out var set) ? set : FrozenSet<string>.Empty;
+
+    /// <summary>Whether the hypocoristics or equivalents lists know the word as a given name or one of
+    /// its forms (romanised forms too: "Giorgos", which the first-name lists have only as Γιώργος).</summary>
+    public bool KnowsGivenName(string word)
+    {
+        var key = Key(word);
+        return _fullNamesOf.ContainsKey(key) || _groupsOf.ContainsKey(key);
+    }
 
     /// <summary>Whether two given names are diminutives of one full name, or one of the other.</summary>
     public bool SameGivenName(string a, string b)
@@ -132,7 +157,7 @@ public sealed class NameVariants
             .Where(r => r.Length > 1)
             .Select(r => r[0].EndsWith('$') ? (r[0][..^1], r[1], true) : (r[0], r[1], false))
             .ToArray();
-        var partial = new NameVariants(letters, folds, FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty);
+        var partial = new NameVariants(letters, folds, FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty, []);
 
         var fullNamesOf = new Dictionary<string, HashSet<string>>(StringComparer.Ordinal);
         // Each form also under its stem in its language, so a case form stemmed the same way meets it
@@ -156,6 +181,13 @@ public sealed class NameVariants
             .Where(e => e.Length > 0)
             .ToFrozenSet(StringComparer.Ordinal);
 
+        var feminineEndings = LexiconTsv.Languages(lexiconDir)
+            .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "feminine-surname-endings.tsv")))
+            .Select(r => (Feminine: NameFolding.Fold(r[0].Trim()), Masculine: r.Length > 1 ? NameFolding.Fold(r[1].Trim()) : ""))
+            .Where(e => e.Feminine.Length > 0)
+            .Distinct()
+            .ToArray();
+
         var groupsOf = new Dictionary<string, HashSet<int>>(StringComparer.Ordinal);
         int group = 0;
         foreach (var row in LexiconTsv.Rows(Path.Combine(lexiconDir, "name-equivalents.tsv")))
@@ -172,6 +204,6 @@ public sealed class NameVariants
         }
         return new NameVariants(letters, folds,
             fullNamesOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(StringComparer.Ordinal), StringComparer.Ordinal),
-            groupsOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(), StringComparer.Ordinal), endings);
+            groupsOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(), StringComparer.Ordinal), endings, feminineEndings);
     }
 }

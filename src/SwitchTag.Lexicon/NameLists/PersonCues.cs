@@ -27,6 +27,21 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
 
     public bool IsFirstName(string folded) => FirstNames.Contains(folded);
 
+    /// <summary>Folded phrases (one to three words) that come before a woman's birth name: "née",
+    /// "geb.", "z domu", "урождённая" (Languages/*/birth-name-markers.txt).</summary>
+    public FrozenSet<string> BirthNameMarkers { get; init; } = FrozenSet<string>.Empty;
+
+    /// <summary>Whether <paramref name="before"/>, the text right before a name, ends with a birth-name
+    /// marker (commas and spaces between them allowed: "Anna Nowak, z domu Wiśniewska").</summary>
+    public bool EndsWithBirthNameMarker(string before)
+    {
+        if (BirthNameMarkers.Count == 0) return false;
+        var words = NameWords.Split(NameFolding.Fold(before.TrimEnd(' ', ',', ':', '\u00A0')));
+        for (int n = 1; n <= Math.Min(3, words.Count); n++)
+            if (BirthNameMarkers.Contains(string.Join(' ', words.Skip(words.Count - n).Select(w => w.Folded)))) return true;
+        return false;
+    }
+
     internal static PersonCues Load(string lexiconDir)
     {
         var titles = new HashSet<string>(StringComparer.Ordinal);
@@ -41,7 +56,11 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
             kinship.UnionWith(Forms(Path.Combine(folder, "kinship.tsv")));
             first.UnionWith(Forms(Path.Combine(folder, "first-names.tsv")).Select(NameFolding.Fold));
         }
-        return new PersonCues(Frozen(titles), Frozen(kinship), Frozen(first), Frozen(abbreviations));
+        var birthNames = LexiconTsv.Languages(lexiconDir)
+            .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "birth-name-markers.txt")))
+            .Select(r => string.Join(' ', NameWords.Split(NameFolding.Fold(r[0])).Select(w => w.Folded)))
+            .ToHashSet(StringComparer.Ordinal);
+        return new PersonCues(Frozen(titles), Frozen(kinship), Frozen(first), Frozen(abbreviations)) { BirthNameMarkers = Frozen(birthNames) };
     }
 
     private static FrozenSet<string> Frozen(HashSet<string> set) => set.Where(s => s.Length > 0).ToFrozenSet(StringComparer.Ordinal);

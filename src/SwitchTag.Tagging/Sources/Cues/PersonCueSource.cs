@@ -36,11 +36,10 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             if (!cues.IsMarker(WordAt(turnText, words[i]))) continue;
             int first = i + 1;
             while (first < words.Count && cues.IsMarker(WordAt(turnText, words[first])) && Joined(turnText, words[first - 1], words[first], Abbreviation(turnText, words[first - 1]))) first++;
-            if (first >= words.Count || !Joined(turnText, words[first - 1], words[first], Abbreviation(turnText, words[first - 1])) || !IsNameWord(turnText, words[first])) continue;
-            int last = first;
-            while (last + 1 < words.Count && last + 1 - first < MaxNameWords && Joined(turnText, words[last], words[last + 1], allowDot: false)
-                   && IsNameWord(turnText, words[last + 1]) && !cues.IsMarker(WordAt(turnText, words[last + 1])))
-                last++;
+            if (first >= words.Count || !Joined(turnText, words[first - 1], words[first], Abbreviation(turnText, words[first - 1]))) continue;
+            int last = NameEnd(turnText, words, first);
+            if (last < 0) continue;
+            // The span starts at the name's first word, a leading particle included ("Herr von Braun").
             places ??= new RangeReach(RuleMatching.Find(turn, turnText, spans, gazetteer.Find).Select(p => (p.CharStart, p.CharEnd)));
             // A place holding the marker and reaching past it ("Prince Edward Island").
             if (places.Reaches(words[i].Start, words[i].End)) continue;
@@ -75,6 +74,24 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             i = last;
         }
         return found.ToImmutable();
+    }
+
+    /// <summary>The last word of the name starting at <paramref name="first"/> after a marker: up to
+    /// <see cref="MaxNameWords"/> capitalised words, with name particles of two letters or more before
+    /// or between them ("Mrs. Van den Berg", "Herr von Braun"); -1 when no capitalised word comes.
+    /// One-letter particles (e, i, y) are also the word "and", so they never join a name here.</summary>
+    private int NameEnd(string text, IReadOnlyList<(int Start, int End)> words, int first)
+    {
+        int last = -1, names = 0;
+        for (int k = first; k < words.Count && names < MaxNameWords; k++)
+        {
+            if (k > first && !Joined(text, words[k - 1], words[k], allowDot: false)) break;
+            var word = WordAt(text, words[k]);
+            if (cues.IsMarker(word) && k > first) break;
+            if (IsNameWord(text, words[k])) { last = k; names++; }
+            else if (!(word.Length > 1 && LanguageProfiles.Default.NameParticles.Contains(word.ToLowerInvariant()))) break;
+        }
+        return last;
     }
 
     /// <summary>A name in apposition ends the clause part: a comma, a full stop, a colon or the end of

@@ -38,7 +38,8 @@ public sealed class NameModelSource(NerModel model) : INameSource
     /// <summary>The word ranges of a tagged span, cut before every word that opens a sentence
     /// (<see cref="TextPosition.IsSentenceStart"/>) unless the break is a dot after a short capitalised
     /// word (St. Louis, Dr. Roth), with punctuation at either edge of a piece dropped ("Hanna." is Hanna).
-    /// A piece that is one stop word or title of any language ("I", "God", "Pani") is no name.</summary>
+    /// A piece that is one stop word or title of any language ("I", "God", "Pani") is no name, and a
+    /// one-letter stop word at its start is not part of it.</summary>
     public static IEnumerable<(int From, int To)> Pieces(IReadOnlyList<WordToken> words, int from, int to, string text)
     {
         int start = from;
@@ -58,6 +59,11 @@ public sealed class NameModelSource(NerModel model) : INameSource
     {
         while (from < to && !HasLetterOrDigit(words[from].Text)) from++;
         while (to > from && !HasLetterOrDigit(words[to - 1].Text)) to--;
+        // A one-letter stop word opening a longer span is a preposition the model took in at a
+        // sentence start ("W Krakowie", "S Imrichom", "В Москве"); an initial is followed by its dot.
+        if (to - from > 1 && words[from].Text.Length == 1 && HasLetterOrDigit(words[from + 1].Text)
+            && LanguageProfiles.Default.StopWords.Contains(NameFolding.Fold(words[from].Text)))
+            from++;
         return from < to ? (from, to) : null;
     }
 
