@@ -30,8 +30,8 @@ public sealed record HeadingResult(ImmutableArray<Heading> Headings, ImmutableAr
 /// historical region or state is not linked to a modern place of the name (<see cref="Historical"/>),
 /// which stays among the alternatives for the reviewer.
 /// Organisations group by folded key.
-/// Held for review instead: mentions below the confidence floor, model PER mentions holding a lower-case
-/// word that is no name particle, multi-word PER mentions that are the own name of a town or region, PER mentions that are the own name
+/// Held for review instead: mentions below the confidence floor, model PER mentions, and model LOC
+/// mentions the gazetteer does not know, holding a lower-case word that is no name particle, multi-word PER mentions that are the own name of a town or region, PER mentions that are the own name
 /// of a place of 100,000 people or more, surfaces tagged both PER and LOC in the interview, model mentions whose first letter is
 /// lower case (names in cased scripts are capitalised; uncased scripts are never caught), one-word
 /// model mentions the interview also writes in lower case as an ordinary word (unless a place
@@ -180,6 +180,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         if (m.Source == MentionSource.Model && m.Text.Any(char.IsWhiteSpace) && TextPosition.IsSentenceStart(turnText, m.CharStart)
             && Words(m.Text).All(w => lowerWords.Contains(w.ToLowerInvariant())))
             return $"\"{m.Text}\" opens a sentence and its words are used as ordinary words in this interview";
+        // A place the gazetteer does not know is the model's word alone: "Austrian club" and Italian
+        // "Avevamo fame" (we were hungry) are phrases, not places.
+        if (m.Source == MentionSource.Model && m.Label == NameLabel.LOC && places.IsEmpty && Words(m.Text).Skip(1).FirstOrDefault(OrdinaryInnerWord) is { } word)
+            return $"a place's name does not hold the lower-case word \"{word}\", and no place of that name is known";
         if (open && m.Label == NameLabel.LOC && places.IsEmpty && respelled is null && !m.Text.Any(char.IsWhiteSpace)
             && lexicon.Listed(m.Text, m.Language) is null && DemonymEnding(m.Text) is { } ending)
             return $"\"{m.Text}\" reads as a word for the people of a place (-{ending}), and no place of that name is known";

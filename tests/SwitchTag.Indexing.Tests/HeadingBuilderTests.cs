@@ -103,6 +103,18 @@ public class HeadingBuilderTests
     }
 
     [Fact]
+    public void A_model_place_nothing_knows_holding_an_ordinary_lower_case_word_goes_to_review()
+    {
+        // English and Italian (from memory): "club" is a common noun, "Avevamo fame" means "we were hungry";
+        // "de" is a name particle (the language profiles' particles.txt).
+        var result = Build(Fixture.Lexicon(), ("Austrian club", NameLabel.LOC, "en"), ("Avevamo fame", NameLabel.LOC, "it"),
+            ("Milwaukee Avenue", NameLabel.LOC, "en"), ("Puerta de Triana", NameLabel.LOC, "es"));
+        Assert.Equal(["a place's name does not hold the lower-case word \"club\", and no place of that name is known",
+            "a place's name does not hold the lower-case word \"fame\", and no place of that name is known"], result.Review.Select(r => r.Reason).ToArray());
+        Assert.Equal(["Milwaukee Avenue", "Puerta de Triana"], result.Headings.Select(h => h.Name).Order(StringComparer.Ordinal).ToArray());
+    }
+
+    [Fact]
     public void A_one_word_model_name_the_talk_also_uses_as_an_ordinary_word_goes_to_review()
     {
         // English grammar (from memory): "her" is a pronoun; capitalised only at a sentence start.
