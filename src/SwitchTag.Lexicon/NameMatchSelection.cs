@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Lexicon;
 
@@ -14,12 +15,12 @@ public static class NameMatchSelection
         if (list.Count == 0) return [];
         // One flag per char taken: a match is checked over its own chars only (names are short), so
         // the cost stays linear in the matches of a turn however many there are.
-        var used = new bool[list.Max(m => m.CharEnd)];
+        var used = new CharFlags(list.Max(m => m.CharEnd));
         var taken = new List<NameMatch>();
         foreach (var m in list.OrderByDescending(m => m.Length).ThenBy(m => m.CharStart))
         {
-            if (used.AsSpan(m.CharStart, m.Length).Contains(true)) continue;
-            used.AsSpan(m.CharStart, m.Length).Fill(true);
+            if (used.Any(m.CharStart, m.Length)) continue;
+            used.Set(m.CharStart, m.Length);
             taken.Add(m);
         }
         return [.. taken.OrderBy(m => m.CharStart)];

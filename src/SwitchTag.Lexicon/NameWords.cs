@@ -1,4 +1,5 @@
 using System.Globalization;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Lexicon;
 
@@ -52,9 +53,9 @@ public static class NameWords
     /// offsets are wanted).</summary>
     public static List<(int Start, int End)> Bounds(string text)
     {
-        var words = new List<(int, int)>();
+        var words = new BlockList<(int, int)>();
         for (int i = 0; NextWord(text, ref i) is { } word;) words.Add(word);
-        return words;
+        return words.ToList();
     }
 
     /// <summary>Whether the characters between two words may sit inside one multi-word name:

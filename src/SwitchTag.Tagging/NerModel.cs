@@ -72,13 +72,14 @@ public sealed class NerModel : IDisposable
         }
     }
 
-    /// <summary>Runs the network on a padded batch (rows of all-zero features are padding).</summary>
-    public float[] Run(long[] features, long[] pieces, int batch, int words)
+    /// <summary>Runs the network on a padded batch (rows of all-zero features are padding); the
+    /// buffers may be longer than the batch, whose values are at their start.</summary>
+    public float[] Run(Memory<long> features, Memory<long> pieces, int batch, int words)
     {
         var inputs = new[]
         {
-            NamedOnnxValue.CreateFromTensor("features", new DenseTensor<long>(features, [batch, words, FeatureSlots])),
-            NamedOnnxValue.CreateFromTensor("pieces", new DenseTensor<long>(pieces, [batch, words, PieceEncoder.Slots])),
+            NamedOnnxValue.CreateFromTensor("features", new DenseTensor<long>(features[..(batch * words * FeatureSlots)], [batch, words, FeatureSlots])),
+            NamedOnnxValue.CreateFromTensor("pieces", new DenseTensor<long>(pieces[..(batch * words * PieceEncoder.Slots)], [batch, words, PieceEncoder.Slots])),
         };
         using var results = _session.Run(inputs);
         return results[0].AsTensor<float>().ToArray();

@@ -30,10 +30,11 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
             chunks.AddRange(Windows(s, sentences[s].Count));
         }
         chunks.Sort((a, b) => b.Length.CompareTo(a.Length));
+        var inputs = new BatchInputs();
         for (int i = 0; i < chunks.Count;)
         {
             int count = BatchSize(chunks, i);
-            var logits = RunBatch(sentences, chunks, i, count);
+            var logits = RunBatch(sentences, chunks, i, count, inputs);
             for (int b = 0; b < count; b++)
             {
                 var c = chunks[i + b];
@@ -79,10 +80,11 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
         var path = _decoder.Start();
         var spans = new SpanCollector(model.Labels);
         Action<int, float> decided = spans.Add;
+        var inputs = new BatchInputs();
         for (int i = 0; i < chunks.Count;)
         {
             int count = BatchSize(chunks, i);
-            var logits = RunBatch([words], chunks, i, count);
+            var logits = RunBatch([words], chunks, i, count, inputs);
             for (int b = 0; b < count; b++)
             {
                 var core = Core(logits, chunks[i].Length, b, chunks[i + b]);
@@ -125,11 +127,10 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
     }
 
     /// <summary>Logits of windows <paramref name="i"/> to <paramref name="i"/> + <paramref name="count"/> - 1, padded to the first one's length.</summary>
-    private float[] RunBatch(IReadOnlyList<IReadOnlyList<string>> sentences, List<Chunk> chunks, int i, int count)
+    private float[] RunBatch(IReadOnlyList<IReadOnlyList<string>> sentences, List<Chunk> chunks, int i, int count, BatchInputs inputs)
     {
         int width = chunks[i].Length;
-        var features = new long[count * width * model.FeatureSlots];
-        var pieces = new long[count * width * PieceEncoder.Slots];
+        var (features, pieces) = inputs.Take(count * width * model.FeatureSlots, count * width * PieceEncoder.Slots);
         for (int b = 0; b < count; b++)
         {
             var c = chunks[i + b];
@@ -137,6 +138,23 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
                 features.AsSpan(b * width * model.FeatureSlots), pieces.AsSpan(b * width * PieceEncoder.Slots));
         }
         return model.Run(features, pieces, count, width);
+    }
+
+    /// <summary>The feature and piece ids of one call's batches, reused from batch to batch: a full
+    /// batch's features take 344 KB, a large object, and one speaker turn of two million words runs
+    /// a thousand batches, whose fresh arrays grew the large object heap by some 200 MB before a
+    /// full collection took them back.</summary>
+    private sealed class BatchInputs
+    {
+        private long[] _features = [], _pieces = [];
+
+        /// <summary>Buffers of at least the given lengths, zero up to them (padding rows stay zero).</summary>
+        public (long[] Features, long[] Pieces) Take(int features, int pieces)
+        {
+            if (_features.Length < features) _features = new long[features]; else Array.Clear(_features, 0, features);
+            if (_pieces.Length < pieces) _pieces = new long[pieces]; else Array.Clear(_pieces, 0, pieces);
+            return (_features, _pieces);
+        }
     }
 
     /// <summary>The logits of the core words of row <paramref name="row"/> of a batch <paramref name="width"/> words wide.</summary>

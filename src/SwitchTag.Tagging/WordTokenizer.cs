@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging;
 
@@ -16,8 +17,8 @@ public static class WordTokenizer
     /// <summary>Where the words of <see cref="Tokenize"/> are, without cutting their text out.</summary>
     public static List<(int Start, int End)> Bounds(string text)
     {
-        var words = new List<(int, int)>();
-        if (string.IsNullOrEmpty(text)) return words;
+        var words = new BlockList<(int, int)>();
+        if (string.IsNullOrEmpty(text)) return [];
         int i = 0;
         while (i < text.Length)
         {
@@ -46,7 +47,7 @@ public static class WordTokenizer
             }
             words.Add((start, i));
         }
-        return words;
+        return words.ToList();
     }
 
     private enum Kind { Space, Word, Han, Punct, Symbol }

@@ -10,15 +10,19 @@ internal sealed class TurnEvidence(List<Token> tokens)
 {
     public List<Token> Tokens { get; } = tokens;
 
+    // Sized for every token at once: lists that double as they fill leave each of their earlier
+    // arrays behind, and for one speaker turn of two million words those are large objects (some
+    // 50 MB of them) that only a full collection takes back.
+
     /// <summary>Index into <see cref="Tokens"/> of each evidence word.</summary>
-    public List<int> TokenIndex { get; } = [];
+    public List<int> TokenIndex { get; } = new(tokens.Count);
 
-    public List<float[]> Scores { get; } = [];
+    public List<float[]> Scores { get; } = new(tokens.Count);
 
-    public List<float[]> Emissions { get; } = [];
+    public List<float[]> Emissions { get; } = new(tokens.Count);
 
     /// <summary>1 for an ordinary word, the name weight for a name-like one.</summary>
-    public List<float> Weights { get; } = [];
+    public List<float> Weights { get; } = new(tokens.Count);
 
     public int Count => TokenIndex.Count;
 

@@ -1,4 +1,5 @@
 using System.Globalization;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.LanguageId.Text;
 
@@ -11,13 +12,15 @@ public static class Tokenizer
 
     public static List<Token> Tokenize(ReadOnlySpan<char> text)
     {
-        var tokens = new List<Token>();
-        Tokenize(text, tokens);
-        return tokens;
+        var tokens = new BlockList<Token>();
+        Scan(text, tokens.Add);
+        return tokens.ToList();
     }
 
     /// <summary>Appends the tokens of <paramref name="text"/> to <paramref name="tokens"/>.</summary>
-    public static void Tokenize(ReadOnlySpan<char> text, List<Token> tokens)
+    public static void Tokenize(ReadOnlySpan<char> text, List<Token> tokens) => Scan(text, tokens.Add);
+
+    private static void Scan(ReadOnlySpan<char> text, Action<Token> tokens)
     {
         int i = 0, n = text.Length;
         while (i < n)
@@ -29,7 +32,7 @@ public static class Tokenizer
                 if (close >= 0)
                 {
                     close += i + 1;
-                    tokens.Add(new Token(i, close + 1, TokenKind.Tag));
+                    tokens(new Token(i, close + 1, TokenKind.Tag));
                     i = close + 1;
                     continue;
                 }
@@ -40,7 +43,7 @@ public static class Tokenizer
             {
                 int start = i;
                 i = ScanWord(text, i);
-                tokens.Add(new Token(start, i, Classify(text, start, i)));
+                tokens(new Token(start, i, Classify(text, start, i)));
                 continue;
             }
             if (char.IsDigit(c))
@@ -48,7 +51,7 @@ public static class Tokenizer
                 int start = i;
                 while (i < n && (char.IsDigit(text[i]) || (i + 1 < n && text[i] is '.' or ',' or ':' && char.IsDigit(text[i + 1]))))
                     i++;
-                tokens.Add(new Token(start, i, TokenKind.Number));
+                tokens(new Token(start, i, TokenKind.Number));
                 continue;
             }
             i++;

@@ -1,6 +1,7 @@
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Ids;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Output.TeiXml;
 
@@ -19,13 +20,13 @@ internal static class TeiInline
         // One flag per char held by a name already laid: a name is checked over its own chars only,
         // so a turn of many thousand names costs no comparison of every name with every other.
         var ofTurn = mentions.ToList();
-        var held = new bool[ofTurn.Select(i => index.MentionAt(i).Mention.CharEnd).Append(index.TurnAt(turn).Text.Length).Max()];
+        var held = new CharFlags(ofTurn.Select(i => index.MentionAt(i).Mention.CharEnd).Append(index.TurnAt(turn).Text.Length).Max());
         foreach (var i in ofTurn)
         {
             var (m, _, heading) = index.MentionAt(i);
             if (m.Turn != turn || heading is null || m.CharEnd <= m.CharStart) continue;
-            if (held.AsSpan(m.CharStart, m.CharEnd - m.CharStart).Contains(true)) continue;
-            held.AsSpan(m.CharStart, m.CharEnd - m.CharStart).Fill(true);
+            if (held.Any(m.CharStart, m.CharEnd - m.CharStart)) continue;
+            held.Set(m.CharStart, m.CharEnd - m.CharStart);
             names.Add(new Element(m.CharStart, m.CharEnd, "name", null, i));
         }
         // The names do not overlap, so ordered by start they are ordered by end too.

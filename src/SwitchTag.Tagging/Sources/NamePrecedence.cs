@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Text;
 
 namespace SwitchTag.Tagging.Sources;
 
@@ -77,15 +78,15 @@ public sealed class NamePrecedence
         if (all.Count == 0) return [];
         // One flag per char held by a higher rank: each proposal is checked over its own chars only,
         // so one long speaker turn with many names stays linear, not quadratic.
-        var held = new bool[all.Max(m => m.CharEnd)];
+        var held = new CharFlags(all.Max(m => m.CharEnd));
         var standing = new List<Mention>();
         foreach (var rank in all.GroupBy(RankOf).OrderBy(g => g.Key))
         {
             // Proposals of one rank are checked against higher ranks only, all of them at once.
             var added = new List<Mention>();
             foreach (var m in rank)
-                if (!held.AsSpan(m.CharStart, m.CharEnd - m.CharStart).Contains(true)) added.Add(m);
-            foreach (var m in added) held.AsSpan(m.CharStart, m.CharEnd - m.CharStart).Fill(true);
+                if (!held.Any(m.CharStart, m.CharEnd - m.CharStart)) added.Add(m);
+            foreach (var m in added) held.Set(m.CharStart, m.CharEnd - m.CharStart);
             standing.AddRange(added);
         }
         return [.. standing.OrderBy(m => m.CharStart).ThenBy(m => m.CharEnd)];
