@@ -55,8 +55,13 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
         _lists.Variants.SameGivenName(a, b)
         || _lists.Variants.SameGivenName(NameFolding.Stem(a, languageA), NameFolding.Stem(b, languageB))
         || Key(a, languageA) == Key(b, languageB)
-        || NameFolding.SameName(a, languageA, b, languageB)
+        || MayInflect(a, b) && NameFolding.SameName(a, languageA, b, languageB)
         || _lists.Variants.DiminutiveOf(a, b) is { } form && !IsFirstName(form);
 
     public bool EquivalentGivenNames(string a, string b) => _lists.Variants.Equivalent(a, b);
+
+    /// <summary>A cheap bar before the case-form match, which tries every language's endings: a case
+    /// form starts with its name's letter and is at most a few letters longer or shorter.</summary>
+    private static bool MayInflect(string a, string b) =>
+        a.Length > 0 && b.Length > 0 && Math.Abs(a.Length - b.Length) <= 4 && char.ToLowerInvariant(a[0]) == char.ToLowerInvariant(b[0]);
 }
