@@ -463,8 +463,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             {
                 // A surname after its particles ("Mrs. Van den Berg") is matched by its last word.
                 string word = Words(m.Text)[^1];
-                owners = full.Where(f => SameNameWord(f.First, f.Language, word, m.Language) || SameNameWord(f.Last, f.Language, word, m.Language)
-                    || SameSurname(f.Last, f.Language, word, m.Language)).Select(f => f.Group).Distinct().ToList();
+                // A surname key is the word's key with spelling folds on top, so it also meets the plain key.
+                owners = full.Where(f => SameNameWord(f.First, f.Language, word, m.Language) || SameSurname(f.Last, f.Language, word, m.Language))
+                    .Select(f => f.Group).Distinct().ToList();
                 if (owners.Count == 0)
                     owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
                 if (owners.Count > 1 && owners.Where(g => full.Any(f => f.Group == g && GivenName(f.First))).ToList() is [var named]) owners = [named];

@@ -31,19 +31,16 @@ public class HeadingLexiconTests
 
     private static readonly LanguageCode Slovak = new("sk"), Polish = new("pl"), Czech = new("cs"), Russian = new("ru"), English = new("en"), Dutch = new("nl");
 
-    /// <summary>Headings of one turn said by <paramref name="speaker"/>, each name a PER mention 20
-    /// characters after the previous one.</summary>
-    private static HeadingResult Build(string speaker, params (string Text, LanguageCode Language)[] names)
-    {
-        var mentions = names.Select((n, i) => new Mention(new TurnId(0), new CharSpan(i * 20, i * 20 + n.Text.Length), n.Text, NameLabel.PER, n.Language, 0.9, MentionSource.Model)).ToImmutableArray();
-        var times = names.Select((_, i) => new TimeRange(new Timecode(i * 1000), new Timecode(i * 1000 + 500))).ToImmutableArray();
-        var turn = new Turn(new TurnId(0), speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(100_000)), new string(' ', names.Length * 20 + 40), []);
-        return new HeadingBuilder(Loaded.Value.Lexicon).Build(mentions, times, [turn]);
-    }
+    /// <summary>Headings of one turn said by <paramref name="speaker"/> that names the persons one
+    /// sentence each.</summary>
+    private static HeadingResult Build(string speaker, params (string Text, LanguageCode Language)[] names) =>
+        BuildText(string.Join(" ", names.Select(n => $"There was {n.Text}.")), names, speaker);
 
     /// <summary>Headings of one turn of <paramref name="text"/>; each name a PER mention at its next
     /// occurrence in the text.</summary>
-    private static HeadingResult BuildText(string text, params (string Text, LanguageCode Language)[] names)
+    private static HeadingResult BuildText(string text, params (string Text, LanguageCode Language)[] names) => BuildText(text, names, "Narrator");
+
+    private static HeadingResult BuildText(string text, (string Text, LanguageCode Language)[] names, string speaker)
     {
         var mentions = ImmutableArray.CreateBuilder<Mention>();
         int from = 0;
@@ -55,7 +52,7 @@ public class HeadingLexiconTests
             from = at + name.Length;
         }
         var times = mentions.Select((_, i) => new TimeRange(new Timecode(i * 1000), new Timecode(i * 1000 + 500))).ToImmutableArray();
-        var turn = new Turn(new TurnId(0), "Narrator", "Narrator", new TimeRange(Timecode.Zero, new Timecode(100_000)), text, []);
+        var turn = new Turn(new TurnId(0), speaker, speaker, new TimeRange(Timecode.Zero, new Timecode(100_000)), text, []);
         return new HeadingBuilder(Loaded.Value.Lexicon).Build(mentions.ToImmutable(), times, [turn]);
     }
 
