@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Runtime.InteropServices;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
@@ -125,7 +126,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (groups[k].Possible.Count > 0)
                 headings[k] = headings[k] with { PossiblySame = [.. groups[k].Possible.Select(g => idOf[g]).Order()] };
         var ordered = HeadingOrder.Sort(headings);
-        return new HeadingResult(ordered, [.. headingOf], review.ToImmutable()) { Mentions = mentions };
+        return new HeadingResult(ordered, ImmutableCollectionsMarshal.AsImmutableArray(headingOf), review.ToImmutable()) { Mentions = mentions };
     }
 
     private ImmutableArray<PlaceLink> CachedPlaces(Dictionary<(string, LanguageCode), ImmutableArray<PlaceLink>> cache, string text, LanguageCode language)

@@ -24,8 +24,9 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         diagnostics.AddRange(transcript.Diagnostics);
         var aligner = new TimeAligner(transcript);
 
-        var valid = ImmutableArray.CreateBuilder<Mention>();
-        foreach (var m in mentions.IsDefault ? [] : mentions)
+        mentions = mentions.IsDefault ? [] : mentions;
+        var valid = ImmutableArray.CreateBuilder<Mention>(mentions.Length);
+        foreach (var m in mentions)
         {
             if (m.Turn.Index < turns.Length && m.CharEnd > m.CharStart && m.CharEnd <= turns[m.Turn.Index].Text.Length)
                 valid.Add(m);
@@ -33,16 +34,17 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
                 diagnostics.Add(new Diagnostic(At(transcript, turns, m.Turn), Severity.Warning,
                     $"a name \"{m.Text}\" points outside its turn (turn {m.Turn}, chars {m.CharStart}-{m.CharEnd}) and was left out"));
         }
-        var ordered = valid.OrderBy(m => m.Turn).ThenBy(m => m.CharStart).ThenBy(m => m.CharEnd).ToImmutableArray();
+        var ordered = InTextOrder(valid.DrainToImmutable());
 
         var decisionStage = new DecisionStage(decisions, transcript.Id);
         var (decided, accepted, mentionOutcomes) = decisionStage.ApplyToMentions(ordered, m => aligner.Align(turns[m.Turn.Index], m.CharStart, m.CharEnd));
-        var times = decided.Select(m => aligner.Align(turns[m.Turn.Index], m.CharStart, m.CharEnd)).ToImmutableArray();
+        var times = ImmutableArray.CreateRange(decided, m => aligner.Align(turns[m.Turn.Index], m.CharStart, m.CharEnd));
         var grouped = new HeadingBuilder(lexicon, reviewBelow).Build(decided, times, turns, accepted);
         var (finalMentions, finalTimes, headings, headingOutcomes) = decisionStage.ApplyToHeadings(grouped.Mentions.IsDefault ? decided : grouped.Mentions, times, grouped);
         var outcomes = mentionOutcomes.Zip(headingOutcomes, (m, h) => m with { Applied = m.Applied + h.Applied }).ToImmutableArray();
 
-        var indexed = finalMentions.Select((m, i) => new IndexedMention(m, finalTimes[i], headings.HeadingOf[i])).ToImmutableArray();
+        var indexed = ImmutableArray.CreateBuilder<IndexedMention>(finalMentions.Length);
+        for (int i = 0; i < finalMentions.Length; i++) indexed.Add(new IndexedMention(finalMentions[i], finalTimes[i], headings.HeadingOf[i]));
         var safeSpans = Enumerable.Range(0, turns.Length)
             .Select(t => t < spans.Length && !spans[t].IsDefault ? spans[t] : ImmutableArray<LanguageSpan>.Empty)
             .ToImmutableArray();
@@ -55,8 +57,22 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         var foreign = safeSpans
             .SelectMany((list, t) => list.Where(s => WorklistBuilder.IsForeign(s.Language, mainLanguage)).Select(s => new ForeignSpan(new TurnId(t), new CharSpan(s.CharStart, s.CharEnd), s.Language)))
             .ToImmutableArray();
-        return new InterviewIndex(transcript, mainLanguage, duration, turns, timedSpans, LanguageStatistics.Compute(turns, timedSpans), foreign, indexed,
+        return new InterviewIndex(transcript, mainLanguage, duration, turns, timedSpans, LanguageStatistics.Compute(turns, timedSpans), foreign, indexed.MoveToImmutable(),
             headings.Headings, worklist, headings.Review, diagnostics.ToImmutable(), outcomes);
+    }
+
+    /// <summary>The mentions by turn, then start, then end. The tag stage gives them in that order
+    /// already, so they are only checked; a sort of a long turn's 571k mentions would put key and
+    /// map arrays of all of them through the large object heap.</summary>
+    private static ImmutableArray<Mention> InTextOrder(ImmutableArray<Mention> mentions)
+    {
+        for (int i = 1; i < mentions.Length; i++)
+            if (Compare(mentions[i - 1], mentions[i]) > 0)
+                return [.. mentions.OrderBy(m => m.Turn).ThenBy(m => m.CharStart).ThenBy(m => m.CharEnd)];
+        return mentions;
+
+        static int Compare(Mention a, Mention b) =>
+            a.Turn != b.Turn ? a.Turn.CompareTo(b.Turn) : a.CharStart != b.CharStart ? a.CharStart.CompareTo(b.CharStart) : a.CharEnd.CompareTo(b.CharEnd);
     }
 
     private static SourceLine At(Transcript transcript, ImmutableArray<Turn> turns, TurnId turn) =>

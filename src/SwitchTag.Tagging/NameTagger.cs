@@ -60,9 +60,17 @@ public sealed class NameTagger(NameSources sources, NamePrecedence? precedence =
     {
         if (string.IsNullOrEmpty(turnText)) return [];
         if (spans.IsDefault) spans = [];
-        var standing = _precedence.Resolve(sources.SelectMany(s => s.Find(turn, turnText, spans)));
+        // Each source's proposals, then one list of all of them sized once: a long turn has a million.
+        var found = sources.Select(s => s.Find(turn, turnText, spans)).ToArray();
+        var proposals = new List<Mention>(found.Sum(f => f.Length));
+        foreach (var f in found) proposals.AddRange(f);
+        var standing = _precedence.Resolve(proposals);
         if (_vetoes.Count == 0) return standing;
-        return [.. standing.Where(m => m.Source == MentionSource.Authority || m.Source == MentionSource.Cue || !_vetoes.Any(v => v.Vetoes(m, turnText)))];
+        var kept = ImmutableArray.CreateBuilder<Mention>(standing.Length);
+        foreach (var m in standing)
+            if (m.Source == MentionSource.Authority || m.Source == MentionSource.Cue || !_vetoes.Any(v => v.Vetoes(m, turnText)))
+                kept.Add(m);
+        return kept.DrainToImmutable();
     }
 
     private static NamePrecedence Checked(NameSources sources, NamePrecedence precedence)

@@ -5,8 +5,9 @@ using SwitchTag.Core.Time;
 
 namespace SwitchTag.Core.Documents;
 
-/// <summary>Where one cue's plain text sits inside its turn's text.</summary>
-public sealed record TurnCue(int CueIndex, CharSpan Chars)
+/// <summary>Where one cue's plain text sits inside its turn's text. A value, not an object: a long
+/// turn holds one per cue (200k of them for a 200k-cue turn), all alive to the last output.</summary>
+public readonly record struct TurnCue(int CueIndex, CharSpan Chars)
 {
     public int CharStart => Chars.Start;
     public int CharEnd => Chars.End;

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Runtime.InteropServices;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Ids;
@@ -84,15 +85,7 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
         }
 
         var renumbering = new MentionRenumbering(edit.Dropped);
-        var keptMentions = ImmutableArray.CreateBuilder<Mention>(renumbering.KeptCount);
-        var keptTimes = ImmutableArray.CreateBuilder<TimeRange>(renumbering.KeptCount);
-        for (int i = 0; i < mentions.Length; i++)
-        {
-            if (edit.Dropped[i]) continue;
-            // A copy only where a decision relabelled the mention: one long turn holds hundreds of thousands.
-            keptMentions.Add(mentions[i].Label == edit.Labels[i] ? mentions[i] : mentions[i] with { Label = edit.Labels[i] });
-            keptTimes.Add(times[i]);
-        }
+        var (keptMentions, keptTimes) = Kept(mentions, times, edit, renumbering.KeptCount);
         var headingOf = new HeadingId?[renumbering.KeptCount];
         var live = edit.Drafts.ToHashSet();
         var headings = HeadingOrder.Sort(edit.Drafts.Select(h => h.ToHeading(renumbering, live)));
@@ -101,7 +94,29 @@ public sealed class DecisionStage(ImmutableArray<Decision> decisions, string int
         var review = ImmutableArray.CreateBuilder<ReviewItem>();
         foreach (var r in result.Review)
             if (renumbering.Map(r.Mention) is { } kept) review.Add(r with { Mention = kept });
-        return (keptMentions.MoveToImmutable(), keptTimes.MoveToImmutable(), new HeadingResult(headings, [.. headingOf], review.ToImmutable()), Outcomes(counts));
+        return (keptMentions, keptTimes, new HeadingResult(headings, ImmutableCollectionsMarshal.AsImmutableArray(headingOf), review.ToImmutable()), Outcomes(counts));
+    }
+
+    /// <summary>The mentions and times the heading decisions left, relabelled where they relabelled.
+    /// Where they dropped and relabelled none (always without heading decisions) the lists stand as
+    /// they are: one long turn holds hundreds of thousands of mentions, and a copy of both lists is
+    /// some 14 MB of large arrays.</summary>
+    private static (ImmutableArray<Mention> Mentions, ImmutableArray<TimeRange> Times) Kept(
+        ImmutableArray<Mention> mentions, ImmutableArray<TimeRange> times, HeadingEdit edit, int keptCount)
+    {
+        bool relabelled = false;
+        for (int i = 0; i < mentions.Length && !relabelled; i++) relabelled = mentions[i].Label != edit.Labels[i];
+        if (keptCount == mentions.Length && !relabelled) return (mentions, times);
+        var keptMentions = ImmutableArray.CreateBuilder<Mention>(keptCount);
+        var keptTimes = ImmutableArray.CreateBuilder<TimeRange>(keptCount);
+        for (int i = 0; i < mentions.Length; i++)
+        {
+            if (edit.Dropped[i]) continue;
+            // A copy only where a decision relabelled the mention.
+            keptMentions.Add(mentions[i].Label == edit.Labels[i] ? mentions[i] : mentions[i] with { Label = edit.Labels[i] });
+            keptTimes.Add(times[i]);
+        }
+        return (keptMentions.MoveToImmutable(), keptTimes.MoveToImmutable());
     }
 
     /// <summary>The drafts under each of their names (id, name, variants; any case), each list in

@@ -59,37 +59,54 @@ public sealed class NamePrecedence
     public NamePrecedence InsertAfter(MentionSource existing, MentionSource added) => Insert(existing, added, 1);
 
     /// <summary>The proposals that stand, ordered by start then end.</summary>
+    /// <remarks>One long speaker turn brings a million proposals, so this works on one list of them
+    /// and per-proposal arrays, without per-rank groups or filtered copies, each of which would be
+    /// a large array of the whole turn.</remarks>
     public ImmutableArray<Mention> Resolve(IEnumerable<Mention> proposals)
     {
-        var all = proposals.Where(m => m.CharEnd > m.CharStart && m.CharStart >= 0).ToList();
+        var all = new List<Mention>(proposals.TryGetNonEnumeratedCount(out int count) ? count : 0);
+        foreach (var m in proposals)
+            if (m.CharEnd > m.CharStart && m.CharStart >= 0) all.Add(m);
+        if (!Yields.IsEmpty) Withdraw(all);
         if (all.Count == 0) return [];
-        if (!Yields.IsEmpty)
-        {
-            var withdrawn = new bool[all.Count];
-            foreach (var y in Yields)
-            {
-                if (IsProtected(y.Source)) continue;
-                var to = new RangeReach(all.Where(q => q.Source == y.To && q.Label == y.Label).Select(q => (q.CharStart, q.CharEnd)));
-                for (int i = 0; i < all.Count; i++)
-                    if (all[i].Source == y.Source && to.Overlaps(all[i].CharStart, all[i].CharEnd)) withdrawn[i] = true;
-            }
-            all = all.Where((_, i) => !withdrawn[i]).ToList();
-        }
-        if (all.Count == 0) return [];
+        var rank = new int[all.Count];
+        for (int i = 0; i < all.Count; i++) rank[i] = RankOf(all[i]);
         // One flag per char held by a higher rank: each proposal is checked over its own chars only,
         // so one long speaker turn with many names stays linear, not quadratic.
         var held = new CharFlags(all.Max(m => m.CharEnd));
+        var stands = new bool[all.Count];
         var standing = new List<Mention>();
-        foreach (var rank in all.GroupBy(RankOf).OrderBy(g => g.Key))
+        for (int r = 0; r < _order.Length; r++)
         {
             // Proposals of one rank are checked against higher ranks only, all of them at once.
-            var added = new List<Mention>();
-            foreach (var m in rank)
-                if (!held.Any(m.CharStart, m.CharEnd - m.CharStart)) added.Add(m);
-            foreach (var m in added) held.Set(m.CharStart, m.CharEnd - m.CharStart);
-            standing.AddRange(added);
+            for (int i = 0; i < all.Count; i++)
+                if (rank[i] == r && !held.Any(all[i].CharStart, all[i].CharEnd - all[i].CharStart)) stands[i] = true;
+            for (int i = 0; i < all.Count; i++)
+                if (rank[i] == r && stands[i])
+                {
+                    held.Set(all[i].CharStart, all[i].CharEnd - all[i].CharStart);
+                    standing.Add(all[i]);
+                }
         }
         return [.. standing.OrderBy(m => m.CharStart).ThenBy(m => m.CharEnd)];
+    }
+
+    /// <summary>Removes, in place, each proposal a <see cref="Yield"/> withdraws; every yield looks at
+    /// the proposals as they came.</summary>
+    private void Withdraw(List<Mention> all)
+    {
+        var withdrawn = new bool[all.Count];
+        foreach (var y in Yields)
+        {
+            if (IsProtected(y.Source)) continue;
+            var to = new RangeReach(all.Where(q => q.Source == y.To && q.Label == y.Label).Select(q => (q.CharStart, q.CharEnd)));
+            for (int i = 0; i < all.Count; i++)
+                if (all[i].Source == y.Source && to.Overlaps(all[i].CharStart, all[i].CharEnd)) withdrawn[i] = true;
+        }
+        int kept = 0;
+        for (int i = 0; i < all.Count; i++)
+            if (!withdrawn[i]) all[kept++] = all[i];
+        all.RemoveRange(kept, all.Count - kept);
     }
 
     private int RankOf(Mention m)
