@@ -243,7 +243,7 @@ public sealed class TeiXmlWriter : IInterviewWriter
 
         private void Open(TeiInline.Element e)
         {
-            if (e.Kind == "foreign")
+            if (!e.IsName)
             {
                 w.WriteStartElement("foreign");
                 w.WriteAttributeString("xml", "lang", XmlNs, e.Language?.Code);
