@@ -39,7 +39,8 @@ public sealed record WordTime(int CharOffset, Timecode Time);
 /// <summary>One timed unit of the transcript.</summary>
 /// <param name="Speaker">Normalised speaker label (case, spacing and trailing colon folded), or null.</param>
 /// <param name="SpeakerLabel">The label exactly as written in the file, or null.</param>
-/// <param name="Text">Plain text: markup removed, character references decoded, lines joined by '\n'.</param>
+/// <param name="Text">Plain text: markup removed, character references decoded, lines joined by '\n'.
+/// Empty in an index's transcript, whose turns hold it (<see cref="Transcript.WithoutCueTexts"/>).</param>
 /// <param name="Raw">Its lines in the file's decoded text (SwitchTag.Formats <c>ReadResult.Text</c>): from the first line's start to just past the last line.</param>
 public sealed record Cue(
     TimeRange Time,
@@ -74,4 +75,9 @@ public sealed record Transcript(
     /// <c>InterviewIds</c>); a transcript read alone has its <see cref="Name"/>. Every output names the
     /// interview by it, and decisions find their interview by it.</summary>
     public string Id { get => _id ?? Name; init => _id = value; }
+
+    /// <summary>This transcript with every cue's text empty. Once the turns are built each cue's text
+    /// is in its turn (<see cref="Turn.Text"/> at <see cref="TurnCue.Chars"/>), and an interview carried
+    /// to its last output would otherwise hold every word twice (27 MB for a 200k-cue turn).</summary>
+    public Transcript WithoutCueTexts() => this with { Cues = [.. Cues.Select(c => c with { Text = "" })] };
 }

@@ -6,12 +6,14 @@ using SwitchTag.Core.Languages;
 namespace SwitchTag.Core.Pipeline;
 
 /// <summary>Chains the stages in one direction: turns, the interview's languages (all turns at once,
-/// so short turns are judged with the whole interview's evidence), names, index.</summary>
+/// so short turns are judged with the whole interview's evidence), names, index. The index's
+/// transcript holds no cue texts: the turns hold them.</summary>
 public sealed class InterviewPipeline(ILanguageSegmenter languages, INameTagger names, IIndexBuilder index)
 {
     public InterviewIndex Run(Transcript transcript, LanguageCode? mainLanguage = null)
     {
         var turns = TurnBuilder.Build(transcript);
+        transcript = transcript.WithoutCueTexts();
         bool isLong = turns.Sum(t => (long)t.Text.Length) >= LongText;
         var result = languages.SegmentInterview(turns, mainLanguage);
         CollectIf(isLong);

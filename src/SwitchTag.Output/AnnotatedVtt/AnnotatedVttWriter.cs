@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
@@ -30,16 +31,18 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
     /// <summary>The file, written to <paramref name="sb"/> cue by cue.</summary>
     public static void Render(InterviewIndex index, TextWriter sb)
     {
-        var cueTurn = new Dictionary<int, (Turn Turn, TurnCue Part, TurnId TurnId)>();
+        // Each cue's place in its turn, by cue index; a cue's text is read from there (an index's
+        // transcript holds no cue texts, see Transcript.WithoutCueTexts).
+        var cues = index.Transcript.Cues;
+        var cueTurn = new (TurnId Turn, TurnCue Part)?[cues.Length];
         for (int t = 0; t < index.Turns.Length; t++)
             foreach (var part in index.Turns[t].Cues)
-                cueTurn[part.CueIndex] = (index.Turns[t], part, new TurnId(t));
+                if (part.CueIndex >= 0 && part.CueIndex < cues.Length) cueTurn[part.CueIndex] = (new TurnId(t), part);
         var foreign = index.ForeignSpans.GroupBy(f => f.Turn).ToDictionary(g => g.Key, g => g.OrderBy(f => f.CharStart).ToArray());
 
         sb.Append("WEBVTT\n\nNOTE\nMachine annotation of ").Append(Escape(Path.GetFileName(index.Transcript.Source.Path)))
           .Append(": <lang> marks stretches outside the main language (")
           .Append(index.MainLanguage.Code).Append(").\n\n");
-        var cues = index.Transcript.Cues;
         for (int c = 0; c < cues.Length; c++)
         {
             var cue = cues[c];
@@ -49,8 +52,11 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
             sb.Append('\n');
             if (cue.SpeakerLabel is { Length: > 0 } label)
                 sb.Append("<v ").Append(Escape(label.TrimEnd(':').Trim())).Append('>');
-            var spans = cueTurn.TryGetValue(c, out var place) ? CueSpans(foreign.GetValueOrDefault(place.TurnId, []), place.Part) : [];
-            AppendText(sb, cue, spans);
+            if (cueTurn[c] is var (turn, part))
+                AppendText(sb, index.TurnAt(turn).Text.Substring(part.CharStart, part.CharEnd - part.CharStart), cue.WordTimes,
+                    CueSpans(foreign.GetValueOrDefault(turn, []), part));
+            else
+                AppendText(sb, cue.Text, cue.WordTimes, []);
             sb.Append("\n\n");
         }
     }
@@ -80,13 +86,12 @@ public sealed class AnnotatedVttWriter : IInterviewWriter
     // Tags go in at char positions of the cue text: at one position, closing tags, then the word
     // timestamp, then opening tags, so tags nest properly. Spans come in text order and do not
     // overlap, so one pass over the cut points places them (a 10 MB cue may hold 100k spans).
-    private static void AppendText(TextWriter sb, Cue cue, List<(int Start, int End, LanguageCode Language)> spans)
+    private static void AppendText(TextWriter sb, string text, ImmutableArray<WordTime> wordTimes, List<(int Start, int End, LanguageCode Language)> spans)
     {
-        string text = cue.Text;
         var breaks = LineBreaks(text);
         var times = new Dictionary<int, Timecode>();
-        if (!cue.WordTimes.IsDefault)
-            foreach (var w in cue.WordTimes)
+        if (!wordTimes.IsDefault)
+            foreach (var w in wordTimes)
                 if (w.CharOffset >= 0 && w.CharOffset < text.Length) times.TryAdd(w.CharOffset, w.Time);
         var ends = spans.Select(s => s.End).ToHashSet();
         var cuts = spans.SelectMany(s => new[] { s.Start, s.End }).Concat(times.Keys).Append(0).Append(text.Length)
