@@ -394,7 +394,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// and is otherwise only possibly that person. Two listed first names with one surname are two
     /// persons (siblings) and never merge this way. A given name with a patronymic ("Ivan Petrovych")
     /// joins the one full name with that given name and patronymic ("Ivan Petrovych Hnatyuk"), and is
-    /// otherwise possibly the one full name with that given name.</summary>
+    /// otherwise possibly the one full name with that given name. A two-word name said family name
+    /// first ("Weisz Sándor") is read given name first (<see cref="FamilyNameFirst"/>).</summary>
     private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, ImmutableArray<Turn> turns)
     {
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
@@ -418,13 +419,14 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname, words.Length > 2 ? words[1] : null));
         }
 
+        var bySecond = NamesBySecondWord(mentions, held);
         for (int i = 0; i < mentions.Length; i++)
         {
             if (held[i] || mentions[i].Label != NameLabel.PER) continue;
             var words = Words(mentions[i].Text);
             if (words.Length < 2 || SurnameAfterParticles(words)) single.Add(i);
             else if (words.Length == 2 && LanguageProfiles.Default.IsPatronymic(words[1], CaseLetters)) patronymic.Add((i, words));
-            else AddFull(i, words);
+            else AddFull(i, FamilyNameFirst(words, mentions[i].Language, bySecond) ? [words[1], words[0]] : words);
         }
 
         var patronymicNames = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)>();
@@ -515,6 +517,37 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 other.Possible.Add(l.Group);
             }
         }
+    }
+
+    /// <summary>Whether a two-word name is said family name first (Hungarian "Weisz Sándor", a
+    /// list's "Kowalski Jan"): its first word is no given name, and its second is one or the interview
+    /// also says the two words the other way round ("Grünfeld Tibort" beside "Tibor Grünfeld", where
+    /// the case ending hides the given name from the lists).</summary>
+    private bool FamilyNameFirst(string[] words, LanguageCode language, Dictionary<string, List<(string First, LanguageCode Language)>> bySecond)
+    {
+        if (words.Length != 2 || GivenName(words[0])) return false;
+        if (GivenName(words[1])) return true;
+        return new[] { lexicon.Key(words[0], language), lexicon.Key(words[0], LanguageCode.Undetermined) }.Distinct()
+            .Any(key => bySecond.TryGetValue(key, out var firsts) && firsts.Any(f => lexicon.SameGivenName(f.First, f.Language, words[1], language)));
+    }
+
+    /// <summary>The first words of the two-word person names by the key of their second word (in the
+    /// mention's language and in none), for finding a name said both ways round without comparing every pair.</summary>
+    private Dictionary<string, List<(string First, LanguageCode Language)>> NamesBySecondWord(ImmutableArray<Mention> mentions, bool[] held)
+    {
+        var bySecond = new Dictionary<string, List<(string, LanguageCode)>>(StringComparer.Ordinal);
+        foreach (var (text, language) in Enumerable.Range(0, mentions.Length)
+            .Where(i => !held[i] && mentions[i].Label == NameLabel.PER).Select(i => (mentions[i].Text, mentions[i].Language)).Distinct())
+        {
+            var words = Words(text);
+            if (words.Length != 2) continue;
+            foreach (var key in new[] { lexicon.Key(words[1], language), lexicon.Key(words[1], LanguageCode.Undetermined) }.Distinct())
+            {
+                if (!bySecond.TryGetValue(key, out var firsts)) bySecond[key] = firsts = [];
+                firsts.Add((words[0], language));
+            }
+        }
+        return bySecond;
     }
 
     /// <summary>Whether two name words are one name: equal keys when both are read in the language of

@@ -29,7 +29,7 @@ public class HeadingLexiconTests
         return (new HeadingLexicon(ShippedModels.LoadGazetteer(at), lists), lists);
     });
 
-    private static readonly LanguageCode Slovak = new("sk"), Polish = new("pl"), Czech = new("cs"), Russian = new("ru"), English = new("en"), Dutch = new("nl");
+    private static readonly LanguageCode Slovak = new("sk"), Polish = new("pl"), Czech = new("cs"), Russian = new("ru"), English = new("en"), Dutch = new("nl"), Hungarian = new("hu");
 
     /// <summary>Headings of one turn said by <paramref name="speaker"/> that names the persons one
     /// sentence each.</summary>
@@ -143,4 +143,21 @@ public class HeadingLexiconTests
         Assert.True(Loaded.Value.Lexicon.IsFirstName("Marek"));
         Assert.False(Loaded.Value.Lexicon.SameGivenName("Mara", Polish, "Marek", Polish));
     }
+
+    /// <summary>Hungarian puts the family name first ("Weisz Sándor" is Sándor Weisz) and marks the
+    /// accusative with -t after r ("Grünfeld Tibort"); both from the standard grammar, known from
+    /// memory. Erzsi is listed for Erzsébet in Languages/hu/hypocoristics.tsv.</summary>
+    [Fact]
+    public void A_name_said_family_name_first_is_the_same_person()
+    {
+        var result = Build("Ilona", ("Weisz Sándor", English), ("Sándor Weisz", English), ("Klein Erzsébet", Hungarian), ("Erzsi", English));
+        Assert.Equal([["Klein Erzsébet", "Erzsi"], ["Weisz Sándor", "Sándor Weisz"]], Variants(result));
+        Assert.Single(Build("Ilona", ("Grünfeld Tibort", Hungarian), ("Tibor Grünfeld", English)).Headings);
+    }
+
+    /// <summary>Two names with one surname and two listed first names stay two persons whichever way
+    /// round they are said.</summary>
+    [Fact]
+    public void A_reversed_name_is_not_read_where_both_words_are_given_names() =>
+        Assert.Equal(2, Build("Ilona", ("Weisz Sándor", Hungarian), ("Weisz György", Hungarian)).Headings.Length);
 }
