@@ -59,6 +59,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// than a first-level region of that name ("New York").</summary>
     public const long MetropolisPopulation = 1_000_000;
 
+    /// <summary>A city this large said by its own name is meant rather than a first-level region of the
+    /// name abroad, unless the interview's places point to the region's country: "lived in Manchester"
+    /// beside Leeds and London is the English city, not the Jamaican parish.</summary>
+    public const long OwnNameCityPopulation = 100_000;
+
     public HeadingResult Build(
         ImmutableArray<Mention> mentions,
         ImmutableArray<TimeRange> times,
@@ -334,7 +339,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// give no population) is chosen over towns reached only through another of their names: Veneto
     /// is not Venice, New Jersey not Three Rivers, Michigan. A town keeps precedence when the name said
     /// is its own name and it lies in the region's country or the interview's places point to its
-    /// country, unless they point to the region's country only (Murcia, not Asturias, PH), when it has <see cref="MetropolisPopulation"/> people or more (New
+    /// country or it is a city of <see cref="OwnNameCityPopulation"/> people or more (Manchester), unless they
+    /// point to the region's country only (Murcia, not Asturias, PH), when it has <see cref="MetropolisPopulation"/> people or more (New
     /// York beside the state), or when its own name also names the region (Wien, the city-state); a
     /// country of the name does too (Georgia). Otherwise the <see cref="PlaceScore"/> decides, among
     /// regions the interview's countries only.</summary>
@@ -350,7 +356,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         bool regionBacked = regions.Any(r => evidence.ContainsKey(r.Country))
             && !towns.Any(p => Key(p.Name, m.Language) == said && evidence.ContainsKey(p.Country));
         bool townFirst = regions.Count == 0 || towns.Any(p => p.GeonameId < 0 || p.Population >= MetropolisPopulation
-            || Key(p.Name, m.Language) == said && !regionBacked && (regions.Any(r => r.Country == p.Country) || evidence.ContainsKey(p.Country))
+            || Key(p.Name, m.Language) == said && !regionBacked
+                && (regions.Any(r => r.Country == p.Country) || evidence.ContainsKey(p.Country) || p.Population >= OwnNameCityPopulation)
             || lexicon.Places(p.Name, m.Language).Any(r => r.Region is not null && r.Country == p.Country && regions.Any(x => x.Region == r.Region)));
         return (townFirst ? towns : regions)
             .OrderByDescending(p => PlaceScore(p, Key(p.Name, m.Language) == said, evidence, evidenceTotal))

@@ -36,6 +36,19 @@ public class PersonCueSourceTests
     public void A_titled_name_takes_its_particles_but_no_conjunction(string text, string person) =>
         Assert.Equal([person], Persons(text));
 
+    /// <summary>Berliner, Deutsch and Polak are people's or language words of the shipped lists
+    /// (Languages/*/peoples.tsv, CLDR language names) and surnames too (common usage, from memory).</summary>
+    [Theory]
+    [InlineData("Dr. Berliner came every month to see us.", "Berliner")]
+    [InlineData("Doktor Berliner sprach Deutsch mit uns.", "Berliner")]
+    [InlineData("Byli tam pan Polak i jego żona.", "Polak")]
+    public void After_a_title_a_peoples_word_is_a_surname(string text, string person) =>
+        Assert.Equal([person], Persons(text));
+
+    [Fact]
+    public void After_a_kinship_word_a_peoples_word_is_no_name() =>
+        Assert.Empty(Persons("My uncle German was what they called him, no, my uncle was Jewish."));
+
     [Fact]
     public void A_word_ending_like_a_patronymic_alone_is_no_cue() =>
         Assert.Empty(Persons("We went to Baranovichi and then to Kyiv."));

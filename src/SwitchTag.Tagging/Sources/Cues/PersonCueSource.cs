@@ -37,7 +37,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             int first = i + 1;
             while (first < words.Count && cues.IsMarker(WordAt(turnText, words[first])) && Joined(turnText, words[first - 1], words[first], Abbreviation(turnText, words[first - 1]))) first++;
             if (first >= words.Count || !Joined(turnText, words[first - 1], words[first], Abbreviation(turnText, words[first - 1]))) continue;
-            int last = NameEnd(turnText, words, first);
+            int last = NameEnd(turnText, words, first, afterTitle: !cues.IsKinship(WordAt(turnText, words[first - 1])));
             if (last < 0) continue;
             // The span starts at the name's first word, a leading particle included ("Herr von Braun").
             places ??= new RangeReach(RuleMatching.Find(turn, turnText, spans, gazetteer.Find).Select(p => (p.CharStart, p.CharEnd)));
@@ -79,8 +79,10 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
     /// <summary>The last word of the name starting at <paramref name="first"/> after a marker: up to
     /// <see cref="MaxNameWords"/> capitalised words, with name particles of two letters or more before
     /// or between them ("Mrs. Van den Berg", "Herr von Braun"); -1 when no capitalised word comes.
-    /// One-letter particles (e, i, y) are also the word "and", so they never join a name here.</summary>
-    private int NameEnd(string text, IReadOnlyList<(int Start, int End)> words, int first)
+    /// One-letter particles (e, i, y) are also the word "and", so they never join a name here. After a
+    /// title, a people's or language's name is a surname ("Dr. Berliner", "Frau Deutsch", "Pan Polak");
+    /// after a kinship word it is not ("my uncle, Polish by birth").</summary>
+    private int NameEnd(string text, IReadOnlyList<(int Start, int End)> words, int first, bool afterTitle)
     {
         int last = -1, names = 0;
         for (int k = first; k < words.Count && names < MaxNameWords; k++)
@@ -88,7 +90,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             if (k > first && !Joined(text, words[k - 1], words[k], allowDot: false)) break;
             var word = WordAt(text, words[k]);
             if (cues.IsMarker(word) && k > first) break;
-            if (IsNameWord(text, words[k])) { last = k; names++; }
+            if (IsNameWord(text, words[k]) || (afterTitle && IsSurnameAfterTitle(text, words[k]))) { last = k; names++; }
             else if (!(word.Length > 1 && LanguageProfiles.Default.NameParticles.Contains(word.ToLowerInvariant()))) break;
         }
         return last;
@@ -104,6 +106,11 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
 
     private bool IsNameWord(string text, (int Start, int End) word) =>
         char.IsUpper(text[word.Start]) && word.End - word.Start > 1 && !notPlaces.Words.Contains(NameFolding.Fold(WordAt(text, word)));
+
+    /// <summary>A capitalised word of two letters or more that is no title or kinship word: people's
+    /// and language names are surnames too.</summary>
+    private bool IsSurnameAfterTitle(string text, (int Start, int End) word) =>
+        char.IsUpper(text[word.Start]) && word.End - word.Start > 1 && !cues.IsMarker(WordAt(text, word));
 
     /// <summary>A title short enough to be an abbreviation ("Mr.", "Dr.", "ks."): only then may a dot
     /// stand between marker and name; after "my brother." a new sentence begins.</summary>
