@@ -506,6 +506,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         }
 
         JoinBirthNames(mentions, held, groups, turns, full);
+        JoinMarriedNames(mentions, groups, turns, full);
 
         foreach (var l in lone)
         {
@@ -613,6 +614,53 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (own.Members.Count == 0) groups.Remove(own);
             named.Members.Add(i);
             groupOf[i] = named;
+        }
+    }
+
+    /// <summary>A woman's married name ("Eve Klein, and later Eve Stern, when she married"; "I married
+    /// Nikos Pappas ... Here I was Helen Pappas") joins the one person with her given name (the same,
+    /// a short form or a listed equivalent) and another family name, when the talk says it is a
+    /// marriage: a word of marriage (Languages/*/marriage-words.txt) at most <see cref="TieReachWords"/>
+    /// words from the name in its turn, or a person of that surname and another given name said at
+    /// most <see cref="TieWords"/> words from such a word (the husband). A name said right after a
+    /// kinship word ("my cousin Ruth Stein") is a relative, never the woman under another name.</summary>
+    private void JoinMarriedNames(ImmutableArray<Mention> mentions, List<Group> groups, ImmutableArray<Turn> turns,
+        List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)> full)
+    {
+        var married = new Dictionary<(int, int), bool>();
+        bool Near(int i, int words)
+        {
+            if (!married.TryGetValue((i, words), out bool near))
+            {
+                var m = mentions[i];
+                var text = turns[m.Turn.Index].Text;
+                var before = Words(text[Math.Max(0, m.CharStart - TieReachChars)..m.CharStart]).TakeLast(words);
+                var after = Words(text[m.CharEnd..Math.Min(text.Length, m.CharEnd + TieReachChars)]).Take(words);
+                married[(i, words)] = near = lexicon.SpeaksOfMarriage(before.Concat(after));
+            }
+            return near;
+        }
+        // "my cousin Ruth Stein" is a relative of the speaker, not the speaker under another name.
+        bool AfterKin(int i)
+        {
+            var m = mentions[i];
+            var before = Words(turns[m.Turn.Index].Text[Math.Max(0, m.CharStart - MarkerChars)..m.CharStart]);
+            return before.Length > 0 && lexicon.IsKinshipWord(before[^1].Trim(',', ':'));
+        }
+        foreach (var b in full.ToList())
+        {
+            if (!groups.Contains(b.Group)) continue;
+            var hers = full.Where(a => a.Group != b.Group && groups.Contains(a.Group) && !lexicon.SameFamilyName(a.Last, a.Language, b.Last, b.Language)
+                    && a.Group.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
+                        && (lexicon.SameGivenName(w[0], mentions[k].Language, b.First, b.Language) || lexicon.EquivalentGivenNames(w[0], b.First))))
+                .Select(a => a.Group).Distinct().ToList();
+            if (hers is not [var woman] || woman.Members.Concat(b.Group.Members).Any(AfterKin)) continue;
+            bool said = b.Group.Members.Any(i => Near(i, TieReachWords));
+            bool husband = !said && full.Any(s => s.Group != b.Group && s.Group != woman && groups.Contains(s.Group) && s.Surname == b.Surname
+                && !lexicon.SameGivenName(s.First, s.Language, b.First, b.Language) && s.Group.Members.Any(i => Near(i, TieWords)));
+            if (!said && !husband) continue;
+            MergeInto(b.Group, woman, groups);
+            full.RemoveAll(f => f.Group == b.Group);
         }
     }
 

@@ -40,6 +40,12 @@ public interface IHeadingLexicon
     /// name ("née", "geb.", "z domu").</summary>
     bool EndsWithBirthNameMarker(string before) => false;
 
+    /// <summary>Whether a word is a kinship word of some language ("cousin", "ciocia", "Tante").</summary>
+    bool IsKinshipWord(string word) => false;
+
+    /// <summary>Whether one of the words speaks of a marriage ("married", "husband", "férjem").</summary>
+    bool SpeaksOfMarriage(IEnumerable<string> words) => false;
+
     /// <summary>Whether two given names are one (equal keys), or diminutives of one full name (Irena /
     /// Irenko, Hanna / Hanka): certain evidence for a merge within one interview.</summary>
     bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) => Key(a, languageA) == Key(b, languageB);

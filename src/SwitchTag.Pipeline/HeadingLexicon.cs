@@ -48,6 +48,10 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public bool EndsWithBirthNameMarker(string before) => _lists.Cues.EndsWithBirthNameMarker(before);
 
+    public bool IsKinshipWord(string word) => _lists.Cues.IsKinship(word);
+
+    public bool SpeaksOfMarriage(IEnumerable<string> words) => _lists.Cues.SpeaksOfMarriage(words);
+
     /// <summary>Listed diminutives, stems and keys, or one a case form of the other (Slovak instrumental
     /// "Imrichom" of "Imrich", whose own stem the Slovak endings cut too short); or a productive diminutive that is not itself a listed first name (Irenka of
     /// Irena, but not Marek of Mara nor Paulina of Paula).</summary>

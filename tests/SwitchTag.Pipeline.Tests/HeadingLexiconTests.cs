@@ -160,4 +160,32 @@ public class HeadingLexiconTests
     [Fact]
     public void A_reversed_name_is_not_read_where_both_words_are_given_names() =>
         Assert.Equal(2, Build("Ilona", ("Weisz Sándor", Hungarian), ("Weisz György", Hungarian)).Headings.Length);
+
+    /// <summary>Marriage words of Languages/*/marriage-words.txt ("married", Hungarian "férjemet", my
+    /// husband, accusative; common usage, known from memory).</summary>
+    [Fact]
+    public void A_married_name_said_as_a_marriage_is_the_same_woman()
+    {
+        var later = BuildText("In New York she was Eve Klein, and later Eve Stern, when she married.", ("Eve Klein", English), ("Eve Stern", English));
+        Assert.Equal([["Eve Klein", "Eve Stern"]], Variants(later));
+
+        var husband = BuildText("I married Harry Lindsay in 1951. I was Gertrude Brauner in Vienna, and here I am Gertrude Lindsay.",
+            ("Harry Lindsay", English), ("Gertrude Brauner", English), ("Gertrude Lindsay", English));
+        Assert.Equal([["Gertrude Brauner", "Gertrude Lindsay"], ["Harry Lindsay"]], Variants(husband));
+    }
+
+    [Fact]
+    public void Two_women_of_one_given_name_stay_two_without_a_marriage_or_with_a_kinship_word()
+    {
+        Assert.Equal(2, BuildText("In New York she was Eve Klein. Eve Stern lived next door.", ("Eve Klein", English), ("Eve Stern", English)).Headings.Length);
+        Assert.Equal(2, BuildText("After she married, Eve Klein moved. My cousin Eve Stern stayed.", ("Eve Klein", English), ("Eve Stern", English)).Headings.Length);
+    }
+
+    [Fact]
+    public void Marriage_words_are_read_in_every_listed_language()
+    {
+        Assert.True(Loaded.Value.Lists.Cues.SpeaksOfMarriage(["megismertem", "a", "férjemet,"]));
+        Assert.True(Loaded.Value.Lists.Cues.SpeaksOfMarriage(["when", "she", "married."]));
+        Assert.False(Loaded.Value.Lists.Cues.SpeaksOfMarriage(["we", "moved", "to", "Vienna"]));
+    }
 }
