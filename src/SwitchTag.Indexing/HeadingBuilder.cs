@@ -473,7 +473,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 // A surname after its particles ("Mrs. Van den Berg") is matched by its last word.
                 string word = Words(m.Text)[^1];
                 // A surname key is the word's key with spelling folds on top, so it also meets the plain key.
-                owners = full.Where(f => SameNameWord(f.First, f.Language, word, m.Language) || SameSurname(f.Last, f.Language, word, m.Language))
+                owners = full.Where(f => SameNameWord(f.First, f.Language, word, m.Language)
+                        || SameSurname(f.Last, f.Language, word, m.Language) && !lexicon.WomansAndMansForm(f.Last, word))
                     .Select(f => f.Group).Distinct().ToList();
                 if (owners.Count == 0)
                     owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
@@ -482,7 +483,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 ownersOf[(m.Text, m.Language)] = owners;
             }
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
-            if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)) is { Group: not null } kin)
+            if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
+                    && !lexicon.WomansAndMansForm(l.Name, m.Text)) is { Group: not null } kin)
             {
                 kin.Group.Members.Add(i);
                 continue;

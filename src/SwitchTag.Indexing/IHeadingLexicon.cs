@@ -36,6 +36,10 @@ public interface IHeadingLexicon
     /// included (Nováková / Novák, Orlova / Orlov): weaker than equal surname keys.</summary>
     bool SameFamilyName(string a, LanguageCode languageA, string b, LanguageCode languageB) => SurnameKey(a, languageA) == SurnameKey(b, languageB);
 
+    /// <summary>Whether one surname is the woman's form of the other (Novotná / Novotný, Hudecová /
+    /// Hudec): said alone, the two are a wife or daughter and a husband or father, never one person.</summary>
+    bool WomansAndMansForm(string a, string b) => false;
+
     /// <summary>Whether the text right before a name ends with a word that introduces a woman's birth
     /// name ("née", "geb.", "z domu").</summary>
     bool EndsWithBirthNameMarker(string before) => false;

@@ -42,6 +42,13 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));
 
+    public bool WomansAndMansForm(string a, string b)
+    {
+        var keysA = _lists.Variants.FamilyKeys(a).ToList();
+        var keysB = _lists.Variants.FamilyKeys(b).ToList();
+        return keysA[0] != keysB[0] && (keysA.Contains(keysB[0]) || keysB.Contains(keysA[0]));
+    }
+
     public bool SameFamilyName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
         SurnameKey(a, languageA) == SurnameKey(b, languageB)
         || _lists.Variants.FamilyKeys(a).Intersect(_lists.Variants.FamilyKeys(b), StringComparer.Ordinal).Any();

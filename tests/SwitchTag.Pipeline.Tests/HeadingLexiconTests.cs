@@ -108,6 +108,12 @@ public class HeadingLexiconTests
         Assert.Equal(2, Build("Marta", ("Jan Novák", Czech), ("Jana Nováková", Czech)).Headings.Length);
     }
 
+    /// <summary>Pan Novotný and paní Novotná (Czech -ný / -ná, feminine-surname-endings.tsv) are a
+    /// husband and wife; said alone, the two forms are never one person.</summary>
+    [Fact]
+    public void A_womans_and_a_mans_form_of_one_surname_said_alone_are_two_persons() =>
+        Assert.Equal([["Novotná"], ["Novotný"]], Variants(Build("Markéta", ("Novotný", Czech), ("Novotná", Czech))));
+
     [Fact]
     public void A_surname_said_in_another_language_joins_the_woman_it_names_not_her_father()
     {
@@ -187,5 +193,23 @@ public class HeadingLexiconTests
         Assert.True(Loaded.Value.Lists.Cues.SpeaksOfMarriage(["megismertem", "a", "férjemet,"]));
         Assert.True(Loaded.Value.Lists.Cues.SpeaksOfMarriage(["when", "she", "married."]));
         Assert.False(Loaded.Value.Lists.Cues.SpeaksOfMarriage(["we", "moved", "to", "Vienna"]));
+    }
+
+    /// <summary>"η Σοφία" is Greek for "Sofia" with the article (standard usage, from memory); Sofia is
+    /// also Bulgaria's capital in the shipped gazetteer. The cue-marked person names the same word said
+    /// in another script.</summary>
+    [Fact]
+    public void A_name_a_cue_marked_as_a_person_is_that_person_in_another_script()
+    {
+        const string text = "My mother, Sofia, was from Kavala. Η μάνα μου η Σοφία έψηνε ψωμί.";
+        int latin = text.IndexOf("Sofia", StringComparison.Ordinal), greek = text.IndexOf("Σοφία", StringComparison.Ordinal);
+        var mentions = ImmutableArray.Create(
+            new Mention(new TurnId(0), new CharSpan(latin, latin + 5), "Sofia", NameLabel.PER, English, 1.0, MentionSource.Cue),
+            new Mention(new TurnId(0), new CharSpan(greek, greek + 5), "Σοφία", NameLabel.LOC, new LanguageCode("el"), 1.0, MentionSource.Gazetteer));
+        var times = ImmutableArray.Create(new TimeRange(Timecode.Zero, new Timecode(500)), new TimeRange(new Timecode(1000), new Timecode(1500)));
+        var turn = new Turn(new TurnId(0), "Evangelia", "Evangelia", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);
+        var heading = Assert.Single(new HeadingBuilder(Loaded.Value.Lexicon).Build(mentions, times, [turn]).Headings);
+        Assert.Equal(NameLabel.PER, heading.Label);
+        Assert.Equal([mentions[0].Text, mentions[1].Text], heading.Variants.ToArray());
     }
 }

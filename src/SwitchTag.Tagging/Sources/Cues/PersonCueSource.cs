@@ -16,7 +16,8 @@ namespace SwitchTag.Tagging.Sources.Cues;
 /// A given name followed by a patronymic (the language profiles' <c>patronymics.txt</c>: "Lidiya
 /// Petrovna", "Иван Петрович"), with a capitalised surname after it when there is one, is a person too;
 /// so is a name set off by commas after a kinship word ("My mother, Assunta, she made the bread"),
-/// unless the gazetteer reaches over it (a list of towns after "my father,").</summary>
+/// unless the gazetteer reaches over it (a list of towns after "my father,") and it is no listed
+/// first name said alone ("My mother, Sofia, was from Kavala").</summary>
 public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Lexicon.Gazetteer gazetteer) : INameSource
 {
     private const int MaxNameWords = 3;
@@ -59,7 +60,8 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             int start = words[first].Start, end = words[last].End;
             if (!ClosesApposition(turnText, end) || found.Any(m => m.CharStart < end && start < m.CharEnd)) continue;
             places ??= new RangeReach(RuleMatching.Find(turn, turnText, spans, gazetteer.Find).Select(p => (p.CharStart, p.CharEnd)));
-            if (places.Overlaps(start, end) || (first == last && InflectedTown(words[first], turnText, spans))) continue;
+            if (places.Overlaps(start, end) && !(FirstName(turnText, words[first]) && !ListGoesOn(turnText, words, last))) continue;
+            if (first == last && InflectedTown(words[first], turnText, spans)) continue;
             found.Add(new Mention(turn, new CharSpan(start, end), SharedStrings.Of(turnText.AsSpan(start, end - start)), NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
             i = last;
         }
@@ -95,6 +97,13 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
         }
         return last;
     }
+
+    /// <summary>A listed first name ("My mother, Sofia, was from Kavala"): a person, though a city has the name.</summary>
+    private bool FirstName(string text, (int Start, int End) word) => cues.IsFirstName(NameFolding.Fold(WordAt(text, word)));
+
+    /// <summary>Another capitalised word after a comma: a list ("my father, Sofia, Varna, everywhere"), not an apposition.</summary>
+    private static bool ListGoesOn(string text, IReadOnlyList<(int Start, int End)> words, int last) =>
+        last + 1 < words.Count && text.AsSpan(words[last].End, words[last + 1].Start - words[last].End) is ", " && char.IsUpper(text[words[last + 1].Start]);
 
     /// <summary>A name in apposition ends the clause part: a comma, a full stop, a colon or the end of
     /// the turn right after it ("My mother, Assunta, she made the bread").</summary>
