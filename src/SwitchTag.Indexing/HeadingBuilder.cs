@@ -489,7 +489,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 kin.Group.Members.Add(i);
                 continue;
             }
-            var group = Add(loneByKey, groups, NameLabel.PER, keys[i], i);
+            // Novotná and Novotný share a stem but are a wife and a husband: the later form gets a key of its own.
+            string key = loneByKey.TryGetValue(keys[i], out var same) && lone.Any(l => l.Group == same && lexicon.WomansAndMansForm(l.Name, m.Text))
+                ? keys[i] + " " + lexicon.SurnameKey(m.Text, LanguageCode.Undetermined) : keys[i];
+            var group = Add(loneByKey, groups, NameLabel.PER, key, i);
             if (group.Members.Count == 1) lone.Add((group, m.Text, m.Language));
         }
 
