@@ -60,6 +60,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// than a first-level region of that name ("New York").</summary>
     public const long MetropolisPopulation = 1_000_000;
 
+    /// <summary>A city this large said by its own name is meant rather than a first-level region of the
+    /// name abroad, unless the interview's places point to the region's country: "lived in Manchester"
+    /// beside Leeds and London is the English city, not the Jamaican parish.</summary>
+    public const long OwnNameCityPopulation = 100_000;
+
     public HeadingResult Build(
         ImmutableArray<Mention> mentions,
         ImmutableArray<TimeRange> times,
@@ -335,7 +340,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// give no population) is chosen over towns reached only through another of their names: Veneto
     /// is not Venice, New Jersey not Three Rivers, Michigan. A town keeps precedence when the name said
     /// is its own name and it lies in the region's country or the interview's places point to its
-    /// country, unless they point to the region's country only (Murcia, not Asturias, PH), when it has <see cref="MetropolisPopulation"/> people or more (New
+    /// country or it is a city of <see cref="OwnNameCityPopulation"/> people or more (Manchester), unless they
+    /// point to the region's country only (Murcia, not Asturias, PH), when it has <see cref="MetropolisPopulation"/> people or more (New
     /// York beside the state), or when its own name also names the region (Wien, the city-state); a
     /// country of the name does too (Georgia). Otherwise the <see cref="PlaceScore"/> decides, among
     /// regions the interview's countries only.</summary>
@@ -351,7 +357,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         bool regionBacked = regions.Any(r => evidence.ContainsKey(r.Country))
             && !towns.Any(p => Key(p.Name, m.Language) == said && evidence.ContainsKey(p.Country));
         bool townFirst = regions.Count == 0 || towns.Any(p => p.GeonameId < 0 || p.Population >= MetropolisPopulation
-            || Key(p.Name, m.Language) == said && !regionBacked && (regions.Any(r => r.Country == p.Country) || evidence.ContainsKey(p.Country))
+            || Key(p.Name, m.Language) == said && !regionBacked
+                && (regions.Any(r => r.Country == p.Country) || evidence.ContainsKey(p.Country) || p.Population >= OwnNameCityPopulation)
             || lexicon.Places(p.Name, m.Language).Any(r => r.Region is not null && r.Country == p.Country && regions.Any(x => x.Region == r.Region)));
         return (townFirst ? towns : regions)
             .OrderByDescending(p => PlaceScore(p, Key(p.Name, m.Language) == said, evidence, evidenceTotal))
@@ -395,7 +402,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// and is otherwise only possibly that person. Two listed first names with one surname are two
     /// persons (siblings) and never merge this way. A given name with a patronymic ("Ivan Petrovych")
     /// joins the one full name with that given name and patronymic ("Ivan Petrovych Hnatyuk"), and is
-    /// otherwise possibly the one full name with that given name.</summary>
+    /// otherwise possibly the one full name with that given name. A two-word name said family name
+    /// first ("Weisz Sándor") is read given name first (<see cref="FamilyNameFirst"/>).</summary>
     private void GroupPersons(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, ImmutableArray<Turn> turns)
     {
         var byKey = new Dictionary<string, Group>(StringComparer.Ordinal);
@@ -419,13 +427,14 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname, words.Length > 2 ? words[1] : null));
         }
 
+        var bySecond = NamesBySecondWord(mentions, held);
         for (int i = 0; i < mentions.Length; i++)
         {
             if (held[i] || mentions[i].Label != NameLabel.PER) continue;
             var words = Words(mentions[i].Text);
             if (words.Length < 2 || SurnameAfterParticles(words)) single.Add(i);
             else if (words.Length == 2 && LanguageProfiles.Default.IsPatronymic(words[1], CaseLetters)) patronymic.Add((i, words));
-            else AddFull(i, words);
+            else AddFull(i, FamilyNameFirst(words, mentions[i].Language, bySecond) ? [words[1], words[0]] : words);
         }
 
         var patronymicNames = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)>();
@@ -465,7 +474,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 // A surname after its particles ("Mrs. Van den Berg") is matched by its last word.
                 string word = Words(m.Text)[^1];
                 // A surname key is the word's key with spelling folds on top, so it also meets the plain key.
-                owners = full.Where(f => SameNameWord(f.First, f.Language, word, m.Language) || SameSurname(f.Last, f.Language, word, m.Language))
+                owners = full.Where(f => SameNameWord(f.First, f.Language, word, m.Language)
+                        || SameSurname(f.Last, f.Language, word, m.Language) && !lexicon.WomansAndMansForm(f.Last, word))
                     .Select(f => f.Group).Distinct().ToList();
                 if (owners.Count == 0)
                     owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
@@ -474,12 +484,16 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 ownersOf[(m.Text, m.Language)] = owners;
             }
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
-            if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)) is { Group: not null } kin)
+            if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
+                    && !lexicon.WomansAndMansForm(l.Name, m.Text)) is { Group: not null } kin)
             {
                 kin.Group.Members.Add(i);
                 continue;
             }
-            var group = Add(loneByKey, groups, NameLabel.PER, keys[i], i);
+            // Novotná and Novotný share a stem but are a wife and a husband: the later form gets a key of its own.
+            string key = loneByKey.TryGetValue(keys[i], out var same) && lone.Any(l => l.Group == same && lexicon.WomansAndMansForm(l.Name, m.Text))
+                ? keys[i] + " " + lexicon.SurnameKey(m.Text, LanguageCode.Undetermined) : keys[i];
+            var group = Add(loneByKey, groups, NameLabel.PER, key, i);
             if (group.Members.Count == 1) lone.Add((group, m.Text, m.Language));
         }
 
@@ -498,6 +512,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         }
 
         JoinBirthNames(mentions, held, groups, turns, full);
+        JoinMarriedNames(mentions, groups, turns, full);
 
         foreach (var l in lone)
         {
@@ -516,6 +531,37 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 other.Possible.Add(l.Group);
             }
         }
+    }
+
+    /// <summary>Whether a two-word name is said family name first (Hungarian "Weisz Sándor", a
+    /// list's "Kowalski Jan"): its first word is no given name, and its second is one or the interview
+    /// also says the two words the other way round ("Grünfeld Tibort" beside "Tibor Grünfeld", where
+    /// the case ending hides the given name from the lists).</summary>
+    private bool FamilyNameFirst(string[] words, LanguageCode language, Dictionary<string, List<(string First, LanguageCode Language)>> bySecond)
+    {
+        if (words.Length != 2 || GivenName(words[0])) return false;
+        if (GivenName(words[1])) return true;
+        return new[] { lexicon.Key(words[0], language), lexicon.Key(words[0], LanguageCode.Undetermined) }.Distinct()
+            .Any(key => bySecond.TryGetValue(key, out var firsts) && firsts.Any(f => lexicon.SameGivenName(f.First, f.Language, words[1], language)));
+    }
+
+    /// <summary>The first words of the two-word person names by the key of their second word (in the
+    /// mention's language and in none), for finding a name said both ways round without comparing every pair.</summary>
+    private Dictionary<string, List<(string First, LanguageCode Language)>> NamesBySecondWord(ImmutableArray<Mention> mentions, bool[] held)
+    {
+        var bySecond = new Dictionary<string, List<(string, LanguageCode)>>(StringComparer.Ordinal);
+        foreach (var (text, language) in Enumerable.Range(0, mentions.Length)
+            .Where(i => !held[i] && mentions[i].Label == NameLabel.PER).Select(i => (mentions[i].Text, mentions[i].Language)).Distinct())
+        {
+            var words = Words(text);
+            if (words.Length != 2) continue;
+            foreach (var key in new[] { lexicon.Key(words[1], language), lexicon.Key(words[1], LanguageCode.Undetermined) }.Distinct())
+            {
+                if (!bySecond.TryGetValue(key, out var firsts)) bySecond[key] = firsts = [];
+                firsts.Add((words[0], language));
+            }
+        }
+        return bySecond;
     }
 
     /// <summary>Whether two name words are one name: equal keys when both are read in the language of
@@ -574,6 +620,53 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (own.Members.Count == 0) groups.Remove(own);
             named.Members.Add(i);
             groupOf[i] = named;
+        }
+    }
+
+    /// <summary>A woman's married name ("Eve Klein, and later Eve Stern, when she married"; "I married
+    /// Nikos Pappas ... Here I was Helen Pappas") joins the one person with her given name (the same,
+    /// a short form or a listed equivalent) and another family name, when the talk says it is a
+    /// marriage: a word of marriage (Languages/*/marriage-words.txt) at most <see cref="TieReachWords"/>
+    /// words from the name in its turn, or a person of that surname and another given name said at
+    /// most <see cref="TieWords"/> words from such a word (the husband). A name said right after a
+    /// kinship word ("my cousin Ruth Stein") is a relative, never the woman under another name.</summary>
+    private void JoinMarriedNames(ImmutableArray<Mention> mentions, List<Group> groups, ImmutableArray<Turn> turns,
+        List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)> full)
+    {
+        var married = new Dictionary<(int, int), bool>();
+        bool Near(int i, int words)
+        {
+            if (!married.TryGetValue((i, words), out bool near))
+            {
+                var m = mentions[i];
+                var text = turns[m.Turn.Index].Text;
+                var before = Words(text[Math.Max(0, m.CharStart - TieReachChars)..m.CharStart]).TakeLast(words);
+                var after = Words(text[m.CharEnd..Math.Min(text.Length, m.CharEnd + TieReachChars)]).Take(words);
+                married[(i, words)] = near = lexicon.SpeaksOfMarriage(before.Concat(after));
+            }
+            return near;
+        }
+        // "my cousin Ruth Stein" is a relative of the speaker, not the speaker under another name.
+        bool AfterKin(int i)
+        {
+            var m = mentions[i];
+            var before = Words(turns[m.Turn.Index].Text[Math.Max(0, m.CharStart - MarkerChars)..m.CharStart]);
+            return before.Length > 0 && lexicon.IsKinshipWord(before[^1].Trim(',', ':'));
+        }
+        foreach (var b in full.ToList())
+        {
+            if (!groups.Contains(b.Group)) continue;
+            var hers = full.Where(a => a.Group != b.Group && groups.Contains(a.Group) && !lexicon.SameFamilyName(a.Last, a.Language, b.Last, b.Language)
+                    && a.Group.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
+                        && (lexicon.SameGivenName(w[0], mentions[k].Language, b.First, b.Language) || lexicon.EquivalentGivenNames(w[0], b.First))))
+                .Select(a => a.Group).Distinct().ToList();
+            if (hers is not [var woman] || woman.Members.Concat(b.Group.Members).Any(AfterKin)) continue;
+            bool said = b.Group.Members.Any(i => Near(i, TieReachWords));
+            bool husband = !said && full.Any(s => s.Group != b.Group && s.Group != woman && groups.Contains(s.Group) && s.Surname == b.Surname
+                && !lexicon.SameGivenName(s.First, s.Language, b.First, b.Language) && s.Group.Members.Any(i => Near(i, TieWords)));
+            if (!said && !husband) continue;
+            MergeInto(b.Group, woman, groups);
+            full.RemoveAll(f => f.Group == b.Group);
         }
     }
 

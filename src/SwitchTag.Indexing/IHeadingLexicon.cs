@@ -36,9 +36,19 @@ public interface IHeadingLexicon
     /// included (Nováková / Novák, Orlova / Orlov): weaker than equal surname keys.</summary>
     bool SameFamilyName(string a, LanguageCode languageA, string b, LanguageCode languageB) => SurnameKey(a, languageA) == SurnameKey(b, languageB);
 
+    /// <summary>Whether one surname is the woman's form of the other (Novotná / Novotný, Hudecová /
+    /// Hudec): said alone, the two are a wife or daughter and a husband or father, never one person.</summary>
+    bool WomansAndMansForm(string a, string b) => false;
+
     /// <summary>Whether the text right before a name ends with a word that introduces a woman's birth
     /// name ("née", "geb.", "z domu").</summary>
     bool EndsWithBirthNameMarker(string before) => false;
+
+    /// <summary>Whether a word is a kinship word of some language ("cousin", "ciocia", "Tante").</summary>
+    bool IsKinshipWord(string word) => false;
+
+    /// <summary>Whether one of the words speaks of a marriage ("married", "husband", "férjem").</summary>
+    bool SpeaksOfMarriage(IEnumerable<string> words) => false;
 
     /// <summary>Whether two given names are one (equal keys), or diminutives of one full name (Irena /
     /// Irenko, Hanna / Hanka): certain evidence for a merge within one interview.</summary>

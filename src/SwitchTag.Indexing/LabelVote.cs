@@ -12,7 +12,8 @@ namespace SwitchTag.Indexing;
 /// gazetteer does not know as a whole is a person ("Esterina Saltiel"); (2) a one-word name that is the
 /// first or last word of a person named in full in the interview, or a listed diminutive of that
 /// person's given name, is that person's name ("Szwarc" beside "Hanka Szwarc", "Pina" beside "Giuseppina
-/// Russo"), unless place evidence put it in a place; (3) every mention of one grouping
+/// Russo"), and so is the same name as a one-word person a cue marked, in any script ("η Σοφία" beside
+/// "my mother, Sofia,"), unless place evidence put it in a place; (3) every mention of one grouping
 /// key (so inflected forms too: "Krakowie" beside "Kraków") takes the label with the most evidence:
 /// cues and place evidence weigh 10, a model mention its confidence, a bare gazetteer match 0.5, and
 /// a place mention the gazetteer knows 0.5 more. Changes by (1) and (2) are recorded as decided by a
@@ -36,11 +37,14 @@ internal static class LabelVote
         }
 
         var nameParts = new HashSet<string>(StringComparer.Ordinal);
-        var givenNames = new List<(string Name, LanguageCode Language)>();
+        var givenNames = new HashSet<(string Name, LanguageCode Language)>();
         foreach (var m in result)
         {
             if (m.Label != NameLabel.PER) continue;
             var words = Words(m.Text);
+            // A one-word name a title or kinship word marked ("my mother, Sofia") names that person
+            // wherever else it is said, in any script ("η Σοφία").
+            if (words.Length == 1 && m.Source == MentionSource.Cue) givenNames.Add((words[0], m.Language));
             if (words.Length < 2) continue;
             nameParts.Add(lexicon.Key(words[0], m.Language));
             nameParts.Add(lexicon.Key(words[^1], m.Language));

@@ -22,9 +22,15 @@ public static class StemOperations
     public static readonly IReadOnlyDictionary<string, Func<string, string, bool>> Tests =
         new Dictionary<string, Func<string, string, bool>>(StringComparer.Ordinal)
         {
-            // Hungarian accusative -t and superessive -n follow a vowel (Budát, Budán); after a
-            // consonant the letter belongs to the name (Budapest, Debrecen).
-            ["t-n-after-vowel"] = (stem, ending) => ending is not ("t" or "n") || IsVowel(stem[^1]),
+            // Hungarian accusative -t and superessive -n follow a vowel (Budát, Budán); the
+            // accusative also follows r, l, n and j bare (Tibort, Pált); after other
+            // consonants the letter belongs to the name (Budapest, Debrecen).
+            ["hungarian-bare-t-n"] = (stem, ending) => ending switch
+            {
+                "t" => IsVowel(stem[^1]) || stem[^1] is 'r' or 'l' or 'n' or 'j',
+                "n" => IsVowel(stem[^1]),
+                _ => true,
+            },
         };
 
     public static IEnumerable<string> Replacements(string stem, IEnumerable<(string From, string To)> changes)

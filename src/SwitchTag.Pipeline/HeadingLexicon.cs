@@ -42,11 +42,22 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public string SurnameKey(string word, LanguageCode language) => _lists.Variants.Key(NameFolding.Stem(word, language));
 
+    public bool WomansAndMansForm(string a, string b)
+    {
+        var keysA = _lists.Variants.FamilyKeys(a).ToList();
+        var keysB = _lists.Variants.FamilyKeys(b).ToList();
+        return keysA[0] != keysB[0] && (keysA.Contains(keysB[0]) || keysB.Contains(keysA[0]));
+    }
+
     public bool SameFamilyName(string a, LanguageCode languageA, string b, LanguageCode languageB) =>
         SurnameKey(a, languageA) == SurnameKey(b, languageB)
         || _lists.Variants.FamilyKeys(a).Intersect(_lists.Variants.FamilyKeys(b), StringComparer.Ordinal).Any();
 
     public bool EndsWithBirthNameMarker(string before) => _lists.Cues.EndsWithBirthNameMarker(before);
+
+    public bool IsKinshipWord(string word) => _lists.Cues.IsKinship(word);
+
+    public bool SpeaksOfMarriage(IEnumerable<string> words) => _lists.Cues.SpeaksOfMarriage(words);
 
     /// <summary>Listed diminutives, stems and keys, or one a case form of the other (Slovak instrumental
     /// "Imrichom" of "Imrich", whose own stem the Slovak endings cut too short); or a productive diminutive that is not itself a listed first name (Irenka of

@@ -45,7 +45,7 @@ public sealed class NameTagger(NameSources sources, NamePrecedence? precedence =
             .Add(new AuthorityListSource(authority ?? AuthorityList.Empty))
             .Add(new OrganisationCueSource())
             .Add(new PersonCueSource(lists.Cues, lists.NotPlaces, gazetteer))
-            .Add(new GazetteerSource(gazetteer, new PlaceContext(gazetteer, lists.Prepositions, lists.Cues)))
+            .Add(new GazetteerSource(gazetteer, new PlaceContext(gazetteer, lists.Prepositions, lists.Cues, lists.Variants)))
             .Add(new RegionSource(lists.Regions, lists.Prepositions));
         if (model is not null) sources.Add(new NameModelSource(model));
         return sources;

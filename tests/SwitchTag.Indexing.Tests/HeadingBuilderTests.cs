@@ -271,6 +271,17 @@ public class HeadingBuilderTests
     }
 
     [Fact]
+    public void A_city_said_by_its_own_name_is_not_a_region_of_the_name_abroad()
+    {
+        // GeoNames 2643123 Manchester, GB (coordinates as the shipped gazetteer gives them; population
+        // from memory, about 400,000); JM-12 Manchester, a Jamaican parish, as the shipped regions.tsv
+        // gives it from Debian iso-codes.
+        var manchester = new PlaceLink(2643123, "Manchester", 53.48095, -2.23743, "GB", 395515);
+        var lexicon = new FakeLexicon(new Dictionary<string, ImmutableArray<PlaceLink>> { ["manchester"] = [manchester, Region("Manchester", "JM", "JM-12")] });
+        Assert.Equal(manchester.GeonameId, Assert.Single(Build(lexicon, ("Manchester", NameLabel.LOC, "en")).Headings).Place!.GeonameId);
+    }
+
+    [Fact]
     public void A_person_of_two_words_named_exactly_as_a_region_goes_to_review()
     {
         // BR-MG Minas Gerais as the shipped regions.tsv gives it (Debian iso-codes).

@@ -29,7 +29,7 @@ public class HeadingLexiconTests
         return (new HeadingLexicon(ShippedModels.LoadGazetteer(at), lists), lists);
     });
 
-    private static readonly LanguageCode Slovak = new("sk"), Polish = new("pl"), Czech = new("cs"), Russian = new("ru"), English = new("en"), Dutch = new("nl");
+    private static readonly LanguageCode Slovak = new("sk"), Polish = new("pl"), Czech = new("cs"), Russian = new("ru"), English = new("en"), Dutch = new("nl"), Hungarian = new("hu");
 
     /// <summary>Headings of one turn said by <paramref name="speaker"/> that names the persons one
     /// sentence each.</summary>
@@ -108,6 +108,12 @@ public class HeadingLexiconTests
         Assert.Equal(2, Build("Marta", ("Jan Novák", Czech), ("Jana Nováková", Czech)).Headings.Length);
     }
 
+    /// <summary>Pan Novotný and paní Novotná (Czech -ný / -ná, feminine-surname-endings.tsv) are a
+    /// husband and wife; said alone, the two forms are never one person.</summary>
+    [Fact]
+    public void A_womans_and_a_mans_form_of_one_surname_said_alone_are_two_persons() =>
+        Assert.Equal([["Novotná"], ["Novotný"]], Variants(Build("Markéta", ("Novotný", Czech), ("Novotná", Czech))));
+
     [Fact]
     public void A_surname_said_in_another_language_joins_the_woman_it_names_not_her_father()
     {
@@ -142,5 +148,68 @@ public class HeadingLexiconTests
         Assert.Equal("Marek", Loaded.Value.Lists.Variants.DiminutiveOf("Mara", "Marek"));
         Assert.True(Loaded.Value.Lexicon.IsFirstName("Marek"));
         Assert.False(Loaded.Value.Lexicon.SameGivenName("Mara", Polish, "Marek", Polish));
+    }
+
+    /// <summary>Hungarian puts the family name first ("Weisz Sándor" is Sándor Weisz) and marks the
+    /// accusative with -t after r ("Grünfeld Tibort"); both from the standard grammar, known from
+    /// memory. Erzsi is listed for Erzsébet in Languages/hu/hypocoristics.tsv.</summary>
+    [Fact]
+    public void A_name_said_family_name_first_is_the_same_person()
+    {
+        var result = Build("Ilona", ("Weisz Sándor", English), ("Sándor Weisz", English), ("Klein Erzsébet", Hungarian), ("Erzsi", English));
+        Assert.Equal([["Klein Erzsébet", "Erzsi"], ["Weisz Sándor", "Sándor Weisz"]], Variants(result));
+        Assert.Single(Build("Ilona", ("Grünfeld Tibort", Hungarian), ("Tibor Grünfeld", English)).Headings);
+    }
+
+    /// <summary>Two names with one surname and two listed first names stay two persons whichever way
+    /// round they are said.</summary>
+    [Fact]
+    public void A_reversed_name_is_not_read_where_both_words_are_given_names() =>
+        Assert.Equal(2, Build("Ilona", ("Weisz Sándor", Hungarian), ("Weisz György", Hungarian)).Headings.Length);
+
+    /// <summary>Marriage words of Languages/*/marriage-words.txt ("married", Hungarian "férjemet", my
+    /// husband, accusative; common usage, known from memory).</summary>
+    [Fact]
+    public void A_married_name_said_as_a_marriage_is_the_same_woman()
+    {
+        var later = BuildText("In New York she was Eve Klein, and later Eve Stern, when she married.", ("Eve Klein", English), ("Eve Stern", English));
+        Assert.Equal([["Eve Klein", "Eve Stern"]], Variants(later));
+
+        var husband = BuildText("I married Harry Lindsay in 1951. I was Gertrude Brauner in Vienna, and here I am Gertrude Lindsay.",
+            ("Harry Lindsay", English), ("Gertrude Brauner", English), ("Gertrude Lindsay", English));
+        Assert.Equal([["Gertrude Brauner", "Gertrude Lindsay"], ["Harry Lindsay"]], Variants(husband));
+    }
+
+    [Fact]
+    public void Two_women_of_one_given_name_stay_two_without_a_marriage_or_with_a_kinship_word()
+    {
+        Assert.Equal(2, BuildText("In New York she was Eve Klein. Eve Stern lived next door.", ("Eve Klein", English), ("Eve Stern", English)).Headings.Length);
+        Assert.Equal(2, BuildText("After she married, Eve Klein moved. My cousin Eve Stern stayed.", ("Eve Klein", English), ("Eve Stern", English)).Headings.Length);
+    }
+
+    [Fact]
+    public void Marriage_words_are_read_in_every_listed_language()
+    {
+        Assert.True(Loaded.Value.Lists.Cues.SpeaksOfMarriage(["megismertem", "a", "férjemet,"]));
+        Assert.True(Loaded.Value.Lists.Cues.SpeaksOfMarriage(["when", "she", "married."]));
+        Assert.False(Loaded.Value.Lists.Cues.SpeaksOfMarriage(["we", "moved", "to", "Vienna"]));
+    }
+
+    /// <summary>"η Σοφία" is Greek for "Sofia" with the article (standard usage, from memory); Sofia is
+    /// also Bulgaria's capital in the shipped gazetteer. The cue-marked person names the same word said
+    /// in another script.</summary>
+    [Fact]
+    public void A_name_a_cue_marked_as_a_person_is_that_person_in_another_script()
+    {
+        const string text = "My mother, Sofia, was from Kavala. Η μάνα μου η Σοφία έψηνε ψωμί.";
+        int latin = text.IndexOf("Sofia", StringComparison.Ordinal), greek = text.IndexOf("Σοφία", StringComparison.Ordinal);
+        var mentions = ImmutableArray.Create(
+            new Mention(new TurnId(0), new CharSpan(latin, latin + 5), "Sofia", NameLabel.PER, English, 1.0, MentionSource.Cue),
+            new Mention(new TurnId(0), new CharSpan(greek, greek + 5), "Σοφία", NameLabel.LOC, new LanguageCode("el"), 1.0, MentionSource.Gazetteer));
+        var times = ImmutableArray.Create(new TimeRange(Timecode.Zero, new Timecode(500)), new TimeRange(new Timecode(1000), new Timecode(1500)));
+        var turn = new Turn(new TurnId(0), "Evangelia", "Evangelia", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);
+        var heading = Assert.Single(new HeadingBuilder(Loaded.Value.Lexicon).Build(mentions, times, [turn]).Headings);
+        Assert.Equal(NameLabel.PER, heading.Label);
+        Assert.Equal([mentions[0].Text, mentions[1].Text], heading.Variants.ToArray());
     }
 }

@@ -40,6 +40,18 @@ public class BarePlaceVetoTests
         Assert.False(Veto.Value.Vetoes(Bare(city, "Kraków", "en"), city));
     }
 
+    /// <summary>Czech "s Mílou" (with Míla, instrumental; standard grammar, from memory): the gazetteer
+    /// reaches a city of the name only through the case ending (asserted), and "s" is no locative
+    /// preposition, so nothing says place.</summary>
+    [Fact]
+    public void A_bare_case_form_is_no_place()
+    {
+        Assert.NotEmpty(Places.Value.Candidates("Mílou", new LanguageCode("cs")));
+        Assert.All(Places.Value.Candidates("Mílou", new LanguageCode("cs")), c => Assert.Equal(MatchKind.Inflected, c.Kind));
+        const string text = "Každou neděli jsme s Mílou chodili do tělocvičny.";
+        Assert.True(Veto.Value.Vetoes(Bare(text, "Mílou", "cs"), text));
+    }
+
     [Fact]
     public void A_bare_match_opening_a_sentence_is_no_place_however_large()
     {

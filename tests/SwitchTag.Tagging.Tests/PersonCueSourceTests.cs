@@ -36,6 +36,19 @@ public class PersonCueSourceTests
     public void A_titled_name_takes_its_particles_but_no_conjunction(string text, string person) =>
         Assert.Equal([person], Persons(text));
 
+    /// <summary>Berliner, Deutsch and Polak are people's or language words of the shipped lists
+    /// (Languages/*/peoples.tsv, CLDR language names) and surnames too (common usage, from memory).</summary>
+    [Theory]
+    [InlineData("Dr. Berliner came every month to see us.", "Berliner")]
+    [InlineData("Doktor Berliner sprach Deutsch mit uns.", "Berliner")]
+    [InlineData("Byli tam pan Polak i jego żona.", "Polak")]
+    public void After_a_title_a_peoples_word_is_a_surname(string text, string person) =>
+        Assert.Equal([person], Persons(text));
+
+    [Fact]
+    public void After_a_kinship_word_a_peoples_word_is_no_name() =>
+        Assert.Empty(Persons("My uncle German was what they called him, no, my uncle was Jewish."));
+
     [Fact]
     public void A_word_ending_like_a_patronymic_alone_is_no_cue() =>
         Assert.Empty(Persons("We went to Baranovichi and then to Kyiv."));
@@ -47,14 +60,22 @@ public class PersonCueSourceTests
     public void A_name_set_off_by_commas_after_a_kinship_word_is_a_person(string text, string person) =>
         Assert.Equal([person], PersonsWithPlaces(text));
 
+    /// <summary>A first name some city also has is still a person when said alone in apposition:
+    /// "Stanisław" is an old name of Ivano-Frankivsk, UA, and Sofia is Bulgaria's capital, in GeoNames;
+    /// both are in the shipped (faker) first-name lists.</summary>
+    [Fact]
+    public void A_first_name_a_city_also_has_is_a_person_in_apposition()
+    {
+        Assert.Equal(["Stanisław"], PersonsWithPlaces("And my brother, Stanisław."));
+        Assert.Equal(["Sofia"], PersonsWithPlaces("My mother, Sofia, was from Kavala."));
+    }
+
     [Fact]
     public void Towns_listed_after_a_kinship_word_are_no_persons()
     {
         // Kraków and Tarnów are GeoNames towns of the shipped gazetteer; "father" is in the English kinship list.
         Assert.Empty(PersonsWithPlaces("We travelled with my father, Kraków, Tarnów, everywhere."));
-        // A name the gazetteer also holds is left to the other sources ("Stanisław" is an old name of
-        // Ivano-Frankivsk, UA, in GeoNames).
-        Assert.Empty(PersonsWithPlaces("And my brother, Stanisław."));
+        Assert.Empty(PersonsWithPlaces("We travelled with my father, Sofia, Varna, everywhere."));
         // No comma after the name: the clause goes on, so nothing marks the word as a name in apposition.
         Assert.Empty(PersonsWithPlaces("I asked my mother, Where is the bread?"));
     }

@@ -1,4 +1,5 @@
 using System.Collections.Frozen;
+using System.Collections.Immutable;
 
 namespace SwitchTag.Lexicon.NameLists;
 
@@ -42,6 +43,17 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         return false;
     }
 
+    /// <summary>Folded words that speak of a marriage ("married", "férjem", "замуж"; Languages/*/marriage-words.txt).</summary>
+    public FrozenSet<string> MarriageWords { get; init; } = FrozenSet<string>.Empty;
+
+    /// <summary>Folded beginnings of words that speak of a marriage (the list's entries ending in *: "heirat", "férj").</summary>
+    public ImmutableArray<string> MarriagePrefixes { get; init; } = [];
+
+    /// <summary>Whether one of the words (as written; punctuation around them is ignored) speaks of a marriage.</summary>
+    public bool SpeaksOfMarriage(IEnumerable<string> words) =>
+        words.SelectMany(w => NameWords.Split(w)).Select(w => w.Folded)
+            .Any(w => MarriageWords.Contains(w) || MarriagePrefixes.Any(p => w.StartsWith(p, StringComparison.Ordinal)));
+
     internal static PersonCues Load(string lexiconDir)
     {
         var titles = new HashSet<string>(StringComparer.Ordinal);
@@ -60,7 +72,15 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
             .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "birth-name-markers.txt")))
             .Select(r => string.Join(' ', NameWords.Split(NameFolding.Fold(r[0])).Select(w => w.Folded)))
             .ToHashSet(StringComparer.Ordinal);
-        return new PersonCues(Frozen(titles), Frozen(kinship), Frozen(first), Frozen(abbreviations)) { BirthNameMarkers = Frozen(birthNames) };
+        var marriage = LexiconTsv.Languages(lexiconDir)
+            .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "marriage-words.txt")))
+            .Select(r => r[0].Trim()).Where(w => w.Length > 0).ToList();
+        return new PersonCues(Frozen(titles), Frozen(kinship), Frozen(first), Frozen(abbreviations))
+        {
+            BirthNameMarkers = Frozen(birthNames),
+            MarriageWords = Frozen([.. marriage.Where(w => !w.EndsWith('*')).Select(NameFolding.Fold)]),
+            MarriagePrefixes = [.. marriage.Where(w => w.EndsWith('*')).Select(w => NameFolding.Fold(w[..^1])).Where(w => w.Length > 0).Distinct()],
+        };
     }
 
     private static FrozenSet<string> Frozen(HashSet<string> set) => set.Where(s => s.Length > 0).ToFrozenSet(StringComparer.Ordinal);

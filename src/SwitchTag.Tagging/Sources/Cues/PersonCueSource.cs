@@ -16,7 +16,8 @@ namespace SwitchTag.Tagging.Sources.Cues;
 /// A given name followed by a patronymic (the language profiles' <c>patronymics.txt</c>: "Lidiya
 /// Petrovna", "Иван Петрович"), with a capitalised surname after it when there is one, is a person too;
 /// so is a name set off by commas after a kinship word ("My mother, Assunta, she made the bread"),
-/// unless the gazetteer reaches over it (a list of towns after "my father,").</summary>
+/// unless the gazetteer reaches over it (a list of towns after "my father,") and it is no listed
+/// first name said alone ("My mother, Sofia, was from Kavala").</summary>
 public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Lexicon.Gazetteer gazetteer) : INameSource
 {
     private const int MaxNameWords = 3;
@@ -37,7 +38,7 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             int first = i + 1;
             while (first < words.Count && cues.IsMarker(WordAt(turnText, words[first])) && Joined(turnText, words[first - 1], words[first], Abbreviation(turnText, words[first - 1]))) first++;
             if (first >= words.Count || !Joined(turnText, words[first - 1], words[first], Abbreviation(turnText, words[first - 1]))) continue;
-            int last = NameEnd(turnText, words, first);
+            int last = NameEnd(turnText, words, first, afterTitle: !cues.IsKinship(WordAt(turnText, words[first - 1])));
             if (last < 0) continue;
             // The span starts at the name's first word, a leading particle included ("Herr von Braun").
             places ??= new RangeReach(RuleMatching.Find(turn, turnText, spans, gazetteer.Find).Select(p => (p.CharStart, p.CharEnd)));
@@ -59,7 +60,8 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             int start = words[first].Start, end = words[last].End;
             if (!ClosesApposition(turnText, end) || found.Any(m => m.CharStart < end && start < m.CharEnd)) continue;
             places ??= new RangeReach(RuleMatching.Find(turn, turnText, spans, gazetteer.Find).Select(p => (p.CharStart, p.CharEnd)));
-            if (places.Overlaps(start, end) || (first == last && InflectedTown(words[first], turnText, spans))) continue;
+            if (places.Overlaps(start, end) && !(FirstName(turnText, words[first]) && !ListGoesOn(turnText, words, last))) continue;
+            if (first == last && InflectedTown(words[first], turnText, spans)) continue;
             found.Add(new Mention(turn, new CharSpan(start, end), SharedStrings.Of(turnText.AsSpan(start, end - start)), NameLabel.PER, SpanLanguage.At(spans, start), 1.0, MentionSource.Cue));
             i = last;
         }
@@ -79,8 +81,10 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
     /// <summary>The last word of the name starting at <paramref name="first"/> after a marker: up to
     /// <see cref="MaxNameWords"/> capitalised words, with name particles of two letters or more before
     /// or between them ("Mrs. Van den Berg", "Herr von Braun"); -1 when no capitalised word comes.
-    /// One-letter particles (e, i, y) are also the word "and", so they never join a name here.</summary>
-    private int NameEnd(string text, IReadOnlyList<(int Start, int End)> words, int first)
+    /// One-letter particles (e, i, y) are also the word "and", so they never join a name here. After a
+    /// title, a people's or language's name is a surname ("Dr. Berliner", "Frau Deutsch", "Pan Polak");
+    /// after a kinship word it is not ("my uncle, Polish by birth").</summary>
+    private int NameEnd(string text, IReadOnlyList<(int Start, int End)> words, int first, bool afterTitle)
     {
         int last = -1, names = 0;
         for (int k = first; k < words.Count && names < MaxNameWords; k++)
@@ -88,11 +92,18 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
             if (k > first && !Joined(text, words[k - 1], words[k], allowDot: false)) break;
             var word = WordAt(text, words[k]);
             if (cues.IsMarker(word) && k > first) break;
-            if (IsNameWord(text, words[k])) { last = k; names++; }
+            if (IsNameWord(text, words[k]) || (afterTitle && IsSurnameAfterTitle(text, words[k]))) { last = k; names++; }
             else if (!(word.Length > 1 && LanguageProfiles.Default.NameParticles.Contains(word.ToLowerInvariant()))) break;
         }
         return last;
     }
+
+    /// <summary>A listed first name ("My mother, Sofia, was from Kavala"): a person, though a city has the name.</summary>
+    private bool FirstName(string text, (int Start, int End) word) => cues.IsFirstName(NameFolding.Fold(WordAt(text, word)));
+
+    /// <summary>Another capitalised word after a comma: a list ("my father, Sofia, Varna, everywhere"), not an apposition.</summary>
+    private static bool ListGoesOn(string text, IReadOnlyList<(int Start, int End)> words, int last) =>
+        last + 1 < words.Count && text.AsSpan(words[last].End, words[last + 1].Start - words[last].End) is ", " && char.IsUpper(text[words[last + 1].Start]);
 
     /// <summary>A name in apposition ends the clause part: a comma, a full stop, a colon or the end of
     /// the turn right after it ("My mother, Assunta, she made the bread").</summary>
@@ -104,6 +115,11 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
 
     private bool IsNameWord(string text, (int Start, int End) word) =>
         char.IsUpper(text[word.Start]) && word.End - word.Start > 1 && !notPlaces.Words.Contains(NameFolding.Fold(WordAt(text, word)));
+
+    /// <summary>A capitalised word of two letters or more that is no title or kinship word: people's
+    /// and language names are surnames too.</summary>
+    private bool IsSurnameAfterTitle(string text, (int Start, int End) word) =>
+        char.IsUpper(text[word.Start]) && word.End - word.Start > 1 && !cues.IsMarker(WordAt(text, word));
 
     /// <summary>A title short enough to be an abbreviation ("Mr.", "Dr.", "ks."): only then may a dot
     /// stand between marker and name; after "my brother." a new sentence begins.</summary>

@@ -12,8 +12,10 @@ namespace SwitchTag.Tagging.Sources.PlaceEvidence;
 /// dev files such a sentence-opening form was a place once in 15 times). A one-word listed first name naming no city of
 /// <see cref="CityPopulation"/> is never supported by its context alone: Polish "z Hanką" is "with
 /// Hanka", not "from Hanko" (but "to Milan" is Milano); nor is a word with a capitalised word right
-/// after it ("do Jana Kowalskiego": a person's full name after the preposition).</summary>
-public sealed class PlaceContext(Lexicon.Gazetteer gazetteer, PlacePrepositions prepositions, PersonCues cues)
+/// after it ("do Jana Kowalskiego": a person's full name after the preposition). A case ending alone
+/// does not make a place of a case form of a listed given name or short form: Czech "s Mílou" is
+/// "with Míla", whatever city some language calls Mila.</summary>
+public sealed class PlaceContext(Lexicon.Gazetteer gazetteer, PlacePrepositions prepositions, PersonCues cues, NameVariants variants)
 {
     public const long TownPopulation = 50_000;
     public const long CityPopulation = 100_000;
@@ -27,7 +29,7 @@ public sealed class PlaceContext(Lexicon.Gazetteer gazetteer, PlacePrepositions 
         if (FollowedByCapitalised(turnText, m.CharEnd)) return false;
         if (prepositions.Precedes(turnText, m.CharStart)) return true;
         return candidates.Count > 0 && candidates.All(c => c.Kind == MatchKind.Inflected) && largest >= TownPopulation
-            && !TextPosition.IsSentenceStart(turnText, m.CharStart);
+            && !TextPosition.IsSentenceStart(turnText, m.CharStart) && !variants.KnowsGivenName(NameFolding.Stem(m.Text, m.Language));
     }
 
     private static bool FollowedByCapitalised(string text, int end) =>

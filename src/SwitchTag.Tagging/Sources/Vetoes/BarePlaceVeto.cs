@@ -1,5 +1,6 @@
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Text;
+using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
 using SwitchTag.Tagging.Sources.PlaceEvidence;
 
@@ -7,7 +8,8 @@ namespace SwitchTag.Tagging.Sources.Vetoes;
 
 /// <summary>A bare gazetteer match (one word, no locative preposition before it, the model silent on
 /// it) is kept only for a city of <see cref="PlaceContext.CityPopulation"/> people or more, said
-/// mid-sentence.
+/// mid-sentence by one of its names: a case form the context did not support as a place (Czech "s
+/// Mílou", with Míla) is not one.
 /// A capitalised word at a sentence start is no evidence of a name, and mid-sentence a small town's
 /// name is more often someone's surname or an ordinary word: on the Universal NER and NorNE dev
 /// files (`switchtag eval ner --per-as-loc` with the matches printed, 3 December) such matches were
@@ -20,6 +22,7 @@ public sealed class BarePlaceVeto(Lexicon.Gazetteer gazetteer, PlacePrepositions
         if (mention.Source != MentionSource.Gazetteer || mention.Label != NameLabel.LOC || prepositions.Precedes(turnText, mention.CharStart)) return false;
         if (TextPosition.IsSentenceStart(turnText, mention.CharStart)) return true;
         var candidates = gazetteer.Candidates(mention.Text, mention.Language);
-        return candidates.Count == 0 || candidates.Max(c => c.Place.Population) < PlaceContext.CityPopulation;
+        return candidates.Count == 0 || candidates.Max(c => c.Place.Population) < PlaceContext.CityPopulation
+            || candidates.All(c => c.Kind == MatchKind.Inflected);
     }
 }
