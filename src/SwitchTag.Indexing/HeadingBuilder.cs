@@ -409,6 +409,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var full = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)>();
         var single = new List<int>();
         var patronymic = new List<(int Index, string[] Words)>();
+        var forms = new HashSet<(Group, string, string)>();
         void AddFull(int i, string[] words)
         {
             var m = mentions[i];
@@ -421,9 +422,12 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (known.Group is null)
                 known = full.FirstOrDefault(f => f.Surname != surname && lexicon.SameFamilyName(f.Last, f.Language, last, m.Language)
                     && (lexicon.Key(f.First, LanguageCode.Undetermined) == lexicon.Key(first, LanguageCode.Undetermined) || lexicon.EquivalentGivenNames(f.First, first)));
-            if (known.Group is not null) { known.Group.Members.Add(i); return; }
-            var group = Add(byKey, groups, NameLabel.PER, lexicon.Key(first, m.Language) + " " + lexicon.Key(last, m.Language), i);
-            if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname, words.Length > 2 ? words[1] : null));
+            var group = known.Group;
+            if (group is not null) group.Members.Add(i);
+            else group = Add(byKey, groups, NameLabel.PER, lexicon.Key(first, m.Language) + " " + lexicon.Key(last, m.Language), i);
+            // Every full form a person is named by is kept, so a one-word name meets any of them ("Bill"
+            // after "Vasilis Georgiou ... Here he was Bill Georgiou").
+            if (forms.Add((group, first, last))) full.Add((group, first, last, m.Language, surname, words.Length > 2 ? words[1] : null));
         }
 
         var bySecond = NamesBySecondWord(mentions, held);
@@ -639,8 +643,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             {
                 var m = mentions[i];
                 var text = turns[m.Turn.Index].Text;
-                var before = Words(text[Math.Max(0, m.CharStart - TieReachChars)..m.CharStart]).TakeLast(words);
-                var after = Words(text[m.CharEnd..Math.Min(text.Length, m.CharEnd + TieReachChars)]).Take(words);
+                var before = Words(text[Math.Max(0, m.CharStart - MarriageReachChars)..m.CharStart]).TakeLast(words);
+                var after = Words(text[m.CharEnd..Math.Min(text.Length, m.CharEnd + MarriageReachChars)]).Take(words);
                 married[(i, words)] = near = lexicon.SpeaksOfMarriage(before.Concat(after));
             }
             return near;
@@ -656,8 +660,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         {
             if (!groups.Contains(b.Group)) continue;
             var hers = full.Where(a => a.Group != b.Group && groups.Contains(a.Group) && !lexicon.SameFamilyName(a.Last, a.Language, b.Last, b.Language)
-                    && a.Group.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
-                        && (lexicon.SameGivenName(w[0], mentions[k].Language, b.First, b.Language) || lexicon.EquivalentGivenNames(w[0], b.First))))
+                    && (lexicon.SameGivenName(a.First, a.Language, b.First, b.Language) || lexicon.EquivalentGivenNames(a.First, b.First)))
                 .Select(a => a.Group).Distinct().ToList();
             if (hers is not [var woman] || woman.Members.Concat(b.Group.Members).Any(AfterKin)) continue;
             bool said = b.Group.Members.Any(i => Near(i, TieReachWords));
@@ -668,6 +671,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             full.RemoveAll(f => f.Group == b.Group);
         }
     }
+
+    /// <summary>Chars either side of a name searched for a word of marriage: <see cref="TieReachWords"/>
+    /// words of talk fit well within them.</summary>
+    private const int MarriageReachChars = 400;
 
     /// <summary>Final letters a patronymic may carry as a case ending ("Ivana Petrovicha").</summary>
     private const int CaseLetters = 2;

@@ -108,6 +108,13 @@ public class HeadingLexiconTests
         Assert.Equal(2, Build("Marta", ("Jan Novák", Czech), ("Jana Nováková", Czech)).Headings.Length);
     }
 
+    /// <summary>Bill is listed beside Vasilis as an adopted equivalent (name-equivalents.tsv; Greek
+    /// immigrants' usage, known from memory): "Vasilis Georgiou" and "Bill Georgiou" are one person, and
+    /// "Bill" alone then meets the second of his full names.</summary>
+    [Fact]
+    public void A_one_word_name_meets_any_full_name_of_its_person() =>
+        Assert.Single(Build("Evangelia", ("Vasilis Georgiou", English), ("Bill Georgiou", English), ("Bill", English)).Headings);
+
     /// <summary>Pan Novotný and paní Novotná (Czech -ný / -ná, feminine-surname-endings.tsv) are a
     /// husband and wife; said alone, the two forms are never one person.</summary>
     [Fact]
