@@ -516,6 +516,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
         JoinBirthNames(mentions, held, groups, turns, full);
         JoinMarriedNames(mentions, groups, turns, full);
+        JoinGivenNames(mentions, groups, turns);
 
         foreach (var l in lone)
         {
@@ -671,6 +672,48 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             full.RemoveAll(f => f.Group == b.Group);
         }
     }
+
+    /// <summary>A one-word name given by a naming phrase (Languages/*/naming-phrases.tsv) is the
+    /// person the phrase names, when it heads nothing but one-word names: the speaker ("Doma mi říkali
+    /// Grete", said by Markéta) or the person said last before it in the turn, at most
+    /// <see cref="TieWords"/> words back ("One brother, Jozef. We called him Jožko").</summary>
+    private void JoinGivenNames(ImmutableArray<Mention> mentions, List<Group> groups, ImmutableArray<Turn> turns)
+    {
+        var groupOf = groups.Where(g => g.Label == NameLabel.PER).SelectMany(g => g.Members.Select(k => (k, g))).ToDictionary(x => x.k, x => x.g);
+        List<HashSet<string>>? speakers = null;
+        foreach (var (i, own) in groupOf.OrderBy(x => x.Key).ToList())
+        {
+            if (!groups.Contains(own) || own.Members.Any(k => Words(mentions[k].Text).Length > 1)) continue;
+            var m = mentions[i];
+            var turn = turns[m.Turn.Index];
+            var text = turn.Text;
+            bool? self = lexicon.NamingPhraseAround(text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart], text[m.CharEnd..Math.Min(text.Length, m.CharEnd + NamingChars)]);
+            if (self is null) continue;
+            Group? target;
+            if (self.Value)
+            {
+                if (turn.Speaker is null) continue;
+                speakers ??= SpeakerWords(turns);
+                var speaker = Words(turn.Speaker).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal);
+                var named = groups.Where(g => g != own && g.Label == NameLabel.PER && g.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
+                    && speaker.IsSubsetOf(w.Select(x => lexicon.Key(x, LanguageCode.Undetermined))))).ToList();
+                target = named is [var one] ? one : null;
+            }
+            else
+            {
+                // The person said last before; when that is the name's own heading, the two are joined already.
+                int before = Enumerable.Range(0, i).Reverse().TakeWhile(j => mentions[j].Turn == m.Turn)
+                    .FirstOrDefault(j => groupOf.TryGetValue(j, out var g) && groups.Contains(g), -1);
+                target = before >= 0 && groupOf[before] != own && Words(text[mentions[before].CharEnd..m.CharStart]).Length <= TieWords ? groupOf[before] : null;
+            }
+            if (target is null || !groups.Contains(target)) continue;
+            foreach (int k in own.Members) groupOf[k] = target;
+            MergeInto(own, target, groups);
+        }
+    }
+
+    /// <summary>Chars either side of a one-word name searched for a naming phrase.</summary>
+    private const int NamingChars = 60;
 
     /// <summary>Chars either side of a name searched for a word of marriage: <see cref="TieReachWords"/>
     /// words of talk fit well within them.</summary>

@@ -219,4 +219,18 @@ public class HeadingLexiconTests
         Assert.Equal(NameLabel.PER, heading.Label);
         Assert.Equal([mentions[0].Text, mentions[1].Text], heading.Variants.ToArray());
     }
+
+    /// <summary>Naming phrases of Languages/*/naming-phrases.tsv ("called me", "called him"; common
+    /// usage, known from memory). Mausi and Bubi are pet names in no list.</summary>
+    [Fact]
+    public void A_name_a_naming_phrase_gives_is_the_speaker_or_the_person_just_named()
+    {
+        var self = BuildText("This is Markéta Hellerová. Avraham always called me Mausi.",
+            [("Markéta Hellerová", Czech), ("Avraham", English), ("Mausi", English)], "Markéta");
+        Assert.Equal([["Avraham"], ["Markéta Hellerová", "Mausi"]], Variants(self));
+
+        var other = BuildText("One brother, Jozef. We called him Bubi. And my mother, Ilona, my father called her Mausi.",
+            ("Jozef", Slovak), ("Bubi", English), ("Ilona", English), ("Mausi", English));
+        Assert.Equal([["Ilona", "Mausi"], ["Jozef", "Bubi"]], Variants(other));
+    }
 }
