@@ -410,6 +410,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var full = new List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)>();
         var single = new List<int>();
         var patronymic = new List<(int Index, string[] Words)>();
+        var forms = new HashSet<(Group, string, string)>();
         void AddFull(int i, string[] words)
         {
             var m = mentions[i];
@@ -422,9 +423,12 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (known.Group is null)
                 known = full.FirstOrDefault(f => f.Surname != surname && lexicon.SameFamilyName(f.Last, f.Language, last, m.Language)
                     && (lexicon.Key(f.First, LanguageCode.Undetermined) == lexicon.Key(first, LanguageCode.Undetermined) || lexicon.EquivalentGivenNames(f.First, first)));
-            if (known.Group is not null) { known.Group.Members.Add(i); return; }
-            var group = Add(byKey, groups, NameLabel.PER, lexicon.Key(first, m.Language) + " " + lexicon.Key(last, m.Language), i);
-            if (group.Members.Count == 1) full.Add((group, first, last, m.Language, surname, words.Length > 2 ? words[1] : null));
+            var group = known.Group;
+            if (group is not null) group.Members.Add(i);
+            else group = Add(byKey, groups, NameLabel.PER, lexicon.Key(first, m.Language) + " " + lexicon.Key(last, m.Language), i);
+            // Every full form a person is named by is kept, so a one-word name meets any of them ("Bill"
+            // after "Vasilis Georgiou ... Here he was Bill Georgiou").
+            if (forms.Add((group, first, last))) full.Add((group, first, last, m.Language, surname, words.Length > 2 ? words[1] : null));
         }
 
         var bySecond = NamesBySecondWord(mentions, held);
@@ -513,6 +517,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
         JoinBirthNames(mentions, held, groups, turns, full);
         JoinMarriedNames(mentions, groups, turns, full);
+        JoinGivenNames(mentions, groups, turns);
 
         foreach (var l in lone)
         {
@@ -640,8 +645,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             {
                 var m = mentions[i];
                 var text = turns[m.Turn.Index].Text;
-                var before = Words(text[Math.Max(0, m.CharStart - TieReachChars)..m.CharStart]).TakeLast(words);
-                var after = Words(text[m.CharEnd..Math.Min(text.Length, m.CharEnd + TieReachChars)]).Take(words);
+                var before = Words(text[Math.Max(0, m.CharStart - MarriageReachChars)..m.CharStart]).TakeLast(words);
+                var after = Words(text[m.CharEnd..Math.Min(text.Length, m.CharEnd + MarriageReachChars)]).Take(words);
                 married[(i, words)] = near = lexicon.SpeaksOfMarriage(before.Concat(after));
             }
             return near;
@@ -657,8 +662,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         {
             if (!groups.Contains(b.Group)) continue;
             var hers = full.Where(a => a.Group != b.Group && groups.Contains(a.Group) && !lexicon.SameFamilyName(a.Last, a.Language, b.Last, b.Language)
-                    && a.Group.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
-                        && (lexicon.SameGivenName(w[0], mentions[k].Language, b.First, b.Language) || lexicon.EquivalentGivenNames(w[0], b.First))))
+                    && (lexicon.SameGivenName(a.First, a.Language, b.First, b.Language) || lexicon.EquivalentGivenNames(a.First, b.First)))
                 .Select(a => a.Group).Distinct().ToList();
             if (hers is not [var woman] || woman.Members.Concat(b.Group.Members).Any(AfterKin)) continue;
             bool said = b.Group.Members.Any(i => Near(i, TieReachWords));
@@ -669,6 +673,52 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             full.RemoveAll(f => f.Group == b.Group);
         }
     }
+
+    /// <summary>A one-word name given by a naming phrase (Languages/*/naming-phrases.tsv) is the
+    /// person the phrase names, when it heads nothing but one-word names: the speaker ("Doma mi říkali
+    /// Grete", said by Markéta) or the person said last before it in the turn, at most
+    /// <see cref="TieWords"/> words back ("One brother, Jozef. We called him Jožko").</summary>
+    private void JoinGivenNames(ImmutableArray<Mention> mentions, List<Group> groups, ImmutableArray<Turn> turns)
+    {
+        var groupOf = groups.Where(g => g.Label == NameLabel.PER).SelectMany(g => g.Members.Select(k => (k, g))).ToDictionary(x => x.k, x => x.g);
+        List<HashSet<string>>? speakers = null;
+        foreach (var (i, own) in groupOf.OrderBy(x => x.Key).ToList())
+        {
+            if (!groups.Contains(own) || own.Members.Any(k => Words(mentions[k].Text).Length > 1)) continue;
+            var m = mentions[i];
+            var turn = turns[m.Turn.Index];
+            var text = turn.Text;
+            bool? self = lexicon.NamingPhraseAround(text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart], text[m.CharEnd..Math.Min(text.Length, m.CharEnd + NamingChars)]);
+            if (self is null) continue;
+            Group? target;
+            if (self.Value)
+            {
+                if (turn.Speaker is null) continue;
+                speakers ??= SpeakerWords(turns);
+                var speaker = Words(turn.Speaker).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal);
+                var named = groups.Where(g => g != own && g.Label == NameLabel.PER && g.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
+                    && speaker.IsSubsetOf(w.Select(x => lexicon.Key(x, LanguageCode.Undetermined))))).ToList();
+                target = named is [var one] ? one : null;
+            }
+            else
+            {
+                // The person said last before; when that is the name's own heading, the two are joined already.
+                int before = Enumerable.Range(0, i).Reverse().TakeWhile(j => mentions[j].Turn == m.Turn)
+                    .FirstOrDefault(j => groupOf.TryGetValue(j, out var g) && groups.Contains(g), -1);
+                target = before >= 0 && groupOf[before] != own && Words(text[mentions[before].CharEnd..m.CharStart]).Length <= TieWords ? groupOf[before] : null;
+            }
+            if (target is null || !groups.Contains(target)) continue;
+            foreach (int k in own.Members) groupOf[k] = target;
+            MergeInto(own, target, groups);
+        }
+    }
+
+    /// <summary>Chars either side of a one-word name searched for a naming phrase.</summary>
+    private const int NamingChars = 60;
+
+    /// <summary>Chars either side of a name searched for a word of marriage: <see cref="TieReachWords"/>
+    /// words of talk fit well within them.</summary>
+    private const int MarriageReachChars = 400;
 
     /// <summary>Final letters a patronymic may carry as a case ending ("Ivana Petrovicha").</summary>
     private const int CaseLetters = 2;

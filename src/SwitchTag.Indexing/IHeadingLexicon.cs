@@ -47,6 +47,11 @@ public interface IHeadingLexicon
     /// <summary>Whether a word is a kinship word of some language ("cousin", "ciocia", "Tante").</summary>
     bool IsKinshipWord(string word) => false;
 
+    /// <summary>Whether a naming phrase stands right before a one-word name or just after it ("they
+    /// called me Litsa", "Takis, we called him"): true when it names the speaker, false when the person
+    /// said before, null when there is none.</summary>
+    bool? NamingPhraseAround(string before, string after) => null;
+
     /// <summary>Whether one of the words speaks of a marriage ("married", "husband", "férjem").</summary>
     bool SpeaksOfMarriage(IEnumerable<string> words) => false;
 

@@ -108,6 +108,13 @@ public class HeadingLexiconTests
         Assert.Equal(2, Build("Marta", ("Jan Novák", Czech), ("Jana Nováková", Czech)).Headings.Length);
     }
 
+    /// <summary>Bill is listed beside Vasilis as an adopted equivalent (name-equivalents.tsv; Greek
+    /// immigrants' usage, known from memory): "Vasilis Georgiou" and "Bill Georgiou" are one person, and
+    /// "Bill" alone then meets the second of his full names.</summary>
+    [Fact]
+    public void A_one_word_name_meets_any_full_name_of_its_person() =>
+        Assert.Single(Build("Evangelia", ("Vasilis Georgiou", English), ("Bill Georgiou", English), ("Bill", English)).Headings);
+
     /// <summary>Pan Novotný and paní Novotná (Czech -ný / -ná, feminine-surname-endings.tsv) are a
     /// husband and wife; said alone, the two forms are never one person.</summary>
     [Fact]
@@ -211,5 +218,19 @@ public class HeadingLexiconTests
         var heading = Assert.Single(new HeadingBuilder(Loaded.Value.Lexicon).Build(mentions, times, [turn]).Headings);
         Assert.Equal(NameLabel.PER, heading.Label);
         Assert.Equal([mentions[0].Text, mentions[1].Text], heading.Variants.ToArray());
+    }
+
+    /// <summary>Naming phrases of Languages/*/naming-phrases.tsv ("called me", "called him"; common
+    /// usage, known from memory). Mausi and Bubi are pet names in no list.</summary>
+    [Fact]
+    public void A_name_a_naming_phrase_gives_is_the_speaker_or_the_person_just_named()
+    {
+        var self = BuildText("This is Markéta Hellerová. Avraham always called me Mausi.",
+            [("Markéta Hellerová", Czech), ("Avraham", English), ("Mausi", English)], "Markéta");
+        Assert.Equal([["Avraham"], ["Markéta Hellerová", "Mausi"]], Variants(self));
+
+        var other = BuildText("One brother, Jozef. We called him Bubi. And my mother, Ilona, my father called her Mausi.",
+            ("Jozef", Slovak), ("Bubi", English), ("Ilona", English), ("Mausi", English));
+        Assert.Equal([["Ilona", "Mausi"], ["Jozef", "Bubi"]], Variants(other));
     }
 }

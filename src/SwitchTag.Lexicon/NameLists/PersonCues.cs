@@ -54,6 +54,39 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         words.SelectMany(w => NameWords.Split(w)).Select(w => w.Folded)
             .Any(w => MarriageWords.Contains(w) || MarriagePrefixes.Any(p => w.StartsWith(p, StringComparison.Ordinal)));
 
+    /// <summary>Phrases that give a person another name (Languages/*/naming-phrases.tsv), folded words,
+    /// with whether they name the speaker ("they called me") or the person named before ("we called him").</summary>
+    public ImmutableArray<(string[] Words, bool Self)> NamingPhrases { get; init; } = [];
+
+    /// <summary>Most words of the clause after a name that closes with a naming phrase ("Terka, my father called her").</summary>
+    private const int NamingReach = 5;
+
+    /// <summary>Whether the text right before a one-word name ends with a naming phrase ("everyone called
+    /// me Litsa"), or the text right after it, set off by a comma, has one within a few words ("Takis, we called him"): true
+    /// when the phrase names the speaker, false when it names the person said before, null when there is none.</summary>
+    public bool? NamingPhraseAround(string before, string after)
+    {
+        if (NamingPhrases.IsEmpty) return null;
+        var prior = NameWords.Split(NameFolding.Fold(before)).Select(w => w.Folded).ToList();
+        // After the name only when it is set off by a comma and the phrase closes the clause: "Avraham
+        // always called me Gretl" names Gretl, and so does "Ilona, my father called her Ilonka".
+        var next = after.StartsWith(',') ? NameWords.Split(NameFolding.Fold(Clause(after[1..]))).Select(w => w.Folded).ToList() : [];
+        if (next.Count > NamingReach) next = [];
+        foreach (var (words, self) in NamingPhrases)
+        {
+            if (prior.Count >= words.Length && prior.Skip(prior.Count - words.Length).SequenceEqual(words)) return self;
+            if (next.Count >= words.Length && next.Skip(next.Count - words.Length).SequenceEqual(words)) return self;
+        }
+        return null;
+    }
+
+    /// <summary>The text up to the first comma or sentence end.</summary>
+    private static string Clause(string text)
+    {
+        int end = text.IndexOfAny([',', '.', ';', '!', '?']);
+        return end < 0 ? text : text[..end];
+    }
+
     internal static PersonCues Load(string lexiconDir)
     {
         var titles = new HashSet<string>(StringComparer.Ordinal);
@@ -80,6 +113,11 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
             BirthNameMarkers = Frozen(birthNames),
             MarriageWords = Frozen([.. marriage.Where(w => !w.EndsWith('*')).Select(NameFolding.Fold)]),
             MarriagePrefixes = [.. marriage.Where(w => w.EndsWith('*')).Select(w => NameFolding.Fold(w[..^1])).Where(w => w.Length > 0).Distinct()],
+            NamingPhrases = [.. LexiconTsv.Languages(lexiconDir)
+                .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "naming-phrases.tsv")))
+                .Where(r => r.Length > 1)
+                .Select(r => (Words: NameWords.Split(NameFolding.Fold(r[0])).Select(w => w.Folded).ToArray(), Self: r[1].Trim() == "self"))
+                .Where(p => p.Words.Length > 0)],
         };
     }
 
