@@ -8,8 +8,9 @@ namespace SwitchTag.Indexing;
 /// <summary>One label per name per interview, decided by the evidence over the whole interview
 /// before headings are grouped. Only the model's and the bare gazetteer's labels change; the authority
 /// list, person cues and place evidence fixed theirs earlier in the cascade.
-/// In order: (1) a name of two or more words whose first word is a listed first name and which the
-/// gazetteer does not know as a whole is a person ("Esterina Saltiel"); (2) a one-word name that is the
+/// In order: (1) a name of two or more words whose first word is a listed first name (or a given name
+/// the variant lists know: "Avraham Shapira") and which the gazetteer does not know as a whole is a
+/// person ("Esterina Saltiel"); (2) a one-word name that is the
 /// first or last word of a person named in full in the interview, or a listed diminutive of that
 /// person's given name, is that person's name ("Szwarc" beside "Hanka Szwarc", "Pina" beside "Giuseppina
 /// Russo"), and so is the same name as a one-word person a cue marked, in any script ("η Σοφία" beside
@@ -31,7 +32,7 @@ internal static class LabelVote
             var m = result[i];
             if (!Open(m) || m.Label == NameLabel.PER) continue;
             var words = Words(m.Text);
-            if (words.Length >= 2 && lexicon.IsFirstName(words[0]) && places[i].IsEmpty && char.IsUpper(words[^1][0])
+            if (words.Length >= 2 && (lexicon.IsFirstName(words[0]) || lexicon.KnowsGivenName(words[0])) && places[i].IsEmpty && char.IsUpper(words[^1][0])
                 && !lowerWords.Contains(words[^1].ToLowerInvariant()))
                 result[i] = m with { Label = NameLabel.PER, Source = MentionSource.Cue };
         }

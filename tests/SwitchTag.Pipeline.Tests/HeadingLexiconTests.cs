@@ -233,4 +233,17 @@ public class HeadingLexiconTests
             ("Jozef", Slovak), ("Bubi", English), ("Ilona", English), ("Mausi", English));
         Assert.Equal([["Ilona", "Mausi"], ["Jozef", "Bubi"]], Variants(other));
     }
+
+    /// <summary>Avraham is in no first-name list but in name-equivalents.tsv (he:Avraham): a model
+    /// organisation of two words opening with it is a person.</summary>
+    [Fact]
+    public void A_model_organisation_opening_with_a_known_given_name_is_a_person()
+    {
+        const string text = "Here I married Avraham Shapira, and we lived in Haifa.";
+        int at = text.IndexOf("Avraham", StringComparison.Ordinal);
+        var mention = new Mention(new TurnId(0), new CharSpan(at, at + 15), "Avraham Shapira", NameLabel.ORG, English, 0.8, MentionSource.Model);
+        var turn = new Turn(new TurnId(0), "Markéta", "Markéta", new TimeRange(Timecode.Zero, new Timecode(2000)), text, []);
+        var result = new HeadingBuilder(Loaded.Value.Lexicon).Build([mention], [new TimeRange(Timecode.Zero, new Timecode(500))], [turn]);
+        Assert.Equal(NameLabel.PER, Assert.Single(result.Headings).Label);
+    }
 }
