@@ -16,7 +16,7 @@ public class NameListsTests
         ["first-names.tsv"] = 2, ["surnames.tsv"] = 2, ["language-names.tsv"] = 2, ["nationalities.tsv"] = 2,
         ["titles.tsv"] = 4, ["kinship.tsv"] = 3, ["peoples.tsv"] = 2, ["hypocoristics.tsv"] = 2, ["territories.tsv"] = 2, ["regions.tsv"] = 3, ["place-prepositions.tsv"] = 2,
         ["historical-regions.tsv"] = 6, ["camps-and-ghettos.tsv"] = 7, ["cyrillic-latin.tsv"] = 3, ["greek-latin.tsv"] = 3,
-        ["yiddish-latin.tsv"] = 3, ["spelling-folds.tsv"] = 3, ["feminine-surname-endings.tsv"] = 2,
+        ["yiddish-latin.tsv"] = 3, ["spelling-folds.tsv"] = 3, ["feminine-surname-endings.tsv"] = 2, ["naming-phrases.tsv"] = 2,
     };
 
     private static IEnumerable<string[]> Rows(string file) =>
