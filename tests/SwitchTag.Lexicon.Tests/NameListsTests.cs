@@ -16,7 +16,7 @@ public class NameListsTests
         ["first-names.tsv"] = 2, ["surnames.tsv"] = 2, ["language-names.tsv"] = 2, ["nationalities.tsv"] = 2,
         ["titles.tsv"] = 4, ["kinship.tsv"] = 3, ["peoples.tsv"] = 2, ["hypocoristics.tsv"] = 2, ["territories.tsv"] = 2, ["regions.tsv"] = 3, ["place-prepositions.tsv"] = 2,
         ["historical-regions.tsv"] = 6, ["camps-and-ghettos.tsv"] = 7, ["cyrillic-latin.tsv"] = 3, ["greek-latin.tsv"] = 3,
-        ["yiddish-latin.tsv"] = 3, ["spelling-folds.tsv"] = 3, ["feminine-surname-endings.tsv"] = 2,
+        ["yiddish-latin.tsv"] = 3, ["spelling-folds.tsv"] = 3, ["feminine-surname-endings.tsv"] = 2, ["naming-phrases.tsv"] = 2,
     };
 
     private static IEnumerable<string[]> Rows(string file) =>
@@ -93,6 +93,18 @@ public class NameListsTests
         Assert.False(lists.NotPlaces.Contains("Galicia"));
         // CLDR 48.2 main/en/languages.json: "Yiddish" names a language and no territory; it stays a veto word.
         Assert.True(lists.NotPlaces.Contains("Yiddish"));
+    }
+
+    /// <summary>Czech "v Osvětimi" is the locative of Osvětim, Auschwitz (standard grammar and usage,
+    /// known from memory); Osvětim is one of the camp's listed names.</summary>
+    [Fact]
+    public void A_camp_is_found_by_a_case_form_of_one_of_its_names()
+    {
+        var places = SwitchTag.Lexicon.NameLists.NameListSet.Load(Lexicon).Places;
+        Assert.Null(places.Find("Osvětimi"));
+        Assert.Equal("Auschwitz", places.Find("Osvětimi", new SwitchTag.Core.Languages.LanguageCode("cs"))?.Name);
+        // English has no case endings of its own: the form stays unknown there.
+        Assert.Null(places.Find("Osvětimi", new SwitchTag.Core.Languages.LanguageCode("en")));
     }
 
     [Fact]
