@@ -26,7 +26,7 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public ListedPlace? Listed(string name, LanguageCode language)
     {
-        if (_lists.Places.Find(name) is not { } listed) return null;
+        if (_lists.Places.Find(name, language) is not { } listed) return null;
         var at = listed.At is null ? null
             : gazetteer.Lookup(listed.At, LanguageCode.Undetermined).Where(p => p.Country == listed.Countries[0] && Key(p.Name, LanguageCode.Undetermined) == Key(listed.At, LanguageCode.Undetermined))
                 .Select(p => new PlaceLink(p.GeonameId, p.Name, p.Latitude, p.Longitude, p.Country, p.Population)).FirstOrDefault()

@@ -95,6 +95,18 @@ public class NameListsTests
         Assert.True(lists.NotPlaces.Contains("Yiddish"));
     }
 
+    /// <summary>Czech "v Osvětimi" is the locative of Osvětim, Auschwitz (standard grammar and usage,
+    /// known from memory); Osvětim is one of the camp's listed names.</summary>
+    [Fact]
+    public void A_camp_is_found_by_a_case_form_of_one_of_its_names()
+    {
+        var places = SwitchTag.Lexicon.NameLists.NameListSet.Load(Lexicon).Places;
+        Assert.Null(places.Find("Osvětimi"));
+        Assert.Equal("Auschwitz", places.Find("Osvětimi", new SwitchTag.Core.Languages.LanguageCode("cs"))?.Name);
+        // English has no case endings of its own: the form stays unknown there.
+        Assert.Null(places.Find("Osvětimi", new SwitchTag.Core.Languages.LanguageCode("en")));
+    }
+
     [Fact]
     public void A_camp_is_found_by_each_of_its_listed_names_and_lies_at_its_town()
     {

@@ -1,6 +1,8 @@
+using System.Collections.Concurrent;
 using System.Collections.Frozen;
 using System.Collections.Immutable;
 using System.Globalization;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Lexicon.NameLists;
 
@@ -20,6 +22,22 @@ public sealed record SpokenPlaces(FrozenDictionary<string, SpokenPlace> ByName)
     public static SpokenPlaces Empty { get; } = new(FrozenDictionary<string, SpokenPlace>.Empty);
 
     public SpokenPlace? Find(string name) => ByName.GetValueOrDefault(NameFolding.FoldedWords(name));
+
+    /// <summary>The place by the whole name said, or by a case form of one of its names in the
+    /// language said ("v Osvětimi", in Auschwitz, Czech locative).</summary>
+    public SpokenPlace? Find(string name, LanguageCode language) =>
+        Find(name) ?? _byKey.GetOrAdd(language, KeysIn).GetValueOrDefault(NameFolding.Key(name, language));
+
+    /// <summary>Every name's grouping key in one language, built the first time that language is asked for.</summary>
+    private readonly ConcurrentDictionary<LanguageCode, FrozenDictionary<string, SpokenPlace>> _byKey = new();
+
+    private FrozenDictionary<string, SpokenPlace> KeysIn(LanguageCode language)
+    {
+        var byKey = new Dictionary<string, SpokenPlace>(StringComparer.Ordinal);
+        foreach (var (name, place) in ByName)
+            byKey.TryAdd(NameFolding.Key(name, language), place);
+        return byKey.ToFrozenDictionary(StringComparer.Ordinal);
+    }
 
     /// <summary>Every name of every listed place, folded: these are places, whatever a list of
     /// language names in some other language says ("galicia" is Finnish for the Galician language).</summary>
