@@ -632,7 +632,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// Nikos Pappas ... Here I was Helen Pappas") joins the one person with her given name (the same,
     /// a short form or a listed equivalent) and another family name, when the talk says it is a
     /// marriage: a word of marriage (Languages/*/marriage-words.txt) at most <see cref="TieReachWords"/>
-    /// words from the name in its turn, or a person of that surname and another given name said at
+    /// words from one of the name's first <see cref="FirstMentionsSearched"/> mentions in its turn, or a person of that surname and another given name said at
     /// most <see cref="TieWords"/> words from such a word (the husband). A name said right after a
     /// kinship word ("my cousin Ruth Stein") is a relative, never the woman under another name.</summary>
     private void JoinMarriedNames(ImmutableArray<Mention> mentions, List<Group> groups, ImmutableArray<Turn> turns,
@@ -665,26 +665,33 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                     && (lexicon.SameGivenName(a.First, a.Language, b.First, b.Language) || lexicon.EquivalentGivenNames(a.First, b.First)))
                 .Select(a => a.Group).Distinct().ToList();
             if (hers is not [var woman] || woman.Members.Concat(b.Group.Members).Any(AfterKin)) continue;
-            bool said = b.Group.Members.Any(i => Near(i, TieReachWords));
+            bool said = b.Group.Members.Take(FirstMentionsSearched).Any(i => Near(i, TieReachWords));
             bool husband = !said && full.Any(s => s.Group != b.Group && s.Group != woman && groups.Contains(s.Group) && s.Surname == b.Surname
-                && !lexicon.SameGivenName(s.First, s.Language, b.First, b.Language) && s.Group.Members.Any(i => Near(i, TieWords)));
+                && !lexicon.SameGivenName(s.First, s.Language, b.First, b.Language) && s.Group.Members.Take(FirstMentionsSearched).Any(i => Near(i, TieWords)));
             if (!said && !husband) continue;
             MergeInto(b.Group, woman, groups);
             full.RemoveAll(f => f.Group == b.Group);
         }
     }
 
-    /// <summary>A one-word name given by a naming phrase (Languages/*/naming-phrases.tsv) is the
-    /// person the phrase names, when it heads nothing but one-word names: the speaker ("Doma mi říkali
+    /// <summary>A one-word name given by a naming phrase (Languages/*/naming-phrases.tsv) at one of its
+    /// first <see cref="FirstMentionsSearched"/> mentions is the person the phrase names, when it heads nothing but one-word names: the speaker ("Doma mi říkali
     /// Grete", said by Markéta) or the person said last before it in the turn, at most
     /// <see cref="TieWords"/> words back ("One brother, Jozef. We called him Jožko").</summary>
     private void JoinGivenNames(ImmutableArray<Mention> mentions, List<Group> groups, ImmutableArray<Turn> turns)
     {
         var groupOf = groups.Where(g => g.Label == NameLabel.PER).SelectMany(g => g.Members.Select(k => (k, g))).ToDictionary(x => x.k, x => x.g);
-        List<HashSet<string>>? speakers = null;
+        // Whether a heading holds only one-word names, worked out once per heading.
+        var oneWord = new Dictionary<Group, bool>();
+        var searched = new Dictionary<Group, int>();
         foreach (var (i, own) in groupOf.OrderBy(x => x.Key).ToList())
         {
-            if (!groups.Contains(own) || own.Members.Any(k => Words(mentions[k].Text).Length > 1)) continue;
+            if (!groups.Contains(own)) continue;
+            int seen = searched.GetValueOrDefault(own);
+            if (seen >= FirstMentionsSearched) continue;
+            searched[own] = seen + 1;
+            if (!oneWord.TryGetValue(own, out bool only)) oneWord[own] = only = own.Members.All(k => Words(mentions[k].Text).Length == 1);
+            if (!only) continue;
             var m = mentions[i];
             var turn = turns[m.Turn.Index];
             var text = turn.Text;
@@ -694,7 +701,6 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (self.Value)
             {
                 if (turn.Speaker is null) continue;
-                speakers ??= SpeakerWords(turns);
                 var speaker = Words(turn.Speaker).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal);
                 var named = groups.Where(g => g != own && g.Label == NameLabel.PER && g.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
                     && speaker.IsSubsetOf(w.Select(x => lexicon.Key(x, LanguageCode.Undetermined))))).ToList();
@@ -709,9 +715,15 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
             if (target is null || !groups.Contains(target)) continue;
             foreach (int k in own.Members) groupOf[k] = target;
+            oneWord.Remove(target);
             MergeInto(own, target, groups);
         }
     }
+
+    /// <summary>How many of a heading's mentions, in text order, are searched for a word of marriage or a
+    /// naming phrase: a new name is explained where it first comes up, and a name said thousands of
+    /// times in one long turn then costs no scan of them all.</summary>
+    private const int FirstMentionsSearched = 50;
 
     /// <summary>Chars either side of a one-word name searched for a naming phrase.</summary>
     private const int NamingChars = 60;
