@@ -683,6 +683,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var groupOf = groups.Where(g => g.Label == NameLabel.PER).SelectMany(g => g.Members.Select(k => (k, g))).ToDictionary(x => x.k, x => x.g);
         // Whether a heading holds only one-word names, worked out once per heading.
         var oneWord = new Dictionary<Group, bool>();
+        // The heading naming each speaker (every word of the label a word of one of its full names), once per label.
+        var speakerHeading = new Dictionary<string, Group?>(StringComparer.Ordinal);
         var searched = new Dictionary<Group, int>();
         foreach (var (i, own) in groupOf.OrderBy(x => x.Key).ToList())
         {
@@ -701,10 +703,13 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (self.Value)
             {
                 if (turn.Speaker is null) continue;
-                var speaker = Words(turn.Speaker).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal);
-                var named = groups.Where(g => g != own && g.Label == NameLabel.PER && g.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
-                    && speaker.IsSubsetOf(w.Select(x => lexicon.Key(x, LanguageCode.Undetermined))))).ToList();
-                target = named is [var one] ? one : null;
+                if (!speakerHeading.TryGetValue(turn.Speaker, out target))
+                {
+                    var speaker = SpeakerKeys(turn.Speaker);
+                    var named = groups.Where(g => g.Label == NameLabel.PER && g.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
+                        && speaker.IsSubsetOf(w.Select(x => lexicon.Key(x, LanguageCode.Undetermined))))).ToList();
+                    speakerHeading[turn.Speaker] = target = named is [var one] ? one : null;
+                }
             }
             else
             {
@@ -850,8 +855,11 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// <summary>The folded words of each distinct speaker label of the interview.</summary>
     private List<HashSet<string>> SpeakerWords(ImmutableArray<Turn> turns) =>
         turns.Select(t => t.Speaker).OfType<string>().Distinct(StringComparer.Ordinal)
-            .Select(sp => Words(sp).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal))
-            .Where(sp => sp.Count > 0).ToList();
+            .Select(SpeakerKeys).Where(sp => sp.Count > 0).ToList();
+
+    /// <summary>The folded words of one speaker label.</summary>
+    private HashSet<string> SpeakerKeys(string speaker) =>
+        Words(speaker).Select(w => lexicon.Key(w, LanguageCode.Undetermined)).ToHashSet(StringComparer.Ordinal);
 
     private static void GroupByKey(ImmutableArray<Mention> mentions, string[] keys, bool[] held, List<Group> groups, NameLabel label)
     {
