@@ -1,4 +1,5 @@
 using SwitchTag.Core.Documents;
+using SwitchTag.Core.Pipeline;
 using SwitchTag.Output.AnnotatedVtt;
 using SwitchTag.Output.Collection;
 using SwitchTag.Output.IndexJson;
@@ -52,10 +53,16 @@ public sealed class OutputWriters
         return this;
     }
 
-    /// <summary>Every per-interview file into <paramref name="folder"/>.</summary>
+    /// <summary>Every per-interview file into <paramref name="folder"/>. After each file of a long
+    /// interview its scratch is given back, so the files' peaks do not add up (<see cref="LongTalk"/>).</summary>
     public void WriteInterview(InterviewIndex index, string folder)
     {
-        foreach (var w in _interview) AtomicFile.Write(Path.Combine(folder, w.FileName), s => w.Write(index, s));
+        bool isLong = LongTalk.IsLong(index.Turns);
+        foreach (var w in _interview)
+        {
+            AtomicFile.Write(Path.Combine(folder, w.FileName), s => w.Write(index, s));
+            if (isLong) LongTalk.Compact();
+        }
     }
 
     /// <summary>Every collection file into <paramref name="outDir"/>.</summary>

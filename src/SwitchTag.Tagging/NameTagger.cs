@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Ids;
+using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Stages;
 using SwitchTag.Lexicon;
 using SwitchTag.Lexicon.NameLists;
@@ -61,7 +62,13 @@ public sealed class NameTagger(NameSources sources, NamePrecedence? precedence =
         if (string.IsNullOrEmpty(turnText)) return [];
         if (spans.IsDefault) spans = [];
         // Each source's proposals, then one list of all of them sized once: a long turn has a million.
-        var found = sources.Select(s => s.Find(turn, turnText, spans)).ToArray();
+        // Each source leaves its whole-turn scratch behind, which the next would pile onto (LongTalk).
+        var found = new ImmutableArray<Mention>[sources.Count];
+        for (int i = 0; i < found.Length; i++)
+        {
+            found[i] = sources[i].Find(turn, turnText, spans);
+            if (turnText.Length >= LongTalk.Chars) LongTalk.Compact();
+        }
         var proposals = new List<Mention>(found.Sum(f => f.Length));
         foreach (var f in found) proposals.AddRange(f);
         var standing = _precedence.Resolve(proposals);

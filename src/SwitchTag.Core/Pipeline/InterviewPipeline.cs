@@ -14,7 +14,7 @@ public sealed class InterviewPipeline(ILanguageSegmenter languages, INameTagger 
     {
         var turns = TurnBuilder.Build(transcript);
         transcript = transcript.WithoutCueTexts();
-        bool isLong = turns.Sum(t => (long)t.Text.Length) >= LongText;
+        bool isLong = LongTalk.IsLong(turns);
         var result = languages.SegmentInterview(turns, mainLanguage);
         CollectIf(isLong);
         var spans = result.Spans;
@@ -32,17 +32,15 @@ public sealed class InterviewPipeline(ILanguageSegmenter languages, INameTagger 
         return built;
     }
 
-    /// <summary>Chars of talk from which an interview counts as long (a 200k-cue turn has about 11.5M).</summary>
-    private const long LongText = 2_000_000;
-
     /// <summary>Each stage of a long interview leaves large arrays of the whole talk behind (word
     /// tables, language evidence, proposals), which only a full collection takes back, and the GC
     /// let them pile up into the next stage. One full collection after each stage of a long
     /// interview costs a fraction of a second against the tens of seconds the stage took (one
-    /// 200k-cue turn, two paired runs: peak resident 859 -> 710 and 759 -> 715 MB).</summary>
+    /// 200k-cue turn, two paired runs: peak resident 859 -> 710 and 759 -> 715 MB); it also gives
+    /// the freed memory back (<see cref="LongTalk.Compact"/>).</summary>
     private static void CollectIf(bool isLong)
     {
-        if (isLong) GC.Collect();
+        if (isLong) LongTalk.Compact();
     }
 }
 
