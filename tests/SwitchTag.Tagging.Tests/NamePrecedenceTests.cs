@@ -46,7 +46,7 @@ public class NamePrecedenceTests
     {
         var cues = new MentionSource("late-cues");
         var policy = NamePrecedence.Default.InsertAfter(MentionSource.Model, cues).InsertBefore(MentionSource.Authority, new MentionSource("early"));
-        Assert.Equal([MentionSource.Authority, new MentionSource("early"), new MentionSource("organisation-cue"), MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, cues, MentionSource.Gazetteer],
+        Assert.Equal([MentionSource.Authority, new MentionSource("early"), new MentionSource("organisation-cue"), MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, cues, MentionSource.Gazetteer, MentionSource.GivenName],
             policy.Order.ToArray());
         var cue = M(0, 10, cues, NameLabel.PER);
         Assert.Equal([cue], policy.Resolve([M(0, 6, MentionSource.Gazetteer), cue]).ToArray());
