@@ -15,8 +15,9 @@ namespace SwitchTag.Tagging.Sources.GivenNames;
 /// title, kinship word, people's or language's name, no word beside another capitalised one (the model
 /// reads whole names), no full name after a locative preposition ("na Kazimierzu": a district; a short
 /// form there is a person: "ze Stasiem"), and not in
-/// German or Luxembourgish talk, where every noun is capitalised. It ranks last, below the bare
-/// gazetteer, so any place match or label the model gave stands ("a Nola" is the town); its
+/// German or Luxembourgish talk, where every noun is capitalised. It ranks below the model and above
+/// the bare gazetteer (a listed first name the gazetteer also has as a village is far more often the
+/// person: "Roza, really"), so a place the sentence supports or a label the model gave stands; its
 /// confidence says it is the weakest person evidence.</summary>
 public sealed class GivenNameSource(PersonCues cues, NotPlaceWords notPlaces, NameVariants variants, PlacePrepositions prepositions) : INameSource
 {
