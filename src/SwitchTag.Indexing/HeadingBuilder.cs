@@ -164,7 +164,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, PlaceLink? respelled, HashSet<NameLabel> labelsOfSurface,
         HashSet<string> lowerWords, string turnText)
     {
-        bool open = m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer;
+        bool open = m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer || m.Source == MentionSource.GivenName;
         if (open && m.Label == NameLabel.LOC && respelled is not null)
             return $"\"{m.Text}\" is accented otherwise than the only places of that name ({respelled.Name}, {respelled.Country}): another name, perhaps a person's";
         if (open && m.Label == NameLabel.LOC && !places.IsEmpty && !m.Text.Any(char.IsWhiteSpace) && m.Text.All(c => WritingScripts.Of(c) is WritingScript.None or WritingScript.Latin)
@@ -179,7 +179,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return "the model tagged a name that does not start with a capital letter";
         if (m.Source == MentionSource.Model && m.Label == NameLabel.PER && Words(m.Text).Skip(1).FirstOrDefault(OrdinaryInnerWord) is { } inner)
             return $"a person's name does not hold the lower-case word \"{inner}\"";
-        if ((m.Source == MentionSource.Model && (m.Label != NameLabel.LOC || places.IsEmpty) || m.Source == MentionSource.Gazetteer)
+        if ((m.Source == MentionSource.Model && (m.Label != NameLabel.LOC || places.IsEmpty) || m.Source == MentionSource.Gazetteer || m.Source == MentionSource.GivenName)
             && !m.Text.Any(char.IsWhiteSpace) && m.Text.Length > 0 && char.IsUpper(m.Text[0])
             && lowerWords.Contains(m.Text.ToLowerInvariant()))
             return $"\"{m.Text}\" is also used as an ordinary word in this interview (\"{m.Text.ToLowerInvariant()}\")";
@@ -482,7 +482,14 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                         || SameSurname(f.Last, f.Language, word, m.Language) && !lexicon.WomansAndMansForm(f.Last, word))
                     .Select(f => f.Group).Distinct().ToList();
                 if (owners.Count == 0)
+                {
                     owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
+                    // A short form of two full names ("Takis": Panagiotis or Dimitrios) said beside a
+                    // one-word name of the other one belongs to neither full name by the lists alone.
+                    if (owners.Count > 0 && lone.Any(l => l.Group.Members.Count > 0 && lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
+                            && !full.Any(f => owners.Contains(f.Group) && lexicon.SameGivenName(f.First, f.Language, l.Name, l.Language))))
+                        owners = [];
+                }
                 if (owners.Count > 1 && owners.Where(g => full.Any(f => f.Group == g && GivenName(f.First))).ToList() is [var named]) owners = [named];
                 if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
                 ownersOf[(m.Text, m.Language)] = owners;

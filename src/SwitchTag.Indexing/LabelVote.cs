@@ -6,7 +6,7 @@ using SwitchTag.Core.Languages;
 namespace SwitchTag.Indexing;
 
 /// <summary>One label per name per interview, decided by the evidence over the whole interview
-/// before headings are grouped. Only the model's and the bare gazetteer's labels change; the authority
+/// before headings are grouped. Only the model's, the bare gazetteer's and a lone listed given name's labels change; the authority
 /// list, person cues and place evidence fixed theirs earlier in the cascade.
 /// In order: (1) a name of two or more words whose first word is a listed first name (or a given name
 /// the variant lists know: "Avraham Shapira") and which the gazetteer does not know as a whole is a
@@ -16,7 +16,7 @@ namespace SwitchTag.Indexing;
 /// Russo"), and so is the same name as a one-word person a cue marked, in any script ("η Σοφία" beside
 /// "my mother, Sofia,"), unless place evidence put it in a place; (3) every mention of one grouping
 /// key (so inflected forms too: "Krakowie" beside "Kraków") takes the label with the most evidence:
-/// cues and place evidence weigh 10, a model mention its confidence, a bare gazetteer match 0.5, and
+/// cues and place evidence weigh 10, a model mention its confidence, a bare gazetteer match or lone given name 0.5, and
 /// a place mention the gazetteer knows 0.5 more. Changes by (1) and (2) are recorded as decided by a
 /// cue.</summary>
 internal static class LabelVote
@@ -79,12 +79,12 @@ internal static class LabelVote
         lexicon.SameGivenName(given.Name, given.Language, m.Text, m.Language);
 
     /// <summary>Whether a later stage may change the mention's label.</summary>
-    private static bool Open(Mention m) => m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer;
+    private static bool Open(Mention m) => m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer || m.Source == MentionSource.GivenName;
 
     private static double Weight(Mention m, ImmutableArray<PlaceLink> places)
     {
         double w = m.Source == MentionSource.Model ? m.Confidence
-            : m.Source == MentionSource.Gazetteer ? GazetteerWeight
+            : m.Source == MentionSource.Gazetteer || m.Source == MentionSource.GivenName ? GazetteerWeight
             : FixedWeight;
         return w + (m.Label == NameLabel.LOC && !places.IsEmpty ? KnownPlaceBonus : 0);
     }

@@ -13,6 +13,7 @@ using SwitchTag.Tagging.Sources.Model;
 using SwitchTag.Tagging.Sources.Organisations;
 using SwitchTag.Tagging.Sources.PlaceEvidence;
 using SwitchTag.Tagging.Sources.Regions;
+using SwitchTag.Tagging.Sources.GivenNames;
 using SwitchTag.Tagging.Sources.Vetoes;
 
 namespace SwitchTag.Tagging;
@@ -38,17 +39,18 @@ public sealed class NameTagger(NameSources sources, NamePrecedence? precedence =
     }
 
     /// <summary>The sources of the shipped cascade: the authority list, organisation and person cues,
-    /// the gazetteer (with place evidence), first-level regions said as places, and the model when
-    /// there is one.</summary>
+    /// the gazetteer (with place evidence), first-level regions said as places, the model when
+    /// there is one, and listed given names said alone.</summary>
     public static NameSources ShippedSources(NerModel? model, AuthorityList? authority, Lexicon.Gazetteer gazetteer, NameListSet lists)
     {
         var sources = new NameSources()
             .Add(new AuthorityListSource(authority ?? AuthorityList.Empty))
             .Add(new OrganisationCueSource())
-            .Add(new PersonCueSource(lists.Cues, lists.NotPlaces, gazetteer))
+            .Add(new PersonCueSource(lists.Cues, lists.NotPlaces, gazetteer, lists.Variants))
             .Add(new GazetteerSource(gazetteer, new PlaceContext(gazetteer, lists.Prepositions, lists.Cues, lists.Variants)))
             .Add(new RegionSource(lists.Regions, lists.Prepositions));
         if (model is not null) sources.Add(new NameModelSource(model));
+        sources.Add(new GivenNameSource(lists.Cues, lists.NotPlaces, lists.Variants, lists.Prepositions));
         return sources;
     }
 

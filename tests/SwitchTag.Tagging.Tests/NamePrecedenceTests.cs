@@ -46,11 +46,22 @@ public class NamePrecedenceTests
     {
         var cues = new MentionSource("late-cues");
         var policy = NamePrecedence.Default.InsertAfter(MentionSource.Model, cues).InsertBefore(MentionSource.Authority, new MentionSource("early"));
-        Assert.Equal([MentionSource.Authority, new MentionSource("early"), new MentionSource("organisation-cue"), MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, cues, MentionSource.Gazetteer],
+        Assert.Equal([MentionSource.Authority, new MentionSource("early"), new MentionSource("organisation-cue"), MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, cues, MentionSource.GivenName, MentionSource.Gazetteer],
             policy.Order.ToArray());
         var cue = M(0, 10, cues, NameLabel.PER);
         Assert.Equal([cue], policy.Resolve([M(0, 6, MentionSource.Gazetteer), cue]).ToArray());
         Assert.Equal([M(0, 6, MentionSource.Model)], policy.Resolve([M(0, 6, MentionSource.Model), cue]).ToArray());
+    }
+
+    /// <summary>A lone listed given name is the weakest person evidence: it beats only a bare gazetteer
+    /// match ("Roza" beside Roza, RU), never the model or place evidence.</summary>
+    [Fact]
+    public void A_lone_given_name_beats_only_a_bare_gazetteer_match()
+    {
+        var given = M(0, 4, MentionSource.GivenName, NameLabel.PER);
+        Assert.Equal([given], NamePrecedence.Default.Resolve([M(0, 4, MentionSource.Gazetteer), given]).ToArray());
+        Assert.Equal([M(0, 4, MentionSource.Model)], NamePrecedence.Default.Resolve([M(0, 4, MentionSource.Model), given]).ToArray());
+        Assert.Equal([M(0, 4, MentionSource.PlaceEvidence)], NamePrecedence.Default.Resolve([M(0, 4, MentionSource.PlaceEvidence), given]).ToArray());
     }
 
     /// <summary>The cascade of issue 10: a titled or kin-marked name is a person whatever the model or

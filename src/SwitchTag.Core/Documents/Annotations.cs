@@ -31,6 +31,10 @@ public readonly record struct MentionSource(string Name)
     /// case ending on a town, a multi-word name matched whole).</summary>
     public static readonly MentionSource PlaceEvidence = new("place-evidence");
 
+    /// <summary>A capitalised word that the name lists know as a given name or short form ("Staś",
+    /// "Beto") and no ordinary word of its language, said alone: a person the model missed.</summary>
+    public static readonly MentionSource GivenName = new("given-name");
+
     public override string ToString() => Name;
 }
 

@@ -1,5 +1,6 @@
 using System.Collections.Frozen;
 using System.Text;
+using SwitchTag.Core.Languages;
 
 namespace SwitchTag.Lexicon.NameLists;
 
@@ -17,6 +18,14 @@ public sealed class NameVariants
     private readonly FrozenDictionary<string, FrozenSet<int>> _groupsOf;
     private readonly FrozenSet<string> _diminutiveEndings;
     private readonly (string Feminine, string Masculine)[] _feminineEndings;
+
+    /// <summary>Every given name and short form the hypocoristics and equivalents lists hold, folded as
+    /// written and stemmed in its list's language: an exact check, unlike the spelling keys.</summary>
+    public FrozenSet<string> ListedForms { get; private init; } = FrozenSet<string>.Empty;
+
+    /// <summary>The short forms of the hypocoristics lists (not their full names), folded as written and
+    /// stemmed in the list's language: family talk ("Staś", "Jurek"), which places are seldom named after.</summary>
+    public FrozenSet<string> ShortForms { get; private init; } = FrozenSet<string>.Empty;
 
     private NameVariants((string, string)[] letters, (string, string, bool)[] folds,
         FrozenDictionary<string, FrozenSet<string>> fullNamesOf, FrozenDictionary<string, FrozenSet<int>> groupsOf, FrozenSet<string> diminutiveEndings,
@@ -160,18 +169,29 @@ public sealed class NameVariants
         var partial = new NameVariants(letters, folds, FrozenDictionary<string, FrozenSet<string>>.Empty, FrozenDictionary<string, FrozenSet<int>>.Empty, FrozenSet<string>.Empty, []);
 
         var fullNamesOf = new Dictionary<string, HashSet<string>>(StringComparer.Ordinal);
+        var listed = new HashSet<string>(StringComparer.Ordinal);
+        var shortForms = new HashSet<string>(StringComparer.Ordinal);
         // Each form also under its stem in its language, so a case form stemmed the same way meets it
         // (Polish vocative "Irenko" and "Irenka" share the stem "irenk").
         foreach (var (language, folder) in LexiconTsv.Languages(lexiconDir))
             foreach (var row in LexiconTsv.Rows(Path.Combine(folder, "hypocoristics.tsv")).Where(r => r.Length > 1))
             {
                 var full = partial.Key(row[0]);
+                foreach (var form in LexiconTsv.Alternatives(row[1]))
+                {
+                    shortForms.Add(NameFolding.Fold(form));
+                    shortForms.Add(NameFolding.Stem(form, language));
+                }
                 foreach (var form in LexiconTsv.Alternatives(row[1]).Append(row[0]))
+                {
+                    listed.Add(NameFolding.Fold(form));
+                    listed.Add(NameFolding.Stem(form, language));
                     foreach (var key in new[] { partial.Key(form), partial.Key(NameFolding.Stem(form, language)) })
                     {
                         if (!fullNamesOf.TryGetValue(key, out var set)) fullNamesOf[key] = set = [];
                         set.Add(full);
                     }
+                }
             }
 
         // Endings keyed like the names (romanised, folded), so "очка" meets a romanised Cyrillic key.
@@ -195,7 +215,10 @@ public sealed class NameVariants
             foreach (var cell in row)
             {
                 int colon = cell.IndexOf(':');
-                var key = partial.Key(colon >= 0 ? cell[(colon + 1)..] : cell);
+                var name = colon >= 0 ? cell[(colon + 1)..] : cell;
+                listed.Add(NameFolding.Fold(name));
+                if (colon > 0 && LanguageCode.TryParse(cell[..colon], out var language)) listed.Add(NameFolding.Stem(name, language));
+                var key = partial.Key(name);
                 if (key.Length == 0) continue;
                 if (!groupsOf.TryGetValue(key, out var set)) groupsOf[key] = set = [];
                 set.Add(group);
@@ -204,6 +227,10 @@ public sealed class NameVariants
         }
         return new NameVariants(letters, folds,
             fullNamesOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(StringComparer.Ordinal), StringComparer.Ordinal),
-            groupsOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(), StringComparer.Ordinal), endings, feminineEndings);
+            groupsOf.ToFrozenDictionary(p => p.Key, p => p.Value.ToFrozenSet(), StringComparer.Ordinal), endings, feminineEndings)
+        {
+            ListedForms = listed.Where(f => f.Length > 0).ToFrozenSet(StringComparer.Ordinal),
+            ShortForms = shortForms.Where(f => f.Length > 0).ToFrozenSet(StringComparer.Ordinal),
+        };
     }
 }

@@ -28,6 +28,14 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
 
     public bool IsFirstName(string folded) => FirstNames.Contains(folded);
 
+    /// <summary>Listed given names that are also ordinary words of a language, as "code\tfolded word"
+    /// (given-names-also-words.tsv, generated from the language-ID sentences).</summary>
+    public FrozenSet<string> OrdinaryWordNames { get; init; } = FrozenSet<string>.Empty;
+
+    /// <summary>Whether a folded given name is also an ordinary word of <paramref name="language"/>
+    /// ("will" in English, "rosario" in Spanish): said alone it is no evidence of a person there.</summary>
+    public bool IsOrdinaryWord(string folded, Core.Languages.LanguageCode language) => OrdinaryWordNames.Contains(language.Code + "\t" + folded);
+
     /// <summary>Folded phrases (one to three words) that come before a woman's birth name: "née",
     /// "geb.", "z domu", "урождённая" (Languages/*/birth-name-markers.txt).</summary>
     public FrozenSet<string> BirthNameMarkers { get; init; } = FrozenSet<string>.Empty;
@@ -111,6 +119,8 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         return new PersonCues(Frozen(titles), Frozen(kinship), Frozen(first), Frozen(abbreviations))
         {
             BirthNameMarkers = Frozen(birthNames),
+            OrdinaryWordNames = Frozen([.. LexiconTsv.Rows(Path.Combine(lexiconDir, "given-names-also-words.tsv"))
+                .Where(r => r.Length > 1).Select(r => r[0].Trim() + "\t" + NameFolding.Fold(r[1].Trim()))]),
             MarriageWords = Frozen([.. marriage.Where(w => !w.EndsWith('*')).Select(NameFolding.Fold)]),
             MarriagePrefixes = [.. marriage.Where(w => w.EndsWith('*')).Select(w => NameFolding.Fold(w[..^1])).Where(w => w.Length > 0).Distinct()],
             NamingPhrases = [.. LexiconTsv.Languages(lexiconDir)

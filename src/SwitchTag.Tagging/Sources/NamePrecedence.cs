@@ -12,8 +12,8 @@ namespace SwitchTag.Tagging.Sources;
 /// capitalised run around a head word: "Fiação Santa Rita" is never Santa Rita, BR); person cues (a titled or
 /// kin-marked name is a person: "Mr. Roth" is never Roth, DE); place evidence (a gazetteer place after
 /// a locative preposition, with a case ending, or a multi-word name matched whole: "w Tarnowie" is never
-/// a person); the model (it has seen the context: "Jordan Peterson" is a person, not the country); the
-/// gazetteer without evidence. A new source takes its place with <see cref="InsertBefore"/> or
+/// a person); the model (it has seen the context: "Jordan Peterson" is a person, not the country); a
+/// listed given name said alone (the model's misses: "Staś", "Beto"); the gazetteer without evidence. A new source takes its place with <see cref="InsertBefore"/> or
 /// <see cref="InsertAfter"/>.
 /// The one exception the policy makes (<see cref="Yields"/>): place evidence gives way to a person the
 /// model found over it. A preposition or case ending puts a name in a place far less surely than a
@@ -44,7 +44,7 @@ public sealed class NamePrecedence
     }
 
     public static NamePrecedence Default { get; } =
-        new([MentionSource.Authority, Organisations.OrganisationCueSource.Organisation, MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, MentionSource.Gazetteer], [MentionSource.Authority],
+        new([MentionSource.Authority, Organisations.OrganisationCueSource.Organisation, MentionSource.Cue, MentionSource.PlaceEvidence, MentionSource.Model, MentionSource.GivenName, MentionSource.Gazetteer], [MentionSource.Authority],
             [new Yield(MentionSource.PlaceEvidence, MentionSource.Model, NameLabel.PER)]);
 
     /// <summary>Highest rank first.</summary>

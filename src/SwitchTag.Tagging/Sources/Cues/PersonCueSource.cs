@@ -18,8 +18,10 @@ namespace SwitchTag.Tagging.Sources.Cues;
 /// so is a name set off by commas after a kinship word ("My mother, Assunta, she made the bread"),
 /// unless the gazetteer reaches over it (a list of towns after "my father,") and it is no listed
 /// first name said alone ("My mother, Sofia, was from Kavala").</summary>
-public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Lexicon.Gazetteer gazetteer) : INameSource
+public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Lexicon.Gazetteer gazetteer, NameVariants? variants = null) : INameSource
 {
+    private readonly NameVariants _variants = variants ?? NameVariants.Empty;
+
     private const int MaxNameWords = 3;
 
     public MentionSource Source => MentionSource.Cue;
@@ -128,10 +130,14 @@ public sealed class PersonCueSource(PersonCues cues, NotPlaceWords notPlaces, Le
     private static string WordAt(string text, (int Start, int End) word) => text[word.Start..word.End];
 
     /// <summary>A case form of a town ("nagyapám Debrecenbe költözött": my grandfather moved to
-    /// Debrecen): the kinship word there is the subject, not a mark on the name.</summary>
+    /// Debrecen): the kinship word there is the subject, not a mark on the name. A listed given name or
+    /// short form is the name the kinship word marks ("ciocia Rózia", whatever town "Rózia" inflects).</summary>
     private bool InflectedTown((int Start, int End) word, string text, ImmutableArray<LanguageSpan> spans)
     {
-        var candidates = gazetteer.Candidates(WordAt(text, word), SpanLanguage.At(spans, word.Start));
+        var language = SpanLanguage.At(spans, word.Start);
+        var said = WordAt(text, word);
+        if (FirstName(text, word) || _variants.KnowsGivenName(said) || _variants.KnowsGivenName(NameFolding.Stem(said, language))) return false;
+        var candidates = gazetteer.Candidates(said, language);
         return candidates.Count > 0 && candidates.All(c => c.Kind == MatchKind.Inflected)
             && candidates[0].Place.Population >= Lexicon.Gazetteer.VillagePopulation;
     }
