@@ -525,6 +525,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         JoinBirthNames(mentions, held, groups, turns, full);
         JoinMarriedNames(mentions, groups, turns, full);
         JoinGivenNames(mentions, groups, turns);
+        JoinNamesWentBy(mentions, groups, turns);
 
         foreach (var l in lone)
         {
@@ -710,13 +711,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (self.Value)
             {
                 if (turn.Speaker is null) continue;
-                if (!speakerHeading.TryGetValue(turn.Speaker, out target))
-                {
-                    var speaker = SpeakerKeys(turn.Speaker);
-                    var named = groups.Where(g => g.Label == NameLabel.PER && g.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
-                        && speaker.IsSubsetOf(w.Select(x => lexicon.Key(x, LanguageCode.Undetermined))))).ToList();
-                    speakerHeading[turn.Speaker] = target = named is [var one] ? one : null;
-                }
+                target = SpeakerHeading(turn.Speaker, mentions, groups, speakerHeading);
             }
             else
             {
@@ -729,6 +724,46 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             foreach (int k in own.Members) groupOf[k] = target;
             oneWord.Remove(target);
             MergeInto(own, target, groups);
+        }
+    }
+
+    /// <summary>The heading naming a speaker (every word of the label a word of one of its full names),
+    /// when exactly one does; looked up once per label.</summary>
+    private Group? SpeakerHeading(string label, ImmutableArray<Mention> mentions, List<Group> groups, Dictionary<string, Group?> cache)
+    {
+        if (cache.TryGetValue(label, out var found) && (found is null || groups.Contains(found))) return found;
+        var speaker = SpeakerKeys(label);
+        var named = groups.Where(g => g.Label == NameLabel.PER && g.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
+            && speaker.IsSubsetOf(w.Select(x => lexicon.Key(x, LanguageCode.Undetermined))))).ToList();
+        return cache[label] = named is [var one] ? one : null;
+    }
+
+    /// <summary>A name said right after a went-by phrase (Languages/*/naming-phrases.tsv: "In Melbourne
+    /// I was Angela Georgiou", "For two years I was Marysia Kwiatkowska") is one the speaker went by: its
+    /// heading joins the speaker's, when every word it holds is a word of that name (so no other
+    /// person it was grouped with comes along). Searched at a heading's first
+    /// <see cref="FirstMentionsSearched"/> mentions.</summary>
+    private void JoinNamesWentBy(ImmutableArray<Mention> mentions, List<Group> groups, ImmutableArray<Turn> turns)
+    {
+        var speakerHeading = new Dictionary<string, Group?>(StringComparer.Ordinal);
+        foreach (var own in groups.Where(g => g.Label == NameLabel.PER).ToList())
+        {
+            if (!groups.Contains(own)) continue;
+            foreach (int i in own.Members.Order().Take(FirstMentionsSearched).ToList())
+            {
+                var m = mentions[i];
+                var turn = turns[m.Turn.Index];
+                if (turn.Speaker is null) continue;
+                var text = turn.Text;
+                if (!lexicon.SpeakerWentBy(text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart], text[m.CharEnd..Math.Min(text.Length, m.CharEnd + NamingChars)])) continue;
+                var target = SpeakerHeading(turn.Speaker, mentions, groups, speakerHeading);
+                if (target is null || target == own) break;
+                var said = Words(m.Text);
+                if (!own.Members.All(k => Words(mentions[k].Text).All(x => said.Any(w => SameNameWord(w, m.Language, x, mentions[k].Language)
+                        || SameSurname(w, m.Language, x, mentions[k].Language))))) break;
+                MergeInto(own, target, groups);
+                break;
+            }
         }
     }
 

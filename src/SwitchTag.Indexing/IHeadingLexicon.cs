@@ -52,6 +52,10 @@ public interface IHeadingLexicon
     /// said before, null when there is none.</summary>
     bool? NamingPhraseAround(string before, string after) => null;
 
+    /// <summary>Whether the text before a name ends with a phrase saying the speaker went by that name
+    /// ("I was Angela Georgiou"), and the text after it does not make it a possessive.</summary>
+    bool SpeakerWentBy(string before, string after) => false;
+
     /// <summary>Whether one of the words speaks of a marriage ("married", "husband", "férjem").</summary>
     bool SpeaksOfMarriage(IEnumerable<string> words) => false;
 

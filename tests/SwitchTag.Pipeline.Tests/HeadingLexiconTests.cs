@@ -246,4 +246,22 @@ public class HeadingLexiconTests
         var result = new HeadingBuilder(Loaded.Value.Lexicon).Build([mention], [new TimeRange(Timecode.Zero, new Timecode(500))], [turn]);
         Assert.Equal(NameLabel.PER, Assert.Single(result.Headings).Label);
     }
+
+    /// <summary>Went-by phrases of Languages/*/naming-phrases.tsv: a wartime or married name said
+    /// right after "I was" / Polish "byłam" is the narrator's (common usage, known from memory); a
+    /// possessive after the name, or a comma between, names no alias.</summary>
+    [Fact]
+    public void A_name_the_speaker_says_she_went_by_joins_her_heading()
+    {
+        const string text = "My name is Barbara Zielińska. For two years I was Marysia Kwiatkowska, a niece from Radom. Byłam Marysią Kwiatkowską.";
+        var told = BuildText(text, [("Barbara Zielińska", English), ("Marysia Kwiatkowska", English), ("Marysią Kwiatkowską", Polish)], "Barbara");
+        Assert.True(told.Headings.Length == 1, string.Join(" / ", told.Headings.Select(h => string.Join(", ", h.Variants))));
+        var heading = told.Headings[0];
+        Assert.Equal(3, heading.Mentions.Length);
+
+        const string possessive = "My name is Barbara Zielińska. I was Marysia Kwiatkowska's friend.";
+        Assert.Equal(2, BuildText(possessive, [("Barbara Zielińska", English), ("Marysia Kwiatkowska", English)], "Barbara").Headings.Length);
+        const string comma = "My name is Barbara Zielińska. Who was there? I was, Marysia Kwiatkowska was.";
+        Assert.Equal(2, BuildText(comma, [("Barbara Zielińska", English), ("Marysia Kwiatkowska", English)], "Barbara").Headings.Length);
+    }
 }

@@ -66,6 +66,21 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
     /// with whether they name the speaker ("they called me") or the person named before ("we called him").</summary>
     public ImmutableArray<(string[] Words, bool Self)> NamingPhrases { get; init; } = [];
 
+    /// <summary>Folded phrases after which a name, one word or full, is one the speaker went by ("I
+    /// was Angela Georgiou", "byłam Marysią Kwiatkowską"): naming-phrases.tsv rows of kind went-by.</summary>
+    public ImmutableArray<string[]> WentByPhrases { get; init; } = [];
+
+    /// <summary>Whether the text right before a name ends with a went-by phrase and one space, the
+    /// name not being followed by a possessive ("I was Rachel's friend" names no alias).</summary>
+    public bool SpeakerWentBy(string before, string after)
+    {
+        // One space between phrase and name, no comma: "I was, Anna was" names nobody.
+        if (WentByPhrases.IsEmpty || before.Length < 2 || before[^1] != ' ' || !char.IsLetter(before[^2])
+            || after.StartsWith("'s", StringComparison.Ordinal) || after.StartsWith("’s", StringComparison.Ordinal)) return false;
+        var prior = NameWords.Split(NameFolding.Fold(before)).Select(w => w.Folded).ToList();
+        return WentByPhrases.Any(words => prior.Count >= words.Length && prior.Skip(prior.Count - words.Length).SequenceEqual(words));
+    }
+
     /// <summary>Most words of the clause after a name that closes with a naming phrase ("Terka, my father called her").</summary>
     private const int NamingReach = 5;
 
@@ -125,9 +140,14 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
             MarriagePrefixes = [.. marriage.Where(w => w.EndsWith('*')).Select(w => NameFolding.Fold(w[..^1])).Where(w => w.Length > 0).Distinct()],
             NamingPhrases = [.. LexiconTsv.Languages(lexiconDir)
                 .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "naming-phrases.tsv")))
-                .Where(r => r.Length > 1)
+                .Where(r => r.Length > 1 && r[1].Trim() is "self" or "other")
                 .Select(r => (Words: NameWords.Split(NameFolding.Fold(r[0])).Select(w => w.Folded).ToArray(), Self: r[1].Trim() == "self"))
                 .Where(p => p.Words.Length > 0)],
+            WentByPhrases = [.. LexiconTsv.Languages(lexiconDir)
+                .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "naming-phrases.tsv")))
+                .Where(r => r.Length > 1 && r[1].Trim() == "went-by")
+                .Select(r => NameWords.Split(NameFolding.Fold(r[0])).Select(w => w.Folded).ToArray())
+                .Where(w => w.Length > 0)],
         };
     }
 
