@@ -470,6 +470,22 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var loneByKey = new Dictionary<string, Group>(StringComparer.Ordinal);
         // The full names a one-word name may belong to, worked out once per distinct text and language.
         var ownersOf = new Dictionary<(string, LanguageCode), List<Group>>();
+        var relations = new Dictionary<Group, string?>();
+        string? RelationOf(Group g)
+        {
+            if (!relations.TryGetValue(g, out var relation))
+                relations[g] = relation = g.Members.Order().Take(FirstMentionsSearched).Select(k => RelationBefore(mentions[k], turns)).FirstOrDefault(r => r is not null);
+            return relation;
+        }
+        // A father and a son of one given name: "My father, Stanisław Zieliński ... I had one brother.
+        // Stanisław" names two persons, and so does a short form said beside the brother ("Staś").
+        bool RelationsDiffer(int i, Group owner, Mention m)
+        {
+            if (RelationOf(owner) is not { } theirs) return false;
+            if (RelationBefore(m, turns) is { } own && own != theirs) return true;
+            return lone.Any(l => l.Group.Members.Count > 0 && lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
+                && RelationOf(l.Group) is { } other && other != theirs);
+        }
         foreach (int i in single)
         {
             var m = mentions[i];
@@ -494,6 +510,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
                 ownersOf[(m.Text, m.Language)] = owners;
             }
+            if (owners.Count == 1 && RelationsDiffer(i, owners[0], m)) owners = [];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
             if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
                     && !lexicon.WomansAndMansForm(l.Name, m.Text)) is { Group: not null } kin)
@@ -533,7 +550,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             var probable = full.Where(f => lexicon.EquivalentGivenNames(f.First, l.Name)).Select(f => f.Group)
                 .Concat(lone.Where(o => o.Group != l.Group && o.Group.Members.Count > 0 && lexicon.EquivalentGivenNames(o.Name, l.Name)).Select(o => o.Group))
                 .Distinct().ToList();
-            if (probable is [var only] && full.Any(f => f.Group == only) && Tied(l.Group, only, mentions, turns, persons ??= PersonPositions(mentions), TieReachWords))
+            if (probable is [var only] && full.Any(f => f.Group == only) && !(RelationOf(only) is { } theirs && RelationOf(l.Group) is { } own && own != theirs)
+                && Tied(l.Group, only, mentions, turns, persons ??= PersonPositions(mentions), TieReachWords))
             {
                 MergeInto(l.Group, only, groups);
                 continue;
@@ -736,6 +754,27 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var named = groups.Where(g => g.Label == NameLabel.PER && g.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
             && speaker.IsSubsetOf(w.Select(x => lexicon.Key(x, LanguageCode.Undetermined))))).ToList();
         return cache[label] = named is [var one] ? one : null;
+    }
+
+    /// <summary>Words that join two names, not a kinship word to its name ("my father and Stanisław"):
+    /// "and" in the languages of the kinship lists.</summary>
+    private static readonly HashSet<string> Conjunctions = new(StringComparer.Ordinal) { "and", "und", "i", "a", "y", "e", "et", "en", "és", "и", "та", "oraz", "och", "og", "ve", "ir", "un", "και" };
+
+    /// <summary>The relation a kinship word right before a name gives it ("my brother Yasha", "I had one
+    /// brother. Stanisław", "My father was Yankl Rabinovich": one lower-case word between at most), or null
+    /// (also after a possessive: "my father's brother, Max Brauner").</summary>
+    private string? RelationBefore(Mention m, ImmutableArray<Turn> turns)
+    {
+        var before = Words(turns[m.Turn.Index].Text[Math.Max(0, m.CharStart - MarkerChars)..m.CharStart]);
+        for (int k = before.Length - 1; k >= Math.Max(0, before.Length - 2); k--)
+        {
+            var word = before[k].Trim(',', ':', '.', ';', '—', '-');
+            if (word.Length == 0) return null;
+            // "my mother's brother, Joaquim Sousa" is an uncle: a relation of someone else is none here.
+            if (lexicon.KinshipRole(word) is { } relation) return k > 0 && (before[k - 1].EndsWith("'s", StringComparison.Ordinal) || before[k - 1].EndsWith("’s", StringComparison.Ordinal)) ? null : relation;
+            if (k < before.Length - 1 || !char.IsLower(word[0]) || before[k].Length != word.Length || Conjunctions.Contains(word)) return null;
+        }
+        return null;
     }
 
     /// <summary>A name said right after a went-by phrase (Languages/*/naming-phrases.tsv: "In Melbourne

@@ -47,6 +47,9 @@ public interface IHeadingLexicon
     /// <summary>Whether a word is a kinship word of some language ("cousin", "ciocia", "Tante").</summary>
     bool IsKinshipWord(string word) => false;
 
+    /// <summary>The relation a kinship word names ("father": parent, "brat": sibling), or null.</summary>
+    string? KinshipRole(string word) => null;
+
     /// <summary>Whether a naming phrase stands right before a one-word name or just after it ("they
     /// called me Litsa", "Takis, we called him"): true when it names the speaker, false when the person
     /// said before, null when there is none.</summary>

@@ -57,6 +57,8 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public bool IsKinshipWord(string word) => _lists.Cues.IsKinship(word);
 
+    public string? KinshipRole(string word) => _lists.Cues.KinshipRole(word);
+
     public bool? NamingPhraseAround(string before, string after) => _lists.Cues.NamingPhraseAround(before, after);
 
     public bool SpeakerWentBy(string before, string after) => _lists.Cues.SpeakerWentBy(before, after);

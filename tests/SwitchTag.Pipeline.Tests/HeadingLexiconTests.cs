@@ -264,4 +264,20 @@ public class HeadingLexiconTests
         const string comma = "My name is Barbara Zielińska. Who was there? I was, Marysia Kwiatkowska was.";
         Assert.Equal(2, BuildText(comma, [("Barbara Zielińska", English), ("Marysia Kwiatkowska", English)], "Barbara").Headings.Length);
     }
+
+    /// <summary>Relations of Languages/*/kinship.tsv (the glosses: father and ojciec a parent, brother and
+    /// brat a sibling): a son named like his father is another person, and so is the short form said
+    /// of him (Staś for Stanisław, common Polish usage known from memory); "my mother's brother" is no
+    /// brother of the speaker, so "my uncle Joaquim" is the same man.</summary>
+    [Fact]
+    public void A_father_and_a_brother_of_one_given_name_are_two_persons()
+    {
+        const string text = "My father, Stanisław Zieliński, was a tailor. I had one brother. Stanisław, like Tata, but at home he was Staś.";
+        var told = BuildText(text, [("Stanisław Zieliński", English), ("Stanisław", English), ("Staś", English)], "Barbara");
+        Assert.Equal(2, told.Headings.Length);
+        Assert.Equal(["Stanisław", "Staś"], told.Headings.Single(h => h.Name != "Stanisław Zieliński").Variants.Order(StringComparer.Ordinal).ToArray());
+
+        const string uncle = "My uncle, my mother's brother, Joaquim Sousa, had a boat. My uncle Joaquim took me fishing.";
+        Assert.Single(BuildText(uncle, [("Joaquim Sousa", English), ("Joaquim", English)], "Manuel").Headings);
+    }
 }

@@ -18,6 +18,15 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
     /// <summary>Whether a word, as written or capitalised at a sentence start, is a kinship word.</summary>
     public bool IsKinship(string word) => In(Kinship, word);
 
+    /// <summary>Kinship word (as written) to the relation it names, from the first word of its English
+    /// gloss, brother and sister read as sibling ("ojciec": parent, "brat": sibling).</summary>
+    public FrozenDictionary<string, string> KinshipRoles { get; init; } = FrozenDictionary<string, string>.Empty;
+
+    /// <summary>The relation a kinship word names, as written or capitalised at a sentence start; null
+    /// for no kinship word or one whose gloss names no relation.</summary>
+    public string? KinshipRole(string word) =>
+        KinshipRoles.TryGetValue(word, out var role) || (word.Length > 0 && char.IsUpper(word[0]) && KinshipRoles.TryGetValue(Lowered(word), out role)) ? role : null;
+
     private static bool In(FrozenSet<string> words, string word) =>
         words.Contains(word) || (word.Length > 0 && char.IsUpper(word[0]) && words.Contains(Lowered(word)));
 
@@ -116,12 +125,15 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         var kinship = new HashSet<string>(StringComparer.Ordinal);
         var first = new HashSet<string>(StringComparer.Ordinal);
         var abbreviations = new HashSet<string>(StringComparer.Ordinal);
+        var roles = new Dictionary<string, string>(StringComparer.Ordinal);
         foreach (var (_, folder) in LexiconTsv.Languages(lexiconDir))
         {
             var titleForms = Forms(Path.Combine(folder, "titles.tsv")).ToList();
             titles.UnionWith(titleForms.Select(f => f.TrimEnd('.')));
             abbreviations.UnionWith(titleForms.Where(f => f.EndsWith('.')).Select(f => f.TrimEnd('.')));
             kinship.UnionWith(Forms(Path.Combine(folder, "kinship.tsv")));
+            foreach (var row in LexiconTsv.Rows(Path.Combine(folder, "kinship.tsv")).Where(r => r.Length > 2))
+                if (Relation(row[2]) is { } relation) roles.TryAdd(row[0].Trim(), relation);
             first.UnionWith(Forms(Path.Combine(folder, "first-names.tsv")).Select(NameFolding.Fold));
         }
         var birthNames = LexiconTsv.Languages(lexiconDir)
@@ -134,6 +146,7 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         return new PersonCues(Frozen(titles), Frozen(kinship), Frozen(first), Frozen(abbreviations))
         {
             BirthNameMarkers = Frozen(birthNames),
+            KinshipRoles = roles.ToFrozenDictionary(StringComparer.Ordinal),
             OrdinaryWordNames = Frozen([.. LexiconTsv.Rows(Path.Combine(lexiconDir, "given-names-also-words.tsv"))
                 .Where(r => r.Length > 1).Select(r => r[0].Trim() + "\t" + NameFolding.Fold(r[1].Trim()))]),
             MarriageWords = Frozen([.. marriage.Where(w => !w.EndsWith('*')).Select(NameFolding.Fold)]),
@@ -149,6 +162,14 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
                 .Select(r => NameWords.Split(NameFolding.Fold(r[0])).Select(w => w.Folded).ToArray())
                 .Where(w => w.Length > 0)],
         };
+    }
+
+    /// <summary>The relation an English gloss names: its first word ("uncle (mother's brother)": uncle),
+    /// brother and sister as sibling; null for a gloss naming none ("romanised forms").</summary>
+    private static string? Relation(string gloss)
+    {
+        var first = gloss.Trim().Split(' ', ',', '(')[0].ToLowerInvariant();
+        return first switch { "brother" or "sister" => "sibling", "romanised" or "" => null, _ => first };
     }
 
     private static FrozenSet<string> Frozen(HashSet<string> set) => set.Where(s => s.Length > 0).ToFrozenSet(StringComparer.Ordinal);
