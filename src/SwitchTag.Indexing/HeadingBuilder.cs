@@ -236,12 +236,14 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         public HashSet<Group> Possible { get; } = [];
     }
 
-    /// <summary>A candidate's score: log10 of its population (size is the prior), plus 1 when the name
-    /// said is the place's own name rather than an alternate, plus 3 times the share of the interview's
+    /// <summary>A candidate's score: log10 of its population (size is the prior), plus 0.5 when the name
+    /// said is the place's own name rather than an alternate (so a namesake wins over a place more than
+    /// about three times its size only by other evidence: "Rhodes" is Ródos, GR, 56,000 people, not the
+    /// Sydney suburb Rhodes, 12,000, whose own name it is), plus 3 times the share of the interview's
     /// unambiguous places lying in its country. So "Paris" beside Dallas and Houston is the Texan one, but
     /// one American town elsewhere in the interview does not turn "Vienna" into Vienna, Virginia.</summary>
     private static double PlaceScore(PlaceLink p, bool ownName, Dictionary<string, int> evidence, int evidenceTotal) =>
-        Math.Log10(Math.Max(1, p.Population)) + (ownName ? 1 : 0) +
+        Math.Log10(Math.Max(1, p.Population)) + (ownName ? 0.5 : 0) +
         (evidenceTotal == 0 ? 0 : 3.0 * evidence.GetValueOrDefault(p.Country) / evidenceTotal);
 
     private string Key(string name, LanguageCode language) => lexicon.Key(name, language);
