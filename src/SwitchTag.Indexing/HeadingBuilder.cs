@@ -164,7 +164,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     private string? ReviewReason(Mention m, string key, ImmutableArray<PlaceLink> places, PlaceLink? respelled, HashSet<NameLabel> labelsOfSurface,
         HashSet<string> lowerWords, string turnText)
     {
-        bool open = m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer || m.Source == MentionSource.GivenName;
+        bool open = LabelVote.Open(m);
         if (open && m.Label == NameLabel.LOC && respelled is not null)
             return $"\"{m.Text}\" is accented otherwise than the only places of that name ({respelled.Name}, {respelled.Country}): another name, perhaps a person's";
         if (open && m.Label == NameLabel.LOC && !places.IsEmpty && !m.Text.Any(char.IsWhiteSpace) && m.Text.All(c => WritingScripts.Of(c) is WritingScript.None or WritingScript.Latin)
@@ -481,7 +481,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         }
         // A father and a son of one given name: "My father, Stanisław Zieliński ... I had one brother.
         // Stanisław" names two persons, and so does a short form said beside the brother ("Staś").
-        bool RelationsDiffer(int i, Group owner, Mention m)
+        bool RelationsDiffer(Group owner, Mention m)
         {
             if (RelationOf(owner) is not { } theirs) return false;
             if (RelationBefore(m, turns) is { } own && own != theirs) return true;
@@ -512,7 +512,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
                 ownersOf[(m.Text, m.Language)] = owners;
             }
-            if (owners.Count == 1 && RelationsDiffer(i, owners[0], m)) owners = [];
+            if (owners.Count == 1 && RelationsDiffer(owners[0], m)) owners = [];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
             if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
                     && !lexicon.WomansAndMansForm(l.Name, m.Text)) is { Group: not null } kin)

@@ -79,7 +79,7 @@ internal static class LabelVote
         lexicon.SameGivenName(given.Name, given.Language, m.Text, m.Language);
 
     /// <summary>Whether a later stage may change the mention's label.</summary>
-    private static bool Open(Mention m) => m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer || m.Source == MentionSource.GivenName;
+    internal static bool Open(Mention m) => m.Source == MentionSource.Model || m.Source == MentionSource.Gazetteer || m.Source == MentionSource.GivenName;
 
     private static double Weight(Mention m, ImmutableArray<PlaceLink> places)
     {

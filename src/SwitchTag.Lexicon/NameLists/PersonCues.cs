@@ -86,9 +86,15 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         // One space between phrase and name, no comma: "I was, Anna was" names nobody.
         if (WentByPhrases.IsEmpty || before.Length < 2 || before[^1] != ' ' || !char.IsLetter(before[^2])
             || after.StartsWith("'s", StringComparison.Ordinal) || after.StartsWith("’s", StringComparison.Ordinal)) return false;
-        var prior = NameWords.Split(NameFolding.Fold(before)).Select(w => w.Folded).ToList();
-        return WentByPhrases.Any(words => prior.Count >= words.Length && prior.Skip(prior.Count - words.Length).SequenceEqual(words));
+        var prior = FoldedWords(before);
+        return WentByPhrases.Any(words => EndsWith(prior, words));
     }
+
+    private static List<string> FoldedWords(string text) => NameWords.Split(NameFolding.Fold(text)).Select(w => w.Folded).ToList();
+
+    /// <summary>Whether the folded words end with the phrase's words.</summary>
+    private static bool EndsWith(List<string> words, string[] phrase) =>
+        words.Count >= phrase.Length && words.Skip(words.Count - phrase.Length).SequenceEqual(phrase);
 
     /// <summary>Most words of the clause after a name that closes with a naming phrase ("Terka, my father called her").</summary>
     private const int NamingReach = 5;
@@ -99,15 +105,14 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
     public bool? NamingPhraseAround(string before, string after)
     {
         if (NamingPhrases.IsEmpty) return null;
-        var prior = NameWords.Split(NameFolding.Fold(before)).Select(w => w.Folded).ToList();
+        var prior = FoldedWords(before);
         // After the name only when it is set off by a comma and the phrase closes the clause: "Avraham
         // always called me Gretl" names Gretl, and so does "Ilona, my father called her Ilonka".
-        var next = after.StartsWith(',') ? NameWords.Split(NameFolding.Fold(Clause(after[1..]))).Select(w => w.Folded).ToList() : [];
+        var next = after.StartsWith(',') ? FoldedWords(Clause(after[1..])) : [];
         if (next.Count > NamingReach) next = [];
         foreach (var (words, self) in NamingPhrases)
         {
-            if (prior.Count >= words.Length && prior.Skip(prior.Count - words.Length).SequenceEqual(words)) return self;
-            if (next.Count >= words.Length && next.Skip(next.Count - words.Length).SequenceEqual(words)) return self;
+            if (EndsWith(prior, words) || EndsWith(next, words)) return self;
         }
         return null;
     }
@@ -128,13 +133,14 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         var roles = new Dictionary<string, string>(StringComparer.Ordinal);
         foreach (var (_, folder) in LexiconTsv.Languages(lexiconDir))
         {
-            var titleForms = Forms(Path.Combine(folder, "titles.tsv")).ToList();
+            var titleForms = Forms(LexiconTsv.Rows(Path.Combine(folder, "titles.tsv"))).ToList();
             titles.UnionWith(titleForms.Select(f => f.TrimEnd('.')));
             abbreviations.UnionWith(titleForms.Where(f => f.EndsWith('.')).Select(f => f.TrimEnd('.')));
-            kinship.UnionWith(Forms(Path.Combine(folder, "kinship.tsv")));
-            foreach (var row in LexiconTsv.Rows(Path.Combine(folder, "kinship.tsv")).Where(r => r.Length > 2))
+            var kin = LexiconTsv.Rows(Path.Combine(folder, "kinship.tsv")).ToList();
+            kinship.UnionWith(Forms(kin));
+            foreach (var row in kin.Where(r => r.Length > 2))
                 if (Relation(row[2]) is { } relation) roles.TryAdd(row[0].Trim(), relation);
-            first.UnionWith(Forms(Path.Combine(folder, "first-names.tsv")).Select(NameFolding.Fold));
+            first.UnionWith(Forms(LexiconTsv.Rows(Path.Combine(folder, "first-names.tsv"))).Select(NameFolding.Fold));
         }
         var birthNames = LexiconTsv.Languages(lexiconDir)
             .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "birth-name-markers.txt")))
@@ -143,6 +149,13 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         var marriage = LexiconTsv.Languages(lexiconDir)
             .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "marriage-words.txt")))
             .Select(r => r[0].Trim()).Where(w => w.Length > 0).ToList();
+        // naming-phrases.tsv rows: phrase and kind (self, other, went-by), read once for both lists.
+        var phrases = LexiconTsv.Languages(lexiconDir)
+            .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "naming-phrases.tsv")))
+            .Where(r => r.Length > 1)
+            .Select(r => (Words: FoldedWords(r[0]).ToArray(), Kind: r[1].Trim()))
+            .Where(p => p.Words.Length > 0)
+            .ToList();
         return new PersonCues(Frozen(titles), Frozen(kinship), Frozen(first), Frozen(abbreviations))
         {
             BirthNameMarkers = Frozen(birthNames),
@@ -151,16 +164,8 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
                 .Where(r => r.Length > 1).Select(r => r[0].Trim() + "\t" + NameFolding.Fold(r[1].Trim()))]),
             MarriageWords = Frozen([.. marriage.Where(w => !w.EndsWith('*')).Select(NameFolding.Fold)]),
             MarriagePrefixes = [.. marriage.Where(w => w.EndsWith('*')).Select(w => NameFolding.Fold(w[..^1])).Where(w => w.Length > 0).Distinct()],
-            NamingPhrases = [.. LexiconTsv.Languages(lexiconDir)
-                .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "naming-phrases.tsv")))
-                .Where(r => r.Length > 1 && r[1].Trim() is "self" or "other")
-                .Select(r => (Words: NameWords.Split(NameFolding.Fold(r[0])).Select(w => w.Folded).ToArray(), Self: r[1].Trim() == "self"))
-                .Where(p => p.Words.Length > 0)],
-            WentByPhrases = [.. LexiconTsv.Languages(lexiconDir)
-                .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "naming-phrases.tsv")))
-                .Where(r => r.Length > 1 && r[1].Trim() == "went-by")
-                .Select(r => NameWords.Split(NameFolding.Fold(r[0])).Select(w => w.Folded).ToArray())
-                .Where(w => w.Length > 0)],
+            NamingPhrases = [.. phrases.Where(p => p.Kind is "self" or "other").Select(p => (p.Words, Self: p.Kind == "self"))],
+            WentByPhrases = [.. phrases.Where(p => p.Kind == "went-by").Select(p => p.Words)],
         };
     }
 
@@ -176,8 +181,8 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
 
     /// <summary>The first cell of every row as written, one word only (the name splitter's words, so
     /// "o." and prefixes written with a hyphen, "παπα-", are left out).</summary>
-    private static IEnumerable<string> Forms(string path) =>
-        LexiconTsv.Rows(path)
+    private static IEnumerable<string> Forms(IEnumerable<string[]> rows) =>
+        rows
             .Select(r => r[0].Trim())
             .Where(f => f.Length > 0 && NameWords.Split(f) is [var w] && w.Start == 0 && (w.End == f.Length || f[w.End..] == "."));
 }

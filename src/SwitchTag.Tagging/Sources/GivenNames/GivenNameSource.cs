@@ -43,32 +43,27 @@ public sealed class GivenNameSource(PersonCues cues, NotPlaceWords notPlaces, Na
             if (language == German || language == Luxembourgish) continue;
             if (i > 0 && NamesBeside(turnText, words[i - 1], words[i])) continue;
             if (i + 1 < words.Count && NamesBeside(turnText, words[i + 1], words[i])) continue;
-            var text = word.ToString();
-            if (!IsGivenName(text, language)) continue;
-            if (prepositions.Precedes(turnText, start) && !IsShortForm(text, language)) continue;
+            if (!IsGivenName(word.ToString(), language, afterPreposition: prepositions.Precedes(turnText, start))) continue;
             found.Add(new Mention(turn, new CharSpan(start, end), SharedStrings.Of(word), NameLabel.PER, language, Confidence, MentionSource.GivenName));
         }
         return found.ToImmutable();
     }
 
     /// <summary>A listed given name or short form, as said or with a case ending of the span's language
-    /// stripped, that is no ordinary word there and no other kind of capitalised word.</summary>
-    private bool IsGivenName(string word, LanguageCode language)
+    /// stripped, that is no ordinary word there and no other kind of capitalised word. After a locative
+    /// preposition only a short form of family talk counts ("ze Stasiem", with Staś): a full name there may
+    /// be a district or church named after a person ("na Kazimierzu").</summary>
+    private bool IsGivenName(string word, LanguageCode language, bool afterPreposition)
     {
         var folded = NameFolding.Fold(word);
         if (LanguageProfiles.Default.StopWords.Contains(folded) || notPlaces.Words.Contains(folded) || cues.IsMarker(word)
             || cues.IsOrdinaryWord(folded, language))
             return false;
-        if (Listed(folded)) return true;
         var stem = NameFolding.Stem(word, language);
-        return stem != folded && !cues.IsOrdinaryWord(stem, language) && Listed(stem);
+        bool stemCounts = stem != folded && !cues.IsOrdinaryWord(stem, language);
+        if (afterPreposition) return variants.ShortForms.Contains(folded) || stemCounts && variants.ShortForms.Contains(stem);
+        return Listed(folded) || stemCounts && Listed(stem);
     }
-
-    /// <summary>A short form of family talk, as said or stemmed: after a preposition it is a person
-    /// ("ze Stasiem", with Staś), where a full name may be a district or church named after a person
-    /// ("na Kazimierzu").</summary>
-    private bool IsShortForm(string word, LanguageCode language) =>
-        variants.ShortForms.Contains(NameFolding.Fold(word)) || variants.ShortForms.Contains(NameFolding.Stem(word, language));
 
     private bool Listed(string folded) => cues.IsFirstName(folded) || variants.ListedForms.Contains(folded);
 
