@@ -1,6 +1,9 @@
 using System.CommandLine;
 using SwitchTag.Cli;
 
+// Large native blocks go back to the system when freed (NativeHeap).
+NativeHeap.ReturnLargeBlocks();
+
 // Exit codes (DESIGN.md): 0 success, 1 some inputs rejected, 2 usage error.
 var root = new RootCommand("SwitchTag: index people, places and organisations in multilingual interview transcripts, offline.");
 var index = IndexCommand.Create();

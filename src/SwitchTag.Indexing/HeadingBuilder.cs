@@ -5,6 +5,7 @@ using SwitchTag.Core.Ids;
 using SwitchTag.Core.Text;
 using SwitchTag.Core.Time;
 using SwitchTag.Core.Languages;
+using SwitchTag.Core.Pipeline;
 
 namespace SwitchTag.Indexing;
 
@@ -72,6 +73,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         IReadOnlySet<MentionId>? accepted = null)
     {
         int n = mentions.Length;
+        // A long interview's steps below each leave whole-interview arrays and groups behind, which
+        // piled up over the stage (LongTalk): its memory is given back after each.
+        bool isLong = LongTalk.IsLong(turns);
         var keys = new string[n];
         var places = new ImmutableArray<PlaceLink>[n];
         var respelled = new PlaceLink?[n];
@@ -111,10 +115,13 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             review.Add(new ReviewItem(new MentionId(i), reason));
         }
 
+        if (isLong) LongTalk.Compact();
         var groups = new List<Group>();
         GroupPlaces(mentions, keys, places, held, groups);
+        if (isLong) LongTalk.Compact();
         GroupPersons(mentions, keys, held, groups, turns);
         GroupByKey(mentions, keys, held, groups, NameLabel.ORG);
+        if (isLong) LongTalk.Compact();
 
         var headingOf = new HeadingId?[n];
         var headings = new List<Heading>();

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using SwitchTag.Core.Decisions;
 using SwitchTag.Core.Documents;
 using SwitchTag.Core.Ids;
+using SwitchTag.Core.Pipeline;
 using SwitchTag.Core.Stages;
 using SwitchTag.Core.Time;
 using SwitchTag.Indexing.Decisions;
@@ -41,6 +42,8 @@ public sealed class IndexBuilder(IHeadingLexicon lexicon, ImmutableArray<Decisio
         var times = ImmutableArray.CreateRange(decided, m => aligner.Align(turns[m.Turn.Index], m.CharStart, m.CharEnd));
         var grouped = new HeadingBuilder(lexicon, reviewBelow).Build(decided, times, turns, accepted);
         var (finalMentions, finalTimes, headings, headingOutcomes) = decisionStage.ApplyToHeadings(grouped.Mentions.IsDefault ? decided : grouped.Mentions, times, grouped);
+        // The headings' scratch of a long interview is given back before the index is put together (LongTalk).
+        if (LongTalk.IsLong(turns)) LongTalk.Compact();
         var outcomes = mentionOutcomes.Zip(headingOutcomes, (m, h) => m with { Applied = m.Applied + h.Applied }).ToImmutableArray();
 
         var indexed = ImmutableArray.CreateBuilder<IndexedMention>(finalMentions.Length);

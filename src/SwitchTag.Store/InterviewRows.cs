@@ -1,6 +1,5 @@
 using Microsoft.Data.Sqlite;
 using SwitchTag.Core.Documents;
-using SwitchTag.Core.Ids;
 
 namespace SwitchTag.Store;
 
@@ -70,18 +69,21 @@ internal sealed class InterviewRows(SqliteConnection connection, SqliteTransacti
 
     private void WriteMentions(InterviewIndex index)
     {
-        var reasons = index.Review.ToDictionary(r => r.Mention, r => r.Reason);
-        var rank = new Dictionary<MentionId, int>();
+        // A reason and a rank per mention, by index (-1: none): as hash tables keyed by id, a long
+        // turn's 571k mentions put their entries and every resize through the large object heap.
+        var reasons = new string?[index.Mentions.Length];
+        foreach (var item in index.Review) reasons[item.Mention.Index] = item.Reason;
+        var rank = new int[index.Mentions.Length];
+        Array.Fill(rank, -1);
         foreach (var h in index.Headings)
-            for (int r = 0; r < h.Mentions.Length; r++) rank[h.Mentions[r]] = r;
+            for (int r = 0; r < h.Mentions.Length; r++) rank[h.Mentions[r].Index] = r;
         var mention = Command("INSERT INTO mentions VALUES ($i, $m, $t, $cs, $ce, $a, $b, $x, $l, $la, $c, $s, $h, $r, $rv)",
             "$m", "$t", "$cs", "$ce", "$a", "$b", "$x", "$l", "$la", "$c", "$s", "$h", "$r", "$rv");
         for (int i = 0; i < index.Mentions.Length; i++)
         {
             var (m, time, headingId) = index.Mentions[i];
-            var id = new MentionId(i);
             Run(mention, i, m.Turn.Index, m.CharStart, m.CharEnd, time.Start.Milliseconds, time.End.Milliseconds, m.Text, m.Label.ToString(),
-                m.Language.Code, m.Confidence, m.Source.Name, headingId?.Value, rank.TryGetValue(id, out int r) ? r : null, reasons.GetValueOrDefault(id));
+                m.Language.Code, m.Confidence, m.Source.Name, headingId?.Value, rank[i] >= 0 ? rank[i] : null, reasons[i]);
         }
     }
 

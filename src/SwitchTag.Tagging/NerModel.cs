@@ -73,15 +73,20 @@ public sealed class NerModel : IDisposable
     }
 
     /// <summary>Runs the network on a padded batch (rows of all-zero features are padding); the
-    /// buffers may be longer than the batch, whose values are at their start.</summary>
-    public float[] Run(Memory<long> features, Memory<long> pieces, int batch, int words)
+    /// buffers may be longer than the batch, whose values are at their start. With
+    /// <paramref name="releaseArena"/> ONNX Runtime gives the arena's free blocks back to the system
+    /// after the run: the last batch of a long turn, whose blocks would otherwise be held, unused,
+    /// through every later stage and output file.</summary>
+    public float[] Run(Memory<long> features, Memory<long> pieces, int batch, int words, bool releaseArena = false)
     {
         var inputs = new[]
         {
             NamedOnnxValue.CreateFromTensor("features", new DenseTensor<long>(features[..(batch * words * FeatureSlots)], [batch, words, FeatureSlots])),
             NamedOnnxValue.CreateFromTensor("pieces", new DenseTensor<long>(pieces[..(batch * words * PieceEncoder.Slots)], [batch, words, PieceEncoder.Slots])),
         };
-        using var results = _session.Run(inputs);
+        using var options = new RunOptions();
+        if (releaseArena) options.AddRunConfigEntry("memory.enable_memory_arena_shrinkage", "cpu:0");
+        using var results = _session.Run(inputs, _session.OutputNames, options);
         return results[0].AsTensor<float>().ToArray();
     }
 

@@ -84,7 +84,7 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
         for (int i = 0; i < chunks.Count;)
         {
             int count = BatchSize(chunks, i);
-            var logits = RunBatch([words], chunks, i, count, inputs);
+            var logits = RunBatch([words], chunks, i, count, inputs, releaseArena: i + count == chunks.Count);
             for (int b = 0; b < count; b++)
             {
                 var core = Core(logits, chunks[i].Length, b, chunks[i + b]);
@@ -127,7 +127,7 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
     }
 
     /// <summary>Logits of windows <paramref name="i"/> to <paramref name="i"/> + <paramref name="count"/> - 1, padded to the first one's length.</summary>
-    private float[] RunBatch(IReadOnlyList<IReadOnlyList<string>> sentences, List<Chunk> chunks, int i, int count, BatchInputs inputs)
+    private float[] RunBatch(IReadOnlyList<IReadOnlyList<string>> sentences, List<Chunk> chunks, int i, int count, BatchInputs inputs, bool releaseArena = false)
     {
         int width = chunks[i].Length;
         var (features, pieces) = inputs.Take(count * width * model.FeatureSlots, count * width * PieceEncoder.Slots);
@@ -137,7 +137,7 @@ public sealed class SequenceTagger(NerModel model, int window = 256, int overlap
             model.Featurize(sentences[c.Sentence], c.Start, c.Length,
                 features.AsSpan(b * width * model.FeatureSlots), pieces.AsSpan(b * width * PieceEncoder.Slots));
         }
-        return model.Run(features, pieces, count, width);
+        return model.Run(features, pieces, count, width, releaseArena);
     }
 
     /// <summary>The feature and piece ids of one call's batches, reused from batch to batch: a full

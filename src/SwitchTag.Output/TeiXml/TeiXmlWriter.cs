@@ -189,11 +189,17 @@ public sealed class TeiXmlWriter : IInterviewWriter
         w.WriteStartElement("timeline");
         w.WriteAttributeString("unit", "s");
         w.WriteAttributeString("origin", "#" + TeiIds.When(0));
-        var times = index.Transcript.Cues.SelectMany(c => new[] { c.Time.Start.Milliseconds, c.Time.End.Milliseconds })
-            .Concat(index.Turns.SelectMany(t => new[] { t.Time.Start.Milliseconds, t.Time.End.Milliseconds }))
-            .Append(0).Distinct().Order();
-        foreach (long ms in times)
+        // One array of every time, sorted, each written once: no hash set and sort buffers of a long
+        // interview's 400k times.
+        var times = new long[2 * index.Transcript.Cues.Length + 2 * index.Turns.Length + 1];
+        int n = 0;
+        foreach (var c in index.Transcript.Cues) { times[n++] = c.Time.Start.Milliseconds; times[n++] = c.Time.End.Milliseconds; }
+        foreach (var t in index.Turns) { times[n++] = t.Time.Start.Milliseconds; times[n++] = t.Time.End.Milliseconds; }
+        Array.Sort(times);
+        for (int k = 0; k < times.Length; k++)
         {
+            long ms = times[k];
+            if (k > 0 && ms == times[k - 1]) continue;
             w.WriteStartElement("when");
             w.WriteAttributeString("xml", "id", XmlNs, TeiIds.When(ms));
             if (ms != 0)
@@ -216,24 +222,28 @@ public sealed class TeiXmlWriter : IInterviewWriter
         // An empty string marks the content as mixed, so the indenting writer adds no whitespace inside.
         w.WriteString("");
         var anchors = turn.Cues.Skip(1).Select(c => (c.CharStart, Ms: index.Transcript.Cues[c.CueIndex].Time.Start.Milliseconds)).ToList();
-        new UtteranceContent(w, index, turn, anchors, ids, headings).Write(0, turn.Text.Length, TeiInline.Layout(index, turn.Id, mentions));
+        var elements = TeiInline.Layout(index, turn.Id, mentions);
+        new UtteranceContent(w, index, turn, anchors, ids, headings).Write(0, turn.Text.Length, elements, 0, elements.Count);
         w.WriteEndElement();
     }
 
     private sealed class UtteranceContent(XmlWriter w, InterviewIndex index, Turn turn, List<(int At, long Ms)> anchors, TeiIds ids,
         Dictionary<HeadingId, Heading> headings)
     {
-        public void Write(int from, int to, List<TeiInline.Element> inner)
+        /// <summary>The text from <paramref name="from"/> to <paramref name="to"/> with the elements
+        /// <paramref name="lo"/> to <paramref name="hi"/> - 1 of the turn's layout, the ones inside it
+        /// (read in place: no copy of a long turn's elements per level).</summary>
+        public void Write(int from, int to, List<TeiInline.Element> elements, int lo, int hi)
         {
             int pos = from;
-            for (int k = 0; k < inner.Count;)
+            for (int k = lo; k < hi;)
             {
-                var e = inner[k];
+                var e = elements[k];
                 Text(pos, e.Start);
                 int j = k + 1;
-                while (j < inner.Count && inner[j].Start >= e.Start && inner[j].End <= e.End) j++;
+                while (j < hi && elements[j].Start >= e.Start && elements[j].End <= e.End) j++;
                 Open(e);
-                Write(e.Start, e.End, inner.GetRange(k + 1, j - k - 1));
+                Write(e.Start, e.End, elements, k + 1, j);
                 w.WriteEndElement();
                 pos = e.End;
                 k = j;
