@@ -232,6 +232,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
         /// <summary>The place is where the talk was, not the name's own gazetteer entry.</summary>
         public bool PlaceFromContext { get; set; }
+
+        /// <summary>A title the heading's name is shown with: set when two persons are told apart by it
+        /// alone ("Herr Huber", "Frau Huber").</summary>
+        public string? Title { get; set; }
         public List<int> Members { get; } = [];
         public HashSet<Group> Possible { get; } = [];
     }
@@ -471,7 +475,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var lone = new List<(Group Group, string Name, LanguageCode Language)>();
         var loneByKey = new Dictionary<string, Group>(StringComparer.Ordinal);
         // The full names a one-word name may belong to, worked out once per distinct text and language.
-        var ownersOf = new Dictionary<(string, LanguageCode), List<Group>>();
+        var ownersOf = new Dictionary<(string, LanguageCode, char?), List<Group>>();
         var relations = new Dictionary<Group, string?>();
         string? RelationOf(Group g)
         {
@@ -488,10 +492,16 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return lone.Any(l => l.Group.Members.Count > 0 && lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
                 && RelationOf(l.Group) is { } other && other != theirs);
         }
+        // The title (and the sex it gives) of a one-word heading's first titled name ("Herr Huber"):
+        // "Frau Huber" is his wife.
+        var loneTitle = new Dictionary<Group, (string Title, char Sex)>();
+        bool SexDiffers(Group g, char? sex) => sex is { } s && loneTitle.TryGetValue(g, out var own) && own.Sex != s;
         foreach (int i in single)
         {
             var m = mentions[i];
-            if (!ownersOf.TryGetValue((m.Text, m.Language), out var owners))
+            var title = TitleBefore(m, turns);
+            char? sex = title?.Sex;
+            if (!ownersOf.TryGetValue((m.Text, m.Language, sex), out var owners))
             {
                 // A surname after its particles ("Mrs. Van den Berg") is matched by its last word.
                 string word = Words(m.Text)[^1];
@@ -510,12 +520,16 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 }
                 if (owners.Count > 1 && owners.Where(g => full.Any(f => f.Group == g && GivenName(f.First))).ToList() is [var named]) owners = [named];
                 if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
-                ownersOf[(m.Text, m.Language)] = owners;
+                // "Mrs. Hrytsenko" is not Stepan Hrytsenko, nor "Mr. Roth" Eva Roth: a title's sex
+                // against the given names' leaves the one it can be, or none (his wife, her husband).
+                if (sex is { } s)
+                    owners = owners.Where(g => full.Where(f => f.Group == g).Any(f => lexicon.GivenNameSex(f.First) is not { } given || given == s)).ToList();
+                ownersOf[(m.Text, m.Language, sex)] = owners;
             }
             if (owners.Count == 1 && RelationsDiffer(owners[0], m)) owners = [];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
             if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
-                    && !lexicon.WomansAndMansForm(l.Name, m.Text)) is { Group: not null } kin)
+                    && !lexicon.WomansAndMansForm(l.Name, m.Text) && !SexDiffers(l.Group, sex)) is { Group: not null } kin)
             {
                 kin.Group.Members.Add(i);
                 continue;
@@ -523,8 +537,17 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             // Novotná and Novotný share a stem but are a wife and a husband: the later form gets a key of its own.
             string key = loneByKey.TryGetValue(keys[i], out var same) && lone.Any(l => l.Group == same && lexicon.WomansAndMansForm(l.Name, m.Text))
                 ? keys[i] + " " + lexicon.SurnameKey(m.Text, LanguageCode.Undetermined) : keys[i];
+            // So are "Herr Huber" and "Frau Huber": two headings, each shown with its title.
+            bool split = loneByKey.TryGetValue(key, out var titled) && SexDiffers(titled, sex);
+            if (split) key += " " + sex;
             var group = Add(loneByKey, groups, NameLabel.PER, key, i);
             if (group.Members.Count == 1) lone.Add((group, m.Text, m.Language));
+            if (title is { } t) loneTitle.TryAdd(group, t);
+            if (split)
+            {
+                titled!.Title = loneTitle[titled].Title;
+                group.Title = title!.Value.Title;
+            }
         }
 
         foreach (var nick in full.Where(f => !GivenName(f.First)).ToList())
@@ -758,6 +781,15 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         return cache[label] = named is [var one] ? one : null;
     }
 
+    /// <summary>The title right before a name, as said, with the sex it gives the name ("Frau Huber",
+    /// "Mrs. Roth"); null for none or one of either sex ("Dr.").</summary>
+    private (string Title, char Sex)? TitleBefore(Mention m, ImmutableArray<Turn> turns)
+    {
+        if (m.CharStart == 0) return null;
+        var before = Words(turns[m.Turn.Index].Text[Math.Max(0, m.CharStart - MarkerChars)..m.CharStart]);
+        return before.Length > 0 && lexicon.TitleSex(before[^1]) is { } sex ? (before[^1], sex) : null;
+    }
+
     /// <summary>Words that join two names, not a kinship word to its name ("my father and Stanisław"):
     /// "and" in the languages of the kinship lists.</summary>
     private static readonly HashSet<string> Conjunctions = new(StringComparer.Ordinal) { "and", "und", "i", "a", "y", "e", "et", "en", "és", "и", "та", "oraz", "och", "og", "ve", "ir", "un", "και" };
@@ -971,6 +1003,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var members = g.Members.OrderBy(i => times[i].Start).ThenBy(i => i).ToImmutableArray();
         var variants = members.Select(i => mentions[i].Text).Distinct(StringComparer.Ordinal).ToImmutableArray();
         string name = g.KeepsSpokenName || g.Place is null ? DisplayName(g.Label, members, mentions) : g.Place.Name;
+        if (g.Title is not null && Words(name).Length == 1) name = g.Title + " " + name;
         var alternatives = members.SelectMany(i => places[i]).Where(p => p.Key != g.Place?.Key)
             .DistinctBy(p => p.Key).OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId).ThenBy(p => p.Key, StringComparer.Ordinal).ToImmutableArray();
         var speakers = members.Select(i => turns[mentions[i].Turn.Index].Speaker).OfType<string>().Distinct(StringComparer.Ordinal).ToImmutableArray();

@@ -25,6 +25,13 @@ public interface IHeadingLexicon
     /// <summary>Whether a word is a listed first name of some language.</summary>
     bool IsFirstName(string word) => false;
 
+    /// <summary>The sex a title gives the name after it ('f' for "Frau", "Mrs.", "paní"; 'm' for "Herr",
+    /// "Mr.", "pan"), or null for no title or one of either sex ("Dr.").</summary>
+    char? TitleSex(string word) => null;
+
+    /// <summary>The sex the first-name lists give a given name, 'f' or 'm', or null when unknown or both.</summary>
+    char? GivenNameSex(string word) => null;
+
     /// <summary>Whether the hypocoristics or equivalents lists know the word as a given name or one of
     /// its forms; they hold romanised forms ("Giorgos") the first-name lists have only in their own script.</summary>
     bool KnowsGivenName(string word) => false;

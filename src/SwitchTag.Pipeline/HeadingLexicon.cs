@@ -36,7 +36,11 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public bool IsWorldRegion(string name, LanguageCode language) => _lists.WorldRegions.Contains(name, language);
 
-    public bool IsFirstName(string word) => _lists.Cues.IsFirstName(NameFolding.Fold(word));
+    public bool IsFirstName(string word) => _lists.IsFirstName(word);
+
+    public char? TitleSex(string word) => _lists.Cues.TitleSex(word);
+
+    public char? GivenNameSex(string word) => _lists.GivenNameSex(word);
 
     public bool KnowsGivenName(string word) => _lists.Variants.KnowsGivenName(word);
 

@@ -280,4 +280,35 @@ public class HeadingLexiconTests
         const string uncle = "My uncle, my mother's brother, Joaquim Sousa, had a boat. My uncle Joaquim took me fishing.";
         Assert.Single(BuildText(uncle, [("Joaquim Sousa", English), ("Joaquim", English)], "Manuel").Headings);
     }
+
+    /// <summary>Titles of Languages/*/titles.tsv with their sex (German Herr and Frau, English Mrs.;
+    /// common usage, known from memory): a surname said after titles of both sexes names a husband and
+    /// a wife, shown with their titles; "Mrs." before a surname two full names share is the woman's.
+    /// Oksana and Stepan are listed in Cyrillic only (Languages/uk/first-names.tsv, from
+    /// @faker-js/faker, checked with grep), read through the romanisation table.</summary>
+    [Fact]
+    public void Titles_of_two_sexes_before_one_surname_name_two_persons()
+    {
+        const string text = "The farmer, Herr Huber, was kind. Frau Huber gave me a coat.";
+        var told = BuildText(text, [("Huber", English), ("Huber", English)], "Oksana");
+        Assert.Equal(["Frau Huber", "Herr Huber"], told.Headings.Select(h => h.Name).Order(StringComparer.Ordinal).ToArray());
+
+        const string couple = "I am Oksana Hrytsenko. Mrs. Hrytsenko, they said. There I met Stepan Hrytsenko.";
+        var married = BuildText(couple, [("Oksana Hrytsenko", English), ("Hrytsenko", English), ("Stepan Hrytsenko", English)], "Oksana");
+        Assert.Equal([["Oksana Hrytsenko", "Hrytsenko"], ["Stepan Hrytsenko"]], Variants(married));
+    }
+
+    /// <summary>The romanisation table (models/lexicon/Transliteration/cyrillic-latin.tsv) gives the
+    /// soft sign no letter, as BGN/PCGN's ' (known from memory): Ольга is Olga, and Фрося, the
+    /// listed short form of Ефросинья (Languages/ru/hypocoristics.tsv), meets Efrosinya.</summary>
+    [Fact]
+    public void A_soft_sign_leaves_no_mark_in_a_names_key()
+    {
+        var lexicon = Loaded.Value.Lexicon;
+        Assert.True(lexicon.SameGivenName("Olga", English, "Ольга", Russian));
+        Assert.True(lexicon.SameGivenName("Efrosinya", English, "Фрося", Russian));
+        Assert.True(lexicon.IsFirstName("Oksana"));
+        Assert.Equal('f', lexicon.GivenNameSex("Oksana"));
+        Assert.Equal('m', lexicon.GivenNameSex("Stepan"));
+    }
 }

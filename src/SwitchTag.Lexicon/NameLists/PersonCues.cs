@@ -37,6 +37,23 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
 
     public bool IsFirstName(string folded) => FirstNames.Contains(folded);
 
+    /// <summary>Title (as written, no dot) to the sex its list gives it, 'f' or 'm'; titles of either
+    /// sex ("Dr.") are left out.</summary>
+    public FrozenDictionary<string, char> TitleSexes { get; init; } = FrozenDictionary<string, char>.Empty;
+
+    /// <summary>The sex a title gives the name after it ("Frau", "Mrs.", "paní": 'f'; "Herr", "Mr.", "pan":
+    /// 'm'), as written or capitalised at a sentence start; null for no title or one of either sex.</summary>
+    public char? TitleSex(string word)
+    {
+        word = word.TrimEnd('.');
+        if (word.Length == 0) return null;
+        return TitleSexes.TryGetValue(word, out var sex) || (char.IsUpper(word[0]) && TitleSexes.TryGetValue(Lowered(word), out sex)) ? sex : null;
+    }
+
+    /// <summary>Folded first name to the sex the lists give it, 'f' or 'm'; a name listed with both, or
+    /// as either, is left out.</summary>
+    public FrozenDictionary<string, char> FirstNameSexes { get; init; } = FrozenDictionary<string, char>.Empty;
+
     /// <summary>Listed given names that are also ordinary words of a language, as "code\tfolded word"
     /// (given-names-also-words.tsv, generated from the language-ID sentences).</summary>
     public FrozenSet<string> OrdinaryWordNames { get; init; } = FrozenSet<string>.Empty;
@@ -131,16 +148,22 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         var first = new HashSet<string>(StringComparer.Ordinal);
         var abbreviations = new HashSet<string>(StringComparer.Ordinal);
         var roles = new Dictionary<string, string>(StringComparer.Ordinal);
+        var titleSexes = new Dictionary<string, char>(StringComparer.Ordinal);
+        var nameSexes = new Dictionary<string, char>(StringComparer.Ordinal);
         foreach (var (_, folder) in LexiconTsv.Languages(lexiconDir))
         {
-            var titleForms = Forms(LexiconTsv.Rows(Path.Combine(folder, "titles.tsv"))).ToList();
+            var titleRows = LexiconTsv.Rows(Path.Combine(folder, "titles.tsv")).ToList();
+            AddSexes(titleSexes, titleRows, f => f.TrimEnd('.'));
+            var titleForms = Forms(titleRows).ToList();
             titles.UnionWith(titleForms.Select(f => f.TrimEnd('.')));
             abbreviations.UnionWith(titleForms.Where(f => f.EndsWith('.')).Select(f => f.TrimEnd('.')));
             var kin = LexiconTsv.Rows(Path.Combine(folder, "kinship.tsv")).ToList();
             kinship.UnionWith(Forms(kin));
             foreach (var row in kin.Where(r => r.Length > 2))
                 if (Relation(row[2]) is { } relation) roles.TryAdd(row[0].Trim(), relation);
-            first.UnionWith(Forms(LexiconTsv.Rows(Path.Combine(folder, "first-names.tsv"))).Select(NameFolding.Fold));
+            var nameRows = LexiconTsv.Rows(Path.Combine(folder, "first-names.tsv")).ToList();
+            first.UnionWith(Forms(nameRows).Select(NameFolding.Fold));
+            AddSexes(nameSexes, nameRows, NameFolding.Fold);
         }
         var birthNames = LexiconTsv.Languages(lexiconDir)
             .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "birth-name-markers.txt")))
@@ -160,6 +183,8 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         {
             BirthNameMarkers = Frozen(birthNames),
             KinshipRoles = roles.ToFrozenDictionary(StringComparer.Ordinal),
+            TitleSexes = Sexed(titleSexes),
+            FirstNameSexes = Sexed(nameSexes),
             OrdinaryWordNames = Frozen([.. LexiconTsv.Rows(Path.Combine(lexiconDir, "given-names-also-words.tsv"))
                 .Where(r => r.Length > 1).Select(r => r[0].Trim() + "\t" + NameFolding.Fold(r[1].Trim()))]),
             MarriageWords = Frozen([.. marriage.Where(w => !w.EndsWith('*')).Select(NameFolding.Fold)]),
@@ -176,6 +201,22 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         var first = gloss.Trim().Split(' ', ',', '(')[0].ToLowerInvariant();
         return first switch { "brother" or "sister" => "sibling", "romanised" or "" => null, _ => first };
     }
+
+    /// <summary>Adds each row's form (first cell, through <paramref name="form"/>) with its sex (second
+    /// cell, f or m; u rows say nothing); a form met with both sexes is marked '?' so that it is left out.</summary>
+    private static void AddSexes(Dictionary<string, char> sexes, IEnumerable<string[]> rows, Func<string, string> form)
+    {
+        foreach (var row in rows.Where(r => r.Length > 1 && r[1].Trim() is "f" or "m"))
+        {
+            var key = form(row[0].Trim());
+            char sex = row[1].Trim()[0];
+            if (key.Length == 0) continue;
+            sexes[key] = sexes.TryGetValue(key, out var known) && known != sex ? '?' : sex;
+        }
+    }
+
+    private static FrozenDictionary<string, char> Sexed(Dictionary<string, char> sexes) =>
+        sexes.Where(x => x.Value != '?').ToFrozenDictionary(StringComparer.Ordinal);
 
     private static FrozenSet<string> Frozen(HashSet<string> set) => set.Where(s => s.Length > 0).ToFrozenSet(StringComparer.Ordinal);
 
