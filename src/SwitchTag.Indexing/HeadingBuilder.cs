@@ -568,6 +568,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         JoinMarriedNames(mentions, groups, turns, full);
         JoinGivenNames(mentions, groups, turns);
         JoinNamesWentBy(mentions, groups, turns);
+        JoinNamesBecame(mentions, groups, turns);
 
         foreach (var l in lone)
         {
@@ -839,6 +840,57 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
         }
     }
+
+    /// <summary>A name said right after a became phrase (Languages/*/naming-phrases.tsv: "There Rozica
+    /// married Avram Segal, and she became Shoshana Segal"; "Tibor became Ted") is a new name of the
+    /// phrase's subject: with a pronoun, the person said last before it in the turn, at most
+    /// <see cref="TieReachWords"/> words back, whose given names or titles are not of the other sex
+    /// (so not Avram); without one, the person said right before the phrase. Its heading joins the
+    /// subject's when every word it holds is a word of the name said, as <see cref="JoinNamesWentBy"/>.</summary>
+    private void JoinNamesBecame(ImmutableArray<Mention> mentions, List<Group> groups, ImmutableArray<Turn> turns)
+    {
+        var groupOf = groups.Where(g => g.Label == NameLabel.PER).SelectMany(g => g.Members.Select(k => (k, g))).ToDictionary(x => x.k, x => x.g);
+        var sexOf = new Dictionary<Group, char?>();
+        char? SexOf(Group g)
+        {
+            if (sexOf.TryGetValue(g, out var known)) return known;
+            var sexes = g.Members.Order().Take(FirstMentionsSearched)
+                .Select(k => TitleBefore(mentions[k], turns)?.Sex ?? lexicon.GivenNameSex(Words(mentions[k].Text)[0]))
+                .OfType<char>().Distinct().ToList();
+            return sexOf[g] = sexes is [var one] ? one : null;
+        }
+        foreach (var own in groups.Where(g => g.Label == NameLabel.PER).ToList())
+        {
+            if (!groups.Contains(own)) continue;
+            foreach (int i in own.Members.Order().Take(FirstMentionsSearched).ToList())
+            {
+                var m = mentions[i];
+                var text = turns[m.Turn.Index].Text;
+                string before = text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart], after = text[m.CharEnd..Math.Min(text.Length, m.CharEnd + NamingChars)];
+                if (lexicon.SpeakerWentBy(before, after) || lexicon.BecameBefore(before, after) is not { } phrase) continue;
+                Group? target = null;
+                for (int j = i - 1; j >= 0 && mentions[j].Turn == m.Turn; j--)
+                {
+                    int gap = Words(text[mentions[j].CharEnd..m.CharStart]).Length;
+                    if (gap > (phrase.Pronoun ? TieReachWords : BareSubjectWords)) break;
+                    if (!groupOf.TryGetValue(j, out var g) || g == own || !groups.Contains(g)) continue;
+                    if (!phrase.Pronoun || SexOf(g) is not { } sex || sex == phrase.Sex) { target = g; break; }
+                }
+                if (target is null) break;
+                var said = Words(m.Text);
+                if (!own.Members.All(k => Words(mentions[k].Text).All(x => said.Any(w => SameNameWord(w, m.Language, x, mentions[k].Language)
+                        || SameSurname(w, m.Language, x, mentions[k].Language))))) break;
+                foreach (int k in own.Members) groupOf[k] = target;
+                sexOf.Remove(target);
+                MergeInto(own, target, groups);
+                break;
+            }
+        }
+    }
+
+    /// <summary>Words between a became phrase without a pronoun and the name said, the phrase
+    /// included: "Tibor became Ted" is one.</summary>
+    private const int BareSubjectWords = 1;
 
     /// <summary>How many of a heading's mentions, in text order, are searched for a word of marriage or a
     /// naming phrase: a new name is explained where it first comes up, and a name said thousands of

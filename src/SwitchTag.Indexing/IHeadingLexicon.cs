@@ -66,6 +66,11 @@ public interface IHeadingLexicon
     /// ("I was Angela Georgiou"), and the text after it does not make it a possessive.</summary>
     bool SpeakerWentBy(string before, string after) => false;
 
+    /// <summary>Whether the text before a name ends with a phrase saying someone took that name ("she
+    /// became", "Tibor became"): whether the phrase's subject is a pronoun, and its sex ('f', 'm');
+    /// null when there is none.</summary>
+    (bool Pronoun, char? Sex)? BecameBefore(string before, string after) => null;
+
     /// <summary>Whether one of the words speaks of a marriage ("married", "husband", "férjem").</summary>
     bool SpeaksOfMarriage(IEnumerable<string> words) => false;
 

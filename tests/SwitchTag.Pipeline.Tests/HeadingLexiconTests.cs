@@ -311,4 +311,20 @@ public class HeadingLexiconTests
         Assert.Equal('f', lexicon.GivenNameSex("Oksana"));
         Assert.Equal('m', lexicon.GivenNameSex("Stepan"));
     }
+
+    /// <summary>Became phrases of Languages/en/naming-phrases.tsv ("she became", "became"; common
+    /// usage, known from memory): the new name is the subject's, and "she" passes over a man said in
+    /// between (Avram: m in Languages/ro/first-names.tsv, from @faker-js/faker, checked with grep).</summary>
+    [Fact]
+    public void A_name_someone_became_joins_the_subjects_heading()
+    {
+        const string text = "There Rozica married Avram Segal, and she became Shoshana Segal.";
+        var told = BuildText(text, [("Rozica", English), ("Avram Segal", English), ("Shoshana Segal", English)], "Charlotte");
+        Assert.Equal([["Avram Segal"], ["Rozica", "Shoshana Segal"]], Variants(told));
+
+        const string bare = "In America Tibor became Ted Greenfield.";
+        Assert.Single(BuildText(bare, [("Tibor", English), ("Ted Greenfield", English)], "Ilona").Headings);
+        const string apart = "My brother Tibor stayed home. In America she became Anna Greenfield.";
+        Assert.Equal(2, BuildText(apart, [("Tibor", English), ("Anna Greenfield", English)], "Ilona").Headings.Length);
+    }
 }

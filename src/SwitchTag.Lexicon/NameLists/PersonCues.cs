@@ -107,6 +107,23 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         return WentByPhrases.Any(words => EndsWith(prior, words));
     }
 
+    /// <summary>Folded phrases after which a name is a new one taken by the person the phrase's subject
+    /// is ("she became Shoshana Segal", "Tibor became Ted"): naming-phrases.tsv rows of kind became
+    /// (no pronoun: the person said right before), became-f and became-m (a pronoun of that sex).</summary>
+    public ImmutableArray<(string[] Words, char? Sex)> BecamePhrases { get; init; } = [];
+
+    /// <summary>The longest became phrase the text right before a name ends with (one space, no comma,
+    /// no possessive after the name, as <see cref="SpeakerWentBy"/>): whether it holds a pronoun, and
+    /// the pronoun's sex; null when there is none.</summary>
+    public (bool Pronoun, char? Sex)? BecameBefore(string before, string after)
+    {
+        if (BecamePhrases.IsEmpty || before.Length < 2 || before[^1] != ' ' || !char.IsLetter(before[^2])
+            || after.StartsWith("'s", StringComparison.Ordinal) || after.StartsWith("’s", StringComparison.Ordinal)) return null;
+        var prior = FoldedWords(before);
+        var found = BecamePhrases.Where(p => EndsWith(prior, p.Words)).OrderByDescending(p => p.Words.Length).FirstOrDefault();
+        return found.Words is null ? null : (found.Sex is not null, found.Sex);
+    }
+
     private static List<string> FoldedWords(string text) => NameWords.Split(NameFolding.Fold(text)).Select(w => w.Folded).ToList();
 
     /// <summary>Whether the folded words end with the phrase's words.</summary>
@@ -191,6 +208,8 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
             MarriagePrefixes = [.. marriage.Where(w => w.EndsWith('*')).Select(w => NameFolding.Fold(w[..^1])).Where(w => w.Length > 0).Distinct()],
             NamingPhrases = [.. phrases.Where(p => p.Kind is "self" or "other").Select(p => (p.Words, Self: p.Kind == "self"))],
             WentByPhrases = [.. phrases.Where(p => p.Kind == "went-by").Select(p => p.Words)],
+            BecamePhrases = [.. phrases.Where(p => p.Kind is "became" or "became-f" or "became-m")
+                .Select(p => (p.Words, p.Kind switch { "became-f" => 'f', "became-m" => 'm', _ => (char?)null }))],
         };
     }
 
