@@ -499,6 +499,13 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         foreach (int i in single)
         {
             var m = mentions[i];
+            // "Our daughter we named Maria, for my mother": a new person, whom later short forms of the
+            // name join (the last one-word heading of a given name is the one meant).
+            if (m.CharStart > 0 && lexicon.NamedBefore(turns[m.Turn.Index].Text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart]))
+            {
+                lone.Add((Add(loneByKey, groups, NameLabel.PER, keys[i] + " " + i, i), m.Text, m.Language));
+                continue;
+            }
             var title = TitleBefore(m, turns);
             char? sex = title?.Sex;
             if (!ownersOf.TryGetValue((m.Text, m.Language, sex), out var owners))
@@ -528,7 +535,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
             if (owners.Count == 1 && RelationsDiffer(owners[0], m)) owners = [];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
-            if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
+            if (owners.Count == 0 && lone.LastOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
                     && !lexicon.WomansAndMansForm(l.Name, m.Text) && !SexDiffers(l.Group, sex)) is { Group: not null } kin)
             {
                 kin.Group.Members.Add(i);

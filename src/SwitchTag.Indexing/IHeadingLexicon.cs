@@ -66,6 +66,10 @@ public interface IHeadingLexicon
     /// ("I was Angela Georgiou"), and the text after it does not make it a possessive.</summary>
     bool SpeakerWentBy(string before, string after) => false;
 
+    /// <summary>Whether the text before a name ends with a phrase giving that name to a new person
+    /// ("we named"): a child named for a grandparent is another person.</summary>
+    bool NamedBefore(string before) => false;
+
     /// <summary>Whether the text before a name ends with a phrase saying someone took that name ("she
     /// became", "Tibor became"): whether the phrase's subject is a pronoun, and its sex ('f', 'm');
     /// null when there is none.</summary>

@@ -67,6 +67,8 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public bool SpeakerWentBy(string before, string after) => _lists.Cues.SpeakerWentBy(before, after);
 
+    public bool NamedBefore(string before) => _lists.Cues.NamedBefore(before);
+
     public (bool Pronoun, char? Sex)? BecameBefore(string before, string after) => _lists.Cues.BecameBefore(before, after);
 
     public bool SpeaksOfMarriage(IEnumerable<string> words) => _lists.Cues.SpeaksOfMarriage(words);

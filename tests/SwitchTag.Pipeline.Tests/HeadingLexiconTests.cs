@@ -327,4 +327,15 @@ public class HeadingLexiconTests
         const string apart = "My brother Tibor stayed home. In America she became Anna Greenfield.";
         Assert.Equal(2, BuildText(apart, [("Tibor", English), ("Anna Greenfield", English)], "Ilona").Headings.Length);
     }
+
+    /// <summary>Named phrases of Languages/en/naming-phrases.tsv ("we named"; common usage, known from
+    /// memory): a daughter named for her mother is another person, and a later short form (Марійка,
+    /// listed for Марія in Languages/uk/hypocoristics.tsv) is the daughter's, said last.</summary>
+    [Fact]
+    public void A_child_named_for_a_parent_is_another_person()
+    {
+        const string text = "Mama was Марія, she sang. Our daughter we named Maria, for my mother. Марійка teaches here.";
+        var told = BuildText(text, [("Марія", new LanguageCode("uk")), ("Maria", English), ("Марійка", new LanguageCode("uk"))], "Oksana");
+        Assert.Equal([["Maria", "Марійка"], ["Марія"]], Variants(told));
+    }
 }

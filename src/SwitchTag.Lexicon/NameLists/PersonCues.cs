@@ -107,6 +107,18 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         return WentByPhrases.Any(words => EndsWith(prior, words));
     }
 
+    /// <summary>Folded phrases after which a name is given to a new person ("we named", "назвали"):
+    /// naming-phrases.tsv rows of kind named. A child named for a grandparent is another person.</summary>
+    public ImmutableArray<string[]> NamedPhrases { get; init; } = [];
+
+    /// <summary>Whether the text right before a name ends with a named phrase and one space.</summary>
+    public bool NamedBefore(string before)
+    {
+        if (NamedPhrases.IsEmpty || before.Length < 2 || before[^1] != ' ' || !char.IsLetter(before[^2])) return false;
+        var prior = FoldedWords(before);
+        return NamedPhrases.Any(words => EndsWith(prior, words));
+    }
+
     /// <summary>Folded phrases after which a name is a new one taken by the person the phrase's subject
     /// is ("she became Shoshana Segal", "Tibor became Ted"): naming-phrases.tsv rows of kind became
     /// (no pronoun: the person said right before), became-f and became-m (a pronoun of that sex).</summary>
@@ -208,6 +220,7 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
             MarriagePrefixes = [.. marriage.Where(w => w.EndsWith('*')).Select(w => NameFolding.Fold(w[..^1])).Where(w => w.Length > 0).Distinct()],
             NamingPhrases = [.. phrases.Where(p => p.Kind is "self" or "other").Select(p => (p.Words, Self: p.Kind == "self"))],
             WentByPhrases = [.. phrases.Where(p => p.Kind == "went-by").Select(p => p.Words)],
+            NamedPhrases = [.. phrases.Where(p => p.Kind == "named").Select(p => p.Words)],
             BecamePhrases = [.. phrases.Where(p => p.Kind is "became" or "became-f" or "became-m")
                 .Select(p => (p.Words, p.Kind switch { "became-f" => 'f', "became-m" => 'm', _ => (char?)null }))],
         };
