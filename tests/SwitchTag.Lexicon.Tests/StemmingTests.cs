@@ -79,6 +79,16 @@ public class StemmingTests
     public void Hungarian_and_German_keys_agree(string inflected, string name, string language) =>
         Assert.Equal(NameFolding.Key(name, new LanguageCode(language)), NameFolding.Key(inflected, new LanguageCode(language)));
 
+    // (from memory) Greek accusative and genitive of the -ος, -ας and -η declensions: τον Γιώργο, του
+    // Γιώργου, τον Κώστα, της Ελένης (Languages/el/stemming.txt).
+    [Theory]
+    [InlineData("Γιώργο", "Γιώργος")]
+    [InlineData("Γιώργου", "Γιώργος")]
+    [InlineData("Κώστα", "Κώστας")]
+    [InlineData("Ελένης", "Ελένη")]
+    public void Greek_keys_agree(string inflected, string name) =>
+        Assert.Equal(NameFolding.Key(name, new LanguageCode("el")), NameFolding.Key(inflected, new LanguageCode("el")));
+
     // Forms whose stem changes before the ending: the primary key differs, but the inflection
     // check undoes the change. (from memory) Polish Praga loc. Pradze, Wiedeń gen. Wiednia;
     // Czech Praha loc. Praze, Plzeň gen. Plzně; Ukrainian Львів gen. Львова, Київ gen. Києва,

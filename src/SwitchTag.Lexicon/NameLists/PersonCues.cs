@@ -227,11 +227,19 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
     }
 
     /// <summary>The relation an English gloss names: its first word ("uncle (mother's brother)": uncle),
-    /// brother and sister as sibling; null for a gloss naming none ("romanised forms").</summary>
+    /// brother and sister as sibling, grandmother and grandfather as grandparent; null for a gloss
+    /// naming none ("romanised forms").</summary>
     private static string? Relation(string gloss)
     {
         var first = gloss.Trim().Split(' ', ',', '(')[0].ToLowerInvariant();
-        return first switch { "brother" or "sister" => "sibling", "romanised" or "" => null, _ => first };
+        return first switch
+        {
+            "brother" or "sister" => "sibling",
+            // The lists gloss some words by sex and some not (Greek γιαγιά: grandparent; grandma: grandmother).
+            "grandmother" or "grandfather" => "grandparent",
+            "romanised" or "" => null,
+            _ => first,
+        };
     }
 
     /// <summary>Adds each row's form (first cell, through <paramref name="form"/>) with its sex (second
