@@ -648,7 +648,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
     /// <summary>A name after a birth-name marker ("Anna Nowak, z domu Wiśniewska"; "I was born Ruth
     /// Stein") is the woman named before it under the name she was born with. A surname alone joins
-    /// the nearest full name before it in its turn, at most <see cref="TieWords"/> words back; a full
+    /// the nearest full name, or given name not listed for men, before it in its turn, at most <see cref="TieWords"/> words back; a full
     /// name joins the one full name of another surname with her given name (the same name, a
     /// diminutive or a listed equivalent), its heading's other mentions with it.</summary>
     private void JoinBirthNames(ImmutableArray<Mention> mentions, bool[] held, List<Group> groups, ImmutableArray<Turn> turns,
@@ -676,8 +676,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 full.RemoveAll(f => f.Group == own);
                 continue;
             }
+            // The woman named before: a full name, or a given name not listed for men ("Berta, rozená Fischerová").
             int before = Enumerable.Range(0, i).Reverse().TakeWhile(j => mentions[j].Turn == m.Turn)
-                .FirstOrDefault(j => !held[j] && mentions[j].Label == NameLabel.PER && Words(mentions[j].Text).Length > 1, -1);
+                .FirstOrDefault(j => !held[j] && mentions[j].Label == NameLabel.PER
+                    && (Words(mentions[j].Text).Length > 1 || lexicon.GivenNameSex(mentions[j].Text) != 'm'), -1);
             if (before < 0 || !groupOf.TryGetValue(before, out var named) || named == own
                 || Words(text[mentions[before].CharEnd..m.CharStart]).Length > TieWords) continue;
             own.Members.Remove(i);
@@ -814,10 +816,15 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (word.Length == 0) return null;
             // "my mother's brother, Joaquim Sousa" is an uncle: a relation of someone else is none here.
             if (lexicon.KinshipRole(word) is { } relation) return k > 0 && (before[k - 1].EndsWith("'s", StringComparison.Ordinal) || before[k - 1].EndsWith("’s", StringComparison.Ordinal)) ? null : relation;
-            if (k < before.Length - 1 || !char.IsLower(word[0]) || before[k].Length != word.Length || Conjunctions.Contains(word)) return null;
+            // One short lower-case word may stand between, a copula ("was", "war", "był", "era"); a longer
+            // one makes the kinship word part of another phrase ("pro babičku vždycky Heinrich", for grandma).
+            if (k < before.Length - 1 || !char.IsLower(word[0]) || before[k].Length != word.Length || word.Length > CopulaLetters || Conjunctions.Contains(word)) return null;
         }
         return null;
     }
+
+    /// <summary>Longest word taken for a copula between a kinship word and its name ("byla", "volt").</summary>
+    private const int CopulaLetters = 4;
 
     /// <summary>A name said right after a went-by phrase (Languages/*/naming-phrases.tsv: "In Melbourne
     /// I was Angela Georgiou", "For two years I was Marysia Kwiatkowska") is one the speaker went by: its

@@ -338,4 +338,19 @@ public class HeadingLexiconTests
         var told = BuildText(text, [("Марія", new LanguageCode("uk")), ("Maria", English), ("Марійка", new LanguageCode("uk"))], "Oksana");
         Assert.Equal([["Maria", "Марійка"], ["Марія"]], Variants(told));
     }
+
+    /// <summary>Czech "rozená" before a birth name (Languages/cs/birth-name-markers.txt; standard usage,
+    /// known from memory) after a one-word given name; Berta is no man's name in the first-name lists.
+    /// And a kinship word inside another phrase ("pro babičku", for grandma) gives the name after it no
+    /// relation: Heinrich, the German equivalent of Jindřich (name-equivalents.tsv), said beside
+    /// Jindřich, is the father named before.</summary>
+    [Fact]
+    public void A_birth_name_after_a_given_name_and_a_kinship_word_in_another_phrase()
+    {
+        const string text = "Maminka se jmenovala Berta, rozená Fischerová.";
+        Assert.Single(BuildText(text, [("Berta", Czech), ("Fischerová", Czech)], "Zuzana").Headings);
+
+        const string father = "My father, Jindřich Sýkora, had a shop. Tatínek byl pro babičku vždycky Heinrich, nikdy Jindřich.";
+        Assert.Single(BuildText(father, [("Jindřich Sýkora", English), ("Heinrich", Czech), ("Jindřich", Czech)], "Zuzana").Headings);
+    }
 }
