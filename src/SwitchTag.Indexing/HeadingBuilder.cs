@@ -492,6 +492,8 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return lone.Any(l => l.Group.Members.Count > 0 && lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
                 && RelationOf(l.Group) is { } other && other != theirs);
         }
+        var ownSpeakerHeading = new Dictionary<string, Group?>(StringComparer.Ordinal);
+        HashSet<(Group, string)>? wentBy = null;
         // The title (and the sex it gives) of a one-word heading's first titled name ("Herr Huber"):
         // "Frau Huber" is his wife.
         var loneTitle = new Dictionary<Group, (string Title, char Sex)>();
@@ -532,6 +534,14 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 if (sex is { } s)
                     owners = owners.Where(g => full.Where(f => f.Group == g).Any(f => lexicon.GivenNameSex(f.First) is not { } given || given == s)).ToList();
                 ownersOf[(m.Text, m.Language, sex)] = owners;
+            }
+            // Nobody calls themselves "Pani Kwiatkowska": a titled surname several full names bear is not
+            // the one naming the turn's speaker, nor a name she says she went by (Marysia Kwiatkowska).
+            if (title is not null && owners.Count > 1 && turns[m.Turn.Index].Speaker is { } talking)
+            {
+                var self = SpeakerHeading(talking, mentions, groups, ownSpeakerHeading);
+                var others = owners.Where(g => g != self && !(wentBy ??= NamesWentBy(mentions, turns, full)).Contains((g, talking))).ToList();
+                if (others.Count > 0) owners = others;
             }
             if (owners.Count == 1 && RelationsDiffer(owners[0], m)) owners = [];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
@@ -789,6 +799,25 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var named = groups.Where(g => g.Label == NameLabel.PER && g.Members.Any(k => Words(mentions[k].Text) is { Length: > 1 } w
             && speaker.IsSubsetOf(w.Select(x => lexicon.Key(x, LanguageCode.Undetermined))))).ToList();
         return cache[label] = named is [var one] ? one : null;
+    }
+
+    /// <summary>The full-name headings a speaker says she went by ("For two years I was Marysia
+    /// Kwiatkowska"), with the speaker's label: looked for at each heading's first mentions.</summary>
+    private HashSet<(Group, string)> NamesWentBy(ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns,
+        List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)> full)
+    {
+        var found = new HashSet<(Group, string)>();
+        foreach (var g in full.Select(f => f.Group).Distinct())
+            foreach (int i in g.Members.Order().Take(FirstMentionsSearched))
+            {
+                var m = mentions[i];
+                var turn = turns[m.Turn.Index];
+                if (turn.Speaker is not { } speaker) continue;
+                var text = turn.Text;
+                if (lexicon.SpeakerWentBy(text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart], text[m.CharEnd..Math.Min(text.Length, m.CharEnd + NamingChars)]))
+                    found.Add((g, speaker));
+            }
+        return found;
     }
 
     /// <summary>The title right before a name, as said, with the sex it gives the name ("Frau Huber",

@@ -353,4 +353,15 @@ public class HeadingLexiconTests
         const string father = "My father, Jindřich Sýkora, had a shop. Tatínek byl pro babičku vždycky Heinrich, nikdy Jindřich.";
         Assert.Single(BuildText(father, [("Jindřich Sýkora", English), ("Heinrich", Czech), ("Jindřich", Czech)], "Zuzana").Headings);
     }
+
+    /// <summary>Polish "Pani" is a title for women (Languages/pl/titles.tsv; common usage, known from
+    /// memory): said by the narrator before a surname that her own wartime name shares, it names the
+    /// other woman of that surname.</summary>
+    [Fact]
+    public void A_titled_surname_the_speaker_says_is_not_her_own_name()
+    {
+        const string text = "My name is Barbara Zielińska. A woman, pani Irena Kwiatkowska, took me out. For two years I was Marysia Kwiatkowska. Pani Kwiatkowska I found again.";
+        var told = BuildText(text, [("Barbara Zielińska", English), ("Irena Kwiatkowska", Polish), ("Marysia Kwiatkowska", English), ("Kwiatkowska", Polish)], "Barbara");
+        Assert.Contains(told.Headings, h => h.Variants.Order(StringComparer.Ordinal).SequenceEqual(["Irena Kwiatkowska", "Kwiatkowska"]));
+    }
 }
