@@ -239,6 +239,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
         /// <summary>The place is where the talk was, not the name's own gazetteer entry.</summary>
         public bool PlaceFromContext { get; set; }
+
+        /// <summary>A title the heading's name is shown with: set when two persons are told apart by it
+        /// alone ("Herr Huber", "Frau Huber").</summary>
+        public string? Title { get; set; }
         public List<int> Members { get; } = [];
         public HashSet<Group> Possible { get; } = [];
     }
@@ -478,7 +482,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var lone = new List<(Group Group, string Name, LanguageCode Language)>();
         var loneByKey = new Dictionary<string, Group>(StringComparer.Ordinal);
         // The full names a one-word name may belong to, worked out once per distinct text and language.
-        var ownersOf = new Dictionary<(string, LanguageCode), List<Group>>();
+        var ownersOf = new Dictionary<(string, LanguageCode, char?), List<Group>>();
         var relations = new Dictionary<Group, string?>();
         string? RelationOf(Group g)
         {
@@ -495,10 +499,25 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             return lone.Any(l => l.Group.Members.Count > 0 && lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
                 && RelationOf(l.Group) is { } other && other != theirs);
         }
+        var ownSpeakerHeading = new Dictionary<string, Group?>(StringComparer.Ordinal);
+        HashSet<(Group, string)>? wentBy = null;
+        // The title (and the sex it gives) of a one-word heading's first titled name ("Herr Huber"):
+        // "Frau Huber" is his wife.
+        var loneTitle = new Dictionary<Group, (string Title, char Sex)>();
+        bool SexDiffers(Group g, char? sex) => sex is { } s && loneTitle.TryGetValue(g, out var own) && own.Sex != s;
         foreach (int i in single)
         {
             var m = mentions[i];
-            if (!ownersOf.TryGetValue((m.Text, m.Language), out var owners))
+            // "Our daughter we named Maria, for my mother": a new person, whom later short forms of the
+            // name join (the last one-word heading of a given name is the one meant).
+            if (m.CharStart > 0 && lexicon.NamedBefore(turns[m.Turn.Index].Text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart]))
+            {
+                lone.Add((Add(loneByKey, groups, NameLabel.PER, keys[i] + " " + i, i), m.Text, m.Language));
+                continue;
+            }
+            var title = TitleBefore(m, turns);
+            char? sex = title?.Sex;
+            if (!ownersOf.TryGetValue((m.Text, m.Language, sex), out var owners))
             {
                 // A surname after its particles ("Mrs. Van den Berg") is matched by its last word.
                 string word = Words(m.Text)[^1];
@@ -517,12 +536,24 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 }
                 if (owners.Count > 1 && owners.Where(g => full.Any(f => f.Group == g && GivenName(f.First))).ToList() is [var named]) owners = [named];
                 if (owners.Count > 1 && SpeakerOwner(owners, mentions, speakers ??= SpeakerWords(turns), namesSpeaker) is { } speaker) owners = [speaker];
-                ownersOf[(m.Text, m.Language)] = owners;
+                // "Mrs. Hrytsenko" is not Stepan Hrytsenko, nor "Mr. Roth" Eva Roth: a title's sex
+                // against the given names' leaves the one it can be, or none (his wife, her husband).
+                if (sex is { } s)
+                    owners = owners.Where(g => full.Where(f => f.Group == g).Any(f => lexicon.GivenNameSex(f.First) is not { } given || given == s)).ToList();
+                ownersOf[(m.Text, m.Language, sex)] = owners;
+            }
+            // Nobody calls themselves "Pani Kwiatkowska": a titled surname several full names bear is not
+            // the one naming the turn's speaker, nor a name she says she went by (Marysia Kwiatkowska).
+            if (title is not null && owners.Count > 1 && turns[m.Turn.Index].Speaker is { } talking)
+            {
+                var self = SpeakerHeading(talking, mentions, groups, ownSpeakerHeading);
+                var others = owners.Where(g => g != self && !(wentBy ??= NamesWentBy(mentions, turns, full)).Contains((g, talking))).ToList();
+                if (others.Count > 0) owners = others;
             }
             if (owners.Count == 1 && RelationsDiffer(owners[0], m)) owners = [];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
-            if (owners.Count == 0 && lone.FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
-                    && !lexicon.WomansAndMansForm(l.Name, m.Text)) is { Group: not null } kin)
+            if (owners.Count == 0 && lone.LastOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
+                    && !lexicon.WomansAndMansForm(l.Name, m.Text) && !SexDiffers(l.Group, sex)) is { Group: not null } kin)
             {
                 kin.Group.Members.Add(i);
                 continue;
@@ -530,8 +561,17 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             // Novotná and Novotný share a stem but are a wife and a husband: the later form gets a key of its own.
             string key = loneByKey.TryGetValue(keys[i], out var same) && lone.Any(l => l.Group == same && lexicon.WomansAndMansForm(l.Name, m.Text))
                 ? keys[i] + " " + lexicon.SurnameKey(m.Text, LanguageCode.Undetermined) : keys[i];
+            // So are "Herr Huber" and "Frau Huber": two headings, each shown with its title.
+            bool split = loneByKey.TryGetValue(key, out var titled) && SexDiffers(titled, sex);
+            if (split) key += " " + sex;
             var group = Add(loneByKey, groups, NameLabel.PER, key, i);
             if (group.Members.Count == 1) lone.Add((group, m.Text, m.Language));
+            if (title is { } t) loneTitle.TryAdd(group, t);
+            if (split)
+            {
+                titled!.Title = loneTitle[titled].Title;
+                group.Title = title!.Value.Title;
+            }
         }
 
         foreach (var nick in full.Where(f => !GivenName(f.First)).ToList())
@@ -552,6 +592,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         JoinMarriedNames(mentions, groups, turns, full);
         JoinGivenNames(mentions, groups, turns);
         JoinNamesWentBy(mentions, groups, turns);
+        JoinNamesBecame(mentions, groups, turns);
 
         foreach (var l in lone)
         {
@@ -624,7 +665,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
 
     /// <summary>A name after a birth-name marker ("Anna Nowak, z domu Wiśniewska"; "I was born Ruth
     /// Stein") is the woman named before it under the name she was born with. A surname alone joins
-    /// the nearest full name before it in its turn, at most <see cref="TieWords"/> words back; a full
+    /// the nearest full name, or given name not listed for men, before it in its turn, at most <see cref="TieWords"/> words back; a full
     /// name joins the one full name of another surname with her given name (the same name, a
     /// diminutive or a listed equivalent), its heading's other mentions with it.</summary>
     private void JoinBirthNames(ImmutableArray<Mention> mentions, bool[] held, List<Group> groups, ImmutableArray<Turn> turns,
@@ -652,8 +693,10 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 full.RemoveAll(f => f.Group == own);
                 continue;
             }
+            // The woman named before: a full name, or a given name not listed for men ("Berta, rozená Fischerová").
             int before = Enumerable.Range(0, i).Reverse().TakeWhile(j => mentions[j].Turn == m.Turn)
-                .FirstOrDefault(j => !held[j] && mentions[j].Label == NameLabel.PER && Words(mentions[j].Text).Length > 1, -1);
+                .FirstOrDefault(j => !held[j] && mentions[j].Label == NameLabel.PER
+                    && (Words(mentions[j].Text).Length > 1 || lexicon.GivenNameSex(mentions[j].Text) != 'm'), -1);
             if (before < 0 || !groupOf.TryGetValue(before, out var named) || named == own
                 || Words(text[mentions[before].CharEnd..m.CharStart]).Length > TieWords) continue;
             own.Members.Remove(i);
@@ -765,6 +808,34 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         return cache[label] = named is [var one] ? one : null;
     }
 
+    /// <summary>The full-name headings a speaker says she went by ("For two years I was Marysia
+    /// Kwiatkowska"), with the speaker's label: looked for at each heading's first mentions.</summary>
+    private HashSet<(Group, string)> NamesWentBy(ImmutableArray<Mention> mentions, ImmutableArray<Turn> turns,
+        List<(Group Group, string First, string Last, LanguageCode Language, string Surname, string? Middle)> full)
+    {
+        var found = new HashSet<(Group, string)>();
+        foreach (var g in full.Select(f => f.Group).Distinct())
+            foreach (int i in g.Members.Order().Take(FirstMentionsSearched))
+            {
+                var m = mentions[i];
+                var turn = turns[m.Turn.Index];
+                if (turn.Speaker is not { } speaker) continue;
+                var text = turn.Text;
+                if (lexicon.SpeakerWentBy(text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart], text[m.CharEnd..Math.Min(text.Length, m.CharEnd + NamingChars)]))
+                    found.Add((g, speaker));
+            }
+        return found;
+    }
+
+    /// <summary>The title right before a name, as said, with the sex it gives the name ("Frau Huber",
+    /// "Mrs. Roth"); null for none or one of either sex ("Dr.").</summary>
+    private (string Title, char Sex)? TitleBefore(Mention m, ImmutableArray<Turn> turns)
+    {
+        if (m.CharStart == 0) return null;
+        var before = Words(turns[m.Turn.Index].Text[Math.Max(0, m.CharStart - MarkerChars)..m.CharStart]);
+        return before.Length > 0 && lexicon.TitleSex(before[^1]) is { } sex ? (before[^1], sex) : null;
+    }
+
     /// <summary>Words that join two names, not a kinship word to its name ("my father and Stanisław"):
     /// "and" in the languages of the kinship lists.</summary>
     private static readonly HashSet<string> Conjunctions = new(StringComparer.Ordinal) { "and", "und", "i", "a", "y", "e", "et", "en", "és", "и", "та", "oraz", "och", "og", "ve", "ir", "un", "και" };
@@ -781,10 +852,15 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             if (word.Length == 0) return null;
             // "my mother's brother, Joaquim Sousa" is an uncle: a relation of someone else is none here.
             if (lexicon.KinshipRole(word) is { } relation) return k > 0 && (before[k - 1].EndsWith("'s", StringComparison.Ordinal) || before[k - 1].EndsWith("’s", StringComparison.Ordinal)) ? null : relation;
-            if (k < before.Length - 1 || !char.IsLower(word[0]) || before[k].Length != word.Length || Conjunctions.Contains(word)) return null;
+            // One short lower-case word may stand between, a copula ("was", "war", "był", "era"); a longer
+            // one makes the kinship word part of another phrase ("pro babičku vždycky Heinrich", for grandma).
+            if (k < before.Length - 1 || !char.IsLower(word[0]) || before[k].Length != word.Length || word.Length > CopulaLetters || Conjunctions.Contains(word)) return null;
         }
         return null;
     }
+
+    /// <summary>Longest word taken for a copula between a kinship word and its name ("byla", "volt").</summary>
+    private const int CopulaLetters = 4;
 
     /// <summary>A name said right after a went-by phrase (Languages/*/naming-phrases.tsv: "In Melbourne
     /// I was Angela Georgiou", "For two years I was Marysia Kwiatkowska") is one the speaker went by: its
@@ -814,6 +890,57 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
         }
     }
+
+    /// <summary>A name said right after a became phrase (Languages/*/naming-phrases.tsv: "There Rozica
+    /// married Avram Segal, and she became Shoshana Segal"; "Tibor became Ted") is a new name of the
+    /// phrase's subject: with a pronoun, the person said last before it in the turn, at most
+    /// <see cref="TieReachWords"/> words back, whose given names or titles are not of the other sex
+    /// (so not Avram); without one, the person said right before the phrase. Its heading joins the
+    /// subject's when every word it holds is a word of the name said, as <see cref="JoinNamesWentBy"/>.</summary>
+    private void JoinNamesBecame(ImmutableArray<Mention> mentions, List<Group> groups, ImmutableArray<Turn> turns)
+    {
+        var groupOf = groups.Where(g => g.Label == NameLabel.PER).SelectMany(g => g.Members.Select(k => (k, g))).ToDictionary(x => x.k, x => x.g);
+        var sexOf = new Dictionary<Group, char?>();
+        char? SexOf(Group g)
+        {
+            if (sexOf.TryGetValue(g, out var known)) return known;
+            var sexes = g.Members.Order().Take(FirstMentionsSearched)
+                .Select(k => TitleBefore(mentions[k], turns)?.Sex ?? lexicon.GivenNameSex(Words(mentions[k].Text)[0]))
+                .OfType<char>().Distinct().ToList();
+            return sexOf[g] = sexes is [var one] ? one : null;
+        }
+        foreach (var own in groups.Where(g => g.Label == NameLabel.PER).ToList())
+        {
+            if (!groups.Contains(own)) continue;
+            foreach (int i in own.Members.Order().Take(FirstMentionsSearched).ToList())
+            {
+                var m = mentions[i];
+                var text = turns[m.Turn.Index].Text;
+                string before = text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart], after = text[m.CharEnd..Math.Min(text.Length, m.CharEnd + NamingChars)];
+                if (lexicon.SpeakerWentBy(before, after) || lexicon.BecameBefore(before, after) is not { } phrase) continue;
+                Group? target = null;
+                for (int j = i - 1; j >= 0 && mentions[j].Turn == m.Turn; j--)
+                {
+                    int gap = Words(text[mentions[j].CharEnd..m.CharStart]).Length;
+                    if (gap > (phrase.Pronoun ? TieReachWords : BareSubjectWords)) break;
+                    if (!groupOf.TryGetValue(j, out var g) || g == own || !groups.Contains(g)) continue;
+                    if (!phrase.Pronoun || SexOf(g) is not { } sex || sex == phrase.Sex) { target = g; break; }
+                }
+                if (target is null) break;
+                var said = Words(m.Text);
+                if (!own.Members.All(k => Words(mentions[k].Text).All(x => said.Any(w => SameNameWord(w, m.Language, x, mentions[k].Language)
+                        || SameSurname(w, m.Language, x, mentions[k].Language))))) break;
+                foreach (int k in own.Members) groupOf[k] = target;
+                sexOf.Remove(target);
+                MergeInto(own, target, groups);
+                break;
+            }
+        }
+    }
+
+    /// <summary>Words between a became phrase without a pronoun and the name said, the phrase
+    /// included: "Tibor became Ted" is one.</summary>
+    private const int BareSubjectWords = 1;
 
     /// <summary>How many of a heading's mentions, in text order, are searched for a word of marriage or a
     /// naming phrase: a new name is explained where it first comes up, and a name said thousands of
@@ -978,6 +1105,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         var members = g.Members.OrderBy(i => times[i].Start).ThenBy(i => i).ToImmutableArray();
         var variants = members.Select(i => mentions[i].Text).Distinct(StringComparer.Ordinal).ToImmutableArray();
         string name = g.KeepsSpokenName || g.Place is null ? DisplayName(g.Label, members, mentions) : g.Place.Name;
+        if (g.Title is not null && Words(name).Length == 1) name = g.Title + " " + name;
         var alternatives = members.SelectMany(i => places[i]).Where(p => p.Key != g.Place?.Key)
             .DistinctBy(p => p.Key).OrderByDescending(p => p.Population).ThenBy(p => p.GeonameId).ThenBy(p => p.Key, StringComparer.Ordinal).ToImmutableArray();
         var speakers = members.Select(i => turns[mentions[i].Turn.Index].Speaker).OfType<string>().Distinct(StringComparer.Ordinal).ToImmutableArray();

@@ -25,6 +25,13 @@ public interface IHeadingLexicon
     /// <summary>Whether a word is a listed first name of some language.</summary>
     bool IsFirstName(string word) => false;
 
+    /// <summary>The sex a title gives the name after it ('f' for "Frau", "Mrs.", "paní"; 'm' for "Herr",
+    /// "Mr.", "pan"), or null for no title or one of either sex ("Dr.").</summary>
+    char? TitleSex(string word) => null;
+
+    /// <summary>The sex the first-name lists give a given name, 'f' or 'm', or null when unknown or both.</summary>
+    char? GivenNameSex(string word) => null;
+
     /// <summary>Whether the hypocoristics or equivalents lists know the word as a given name or one of
     /// its forms; they hold romanised forms ("Giorgos") the first-name lists have only in their own script.</summary>
     bool KnowsGivenName(string word) => false;
@@ -58,6 +65,15 @@ public interface IHeadingLexicon
     /// <summary>Whether the text before a name ends with a phrase saying the speaker went by that name
     /// ("I was Angela Georgiou"), and the text after it does not make it a possessive.</summary>
     bool SpeakerWentBy(string before, string after) => false;
+
+    /// <summary>Whether the text before a name ends with a phrase giving that name to a new person
+    /// ("we named"): a child named for a grandparent is another person.</summary>
+    bool NamedBefore(string before) => false;
+
+    /// <summary>Whether the text before a name ends with a phrase saying someone took that name ("she
+    /// became", "Tibor became"): whether the phrase's subject is a pronoun, and its sex ('f', 'm');
+    /// null when there is none.</summary>
+    (bool Pronoun, char? Sex)? BecameBefore(string before, string after) => null;
 
     /// <summary>Whether one of the words speaks of a marriage ("married", "husband", "férjem").</summary>
     bool SpeaksOfMarriage(IEnumerable<string> words) => false;

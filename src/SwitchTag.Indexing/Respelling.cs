@@ -21,31 +21,46 @@ internal static class Respelling
     {
         var a = Letters(said);
         var b = Letters(name);
-        if (a.Count != b.Count || a.Count == 0) return (false, false);
+        // A case form is the name and an ending ("Koláře" of Kolář): the letters the two share are compared.
+        if (a.Count < b.Count || a.Count - b.Count > CaseEndingLetters || b.Count == 0) return (false, false);
         bool saidOnly = false, nameOnly = false;
-        for (int i = 0; i < a.Count; i++)
+        for (int i = 0; i < b.Count; i++)
         {
             if (a[i].Base != b[i].Base) return (false, false);
-            if (a[i].Marked && !b[i].Marked) saidOnly = true;
-            if (b[i].Marked && !a[i].Marked) nameOnly = true;
+            if (a[i].Mark != '\0' && b[i].Mark == '\0') saidOnly = true;
+            if (b[i].Mark != '\0' && a[i].Mark == '\0') nameOnly = true;
+            // Two different accents on one letter ("Kolář" beside Kolār, IN) are two spellings too.
+            if (a[i].Mark != '\0' && b[i].Mark != '\0' && a[i].Mark != b[i].Mark) saidOnly = nameOnly = true;
         }
         return (saidOnly, nameOnly);
     }
 
-    /// <summary>Letters in canonical decomposition, lower case, each with whether a combining mark follows.</summary>
-    private static List<(char Base, bool Marked)> Letters(string text)
+    /// <summary>Most letters a case ending adds to a name (Polish "-owie", Hungarian "-ben").</summary>
+    private const int CaseEndingLetters = 4;
+
+    /// <summary>Letters in canonical decomposition, lower case, each with its first combining mark ('\0'
+    /// for none). Marks written interchangeably count as one: cedilla and comma below (Iaşi, Iași),
+    /// diaeresis and double acute (Hungarian ö, ő typed for each other).</summary>
+    private static List<(char Base, char Mark)> Letters(string text)
     {
-        var letters = new List<(char, bool)>(text.Length);
+        var letters = new List<(char, char)>(text.Length);
         foreach (char c in text.Normalize(NormalizationForm.FormD))
         {
             var category = CharUnicodeInfo.GetUnicodeCategory(c);
             if (category is UnicodeCategory.NonSpacingMark or UnicodeCategory.EnclosingMark)
             {
-                if (letters.Count > 0) letters[^1] = (letters[^1].Item1, true);
+                if (letters.Count > 0 && letters[^1].Item2 == '\0') letters[^1] = (letters[^1].Item1, Interchangeable(c));
                 continue;
             }
-            if (char.IsLetter(c)) letters.Add((char.ToLowerInvariant(c), false));
+            if (char.IsLetter(c)) letters.Add((char.ToLowerInvariant(c), '\0'));
         }
         return letters;
     }
+
+    private static char Interchangeable(char mark) => mark switch
+    {
+        '\u0326' => '\u0327',
+        '\u030B' => '\u0308',
+        _ => mark,
+    };
 }

@@ -36,7 +36,11 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public bool IsWorldRegion(string name, LanguageCode language) => _lists.WorldRegions.Contains(name, language);
 
-    public bool IsFirstName(string word) => _lists.Cues.IsFirstName(NameFolding.Fold(word));
+    public bool IsFirstName(string word) => _lists.IsFirstName(word);
+
+    public char? TitleSex(string word) => _lists.Cues.TitleSex(word);
+
+    public char? GivenNameSex(string word) => _lists.GivenNameSex(word);
 
     public bool KnowsGivenName(string word) => _lists.Variants.KnowsGivenName(word);
 
@@ -62,6 +66,10 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
     public bool? NamingPhraseAround(string before, string after) => _lists.Cues.NamingPhraseAround(before, after);
 
     public bool SpeakerWentBy(string before, string after) => _lists.Cues.SpeakerWentBy(before, after);
+
+    public bool NamedBefore(string before) => _lists.Cues.NamedBefore(before);
+
+    public (bool Pronoun, char? Sex)? BecameBefore(string before, string after) => _lists.Cues.BecameBefore(before, after);
 
     public bool SpeaksOfMarriage(IEnumerable<string> words) => _lists.Cues.SpeaksOfMarriage(words);
 

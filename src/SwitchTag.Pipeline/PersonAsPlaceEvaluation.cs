@@ -18,7 +18,8 @@ namespace SwitchTag.Pipeline;
 /// <summary><c>switchtag eval ner --per-as-loc</c>: on gold files, how many gold person tokens the
 /// tag stage puts inside a place mention, the one error the index must never make. Counted for the
 /// shipped cascade and, beside it, for the plain order it replaced (model over gazetteer, no cues,
-/// no place evidence, no vetoes). Each sentence is one turn in the language its file name gives
+/// no place evidence, no vetoes); and the other way round, how many gold place tokens each puts inside
+/// a person mention (what a rule that yields to the model's persons costs). Each sentence is one turn in the language its file name gives
 /// (pl_pdb-ud-test.iob2, multileg-lt-test.tsv), else <c>und</c>.</summary>
 public static partial class PersonAsPlaceEvaluation
 {
@@ -43,9 +44,9 @@ public static partial class PersonAsPlaceEvaluation
                 .Add(new AuthorityListSource(AuthorityList.Empty)).Add(new GazetteerSource(gazetteer)).Add(new NameModelSource(model)),
             new NamePrecedence([MentionSource.Authority, MentionSource.Model, MentionSource.Gazetteer], [MentionSource.Authority]));
 
-        output.WriteLine($"{"file",-40} {"language",8} {"gold PER tokens",16} {"as LOC, plain",14} {"as LOC, cascade",16}");
+        output.WriteLine($"{"file",-40} {"language",8} {"gold PER tokens",16} {"as LOC, plain",14} {"as LOC, cascade",16} {"gold LOC tokens",16} {"as PER, plain",14} {"as PER, cascade",16}");
         int rejected = 0;
-        long persons = 0, plainTotal = 0, cascadeTotal = 0;
+        long persons = 0, plainTotal = 0, cascadeTotal = 0, places = 0, plainPersons = 0, cascadePersons = 0;
         foreach (var file in goldFiles)
         {
             var problems = new List<string>();
@@ -53,7 +54,7 @@ public static partial class PersonAsPlaceEvaluation
             var sentences = GoldReader.Read(file, problems);
             foreach (var p in problems) error.WriteLine($"switchtag eval ner: {p}");
             LanguageCode language = LanguageOf(file);
-            long gold = 0, plainHits = 0, cascadeHits = 0;
+            long gold = 0, plainHits = 0, cascadeHits = 0, goldPlaces = 0, plainAsPerson = 0, cascadeAsPerson = 0;
             foreach (var s in sentences)
             {
                 var starts = new int[s.Words.Count];
@@ -61,25 +62,40 @@ public static partial class PersonAsPlaceEvaluation
                 var text = string.Join(' ', s.Words);
                 if (text.Length == 0) continue;
                 ImmutableArray<LanguageSpan> spans = [new LanguageSpan(new CharSpan(0, text.Length), language, 1)];
-                var plainPlaces = Places(plain.Tag(new TurnId(0), text, spans));
-                var cascadePlaces = Places(cascade.Tag(new TurnId(0), text, spans));
+                var plainTags = plain.Tag(new TurnId(0), text, spans);
+                var cascadeTags = cascade.Tag(new TurnId(0), text, spans);
+                var plainPlaces = Labelled(plainTags, NameLabel.LOC);
+                var cascadePlaces = Labelled(cascadeTags, NameLabel.LOC);
+                var plainPeople = Labelled(plainTags, NameLabel.PER);
+                var cascadePeople = Labelled(cascadeTags, NameLabel.PER);
                 for (int k = 0; k < s.Words.Count; k++)
                 {
-                    if (!s.Tags[k].EndsWith("-PER", StringComparison.Ordinal)) continue;
-                    gold++;
                     int start = starts[k], end = start + s.Words[k].Length;
-                    if (plainPlaces.Any(m => m.CharStart <= start && end <= m.CharEnd)) plainHits++;
-                    if (cascadePlaces.Any(m => m.CharStart <= start && end <= m.CharEnd)) cascadeHits++;
+                    if (s.Tags[k].EndsWith("-PER", StringComparison.Ordinal))
+                    {
+                        gold++;
+                        if (Inside(plainPlaces, start, end)) plainHits++;
+                        if (Inside(cascadePlaces, start, end)) cascadeHits++;
+                    }
+                    else if (s.Tags[k].EndsWith("-LOC", StringComparison.Ordinal))
+                    {
+                        goldPlaces++;
+                        if (Inside(plainPeople, start, end)) plainAsPerson++;
+                        if (Inside(cascadePeople, start, end)) cascadeAsPerson++;
+                    }
                 }
             }
             persons += gold; plainTotal += plainHits; cascadeTotal += cascadeHits;
-            output.WriteLine($"{Path.GetFileName(file),-40} {language,8} {gold,16} {plainHits,14} {cascadeHits,16}");
+            places += goldPlaces; plainPersons += plainAsPerson; cascadePersons += cascadeAsPerson;
+            output.WriteLine($"{Path.GetFileName(file),-40} {language,8} {gold,16} {plainHits,14} {cascadeHits,16} {goldPlaces,16} {plainAsPerson,14} {cascadeAsPerson,16}");
         }
-        output.WriteLine($"{"all",-40} {"",8} {persons,16} {plainTotal,14} {cascadeTotal,16}");
+        output.WriteLine($"{"all",-40} {"",8} {persons,16} {plainTotal,14} {cascadeTotal,16} {places,16} {plainPersons,14} {cascadePersons,16}");
         return rejected > 0 ? NameEvaluationResult.SomeInputsRejected : NameEvaluationResult.Scored;
     }
 
-    private static List<Mention> Places(ImmutableArray<Mention> mentions) => mentions.Where(m => m.Label == NameLabel.LOC).ToList();
+    private static List<Mention> Labelled(ImmutableArray<Mention> mentions, NameLabel label) => mentions.Where(m => m.Label == label).ToList();
+
+    private static bool Inside(List<Mention> mentions, int start, int end) => mentions.Any(m => m.CharStart <= start && end <= m.CharEnd);
 
     private static LanguageCode LanguageOf(string file) =>
         FileLanguage().Match(Path.GetFileName(file)) is { Success: true } m ? new LanguageCode(m.Groups[1].Value) : LanguageCode.Undetermined;

@@ -168,4 +168,16 @@ public class NameListsTests
             Assert.All(group, r => Assert.True(lower.GetValueOrDefault(r[1]) >= 3, $"{r[0]} {r[1]}: {lower.GetValueOrDefault(r[1])} lower-case uses"));
         }
     }
+
+    /// <summary>Croatian "u" means "in" and Czech "u" "at someone's" (standard grammars, known from
+    /// memory): models/lexicon/place-prepositions.tsv lists the first and, as a cs:persons row, the
+    /// second, so "u Zagrebu" is place evidence and "U Kolářových" (at the Kolářs') in Czech is not.</summary>
+    [Fact]
+    public void A_preposition_that_takes_persons_in_the_stretchs_language_is_no_place_evidence()
+    {
+        var prepositions = SwitchTag.Lexicon.NameLists.NameListSet.Load(Lexicon).Prepositions;
+        Assert.True(prepositions.Precedes("Živjeli smo u Zagrebu.", 14, new SwitchTag.Core.Languages.LanguageCode("hr")));
+        Assert.False(prepositions.Precedes("Bydlela jsem u Kolářových.", 15, new SwitchTag.Core.Languages.LanguageCode("cs")));
+        Assert.True(prepositions.Precedes("We lived in Tarnów.", 12, new SwitchTag.Core.Languages.LanguageCode("cs")));
+    }
 }

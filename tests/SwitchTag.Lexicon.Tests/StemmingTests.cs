@@ -47,6 +47,8 @@ public class StemmingTests
     [InlineData("Ostravě", "Ostrava", "cs")]
     [InlineData("Bratislave", "Bratislava", "sk")]
     [InlineData("Košiciach", "Košice", "sk")]
+    [InlineData("Pepíkův", "Pepík", "cs")]     // (from memory) possessive adjective: Pepíkův bratr
+    [InlineData("Jiřímu", "Jiří", "cs")]       // (from memory) Jiří declines as a soft adjective: dat. Jiřímu
     public void Czech_and_Slovak_keys_agree(string inflected, string name, string language) =>
         Assert.Equal(NameFolding.Key(name, new LanguageCode(language)), NameFolding.Key(inflected, new LanguageCode(language)));
 
@@ -78,6 +80,16 @@ public class StemmingTests
     [InlineData("Hamburgs", "Hamburg", "de")]
     public void Hungarian_and_German_keys_agree(string inflected, string name, string language) =>
         Assert.Equal(NameFolding.Key(name, new LanguageCode(language)), NameFolding.Key(inflected, new LanguageCode(language)));
+
+    // (from memory) Greek accusative and genitive of the -ος, -ας and -η declensions: τον Γιώργο, του
+    // Γιώργου, τον Κώστα, της Ελένης (Languages/el/stemming.txt).
+    [Theory]
+    [InlineData("Γιώργο", "Γιώργος")]
+    [InlineData("Γιώργου", "Γιώργος")]
+    [InlineData("Κώστα", "Κώστας")]
+    [InlineData("Ελένης", "Ελένη")]
+    public void Greek_keys_agree(string inflected, string name) =>
+        Assert.Equal(NameFolding.Key(name, new LanguageCode("el")), NameFolding.Key(inflected, new LanguageCode("el")));
 
     // Forms whose stem changes before the ending: the primary key differs, but the inflection
     // check undoes the change. (from memory) Polish Praga loc. Pradze, Wiedeń gen. Wiednia;

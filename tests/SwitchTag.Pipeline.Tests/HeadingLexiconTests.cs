@@ -280,4 +280,88 @@ public class HeadingLexiconTests
         const string uncle = "My uncle, my mother's brother, Joaquim Sousa, had a boat. My uncle Joaquim took me fishing.";
         Assert.Single(BuildText(uncle, [("Joaquim Sousa", English), ("Joaquim", English)], "Manuel").Headings);
     }
+
+    /// <summary>Titles of Languages/*/titles.tsv with their sex (German Herr and Frau, English Mrs.;
+    /// common usage, known from memory): a surname said after titles of both sexes names a husband and
+    /// a wife, shown with their titles; "Mrs." before a surname two full names share is the woman's.
+    /// Oksana and Stepan are listed in Cyrillic only (Languages/uk/first-names.tsv, from
+    /// @faker-js/faker, checked with grep), read through the romanisation table.</summary>
+    [Fact]
+    public void Titles_of_two_sexes_before_one_surname_name_two_persons()
+    {
+        const string text = "The farmer, Herr Huber, was kind. Frau Huber gave me a coat.";
+        var told = BuildText(text, [("Huber", English), ("Huber", English)], "Oksana");
+        Assert.Equal(["Frau Huber", "Herr Huber"], told.Headings.Select(h => h.Name).Order(StringComparer.Ordinal).ToArray());
+
+        const string couple = "I am Oksana Hrytsenko. Mrs. Hrytsenko, they said. There I met Stepan Hrytsenko.";
+        var married = BuildText(couple, [("Oksana Hrytsenko", English), ("Hrytsenko", English), ("Stepan Hrytsenko", English)], "Oksana");
+        Assert.Equal([["Oksana Hrytsenko", "Hrytsenko"], ["Stepan Hrytsenko"]], Variants(married));
+    }
+
+    /// <summary>The romanisation table (models/lexicon/Transliteration/cyrillic-latin.tsv) gives the
+    /// soft sign no letter, as BGN/PCGN's ' (known from memory): Ольга is Olga, and Фрося, the
+    /// listed short form of Ефросинья (Languages/ru/hypocoristics.tsv), meets Efrosinya.</summary>
+    [Fact]
+    public void A_soft_sign_leaves_no_mark_in_a_names_key()
+    {
+        var lexicon = Loaded.Value.Lexicon;
+        Assert.True(lexicon.SameGivenName("Olga", English, "Ольга", Russian));
+        Assert.True(lexicon.SameGivenName("Efrosinya", English, "Фрося", Russian));
+        Assert.True(lexicon.IsFirstName("Oksana"));
+        Assert.Equal('f', lexicon.GivenNameSex("Oksana"));
+        Assert.Equal('m', lexicon.GivenNameSex("Stepan"));
+    }
+
+    /// <summary>Became phrases of Languages/en/naming-phrases.tsv ("she became", "became"; common
+    /// usage, known from memory): the new name is the subject's, and "she" passes over a man said in
+    /// between (Avram: m in Languages/ro/first-names.tsv, from @faker-js/faker, checked with grep).</summary>
+    [Fact]
+    public void A_name_someone_became_joins_the_subjects_heading()
+    {
+        const string text = "There Rozica married Avram Segal, and she became Shoshana Segal.";
+        var told = BuildText(text, [("Rozica", English), ("Avram Segal", English), ("Shoshana Segal", English)], "Charlotte");
+        Assert.Equal([["Avram Segal"], ["Rozica", "Shoshana Segal"]], Variants(told));
+
+        const string bare = "In America Tibor became Ted Greenfield.";
+        Assert.Single(BuildText(bare, [("Tibor", English), ("Ted Greenfield", English)], "Ilona").Headings);
+        const string apart = "My brother Tibor stayed home. In America she became Anna Greenfield.";
+        Assert.Equal(2, BuildText(apart, [("Tibor", English), ("Anna Greenfield", English)], "Ilona").Headings.Length);
+    }
+
+    /// <summary>Named phrases of Languages/en/naming-phrases.tsv ("we named"; common usage, known from
+    /// memory): a daughter named for her mother is another person, and a later short form (Марійка,
+    /// listed for Марія in Languages/uk/hypocoristics.tsv) is the daughter's, said last.</summary>
+    [Fact]
+    public void A_child_named_for_a_parent_is_another_person()
+    {
+        const string text = "Mama was Марія, she sang. Our daughter we named Maria, for my mother. Марійка teaches here.";
+        var told = BuildText(text, [("Марія", new LanguageCode("uk")), ("Maria", English), ("Марійка", new LanguageCode("uk"))], "Oksana");
+        Assert.Equal([["Maria", "Марійка"], ["Марія"]], Variants(told));
+    }
+
+    /// <summary>Czech "rozená" before a birth name (Languages/cs/birth-name-markers.txt; standard usage,
+    /// known from memory) after a one-word given name; Berta is no man's name in the first-name lists.
+    /// And a kinship word inside another phrase ("pro babičku", for grandma) gives the name after it no
+    /// relation: Heinrich, the German equivalent of Jindřich (name-equivalents.tsv), said beside
+    /// Jindřich, is the father named before.</summary>
+    [Fact]
+    public void A_birth_name_after_a_given_name_and_a_kinship_word_in_another_phrase()
+    {
+        const string text = "Maminka se jmenovala Berta, rozená Fischerová.";
+        Assert.Single(BuildText(text, [("Berta", Czech), ("Fischerová", Czech)], "Zuzana").Headings);
+
+        const string father = "My father, Jindřich Sýkora, had a shop. Tatínek byl pro babičku vždycky Heinrich, nikdy Jindřich.";
+        Assert.Single(BuildText(father, [("Jindřich Sýkora", English), ("Heinrich", Czech), ("Jindřich", Czech)], "Zuzana").Headings);
+    }
+
+    /// <summary>Polish "Pani" is a title for women (Languages/pl/titles.tsv; common usage, known from
+    /// memory): said by the narrator before a surname that her own wartime name shares, it names the
+    /// other woman of that surname.</summary>
+    [Fact]
+    public void A_titled_surname_the_speaker_says_is_not_her_own_name()
+    {
+        const string text = "My name is Barbara Zielińska. A woman, pani Irena Kwiatkowska, took me out. For two years I was Marysia Kwiatkowska. Pani Kwiatkowska I found again.";
+        var told = BuildText(text, [("Barbara Zielińska", English), ("Irena Kwiatkowska", Polish), ("Marysia Kwiatkowska", English), ("Kwiatkowska", Polish)], "Barbara");
+        Assert.Contains(told.Headings, h => h.Variants.Order(StringComparer.Ordinal).SequenceEqual(["Irena Kwiatkowska", "Kwiatkowska"]));
+    }
 }

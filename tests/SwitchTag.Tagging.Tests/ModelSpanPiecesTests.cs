@@ -40,4 +40,15 @@ public class ModelSpanPiecesTests
     [InlineData("J. Smith", "J. Smith")]
     public void A_one_letter_preposition_opening_a_span_is_left_out(string span, string name) =>
         Assert.Equal([name], Pieces(span));
+
+    /// <summary>Ukrainian зі and Russian во are prepositions (with, in; the language profiles'
+    /// stopwords.txt; from memory); Latin-script articles and particles longer than one letter open real
+    /// names (El Paso, De Vries: the Spanish and French stop words el and de) and stay.</summary>
+    [Theory]
+    [InlineData("Зі Степаном", "Степаном")]
+    [InlineData("Во Львове", "Львове")]
+    [InlineData("El Paso", "El Paso")]
+    [InlineData("De Vries", "De Vries")]
+    public void A_cyrillic_preposition_opening_a_span_is_left_out(string span, string name) =>
+        Assert.Equal([name], Pieces(span));
 }

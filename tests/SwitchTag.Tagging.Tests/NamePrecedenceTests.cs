@@ -76,6 +76,9 @@ public class NamePrecedenceTests
         Assert.Equal([place], NamePrecedence.Default.Resolve([M(3, 10, MentionSource.Model, NameLabel.ORG), M(3, 10, MentionSource.Gazetteer), place]).ToArray());
         var person = M(3, 10, MentionSource.Model, NameLabel.PER);
         Assert.Equal([person], NamePrecedence.Default.Resolve([place, person]).ToArray());
+        // An unsure model person (below SurePerson) does not: "from Bobruisk" stays a place.
+        var unsure = person with { Confidence = NamePrecedence.SurePerson - 0.2 };
+        Assert.Equal([place], NamePrecedence.Default.Resolve([place, unsure]).ToArray());
     }
 
     [Fact]

@@ -84,11 +84,13 @@ public sealed class NameVariants
     private static bool IsVowel(char c) => "aeiouy".Contains(c);
 
     /// <summary>The spelling key of one name word: romanised (first spelling of each table), folded,
-    /// spelling folds applied in order, doubled letters collapsed.</summary>
+    /// apostrophes dropped (the soft sign's romanisation: Ольга / Olga; O'Brien / OBrien), spelling
+    /// folds applied in order, doubled letters collapsed.</summary>
     public string Key(string word)
     {
         var text = NameFolding.Fold(word);
         if (_letters.Length > 0 && text.Any(c => c > 0x24F)) text = Romanise(text);
+        if (text.Contains('\'')) text = text.Replace("'", "", StringComparison.Ordinal);
         foreach (var (from, to, atEnd) in _folds)
             text = atEnd ? (text.EndsWith(from, StringComparison.Ordinal) ? text[..^from.Length] + to : text) : text.Replace(from, to, StringComparison.Ordinal);
         var sb = new StringBuilder(text.Length);

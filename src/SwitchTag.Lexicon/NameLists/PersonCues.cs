@@ -37,6 +37,23 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
 
     public bool IsFirstName(string folded) => FirstNames.Contains(folded);
 
+    /// <summary>Title (as written, no dot) to the sex its list gives it, 'f' or 'm'; titles of either
+    /// sex ("Dr.") are left out.</summary>
+    public FrozenDictionary<string, char> TitleSexes { get; init; } = FrozenDictionary<string, char>.Empty;
+
+    /// <summary>The sex a title gives the name after it ("Frau", "Mrs.", "paní": 'f'; "Herr", "Mr.", "pan":
+    /// 'm'), as written or capitalised at a sentence start; null for no title or one of either sex.</summary>
+    public char? TitleSex(string word)
+    {
+        word = word.TrimEnd('.');
+        if (word.Length == 0) return null;
+        return TitleSexes.TryGetValue(word, out var sex) || (char.IsUpper(word[0]) && TitleSexes.TryGetValue(Lowered(word), out sex)) ? sex : null;
+    }
+
+    /// <summary>Folded first name to the sex the lists give it, 'f' or 'm'; a name listed with both, or
+    /// as either, is left out.</summary>
+    public FrozenDictionary<string, char> FirstNameSexes { get; init; } = FrozenDictionary<string, char>.Empty;
+
     /// <summary>Listed given names that are also ordinary words of a language, as "code\tfolded word"
     /// (given-names-also-words.tsv, generated from the language-ID sentences).</summary>
     public FrozenSet<string> OrdinaryWordNames { get; init; } = FrozenSet<string>.Empty;
@@ -90,6 +107,35 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         return WentByPhrases.Any(words => EndsWith(prior, words));
     }
 
+    /// <summary>Folded phrases after which a name is given to a new person ("we named", "назвали"):
+    /// naming-phrases.tsv rows of kind named. A child named for a grandparent is another person.</summary>
+    public ImmutableArray<string[]> NamedPhrases { get; init; } = [];
+
+    /// <summary>Whether the text right before a name ends with a named phrase and one space.</summary>
+    public bool NamedBefore(string before)
+    {
+        if (NamedPhrases.IsEmpty || before.Length < 2 || before[^1] != ' ' || !char.IsLetter(before[^2])) return false;
+        var prior = FoldedWords(before);
+        return NamedPhrases.Any(words => EndsWith(prior, words));
+    }
+
+    /// <summary>Folded phrases after which a name is a new one taken by the person the phrase's subject
+    /// is ("she became Shoshana Segal", "Tibor became Ted"): naming-phrases.tsv rows of kind became
+    /// (no pronoun: the person said right before), became-f and became-m (a pronoun of that sex).</summary>
+    public ImmutableArray<(string[] Words, char? Sex)> BecamePhrases { get; init; } = [];
+
+    /// <summary>The longest became phrase the text right before a name ends with (one space, no comma,
+    /// no possessive after the name, as <see cref="SpeakerWentBy"/>): whether it holds a pronoun, and
+    /// the pronoun's sex; null when there is none.</summary>
+    public (bool Pronoun, char? Sex)? BecameBefore(string before, string after)
+    {
+        if (BecamePhrases.IsEmpty || before.Length < 2 || before[^1] != ' ' || !char.IsLetter(before[^2])
+            || after.StartsWith("'s", StringComparison.Ordinal) || after.StartsWith("’s", StringComparison.Ordinal)) return null;
+        var prior = FoldedWords(before);
+        var found = BecamePhrases.Where(p => EndsWith(prior, p.Words)).OrderByDescending(p => p.Words.Length).FirstOrDefault();
+        return found.Words is null ? null : (found.Sex is not null, found.Sex);
+    }
+
     private static List<string> FoldedWords(string text) => NameWords.Split(NameFolding.Fold(text)).Select(w => w.Folded).ToList();
 
     /// <summary>Whether the folded words end with the phrase's words.</summary>
@@ -131,16 +177,22 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         var first = new HashSet<string>(StringComparer.Ordinal);
         var abbreviations = new HashSet<string>(StringComparer.Ordinal);
         var roles = new Dictionary<string, string>(StringComparer.Ordinal);
+        var titleSexes = new Dictionary<string, char>(StringComparer.Ordinal);
+        var nameSexes = new Dictionary<string, char>(StringComparer.Ordinal);
         foreach (var (_, folder) in LexiconTsv.Languages(lexiconDir))
         {
-            var titleForms = Forms(LexiconTsv.Rows(Path.Combine(folder, "titles.tsv"))).ToList();
+            var titleRows = LexiconTsv.Rows(Path.Combine(folder, "titles.tsv")).ToList();
+            AddSexes(titleSexes, titleRows, f => f.TrimEnd('.'));
+            var titleForms = Forms(titleRows).ToList();
             titles.UnionWith(titleForms.Select(f => f.TrimEnd('.')));
             abbreviations.UnionWith(titleForms.Where(f => f.EndsWith('.')).Select(f => f.TrimEnd('.')));
             var kin = LexiconTsv.Rows(Path.Combine(folder, "kinship.tsv")).ToList();
             kinship.UnionWith(Forms(kin));
             foreach (var row in kin.Where(r => r.Length > 2))
                 if (Relation(row[2]) is { } relation) roles.TryAdd(row[0].Trim(), relation);
-            first.UnionWith(Forms(LexiconTsv.Rows(Path.Combine(folder, "first-names.tsv"))).Select(NameFolding.Fold));
+            var nameRows = LexiconTsv.Rows(Path.Combine(folder, "first-names.tsv")).ToList();
+            first.UnionWith(Forms(nameRows).Select(NameFolding.Fold));
+            AddSexes(nameSexes, nameRows, NameFolding.Fold);
         }
         var birthNames = LexiconTsv.Languages(lexiconDir)
             .SelectMany(l => LexiconTsv.Rows(Path.Combine(l.Folder, "birth-name-markers.txt")))
@@ -160,22 +212,51 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
         {
             BirthNameMarkers = Frozen(birthNames),
             KinshipRoles = roles.ToFrozenDictionary(StringComparer.Ordinal),
+            TitleSexes = Sexed(titleSexes),
+            FirstNameSexes = Sexed(nameSexes),
             OrdinaryWordNames = Frozen([.. LexiconTsv.Rows(Path.Combine(lexiconDir, "given-names-also-words.tsv"))
                 .Where(r => r.Length > 1).Select(r => r[0].Trim() + "\t" + NameFolding.Fold(r[1].Trim()))]),
             MarriageWords = Frozen([.. marriage.Where(w => !w.EndsWith('*')).Select(NameFolding.Fold)]),
             MarriagePrefixes = [.. marriage.Where(w => w.EndsWith('*')).Select(w => NameFolding.Fold(w[..^1])).Where(w => w.Length > 0).Distinct()],
             NamingPhrases = [.. phrases.Where(p => p.Kind is "self" or "other").Select(p => (p.Words, Self: p.Kind == "self"))],
             WentByPhrases = [.. phrases.Where(p => p.Kind == "went-by").Select(p => p.Words)],
+            NamedPhrases = [.. phrases.Where(p => p.Kind == "named").Select(p => p.Words)],
+            BecamePhrases = [.. phrases.Where(p => p.Kind is "became" or "became-f" or "became-m")
+                .Select(p => (p.Words, p.Kind switch { "became-f" => 'f', "became-m" => 'm', _ => (char?)null }))],
         };
     }
 
     /// <summary>The relation an English gloss names: its first word ("uncle (mother's brother)": uncle),
-    /// brother and sister as sibling; null for a gloss naming none ("romanised forms").</summary>
+    /// brother and sister as sibling, grandmother and grandfather as grandparent; null for a gloss
+    /// naming none ("romanised forms").</summary>
     private static string? Relation(string gloss)
     {
         var first = gloss.Trim().Split(' ', ',', '(')[0].ToLowerInvariant();
-        return first switch { "brother" or "sister" => "sibling", "romanised" or "" => null, _ => first };
+        return first switch
+        {
+            "brother" or "sister" => "sibling",
+            // The lists gloss some words by sex and some not (Greek γιαγιά: grandparent; grandma: grandmother).
+            "grandmother" or "grandfather" => "grandparent",
+            "romanised" or "" => null,
+            _ => first,
+        };
     }
+
+    /// <summary>Adds each row's form (first cell, through <paramref name="form"/>) with its sex (second
+    /// cell, f or m; u rows say nothing); a form met with both sexes is marked '?' so that it is left out.</summary>
+    private static void AddSexes(Dictionary<string, char> sexes, IEnumerable<string[]> rows, Func<string, string> form)
+    {
+        foreach (var row in rows.Where(r => r.Length > 1 && r[1].Trim() is "f" or "m"))
+        {
+            var key = form(row[0].Trim());
+            char sex = row[1].Trim()[0];
+            if (key.Length == 0) continue;
+            sexes[key] = sexes.TryGetValue(key, out var known) && known != sex ? '?' : sex;
+        }
+    }
+
+    private static FrozenDictionary<string, char> Sexed(Dictionary<string, char> sexes) =>
+        sexes.Where(x => x.Value != '?').ToFrozenDictionary(StringComparer.Ordinal);
 
     private static FrozenSet<string> Frozen(HashSet<string> set) => set.Where(s => s.Length > 0).ToFrozenSet(StringComparer.Ordinal);
 

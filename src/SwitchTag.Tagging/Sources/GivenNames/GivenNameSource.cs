@@ -43,7 +43,7 @@ public sealed class GivenNameSource(PersonCues cues, NotPlaceWords notPlaces, Na
             if (language == German || language == Luxembourgish) continue;
             if (i > 0 && NamesBeside(turnText, words[i - 1], words[i])) continue;
             if (i + 1 < words.Count && NamesBeside(turnText, words[i + 1], words[i])) continue;
-            if (!IsGivenName(word.ToString(), language, afterPreposition: prepositions.Precedes(turnText, start))) continue;
+            if (!IsGivenName(word.ToString(), language, afterPreposition: prepositions.Precedes(turnText, start, language))) continue;
             found.Add(new Mention(turn, new CharSpan(start, end), SharedStrings.Of(word), NameLabel.PER, language, Confidence, MentionSource.GivenName));
         }
         return found.ToImmutable();

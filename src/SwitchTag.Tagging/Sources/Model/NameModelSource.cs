@@ -61,7 +61,9 @@ public sealed class NameModelSource(NerModel model) : INameSource
         while (to > from && !HasLetterOrDigit(words[to - 1].Text)) to--;
         // A one-letter stop word opening a longer span is a preposition the model took in at a
         // sentence start ("W Krakowie", "S Imrichom", "В Москве"); an initial is followed by its dot.
-        if (to - from > 1 && words[from].Text.Length == 1 && HasLetterOrDigit(words[from + 1].Text)
+        // So is a Cyrillic one of any length ("Зі Степаном", "Во Львове"): the Latin-script lists hold
+        // articles and particles that open real names (El Paso, De Vries), the Cyrillic ones do not.
+        if (to - from > 1 && (words[from].Text.Length == 1 || IsCyrillic(words[from].Text)) && HasLetterOrDigit(words[from + 1].Text)
             && LanguageProfiles.Default.StopWords.Contains(NameFolding.Fold(words[from].Text)))
             from++;
         return from < to ? (from, to) : null;
@@ -71,4 +73,6 @@ public sealed class NameModelSource(NerModel model) : INameSource
         k >= 2 && words[k - 1].Text == "." && words[k - 2].Text is { Length: <= 3 } w && char.IsUpper(w[0]) && w.All(char.IsLetter);
 
     private static bool HasLetterOrDigit(string word) => word.Any(char.IsLetterOrDigit);
+
+    private static bool IsCyrillic(string word) => word.All(c => c is >= '\u0400' and <= '\u04FF');
 }

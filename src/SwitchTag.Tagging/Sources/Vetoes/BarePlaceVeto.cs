@@ -19,7 +19,7 @@ public sealed class BarePlaceVeto(Lexicon.Gazetteer gazetteer, PlacePrepositions
 {
     public bool Vetoes(Mention mention, string turnText)
     {
-        if (mention.Source != MentionSource.Gazetteer || mention.Label != NameLabel.LOC || prepositions.Precedes(turnText, mention.CharStart)) return false;
+        if (mention.Source != MentionSource.Gazetteer || mention.Label != NameLabel.LOC || prepositions.Precedes(turnText, mention.CharStart, mention.Language)) return false;
         if (TextPosition.IsSentenceStart(turnText, mention.CharStart)) return true;
         var candidates = gazetteer.Candidates(mention.Text, mention.Language);
         return candidates.Count == 0 || candidates.Max(c => c.Place.Population) < PlaceContext.CityPopulation

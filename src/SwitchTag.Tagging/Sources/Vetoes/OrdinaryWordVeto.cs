@@ -18,7 +18,7 @@ public sealed class OrdinaryWordVeto(Lexicon.Gazetteer gazetteer, PlacePrepositi
 {
     public bool Vetoes(Mention mention, string turnText)
     {
-        if (mention.Label != NameLabel.LOC || mention.Text.Any(char.IsWhiteSpace) || prepositions.Precedes(turnText, mention.CharStart)) return false;
+        if (mention.Label != NameLabel.LOC || mention.Text.Any(char.IsWhiteSpace) || prepositions.Precedes(turnText, mention.CharStart, mention.Language)) return false;
         bool sentenceStartModel = mention.Source == MentionSource.Model && TextPosition.IsSentenceStart(turnText, mention.CharStart);
         if (mention.Source != MentionSource.Gazetteer && !sentenceStartModel) return false;
         if (gazetteer.Cautions.GetValueOrDefault(NameFolding.Fold(mention.Text)).HasFlag(NameCaution.CommonWord)) return true;
