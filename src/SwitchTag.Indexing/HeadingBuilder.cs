@@ -831,9 +831,15 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// "Mrs. Roth"); null for none or one of either sex ("Dr.").</summary>
     private (string Title, char Sex)? TitleBefore(Mention m, ImmutableArray<Turn> turns)
     {
-        if (m.CharStart == 0) return null;
-        var before = Words(turns[m.Turn.Index].Text[Math.Max(0, m.CharStart - MarkerChars)..m.CharStart]);
-        return before.Length > 0 && lexicon.TitleSex(before[^1]) is { } sex ? (before[^1], sex) : null;
+        // Scanned in place: a long turn has hundreds of thousands of one-word names.
+        var text = turns[m.Turn.Index].Text;
+        int end = m.CharStart;
+        while (end > 0 && char.IsWhiteSpace(text[end - 1])) end--;
+        if (end == m.CharStart || end == 0) return null;
+        int start = end;
+        while (start > 0 && !char.IsWhiteSpace(text[start - 1])) start--;
+        var word = text[start..end];
+        return lexicon.TitleSex(word) is { } sex ? (word, sex) : null;
     }
 
     /// <summary>Words that join two names, not a kinship word to its name ("my father and Stanisław"):

@@ -109,12 +109,26 @@ public sealed record PersonCues(FrozenSet<string> Titles, FrozenSet<string> Kins
 
     /// <summary>Folded phrases after which a name is given to a new person ("we named", "назвали"):
     /// naming-phrases.tsv rows of kind named. A child named for a grandparent is another person.</summary>
-    public ImmutableArray<string[]> NamedPhrases { get; init; } = [];
+    public ImmutableArray<string[]> NamedPhrases
+    {
+        get;
+        init
+        {
+            field = value;
+            NamedLastWords = value.Select(p => p[^1]).ToFrozenSet(StringComparer.Ordinal);
+        }
+    } = [];
+
+    private FrozenSet<string> NamedLastWords { get; init; } = FrozenSet<string>.Empty;
 
     /// <summary>Whether the text right before a name ends with a named phrase and one space.</summary>
     public bool NamedBefore(string before)
     {
         if (NamedPhrases.IsEmpty || before.Length < 2 || before[^1] != ' ' || !char.IsLetter(before[^2])) return false;
+        // Most names follow no such phrase: the last word is checked before the text is folded.
+        int start = before.Length - 1;
+        while (start > 0 && char.IsLetter(before[start - 1])) start--;
+        if (!NamedLastWords.Contains(NameFolding.Fold(before[start..^1]))) return false;
         var prior = FoldedWords(before);
         return NamedPhrases.Any(words => EndsWith(prior, words));
     }
