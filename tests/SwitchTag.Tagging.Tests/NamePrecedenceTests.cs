@@ -86,4 +86,16 @@ public class NamePrecedenceTests
     {
         Assert.Throws<ArgumentException>(() => NamePrecedence.Default.Resolve([M(0, 3, new MentionSource("unranked"))]));
     }
+
+    /// <summary>"in Berlin" is place evidence twice, from the city and from the city-state of the name:
+    /// one mention stands, not two at one place.</summary>
+    [Fact]
+    public void TheVerySameSpanOfOneRankStandsOnce()
+    {
+        var city = M(9, 15, MentionSource.PlaceEvidence);
+        var region = M(9, 15, MentionSource.PlaceEvidence);
+        Assert.Equal([city], NamePrecedence.Default.Resolve([city, region]).ToArray());
+        var longer = M(9, 20, MentionSource.PlaceEvidence);
+        Assert.Equal([city, longer], NamePrecedence.Default.Resolve([city, longer]).ToArray());
+    }
 }

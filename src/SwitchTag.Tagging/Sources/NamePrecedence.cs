@@ -106,10 +106,20 @@ public sealed class NamePrecedence
             Mention x = standing[a], y = standing[b];
             return x.CharStart != y.CharStart ? x.CharStart.CompareTo(y.CharStart) : x.CharEnd != y.CharEnd ? x.CharEnd.CompareTo(y.CharEnd) : a.CompareTo(b);
         });
-        var ordered = new Mention[order.Length];
-        for (int k = 0; k < order.Length; k++) ordered[k] = standing[order[k]];
+        // Two sources of one rank may propose the very same span ("in Berlin": the city and the
+        // city-state, both place evidence): one mention is kept, the first to stand.
+        // Counted first, so the result is one array of its exact size.
+        int kept = 0;
+        for (int k = 0; k < order.Length; k++)
+            if (k == 0 || !SameProposal(standing[order[k - 1]], standing[order[k]])) kept++;
+        var ordered = new Mention[kept];
+        for (int k = 0, n = 0; k < order.Length; k++)
+            if (k == 0 || !SameProposal(standing[order[k - 1]], standing[order[k]])) ordered[n++] = standing[order[k]];
         return ImmutableCollectionsMarshal.AsImmutableArray(ordered);
     }
+
+    private static bool SameProposal(Mention a, Mention b) =>
+        a.CharStart == b.CharStart && a.CharEnd == b.CharEnd && a.Label == b.Label && a.Source == b.Source;
 
     /// <summary>Removes, in place, each proposal a <see cref="Yield"/> withdraws; every yield looks at
     /// the proposals as they came.</summary>
