@@ -14,7 +14,7 @@ public static class IndexCommand
         $"Writes DIR/<interview>/ {string.Join(" ", OutputWriters.Default.InterviewFileNames)}\n" +
         $"and DIR/ {string.Join(" ", OutputWriters.Default.CollectionFileNames)} {CollectionStore.DefaultFileName}\n" +
         "(the collection store: every interview indexed into DIR across runs; unchanged ones are skipped).\n\n" +
-        "Exit codes: 0 every input indexed; 1 some inputs rejected (each reported as file:line: error: reason,\nthe others still indexed); " +
+        "Exit codes: 0 every input indexed; 1 some inputs rejected (each reported as file:line: error: reason,\nthe others still indexed; a link loop or a FIFO, device or socket skipped counts too); " +
         "2 usage error or a model that cannot be loaded.\n";
 
     public static Command Create()
