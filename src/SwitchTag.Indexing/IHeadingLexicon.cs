@@ -82,6 +82,12 @@ public interface IHeadingLexicon
     /// Irenko, Hanna / Hanka): certain evidence for a merge within one interview.</summary>
     bool SameGivenName(string a, LanguageCode languageA, string b, LanguageCode languageB) => Key(a, languageA) == Key(b, languageB);
 
+    /// <summary>Bucket keys of a given name such that two names <see cref="SameGivenName"/> calls the same
+    /// share a bucket (the first letters of their spelling keys, or a full name the lists give both), so
+    /// a name is compared with a few candidates, not with every name of a long interview. The default,
+    /// one bucket for all, compares every pair.</summary>
+    IEnumerable<string> GivenNameBuckets(string name, LanguageCode language) => [""];
+
     /// <summary>Whether two given names are listed cross-language equivalents (Stanisław / Stanley):
     /// probable, not certain.</summary>
     bool EquivalentGivenNames(string a, string b) => false;

@@ -51,9 +51,28 @@ internal static class LabelVote
             nameParts.Add(lexicon.Key(words[^1], m.Language));
             givenNames.Add((words[0], m.Language));
         }
+        // The given names by bucket, and the answer once per name said: a long interview says thousands of
+        // names, and comparing each with every given name grew with the square of the talk.
+        var given = givenNames.ToList();
+        var byBucket = new Dictionary<string, List<int>>(StringComparer.Ordinal);
+        for (int g = 0; g < given.Count; g++)
+            foreach (var bucket in lexicon.GivenNameBuckets(given[g].Name, given[g].Language))
+            {
+                if (!byBucket.TryGetValue(bucket, out var list)) byBucket[bucket] = list = [];
+                list.Add(g);
+            }
+        var isGiven = new Dictionary<(string, LanguageCode), bool>();
+        bool IsGivenName(Mention m)
+        {
+            if (!isGiven.TryGetValue((m.Text, m.Language), out bool found))
+                isGiven[(m.Text, m.Language)] = found = lexicon.GivenNameBuckets(m.Text, m.Language)
+                    .SelectMany(b => byBucket.TryGetValue(b, out var list) ? list : [])
+                    .Distinct().Any(g => IsDiminutiveOf(lexicon, m, given[g]));
+            return found;
+        }
         for (int i = 0; i < result.Length; i++)
             if (Open(result[i]) && result[i].Label != NameLabel.PER && Words(result[i].Text).Length == 1
-                && (nameParts.Contains(keys[i]) || givenNames.Any(g => IsDiminutiveOf(lexicon, result[i], g))))
+                && (nameParts.Contains(keys[i]) || IsGivenName(result[i])))
                 result[i] = result[i] with { Label = NameLabel.PER, Source = MentionSource.Cue };
 
         foreach (var group in Enumerable.Range(0, result.Length).GroupBy(i => keys[i], StringComparer.Ordinal))

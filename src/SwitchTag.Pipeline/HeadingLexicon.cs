@@ -85,6 +85,26 @@ public sealed class HeadingLexicon(Gazetteer gazetteer, NameListSet? lists = nul
 
     public bool EquivalentGivenNames(string a, string b) => _lists.Variants.Equivalent(a, b);
 
+    /// <summary>For the name and its stem: the first <see cref="BucketLetters"/> letters of the spelling
+    /// key (equal keys, case forms and productive diminutives begin alike), the key itself and the full
+    /// names the lists give it (Pepík and Josef).</summary>
+    public IEnumerable<string> GivenNameBuckets(string name, LanguageCode language)
+    {
+        var buckets = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var form in new[] { name, NameFolding.Stem(name, language) })
+        {
+            var key = _lists.Variants.Key(form);
+            buckets.Add("p:" + key[..Math.Min(BucketLetters, key.Length)]);
+            buckets.Add("k:" + key);
+            foreach (var full in _lists.Variants.FullNames(form)) buckets.Add("k:" + full);
+        }
+        return buckets;
+    }
+
+    /// <summary>Letters of the spelling key a productive diminutive or case form shares with its name:
+    /// the shortest stem the variant rules accept.</summary>
+    private const int BucketLetters = 3;
+
     /// <summary>A cheap bar before the case-form match, which tries every language's endings: a case
     /// form starts with its name's letter and is at most a few letters longer or shorter.</summary>
     private static bool MayInflect(string a, string b) =>

@@ -364,4 +364,22 @@ public class HeadingLexiconTests
         var told = BuildText(text, [("Barbara Zielińska", English), ("Irena Kwiatkowska", Polish), ("Marysia Kwiatkowska", English), ("Kwiatkowska", Polish)], "Barbara");
         Assert.Contains(told.Headings, h => h.Variants.Order(StringComparer.Ordinal).SequenceEqual(["Irena Kwiatkowska", "Kwiatkowska"]));
     }
+
+    /// <summary>The label vote compares a name only with the given names sharing a bucket with it, so every
+    /// pair the lists call one given name must share one: listed short forms (Pepík for Josef, Фрося for
+    /// Ефросинья; Languages/cs and ru/hypocoristics.tsv), productive diminutives (Hanka), case forms
+    /// (Slovak instrumental Imrichom; Greek accusative Γιώργο) and other scripts (Giorgos).</summary>
+    [Theory]
+    [InlineData("Josef", "cs", "Pepík", "cs")]
+    [InlineData("Efrosinya", "en", "Фрося", "ru")]
+    [InlineData("Hanna", "pl", "Hanka", "pl")]
+    [InlineData("Imrich", "sk", "Imrichom", "sk")]
+    [InlineData("Giorgos", "en", "Γιώργο", "el")]
+    public void Names_the_lists_call_one_given_name_share_a_bucket(string a, string languageA, string b, string languageB)
+    {
+        var lexicon = Loaded.Value.Lexicon;
+        LanguageCode la = new(languageA), lb = new(languageB);
+        Assert.True(lexicon.SameGivenName(a, la, b, lb), $"{a} / {b}");
+        Assert.True(lexicon.GivenNameBuckets(a, la).Intersect(lexicon.GivenNameBuckets(b, lb)).Any(), $"{a} / {b}");
+    }
 }
