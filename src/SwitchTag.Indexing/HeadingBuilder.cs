@@ -905,7 +905,9 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
     /// subject's when every word it holds is a word of the name said, as <see cref="JoinNamesWentBy"/>.</summary>
     private void JoinNamesBecame(ImmutableArray<Mention> mentions, List<Group> groups, ImmutableArray<Turn> turns)
     {
-        var groupOf = groups.Where(g => g.Label == NameLabel.PER).SelectMany(g => g.Members.Select(k => (k, g))).ToDictionary(x => x.k, x => x.g);
+        // Each mention's person heading, made when a phrase is first met: an array, not a map, as a long
+        // turn has half a million mentions and no such phrase may be said at all.
+        Group?[]? groupOf = null;
         var sexOf = new Dictionary<Group, char?>();
         char? SexOf(Group g)
         {
@@ -924,12 +926,18 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 var text = turns[m.Turn.Index].Text;
                 string before = text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart], after = text[m.CharEnd..Math.Min(text.Length, m.CharEnd + NamingChars)];
                 if (lexicon.SpeakerWentBy(before, after) || lexicon.BecameBefore(before, after) is not { } phrase) continue;
+                if (groupOf is null)
+                {
+                    groupOf = new Group?[mentions.Length];
+                    foreach (var g in groups.Where(g => g.Label == NameLabel.PER))
+                        foreach (int k in g.Members) groupOf[k] = g;
+                }
                 Group? target = null;
                 for (int j = i - 1; j >= 0 && mentions[j].Turn == m.Turn; j--)
                 {
                     int gap = Words(text[mentions[j].CharEnd..m.CharStart]).Length;
                     if (gap > (phrase.Pronoun ? TieReachWords : BareSubjectWords)) break;
-                    if (!groupOf.TryGetValue(j, out var g) || g == own || !groups.Contains(g)) continue;
+                    if (groupOf[j] is not { } g || g == own || !groups.Contains(g)) continue;
                     if (!phrase.Pronoun || SexOf(g) is not { } sex || sex == phrase.Sex) { target = g; break; }
                 }
                 if (target is null) break;
