@@ -505,6 +505,70 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
         // "Frau Huber" is his wife.
         var loneTitle = new Dictionary<Group, (string Title, char Sex)>();
         bool SexDiffers(Group g, char? sex) => sex is { } s && loneTitle.TryGetValue(g, out var own) && own.Sex != s;
+        // Candidates by shared key, so each one-word name is compared with the few full and one-word
+        // names it can match, not with all of them: a long turn of many names stayed quadratic otherwise.
+        // A name word and a full name's first or last word are one name only with equal grouping or
+        // surname keys in the language of either (SameNameWord, SameSurname); given names, only in a
+        // shared bucket (IHeadingLexicon.GivenNameBuckets).
+        var fullLanguages = full.Select(f => f.Language).Distinct().ToList();
+        var fullByKey = new Dictionary<(LanguageCode, string), List<int>>();
+        var indexedLanguages = new HashSet<LanguageCode>();
+        void Index<TKey>(Dictionary<TKey, List<int>> index, TKey key, int k) where TKey : notnull
+        {
+            if (!index.TryGetValue(key, out var list)) index[key] = list = [];
+            if (list.Count == 0 || list[^1] != k) list.Add(k);
+        }
+        IEnumerable<string> WordKeys(string word, LanguageCode language) => [lexicon.Key(word, language), "\u0001" + lexicon.SurnameKey(word, language)];
+        List<int> WordCandidates(string word, LanguageCode language)
+        {
+            foreach (var l in fullLanguages.Append(language).Distinct())
+                if (indexedLanguages.Add(l))
+                {
+                    for (int k = 0; k < full.Count; k++)
+                        foreach (var key in WordKeys(full[k].First, l).Concat(WordKeys(full[k].Last, l))) Index(fullByKey, (l, key), k);
+                }
+            var found = new SortedSet<int>();
+            foreach (var l in fullLanguages.Append(language).Distinct())
+                foreach (var key in WordKeys(word, l))
+                    if (fullByKey.TryGetValue((l, key), out var list)) found.UnionWith(list);
+            return [.. found];
+        }
+        Dictionary<string, List<int>>? fullByBucket = null;
+        List<int> GivenCandidates(string name, LanguageCode language)
+        {
+            if (fullByBucket is null)
+            {
+                fullByBucket = new Dictionary<string, List<int>>(StringComparer.Ordinal);
+                for (int k = 0; k < full.Count; k++)
+                    foreach (var bucket in lexicon.GivenNameBuckets(full[k].First, full[k].Language)) Index(fullByBucket, bucket, k);
+            }
+            var found = new SortedSet<int>();
+            foreach (var bucket in lexicon.GivenNameBuckets(name, language))
+                if (fullByBucket.TryGetValue(bucket, out var list)) found.UnionWith(list);
+            return [.. found];
+        }
+        // One-word headings by bucket, the latest first when looked up (the last one of a given name is the one meant).
+        var loneByBucket = new Dictionary<string, List<int>>(StringComparer.Ordinal);
+        var bucketsOf = new Dictionary<(string, LanguageCode), List<string>>();
+        List<string> Buckets(string name, LanguageCode language) =>
+            bucketsOf.TryGetValue((name, language), out var known) ? known : bucketsOf[(name, language)] = [.. lexicon.GivenNameBuckets(name, language)];
+        void AddLone((Group Group, string Name, LanguageCode Language) entry)
+        {
+            lone.Add(entry);
+            foreach (var bucket in Buckets(entry.Name, entry.Language)) Index(loneByBucket, bucket, lone.Count - 1);
+        }
+        // Worked out again only when a one-word heading was added since: a long turn says the same few names 100k times.
+        var loneCandidates = new Dictionary<(string, LanguageCode), (int Count, int[] Latest)>();
+        int[] LoneCandidates(string name, LanguageCode language)
+        {
+            if (loneCandidates.TryGetValue((name, language), out var known) && known.Count == lone.Count) return known.Latest;
+            var found = new SortedSet<int>();
+            foreach (var bucket in Buckets(name, language))
+                if (loneByBucket.TryGetValue(bucket, out var list)) found.UnionWith(list);
+            int[] latest = [.. found.Reverse()];
+            loneCandidates[(name, language)] = (lone.Count, latest);
+            return latest;
+        }
         foreach (int i in single)
         {
             var m = mentions[i];
@@ -512,7 +576,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             // name join (the last one-word heading of a given name is the one meant).
             if (m.CharStart > 0 && lexicon.NamedBefore(turns[m.Turn.Index].Text[Math.Max(0, m.CharStart - NamingChars)..m.CharStart]))
             {
-                lone.Add((Add(loneByKey, groups, NameLabel.PER, keys[i] + " " + i, i), m.Text, m.Language));
+                AddLone((Add(loneByKey, groups, NameLabel.PER, keys[i] + " " + i, i), m.Text, m.Language));
                 continue;
             }
             var title = TitleBefore(m, turns);
@@ -522,12 +586,13 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
                 // A surname after its particles ("Mrs. Van den Berg") is matched by its last word.
                 string word = Words(m.Text)[^1];
                 // A surname key is the word's key with spelling folds on top, so it also meets the plain key.
-                owners = full.Where(f => SameNameWord(f.First, f.Language, word, m.Language)
+                owners = WordCandidates(word, m.Language).Select(k => full[k]).Where(f => SameNameWord(f.First, f.Language, word, m.Language)
                         || SameSurname(f.Last, f.Language, word, m.Language) && !lexicon.WomansAndMansForm(f.Last, word))
                     .Select(f => f.Group).Distinct().ToList();
                 if (owners.Count == 0)
                 {
-                    owners = full.Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
+                    owners = GivenCandidates(m.Text, m.Language).Select(k => full[k])
+                        .Where(f => lexicon.SameGivenName(f.First, f.Language, m.Text, m.Language)).Select(f => f.Group).Distinct().ToList();
                     // A short form of two full names ("Takis": Panagiotis or Dimitrios) said beside a
                     // one-word name of the other one belongs to neither full name by the lists alone.
                     if (owners.Count > 0 && lone.Any(l => l.Group.Members.Count > 0 && lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
@@ -552,7 +617,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             }
             if (owners.Count == 1 && RelationsDiffer(owners[0], m)) owners = [];
             if (owners.Count == 1) { owners[0].Members.Add(i); continue; }
-            if (owners.Count == 0 && lone.LastOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
+            if (owners.Count == 0 && LoneCandidates(m.Text, m.Language).Select(k => lone[k]).FirstOrDefault(l => lexicon.SameGivenName(l.Name, l.Language, m.Text, m.Language)
                     && !lexicon.WomansAndMansForm(l.Name, m.Text) && !SexDiffers(l.Group, sex)) is { Group: not null } kin)
             {
                 kin.Group.Members.Add(i);
@@ -565,7 +630,7 @@ public sealed class HeadingBuilder(IHeadingLexicon lexicon, double reviewBelow =
             bool split = loneByKey.TryGetValue(key, out var titled) && SexDiffers(titled, sex);
             if (split) key += " " + sex;
             var group = Add(loneByKey, groups, NameLabel.PER, key, i);
-            if (group.Members.Count == 1) lone.Add((group, m.Text, m.Language));
+            if (group.Members.Count == 1) AddLone((group, m.Text, m.Language));
             if (title is { } t) loneTitle.TryAdd(group, t);
             if (split)
             {
